@@ -1,0 +1,40 @@
+import { Module } from '@nestjs/common';
+import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { resolve } from 'node:path';
+import { APP_CONFIG, type AppConfig, loadConfig } from './config/app-config';
+import { ConfigModule } from './config/config.module';
+import { AllExceptionsFilter } from './common/all-exceptions.filter';
+import { JwtAuthGuard } from './common/jwt-auth.guard';
+import { createValidationPipe } from './common/validation';
+import { dataSourceOptions } from './database/data-source-options';
+import { AuditModule } from './audit/audit.module';
+import { AuthModule } from './auth/auth.module';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { StorageModule } from './storage/storage.module';
+import { UsersModule } from './users/users.module';
+
+@Module({
+  imports: [
+    ConfigModule,
+    TypeOrmModule.forRootAsync({
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => ({ ...dataSourceOptions(config), retryAttempts: 20, retryDelay: 1000 }),
+    }),
+    ServeStaticModule.forRoot({ rootPath: resolve(loadConfig().clientDir), exclude: ['/api/{*path}'] }),
+    AuditModule,
+    MailModule,
+    StorageModule,
+    HealthModule,
+    AuthModule,
+    UsersModule,
+  ],
+  providers: [
+    { provide: APP_PIPE, useFactory: createValidationPipe },
+    { provide: APP_FILTER, useClass: AllExceptionsFilter },
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+  ],
+})
+export class AppModule {}

@@ -1,0 +1,6 @@
+import { EmailField } from '../../common/dto-fields';
+
+export class RequestResetDto {
+  @EmailField()
+  email: string;
+}

@@ -1,0 +1,3 @@
+export const ROLES = ['procurement', 'engineer', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+export const ALL_ROLES: Role[] = [...ROLES];

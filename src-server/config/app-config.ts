@@ -1,0 +1,87 @@
+/** Every setting Bandwright reads from the environment, validated once at boot. */
+export interface AppConfig {
+  nodeEnv: 'development' | 'test' | 'production';
+  port: number;
+  host: string;
+  appUrl: string;
+  db: { host: string; port: number; user: string; password: string; name: string };
+  jwt: { secret: string; expiresInSeconds: number };
+  smtp: { host: string; port: number; from: string };
+  mailWebUrl: string;
+  s3: { endpoint: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string };
+  uploadMaxBytes: number;
+  demoPassword: string;
+  clientDir: string;
+}
+
+export class ConfigError extends Error {
+  constructor(readonly badKeys: string[]) {
+    super(`Invalid configuration: ${badKeys.join('; ')}`);
+  }
+}
+
+const DEV_JWT_SECRET = 'dev-only-secret-change-me-0123456789abcdef';
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const problems: string[] = [];
+  const str = (key: string, fallback?: string): string => {
+    const value = env[key] ?? fallback;
+    if (value === undefined || value === '') {
+      problems.push(`${key} is required`);
+      return '';
+    }
+    return value;
+  };
+  const int = (key: string, fallback: number, min: number, max: number): number => {
+    const raw = env[key];
+    if (raw === undefined || raw === '') return fallback;
+    const value = Number(raw);
+    if (!Number.isInteger(value) || value < min || value > max) {
+      problems.push(`${key} must be an integer from ${min} to ${max}, got "${raw}"`);
+      return fallback;
+    }
+    return value;
+  };
+
+  const nodeEnv = (env.NODE_ENV ?? 'development') as AppConfig['nodeEnv'];
+  if (!['development', 'test', 'production'].includes(nodeEnv)) {
+    problems.push(`NODE_ENV must be development, test or production, got "${env.NODE_ENV}"`);
+  }
+  const jwtSecret = str('JWT_SECRET', nodeEnv === 'production' ? undefined : DEV_JWT_SECRET);
+  if (jwtSecret && jwtSecret.length < 32) problems.push('JWT_SECRET must be at least 32 characters');
+  const port = int('PORT', 3000, 1, 65535);
+  const s3Port = int('S3_PORT', 4569, 1, 65535);
+  const smtpPort = int('SMTP_PORT', 1025, 1, 65535);
+  const mailWebPort = int('MAIL_WEB_PORT', 1080, 1, 65535);
+
+  const config: AppConfig = {
+    nodeEnv,
+    port,
+    host: str('HOST', '127.0.0.1'),
+    appUrl: str('APP_URL', `http://127.0.0.1:${port}`),
+    db: {
+      host: str('DB_HOST', '127.0.0.1'),
+      port: int('DB_PORT', 3307, 1, 65535),
+      user: str('DB_USER', 'bandwright'),
+      password: str('DB_PASSWORD', 'bandwright-local'),
+      name: str('DB_NAME', 'bandwright'),
+    },
+    jwt: { secret: jwtSecret, expiresInSeconds: int('JWT_EXPIRES_IN_SECONDS', 8 * 3600, 60, 30 * 24 * 3600) },
+    smtp: { host: str('SMTP_HOST', '127.0.0.1'), port: smtpPort, from: str('MAIL_FROM', 'Bandwright <no-reply@bandwright.test>') },
+    mailWebUrl: str('MAIL_WEB_URL', `http://127.0.0.1:${mailWebPort}`),
+    s3: {
+      endpoint: str('S3_ENDPOINT', `http://127.0.0.1:${s3Port}`),
+      region: str('S3_REGION', 'us-east-1'),
+      bucket: str('S3_BUCKET', 'bandwright'),
+      accessKeyId: str('S3_ACCESS_KEY_ID', 'S3RVER'),
+      secretAccessKey: str('S3_SECRET_ACCESS_KEY', 'S3RVER'),
+    },
+    uploadMaxBytes: int('UPLOAD_MAX_MB', 25, 1, 1024) * 1024 * 1024,
+    demoPassword: str('DEMO_PASSWORD', 'bandwright-demo'),
+    clientDir: str('CLIENT_DIR', 'dist/client'),
+  };
+  if (problems.length > 0) throw new ConfigError(problems);
+  return config;
+}
+
+export const APP_CONFIG = Symbol('APP_CONFIG');

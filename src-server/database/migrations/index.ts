@@ -1,0 +1,4 @@
+import { CreateUsersAndAudit1764620000000 } from './1764620000000-create-users-and-audit';
+
+/** Every migration in order; never edit one that has landed, add a new one. */
+export const MIGRATIONS = [CreateUsersAndAudit1764620000000];

@@ -1,0 +1,8 @@
+import type { DataSource } from 'typeorm';
+import type { AppConfig } from '../config/app-config';
+import { seedDemoUsers } from '../users/demo-users.seed';
+
+export type Seeder = (dataSource: DataSource, config: AppConfig) => Promise<string>;
+
+/** Demo data loaders in dependency order; each is idempotent and returns a one-line summary. */
+export const SEEDERS: [string, Seeder][] = [['demo users', seedDemoUsers]];

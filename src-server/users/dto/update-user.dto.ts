@@ -1,0 +1,7 @@
+import { EnumField } from '../../common/dto-fields';
+import { ROLES, type Role } from '../../common/roles';
+
+export class ChangeRoleDto {
+  @EnumField(ROLES)
+  role: Role;
+}
