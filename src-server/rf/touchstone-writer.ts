@@ -1,0 +1,69 @@
+import { FREQUENCY_UNIT_HZ, type DataFormat, type FrequencyUnit, type NetworkParameter, type TwoPortDataOrder } from './touchstone';
+
+export interface ComplexColumns {
+  readonly re: ArrayLike<number>;
+  readonly im: ArrayLike<number>;
+}
+
+/** One noise point: frequency (Hz), NFmin (dB), |Γopt|, ∠Γopt (deg), Rn (normalised in v1, ohms in v2). */
+export type NoisePoint = readonly [number, number, number, number, number];
+
+export interface TouchstoneWriteInput {
+  readonly version: 1 | 2;
+  readonly ports: 1 | 2;
+  readonly frequenciesHz: ArrayLike<number>;
+  /** Row-major matrix elements of `parameter`, as written: v1 Z/Y normalised to R, v2 Z/Y in ohms/siemens. */
+  readonly data: readonly ComplexColumns[];
+  readonly parameter?: NetworkParameter;
+  readonly format?: DataFormat;
+  readonly frequencyUnit?: FrequencyUnit;
+  /** One value (all ports) or one per port; v1 writes them on the option line, v2 in [Reference]. */
+  readonly referenceOhms?: readonly number[];
+  readonly twoPortDataOrder?: TwoPortDataOrder;
+  readonly comments?: readonly string[];
+  readonly noise?: readonly NoisePoint[];
+  /** Defaults to String(), the shortest text that reads back to the same double. */
+  readonly formatNumber?: (value: number) => string;
+}
+
+/** Writes a Touchstone file: used by tests, demo data and the benchmark, so it favours exactness over looks. */
+export function writeTouchstone(input: TouchstoneWriteInput): string {
+  const parameter = input.parameter ?? 'S';
+  const format = input.format ?? 'RI';
+  const unit = input.frequencyUnit ?? 'GHz';
+  const references = input.referenceOhms ?? [50];
+  const order = input.twoPortDataOrder ?? (input.version === 1 ? '21_12' : '12_21');
+  const text = input.formatNumber ?? String;
+  const multiplier = FREQUENCY_UNIT_HZ[unit];
+  const lines: string[] = (input.comments ?? []).map((comment) => `! ${comment}`);
+  const optionReference = input.version === 1 ? references.join(' ') : String(references[0]);
+  const optionLine = `# ${unit} ${parameter} ${format} R ${optionReference}`;
+  if (input.version === 2) {
+    lines.push('[Version] 2.0', optionLine, `[Number of Ports] ${input.ports}`);
+    if (input.ports === 2) lines.push(`[Two-Port Data Order] ${order}`);
+    lines.push(`[Number of Frequencies] ${input.frequenciesHz.length}`);
+    if (input.noise && input.noise.length > 0) lines.push(`[Number of Noise Frequencies] ${input.noise.length}`);
+    if (references.length > 1) lines.push('[Reference]', references.join(' '));
+    lines.push('[Network Data]');
+  } else {
+    lines.push(optionLine);
+  }
+  const elementOrder = input.ports === 1 ? [0] : order === '21_12' ? [0, 2, 1, 3] : [0, 1, 2, 3];
+  const pair = (re: number, im: number): string => {
+    if (format === 'RI') return `${text(re)} ${text(im)}`;
+    const magnitude = Math.hypot(re, im);
+    const angle = (Math.atan2(im, re) * 180) / Math.PI;
+    return `${text(format === 'MA' ? magnitude : 20 * Math.log10(magnitude))} ${text(angle)}`;
+  };
+  for (let i = 0; i < input.frequenciesHz.length; i++) {
+    let line = text(input.frequenciesHz[i] / multiplier);
+    for (const element of elementOrder) line += ' ' + pair(input.data[element].re[i], input.data[element].im[i]);
+    lines.push(line);
+  }
+  if (input.noise && input.noise.length > 0) {
+    if (input.version === 2) lines.push('[Noise Data]');
+    for (const [frequencyHz, ...rest] of input.noise) lines.push([frequencyHz / multiplier, ...rest].map(text).join(' '));
+  }
+  if (input.version === 2) lines.push('[End]');
+  return lines.join('\n') + '\n';
+}
