@@ -1,0 +1,19 @@
+import type { IconName } from '@blueprintjs/icons';
+import type { Role } from '../lib/session';
+import { paths } from './routes/paths';
+
+export interface NavEntry {
+  label: string;
+  path: string;
+  icon: IconName;
+  roles: Role[];
+  section: 'work' | 'reference' | 'admin';
+}
+
+const everyone: Role[] = ['procurement', 'engineer', 'admin'];
+
+/** The left rail; each entry shows only to the roles that may use it. */
+export const navigation: NavEntry[] = [
+  { label: 'Users', path: paths.users, icon: 'people', roles: ['admin'], section: 'admin' },
+  { label: 'Audit log', path: paths.audit, icon: 'history', roles: ['admin'], section: 'admin' },
+];

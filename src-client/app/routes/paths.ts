@@ -1,0 +1,20 @@
+/** Every client route path, in one place. */
+export const paths = {
+  home: '/',
+  signIn: '/sign-in',
+  acceptInvitation: '/accept-invitation',
+  resetPassword: '/reset-password',
+  forgotPassword: '/forgot-password',
+  users: '/admin/users',
+  audit: '/admin/audit',
+  tools: '/tools',
+  bands: '/bands',
+  bandSets: '/bands/sets',
+  regulatoryLimits: '/bands/limits',
+  products: '/products',
+  product: (id: number | string) => `/products/${id}`,
+  catalogue: '/catalogue',
+  part: (id: number | string) => `/catalogue/parts/${id}`,
+  reviewQueue: '/catalogue/review',
+  rules: '/rules',
+} as const;
