@@ -19,6 +19,7 @@ export interface TouchstoneWriteInput {
   readonly frequencyUnit?: FrequencyUnit;
   /** One value (all ports) or one per port; v1 writes them on the option line, v2 in [Reference]. */
   readonly referenceOhms?: readonly number[];
+  /** Version 2 only; version 1 always writes S21 before S12. */
   readonly twoPortDataOrder?: TwoPortDataOrder;
   readonly comments?: readonly string[];
   readonly noise?: readonly NoisePoint[];
@@ -32,7 +33,8 @@ export function writeTouchstone(input: TouchstoneWriteInput): string {
   const format = input.format ?? 'RI';
   const unit = input.frequencyUnit ?? 'GHz';
   const references = input.referenceOhms ?? [50];
-  const order = input.twoPortDataOrder ?? (input.version === 1 ? '21_12' : '12_21');
+  // Version 1 has only one 2-port order (S21 before S12).
+  const order = input.version === 1 ? '21_12' : (input.twoPortDataOrder ?? '12_21');
   const text = input.formatNumber ?? String;
   const multiplier = FREQUENCY_UNIT_HZ[unit];
   const lines: string[] = (input.comments ?? []).map((comment) => `! ${comment}`);
