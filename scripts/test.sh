@@ -43,7 +43,7 @@ log "client tests"
 npx vitest run --reporter=default --reporter=json --outputFile.json="$RESULTS/client.json" || status=1
 
 log "browser tests (Chromium)"
-DB_NAME=bandwright_browser PORT=$BROWSER_PORT node dist/server/main.js >"$RUN_DIR/app-browser.log" 2>&1 &
+DB_NAME=bandwright_browser PORT=$BROWSER_PORT APP_URL="http://127.0.0.1:$BROWSER_PORT" node dist/server/main.js >"$RUN_DIR/app-browser.log" 2>&1 &
 APP_PID=$!
 for _ in $(seq 1 200); do curl -fsS "http://127.0.0.1:$BROWSER_PORT/api/health" >/dev/null 2>&1 && break; sleep 0.1; done
 APP_URL="http://127.0.0.1:$BROWSER_PORT" DB_NAME=bandwright_browser npx jest -c jest.browser.config.js --runInBand --json --outputFile="$RESULTS/browser.json" || status=1

@@ -1,3 +1,9 @@
+import { afterEach } from 'vitest';
+import { cleanup } from '@testing-library/react';
+
+// vitest runs without globals, so testing-library cannot register its own cleanup.
+afterEach(cleanup);
+
 // jsdom lacks these browser APIs that Blueprint and the charts touch.
 class ResizeObserverStub {
   observe() {}
