@@ -1,4 +1,5 @@
 import { CreateUsersAndAudit1764620000000 } from './1764620000000-create-users-and-audit';
+import { CreateCatalogue1764800000000 } from './1764800000000-create-catalogue';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
-export const MIGRATIONS = [CreateUsersAndAudit1764620000000];
+export const MIGRATIONS = [CreateUsersAndAudit1764620000000, CreateCatalogue1764800000000];

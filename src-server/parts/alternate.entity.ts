@@ -1,0 +1,30 @@
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { Part } from './part.entity';
+import { ALTERNATE_KINDS, type AlternateKind } from './part.types';
+
+/** A directed "can replace" link; the service writes both directions so either part shows the other. */
+@Entity({ name: 'part_alternates' })
+export class PartAlternate {
+  @PrimaryColumn({ name: 'part_id', type: 'int', unsigned: true })
+  partId: number;
+
+  @PrimaryColumn({ name: 'alternate_part_id', type: 'int', unsigned: true })
+  alternatePartId: number;
+
+  @ManyToOne(() => Part, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'part_id' })
+  part: Part;
+
+  @ManyToOne(() => Part, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'alternate_part_id' })
+  alternatePart: Part;
+
+  @Column({ type: 'enum', enum: ALTERNATE_KINDS }) kind: AlternateKind;
+  @Column({ type: 'varchar', length: 300, nullable: true }) note: string | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
+  updatedAt: Date;
+}

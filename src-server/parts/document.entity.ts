@@ -1,0 +1,38 @@
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { User } from '../users/user.entity';
+import { Part } from './part.entity';
+import { DOCUMENT_KINDS, type DocumentKind } from './part.types';
+
+@Entity({ name: 'part_documents' })
+export class PartDocument {
+  @PrimaryGeneratedColumn({ unsigned: true })
+  id: number;
+
+  @Column({ name: 'part_id', type: 'int', unsigned: true })
+  partId: number;
+
+  @ManyToOne(() => Part, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'part_id' })
+  part: Part;
+
+  @Column({ type: 'enum', enum: DOCUMENT_KINDS }) kind: DocumentKind;
+  @Column({ type: 'varchar', length: 200 }) title: string;
+  @Column({ name: 'file_name', type: 'varchar', length: 200 }) fileName: string;
+  @Column({ name: 'content_type', type: 'varchar', length: 100 }) contentType: string;
+  @Column({ name: 'object_key', type: 'varchar', length: 300 }) objectKey: string;
+  @Column({ name: 'size_bytes', type: 'int', unsigned: true }) sizeBytes: number;
+  @Column({ type: 'char', length: 64 }) sha256: string;
+
+  @Column({ name: 'uploaded_by_id', type: 'int', unsigned: true, nullable: true })
+  uploadedById: number | null;
+
+  @ManyToOne(() => User, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'uploaded_by_id' })
+  uploadedBy: User | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
+  updatedAt: Date;
+}

@@ -1,0 +1,11 @@
+import { PartAlternate } from './alternate.entity';
+import { CatalogueRevision } from './catalogue-revision.entity';
+import { PartDocument } from './document.entity';
+import { Manufacturer } from './manufacturer.entity';
+import { Measurement } from './measurement.entity';
+import { PartOffer } from './offer.entity';
+import { Part } from './part.entity';
+import { SpecBand } from './spec-band.entity';
+
+/** The catalogue's entities, registered once in database/entities.ts. */
+export const PART_ENTITIES = [Manufacturer, Part, SpecBand, Measurement, PartDocument, PartOffer, PartAlternate, CatalogueRevision];

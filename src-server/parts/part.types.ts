@@ -1,0 +1,24 @@
+/** The closed vocabularies of a part (issue 5); shared by entities, DTOs, CSV import and the search index. */
+export const FORM_FACTORS = ['chip', 'pcb-trace', 'flex', 'stamped-metal', 'patch', 'external-whip', 'panel'] as const;
+export type FormFactor = (typeof FORM_FACTORS)[number];
+
+export const CONNECTORS = ['solder-pad', 'SMA', 'RP-SMA', 'MMCX', 'MCX', 'N', 'micro-coax'] as const;
+export type Connector = (typeof CONNECTORS)[number];
+
+export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP'] as const;
+export type PartPolarization = (typeof POLARIZATIONS)[number];
+
+export const LIFECYCLES = ['active', 'nrnd', 'eol'] as const;
+export type Lifecycle = (typeof LIFECYCLES)[number];
+
+export const REVIEW_STATES = ['draft', 'in-review', 'approved', 'restricted', 'retired'] as const;
+export type ReviewState = (typeof REVIEW_STATES)[number];
+
+export const MEASUREMENT_KINDS = ['s11', 'efficiency', 'peak-gain', 'average-gain'] as const;
+export type MeasurementKind = (typeof MEASUREMENT_KINDS)[number];
+
+export const DOCUMENT_KINDS = ['datasheet', 'drawing', 'other'] as const;
+export type DocumentKind = (typeof DOCUMENT_KINDS)[number];
+
+export const ALTERNATE_KINDS = ['alternate', 'second-source'] as const;
+export type AlternateKind = (typeof ALTERNATE_KINDS)[number];
