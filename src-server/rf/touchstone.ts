@@ -122,10 +122,6 @@ const POWERS_OF_TEN = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
 const MAX_EXACT_MANTISSA = 2 ** 53;
 const DEG_TO_RAD = Math.PI / 180;
 
-function isSpace(c: number): boolean {
-  return c === CHAR_SPACE || c === CHAR_TAB || c === CHAR_CR || c === CHAR_VT || c === CHAR_FF || c === CHAR_COMMA;
-}
-
 function latin1(bytes: Uint8Array, start: number, end: number): string {
   let text = '';
   for (let i = start; i < end; i++) text += String.fromCharCode(bytes[i]);
@@ -142,18 +138,35 @@ class LineNumbers {
   }
 }
 
+/** Blanks between numbers: space, tab, VT, FF and (leniently) comma. */
+function isBlank(c: number): boolean {
+  return c === CHAR_SPACE || c === CHAR_TAB || c === CHAR_VT || c === CHAR_FF || c === CHAR_COMMA;
+}
+
+/** What may follow a number: a blank, the end of the line, or a comment. */
+function endsToken(c: number): boolean {
+  return isBlank(c) || c === CHAR_LF || c === CHAR_CR || c === CHAR_BANG;
+}
+
 /**
- * Parses every whitespace-separated number of bytes[start, end) into `out`. A decimal with at most
- * 2^53 mantissa and |exponent| ≤ 22 is exact in one rounding; anything longer goes to Number().
+ * Parses the numbers from `start` to the end of the line or a comment into `out` and returns where it
+ * stopped. A decimal with a mantissa below 2^53 and |exponent| ≤ 22 is exact in one rounding;
+ * anything longer goes to Number().
  */
-function scanNumbers(bytes: Uint8Array, start: number, end: number, out: LineNumbers, lineNumber: number): void {
+function scanNumbers(bytes: Uint8Array, start: number, out: LineNumbers, lineNumber: number): number {
   const values = out.values;
   const capacity = values.length;
+  const end = bytes.length;
   let count = 0;
   let i = start;
   while (i < end) {
     let c = bytes[i];
-    if (isSpace(c)) {
+    if (c === CHAR_SPACE || c === CHAR_TAB) {
+      i++;
+      continue;
+    }
+    if (c === CHAR_LF || c === CHAR_CR || c === CHAR_BANG) break;
+    if (isBlank(c)) {
       i++;
       continue;
     }
@@ -198,9 +211,9 @@ function scanNumbers(bytes: Uint8Array, start: number, end: number, out: LineNum
       valid = exponentDigits > 0;
       exponent += exponentNegative ? -exponentValue : exponentValue;
     }
-    if (!valid || (i < end && !isSpace(bytes[i]))) {
+    if (!valid || (i < end && !endsToken(bytes[i]))) {
       let tokenEnd = i;
-      while (tokenEnd < end && !isSpace(bytes[tokenEnd])) tokenEnd++;
+      while (tokenEnd < end && !endsToken(bytes[tokenEnd])) tokenEnd++;
       const token = latin1(bytes, tokenStart, tokenEnd);
       throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `'${token.length > 40 ? token.slice(0, 40) + '…' : token}' is not a number`);
     }
@@ -218,6 +231,7 @@ function scanNumbers(bytes: Uint8Array, start: number, end: number, out: LineNum
     count++;
   }
   out.count = count;
+  return i;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -518,7 +532,7 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
     s.frequenciesHz[index] = frequencyHz;
     const targets = layout!.targets;
     const direct = parameter === 'S';
-    const converted: Complex[] = direct ? [] : new Array<Complex>(s.elements);
+    const converted: Complex[] | null = direct ? null : new Array<Complex>(s.elements);
     for (let k = 0; k < targets.length; k++) {
       const a = values[1 + 2 * k];
       const b = values[2 + 2 * k];
@@ -538,7 +552,7 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
         s.re[target][index] = re;
         s.im[target][index] = im;
       } else {
-        converted[target] = { re: re * normalisation[target], im: im * normalisation[target] };
+        converted![target] = { re: re * normalisation[target], im: im * normalisation[target] };
       }
     }
     for (const [from, to] of layout!.mirrors) {
@@ -546,11 +560,11 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
         s.re[to][index] = s.re[from][index];
         s.im[to][index] = s.im[from][index];
       } else {
-        converted[to] = converted[from];
+        converted![to] = converted![from];
       }
     }
     if (!direct) {
-      const sMatrix = normalisedToS(parameter, state.ports!, converted);
+      const sMatrix = normalisedToS(parameter, state.ports!, converted!);
       for (let e = 0; e < sMatrix.length; e++) {
         s.re[e][index] = sMatrix[e].re;
         s.im[e][index] = sMatrix[e].im;
@@ -570,8 +584,7 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
 
   const portWord = (ports: number) => `${ports}-port`;
 
-  const handleVersion1Data = (start: number, end: number, lineNumber: number) => {
-    scanNumbers(bytes, start, end, numbers, lineNumber);
+  const handleVersion1Data = (lineNumber: number) => {
     const count = numbers.count;
     if (state.ports === null) {
       if (!state.option) throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', lineNumber, `data before the option line (# <unit> <parameter> <format> R <ohms>)`);
@@ -616,8 +629,7 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
     }
   };
 
-  const handleVersion2Data = (start: number, end: number, lineNumber: number) => {
-    scanNumbers(bytes, start, end, numbers, lineNumber);
+  const handleVersion2Data = (lineNumber: number) => {
     const count = numbers.count;
     if (state.section === 'noise') {
       addNoisePoint(numbers.values, count, lineNumber);
@@ -760,27 +772,41 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
   let lineNumber = 0;
   let position = 0;
   const length = bytes.length;
+  const nextLine = (from: number): number => {
+    let p = from;
+    let c = 0;
+    while (p < length && (c = bytes[p]) !== CHAR_LF && c !== CHAR_CR) p++;
+    if (p < length) {
+      p++;
+      if (c === CHAR_CR && p < length && bytes[p] === CHAR_LF) p++;
+    }
+    return p;
+  };
   while (position < length && state.section !== 'ended') {
     lineNumber++;
-    const lineStart = position;
-    let contentEnd = -1;
-    // One pass finds the end of the line and where a comment starts.
-    let c = 0;
-    while (position < length && (c = bytes[position]) !== CHAR_LF && c !== CHAR_CR) {
-      if (c === CHAR_BANG && contentEnd < 0) contentEnd = position;
-      position++;
+    let first = position;
+    while (first < length && isBlank(bytes[first])) first++;
+    const lead = first < length ? bytes[first] : CHAR_LF;
+    if (lead === CHAR_LF || lead === CHAR_CR || lead === CHAR_BANG) {
+      position = nextLine(first);
+      continue;
     }
-    const lineEnd = position;
-    if (position < length) {
-      position++;
-      if (c === CHAR_CR && position < length && bytes[position] === CHAR_LF) position++;
+    // Data lines, the bulk of a file, are scanned once: numbers straight from the bytes.
+    const isNumberStart = (lead >= CHAR_0 && lead <= CHAR_9) || lead === CHAR_MINUS || lead === CHAR_PLUS || lead === CHAR_DOT;
+    if (isNumberStart && state.section !== 'information' && state.referencePending === 0) {
+      sawContent = true;
+      position = nextLine(scanNumbers(bytes, first, numbers, lineNumber));
+      if (state.isVersion2) handleVersion2Data(lineNumber);
+      else handleVersion1Data(lineNumber);
+      continue;
     }
-    if (contentEnd < 0) contentEnd = lineEnd;
-    let first = lineStart;
-    while (first < contentEnd && isSpace(bytes[first])) first++;
-    if (first === contentEnd) continue;
-    const lead = bytes[first];
-
+    let contentEnd = first;
+    while (contentEnd < length) {
+      const c = bytes[contentEnd];
+      if (c === CHAR_LF || c === CHAR_CR || c === CHAR_BANG) break;
+      contentEnd++;
+    }
+    position = nextLine(contentEnd);
     if (state.section === 'information') {
       if (lead === CHAR_BRACKET) handleKeyword(latin1(bytes, first, contentEnd).trim(), lineNumber);
       continue;
@@ -818,8 +844,10 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
       handleReferenceValues(latin1(bytes, first, contentEnd), lineNumber);
       continue;
     }
-    if (state.isVersion2) handleVersion2Data(first, contentEnd, lineNumber);
-    else handleVersion1Data(first, contentEnd, lineNumber);
+    // Anything else is a data line that does not start like a number.
+    scanNumbers(bytes, first, numbers, lineNumber);
+    if (state.isVersion2) handleVersion2Data(lineNumber);
+    else handleVersion1Data(lineNumber);
   }
 
   if (!sawContent) throw new TouchstoneError('TOUCHSTONE_EMPTY', null, `the file is empty (no option line and no data)`);
