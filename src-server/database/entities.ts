@@ -2,6 +2,11 @@ import { AuditEntry } from '../audit/audit-entry.entity';
 import { User } from '../users/user.entity';
 import { UserToken } from '../users/user-token.entity';
 import { PART_ENTITIES } from '../parts/part-entities';
+import { Band, BandRange } from '../bands/band.entity';
+import { BandSet, BandSetMember } from '../bands/band-set.entity';
+import { RegulatoryLimit } from '../regulatory/regulatory-limit.entity';
+import { Product } from '../products/product.entity';
+import { Radio, RadioBand } from '../products/radio.entity';
 
 /** Every TypeORM entity; add new domains here. */
-export const ENTITIES = [User, UserToken, AuditEntry, ...PART_ENTITIES];
+export const ENTITIES = [User, UserToken, AuditEntry, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand];
