@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { Part } from './part.entity';
 import { ALTERNATE_KINDS, type AlternateKind } from './part.types';
 
@@ -13,11 +13,11 @@ export class PartAlternate {
 
   @ManyToOne(() => Part, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'part_id' })
-  part: Part;
+  part: Relation<Part>;
 
   @ManyToOne(() => Part, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'alternate_part_id' })
-  alternatePart: Part;
+  alternatePart: Relation<Part>;
 
   @Column({ type: 'enum', enum: ALTERNATE_KINDS }) kind: AlternateKind;
   @Column({ type: 'varchar', length: 300, nullable: true }) note: string | null;

@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { User } from '../users/user.entity';
 import { Part } from './part.entity';
 import { DOCUMENT_KINDS, type DocumentKind } from './part.types';
@@ -13,7 +13,7 @@ export class PartDocument {
 
   @ManyToOne(() => Part, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'part_id' })
-  part: Part;
+  part: Relation<Part>;
 
   @Column({ type: 'enum', enum: DOCUMENT_KINDS }) kind: DocumentKind;
   @Column({ type: 'varchar', length: 200 }) title: string;

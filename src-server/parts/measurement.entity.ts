@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { User } from '../users/user.entity';
 import { Part } from './part.entity';
 import { MEASUREMENT_KINDS, type MeasurementKind } from './part.types';
@@ -17,7 +17,7 @@ export class Measurement {
 
   @ManyToOne(() => Part, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'part_id' })
-  part: Part;
+  part: Relation<Part>;
 
   @Column({ type: 'enum', enum: MEASUREMENT_KINDS })
   kind: MeasurementKind;

@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { Part } from './part.entity';
 
 export interface PriceBreak {
@@ -18,7 +18,7 @@ export class PartOffer {
 
   @ManyToOne(() => Part, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'part_id' })
-  part: Part;
+  part: Relation<Part>;
 
   @Column({ type: 'varchar', length: 120 }) supplier: string;
   @Column({ type: 'varchar', length: 80, nullable: true }) sku: string | null;

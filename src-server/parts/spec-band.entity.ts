@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { Part } from './part.entity';
 
 /** A datasheet-level claim over one frequency range, used when no curve covers the range. */
@@ -12,7 +12,7 @@ export class SpecBand {
 
   @ManyToOne(() => Part, (part) => part.specBands, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'part_id' })
-  part: Part;
+  part: Relation<Part>;
 
   @Column({ name: 'from_mhz', type: 'double' }) fromMhz: number;
   @Column({ name: 'to_mhz', type: 'double' }) toMhz: number;
