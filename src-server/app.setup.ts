@@ -2,10 +2,36 @@ import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import helmet from 'helmet';
 import { AppModule } from './app.module';
+import { loadConfig } from './config/app-config';
+import { JsonLogger } from './common/json-logger';
+import { requestIdMiddleware } from './common/request-context';
 
 /** Everything main.ts does except listen, so the tests run the production app. */
 export function configureApp(app: INestApplication): INestApplication {
+  const config = loadConfig();
+  app.use(requestIdMiddleware);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          // Blueprint positions popovers and table cells with inline styles.
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+    }),
+  );
+  // Only the app's own origin may call the API from a browser.
+  app.enableCors({ origin: [config.appUrl], credentials: false });
   app.setGlobalPrefix('api');
   app.enableShutdownHooks();
   const document = SwaggerModule.createDocument(
@@ -22,7 +48,7 @@ export function configureApp(app: INestApplication): INestApplication {
 }
 
 export async function createApp(): Promise<NestExpressApplication> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule, { logger: ['error', 'warn', 'log'] });
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, { logger: new JsonLogger() });
   app.set('trust proxy', 'loopback');
   configureApp(app);
   return app;

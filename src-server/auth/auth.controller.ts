@@ -1,7 +1,8 @@
-import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Post, UseGuards } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Public, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
+import { AuthThrottlerGuard } from '../common/auth-throttler.guard';
 import { AuthService } from './auth.service';
 import { LoginResponseDto, MeDto } from './dto/auth-response.dto';
 import { LoginDto } from './dto/login.dto';
@@ -14,6 +15,7 @@ export class AuthController {
   constructor(private readonly auth: AuthService) {}
 
   @Post('login')
+  @UseGuards(AuthThrottlerGuard)
   @Public()
   @HttpCode(200)
   @ApiOperation({ summary: 'Sign in with e-mail and password; returns a bearer token' })
@@ -31,6 +33,7 @@ export class AuthController {
   }
 
   @Post('accept-invitation')
+  @UseGuards(AuthThrottlerGuard)
   @Public()
   @HttpCode(200)
   @ApiOperation({ summary: 'Set a password with the token from an invitation e-mail; signs the user in' })
@@ -40,6 +43,7 @@ export class AuthController {
   }
 
   @Post('password-reset-requests')
+  @UseGuards(AuthThrottlerGuard)
   @Public()
   @HttpCode(202)
   @ApiOperation({ summary: 'E-mail a password-reset link (answers 202 whether or not the e-mail is known)' })
@@ -49,6 +53,7 @@ export class AuthController {
   }
 
   @Post('password-reset')
+  @UseGuards(AuthThrottlerGuard)
   @Public()
   @HttpCode(200)
   @ApiOperation({ summary: 'Set a new password with the token from a reset e-mail; signs the user in' })

@@ -16,6 +16,9 @@ import type { JwtPayload } from './jwt.strategy';
 let dummyHash: Promise<string> | undefined;
 const getDummyHash = () => (dummyHash ??= hashPassword('no-such-user-password'));
 
+export const MAX_FAILED_LOGINS = 5;
+export const LOCKOUT_MS = 5 * 60_000;
+
 export const toMe = (user: User): MeDto => ({ id: user.id, email: user.email, name: user.name, role: user.role });
 
 @Injectable()
@@ -38,11 +41,26 @@ export class AuthService {
       .addSelect('u.passwordHash')
       .where('u.email = :email', { email: email.trim().toLowerCase() })
       .getOne();
+    if (user?.lockedUntil && user.lockedUntil.getTime() > Date.now()) {
+      const minutes = Math.ceil((user.lockedUntil.getTime() - Date.now()) / 60_000);
+      throw new DomainError('AUTH_TEMPORARILY_LOCKED', `Too many failed sign-ins; try again in ${minutes} minute${minutes === 1 ? '' : 's'}`, 429);
+    }
     const ok = await verifyPassword(password, user?.passwordHash ?? (await getDummyHash()));
     if (!user || !ok || user.status !== 'active' || !user.passwordHash) {
+      if (user) await this.recordFailedLogin(user);
       throw new DomainError('AUTH_BAD_CREDENTIALS', 'E-mail or password is not correct', 401);
     }
+    if (user.failedLogins > 0 || user.lockedUntil) await this.dataSource.getRepository(User).update({ id: user.id }, { failedLogins: 0, lockedUntil: null });
     return this.issueToken(user);
+  }
+
+  /** After MAX_FAILED_LOGINS wrong passwords in a row the account waits LOCKOUT_MS before the next try. */
+  private async recordFailedLogin(user: User): Promise<void> {
+    const failures = user.failedLogins + 1;
+    const lock = failures >= MAX_FAILED_LOGINS;
+    await this.dataSource
+      .getRepository(User)
+      .update({ id: user.id }, { failedLogins: lock ? 0 : failures, lockedUntil: lock ? new Date(Date.now() + LOCKOUT_MS) : user.lockedUntil });
   }
 
   issueToken(user: User): LoginResponseDto {

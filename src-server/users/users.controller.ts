@@ -1,7 +1,8 @@
-import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post, UseGuards } from '@nestjs/common';
 import { ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ParseIdPipe } from '../common/parse-id.pipe';
+import { AuthThrottlerGuard } from '../common/auth-throttler.guard';
 import { UsersService } from './users.service';
 import { InviteUserDto } from './dto/invite-user.dto';
 import { ChangeRoleDto } from './dto/update-user.dto';
@@ -22,6 +23,7 @@ export class UsersController {
   }
 
   @Post('invitations')
+  @UseGuards(AuthThrottlerGuard)
   @Roles('admin')
   @ApiOperation({ summary: 'Invite a user by e-mail; the link sets their password (admin)' })
   @ApiCreatedResponse({ type: UserResponseDto })

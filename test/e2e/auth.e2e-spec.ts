@@ -173,4 +173,39 @@ describe('auth and users (API)', () => {
       await http().patch('/api/users/999999/role').set('Authorization', `Bearer ${tokens.admin}`).send({ role: 'engineer' }).expect(404);
     });
   });
+
+  describe('hardening of sign-in', () => {
+    it('locks an account for a while after 5 wrong passwords in a row, even for the right password', async () => {
+      const email = `${unique('target')}@bandwright.test`;
+      await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Tia Target', role: 'engineer' }).expect(201);
+      const mail = await waitForMail(email, /invited/i);
+      const token = new URL(linkIn(mail, '/accept-invitation')).searchParams.get('token')!;
+      await http().post('/api/auth/accept-invitation').send({ token, password: 'target-password-1' }).expect(200);
+      for (let i = 0; i < 5; i += 1) await http().post('/api/auth/login').send({ email, password: `wrong-${i}` }).expect(401);
+      const locked = await http().post('/api/auth/login').send({ email, password: 'target-password-1' }).expect(429);
+      expect(locked.body.code).toBe('AUTH_TEMPORARILY_LOCKED');
+    });
+
+    it('rate-limits repeated sign-in attempts for one address and e-mail with 429', async () => {
+      const email = `${unique('flood')}@bandwright.test`;
+      const statuses: number[] = [];
+      for (let i = 0; i < 32; i += 1) statuses.push((await http().post('/api/auth/login').send({ email, password: 'guess-guess' })).status);
+      expect(statuses.slice(0, 30).every((s) => s === 401)).toBe(true);
+      expect(statuses.slice(30)).toEqual([429, 429]);
+    });
+
+    it('sends security headers and a request id on every answer', async () => {
+      const res = await http().get('/api/health');
+      expect(res.headers['x-content-type-options']).toBe('nosniff');
+      expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+      expect(res.headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
+      const echoed = await http().get('/api/health').set('X-Request-Id', 'proxy-given-id-123');
+      expect(echoed.headers['x-request-id']).toBe('proxy-given-id-123');
+    });
+
+    it('does not allow other origins to call the API from a browser', async () => {
+      const res = await http().options('/api/auth/login').set('Origin', 'http://evil.example').set('Access-Control-Request-Method', 'POST');
+      expect(res.headers['access-control-allow-origin']).toBeUndefined();
+    });
+  });
 });
