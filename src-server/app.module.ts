@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { ServeStaticModule } from '@nestjs/serve-static';
+import { ThrottlerModule } from '@nestjs/throttler';
 import { resolve } from 'node:path';
 import { APP_CONFIG, type AppConfig, loadConfig } from './config/app-config';
 import { ConfigModule } from './config/config.module';
@@ -23,6 +24,8 @@ import { UsersModule } from './users/users.module';
       inject: [APP_CONFIG],
       useFactory: (config: AppConfig) => ({ ...dataSourceOptions(config), retryAttempts: 20, retryDelay: 1000 }),
     }),
+    // Only the routes that opt in with AuthThrottlerGuard are limited (sign-in, invitations, resets).
+    ThrottlerModule.forRoot([{ name: 'auth', ttl: 60_000, limit: 30 }]),
     ServeStaticModule.forRoot({ rootPath: resolve(loadConfig().clientDir), exclude: ['/api/{*path}'] }),
     AuditModule,
     MailModule,
