@@ -1,0 +1,146 @@
+import { FACT_CATALOG, isFactName } from './fact-catalog';
+import type { RuleDefinition } from './rule-definition';
+import { type BoundRule, type EngineCondition, bindRule, bindingKey, completeFacts, findingOf, noDataFindingOf, verdictOf } from './rule-binding';
+import { factsNamedBy } from './rule-definition';
+import type { CellVerdict, Facts, Finding } from './types';
+
+export type Predicate = (facts: Facts) => boolean;
+
+type OperatorCallback = (factValue: any, compareTo: any) => boolean;
+
+// The same callbacks and fact-value validators as json-rules-engine 7's default operators, so verdicts match.
+const numberValidator = (factValue: unknown) => Number.parseFloat(factValue as string).toString() !== 'NaN';
+const OPERATORS: Record<string, { cb: OperatorCallback; validator: (factValue: unknown) => boolean }> = {
+  equal: { cb: (a, b) => a === b, validator: () => true },
+  notEqual: { cb: (a, b) => a !== b, validator: () => true },
+  in: { cb: (a, b) => b.indexOf(a) > -1, validator: () => true },
+  notIn: { cb: (a, b) => b.indexOf(a) === -1, validator: () => true },
+  contains: { cb: (a, b) => a.indexOf(b) > -1, validator: Array.isArray },
+  doesNotContain: { cb: (a, b) => a.indexOf(b) === -1, validator: Array.isArray },
+  lessThan: { cb: (a, b) => a < b, validator: numberValidator },
+  lessThanInclusive: { cb: (a, b) => a <= b, validator: numberValidator },
+  greaterThan: { cb: (a, b) => a > b, validator: numberValidator },
+  greaterThanInclusive: { cb: (a, b) => a >= b, validator: numberValidator },
+};
+
+/** A condition tree as a plain JavaScript function; empty "all" and "any" are true, as in json-rules-engine. */
+export function compileCondition(node: EngineCondition): Predicate {
+  if ('all' in node) {
+    const parts = node.all.map(compileCondition);
+    if (parts.length === 1) return parts[0];
+    return (facts) => {
+      for (const p of parts) if (!p(facts)) return false;
+      return true;
+    };
+  }
+  if ('any' in node) {
+    const parts = node.any.map(compileCondition);
+    if (parts.length === 0) return () => true;
+    if (parts.length === 1) return parts[0];
+    return (facts) => {
+      for (const p of parts) if (p(facts)) return true;
+      return false;
+    };
+  }
+  if ('not' in node) {
+    const inner = compileCondition(node.not);
+    return (facts) => !inner(facts);
+  }
+  const op = OPERATORS[node.operator];
+  if (!op) throw new Error(`unknown operator "${node.operator}"`);
+  const { cb, validator } = op;
+  const fact = node.fact;
+  const value = node.value;
+  if (typeof value === 'object' && value !== null && !Array.isArray(value) && 'fact' in value) {
+    const other = (value as { fact: string }).fact;
+    return (facts) => {
+      const a = facts[fact];
+      return validator(a) && cb(a, facts[other]);
+    };
+  }
+  return (facts) => {
+    const a = facts[fact];
+    return validator(a) && cb(a, value);
+  };
+}
+
+interface CompiledRule {
+  readonly bound: BoundRule;
+  /** Null when the rule applies to every pair of the row (decided once, from the row's facts). */
+  readonly applies: Predicate | null;
+  readonly fires: Predicate;
+  readonly required: readonly string[];
+}
+
+/** The rules bound to one row, with rules that cannot apply to the row already dropped. */
+export class CompiledRow {
+  readonly rules: readonly CompiledRule[];
+
+  constructor(bound: readonly BoundRule[], rowFacts: Facts) {
+    const rules: CompiledRule[] = [];
+    for (const b of bound) {
+      let applies = b.appliesWhen ? compileCondition(b.appliesWhen) : null;
+      const onlyRowFacts = b.appliesWhen !== null && factsNamedBy(b.rule.appliesWhen).every((f) => isFactName(f) && FACT_CATALOG[f].scope === 'row');
+      if (applies && onlyRowFacts) {
+        if (!applies(rowFacts)) continue;
+        applies = null;
+      }
+      rules.push({ bound: b, applies, fires: compileCondition(b.conditions), required: b.requiredFacts });
+    }
+    this.rules = rules;
+  }
+
+  /** Facts must be complete (every catalogue fact present, unknown as null). */
+  evaluate(facts: Facts): CellVerdict {
+    const findings: Finding[] = [];
+    for (const r of this.rules) {
+      if (r.applies && !r.applies(facts)) continue;
+      let known = true;
+      for (const name of r.required) {
+        if (facts[name] === null) {
+          known = false;
+          break;
+        }
+      }
+      if (!known) findings.push(noDataFindingOf(r.bound, facts));
+      else if (r.fires(facts)) findings.push(findingOf(r.bound, facts));
+    }
+    return verdictOf(findings);
+  }
+}
+
+/**
+ * The fast path: rule conditions compiled to closures, bound once per distinct row binding
+ * (e.g. per technology for per-technology tables) and cached; verdicts equal ReferenceEvaluator's.
+ */
+export class CompiledRuleSet {
+  readonly rules: readonly RuleDefinition[];
+  private readonly rows = new Map<string, CompiledRow>();
+
+  constructor(rules: readonly RuleDefinition[]) {
+    this.rules = rules.filter((r) => r.enabled);
+  }
+
+  forRow(rowFacts: Facts): CompiledRow {
+    const complete = completeFacts(rowFacts);
+    const key = this.rules.map((r) => bindingKey(r, complete)).join('\n') + '\n' + rowKey(complete);
+    let row = this.rows.get(key);
+    if (!row) {
+      row = new CompiledRow(this.rules.map((rule, index) => bindRule(rule, index, complete)), complete);
+      this.rows.set(key, row);
+    }
+    return row;
+  }
+
+  evaluate(facts: Facts): CellVerdict {
+    const complete = completeFacts(facts);
+    return this.forRow(complete).evaluate(complete);
+  }
+}
+
+/** The row facts themselves: a row pre-filter decided on them must not be reused for another row. */
+function rowKey(facts: Facts): string {
+  let key = '';
+  for (const name in FACT_CATALOG) if (FACT_CATALOG[name as keyof typeof FACT_CATALOG].scope === 'row') key += `${name}=${String(facts[name])};`;
+  return key;
+}

@@ -1,0 +1,340 @@
+import { type FrequencyRange, type SampledCurve, bandOutsideData, bandStatistics, coverageOfBand, efficiencyInBand, gainInBand, interpolateAt } from '../../rf/curves';
+import { bandMatch } from '../../rf/reflection';
+import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, returnLossDbFromGammaMagnitude, vswrFromGammaMagnitude } from '../../rf/mismatch';
+import { eirpDbm, erpDbmFromEirpDbm, polarizationLossDb, realizedGainDbi, totalEfficiency } from '../../rf/link-budget';
+import { powerRatioToDb, wavelengthFractionMm } from '../../rf/units';
+import type { FactName } from './fact-catalog';
+import type { BandRange, FactValue, Facts, PartEvaluationData, RadioBandRequirement, SpecBand } from './types';
+
+type Source = 'measured' | 'spec';
+
+/** One quantity over one range: its value at any frequency inside, and where it changes slope or steps. */
+interface RangeSampler {
+  readonly source: Source;
+  readonly at: (frequencyHz: number) => number;
+  readonly breakpointsHz: readonly number[];
+}
+
+type Worse = (a: number, b: number) => number;
+
+function measuredSampler(curve: SampledCurve | null, range: FrequencyRange): RangeSampler | null {
+  if (!curve || bandOutsideData(curve.frequenciesHz, range)) return null;
+  const breakpointsHz: number[] = [];
+  for (let i = 0; i < curve.frequenciesHz.length; i++) {
+    const f = curve.frequenciesHz[i];
+    if (f > range.fromHz && f < range.toHz) breakpointsHz.push(f);
+  }
+  return { source: 'measured', at: (f) => interpolateAt(curve, f)!, breakpointsHz };
+}
+
+function mergeRanges(ranges: FrequencyRange[]): FrequencyRange[] {
+  const sorted = [...ranges].sort((a, b) => a.fromHz - b.fromHz);
+  const merged: FrequencyRange[] = [];
+  for (const r of sorted) {
+    const last = merged[merged.length - 1];
+    if (last && r.fromHz <= last.toHz) merged[merged.length - 1] = { fromHz: last.fromHz, toHz: Math.max(last.toHz, r.toHz) };
+    else merged.push({ fromHz: r.fromHz, toHz: r.toHz });
+  }
+  return merged;
+}
+
+/** Spec bands hold one figure per range; where two overlap the worse one counts. Null unless they cover the whole range. */
+function specSampler(specBands: readonly SpecBand[], range: FrequencyRange, value: (band: SpecBand) => number | null, worse: Worse): RangeSampler | null {
+  const usable = specBands.filter((b) => value(b) !== null);
+  if (usable.length === 0) return null;
+  if (coverageOfBand(mergeRanges(usable.map((b) => ({ fromHz: b.fromHz, toHz: b.toHz }))), range).uncoveredRanges.length > 0) return null;
+  const breakpointsHz = usable.flatMap((b) => [b.fromHz, b.toHz]).filter((f) => f > range.fromHz && f < range.toHz);
+  const at = (f: number): number => {
+    let result = NaN;
+    for (const b of usable) if (f >= b.fromHz && f <= b.toHz) result = Number.isNaN(result) ? value(b)! : worse(result, value(b)!);
+    return result;
+  };
+  return { source: 'spec', at, breakpointsHz };
+}
+
+function specGamma(band: SpecBand): number | null {
+  if (band.maxVswr !== null) return gammaMagnitudeFromVswr(band.maxVswr);
+  if (band.minReturnLossDb !== null) return gammaMagnitudeFromReturnLossDb(band.minReturnLossDb);
+  return null;
+}
+
+function gammaSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
+  const curve = part.reflection ? { frequenciesHz: part.reflection.frequenciesHz, values: part.reflection.gammaMagnitude } : null;
+  return measuredSampler(curve, range) ?? specSampler(part.specBands, range, specGamma, Math.max);
+}
+
+function efficiencySampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
+  return measuredSampler(part.radiationEfficiencyPercent, range) ?? specSampler(part.specBands, range, (b) => b.efficiencyPercent, Math.min);
+}
+
+function gainSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
+  return measuredSampler(part.peakGainDbi, range) ?? specSampler(part.specBands, range, (b) => b.peakGainDbi, Math.max);
+}
+
+/** The samplers' values, combined point by point, as a curve over the range (edges included). */
+function combinedCurve(range: FrequencyRange, samplers: readonly RangeSampler[], combine: (values: number[]) => number): SampledCurve {
+  const points = new Set<number>([range.fromHz, range.toHz]);
+  for (const s of samplers) for (const f of s.breakpointsHz) points.add(f);
+  const frequenciesHz = Float64Array.from([...points].sort((a, b) => a - b));
+  const values = frequenciesHz.map((f) => combine(samplers.map((s) => s.at(f))));
+  return { frequenciesHz, values };
+}
+
+interface Extreme {
+  value: number;
+  atHz: number;
+}
+
+interface RangeStats {
+  min: Extreme;
+  max: Extreme;
+  average: number;
+  widthHz: number;
+}
+
+/** Min, max and width-weighted average over several ranges; null when any range has no data. */
+function acrossRanges(perRange: (RangeStats | null)[]): RangeStats | null {
+  if (perRange.length === 0 || perRange.some((s) => s === null)) return null;
+  const stats = perRange as RangeStats[];
+  const totalWidth = stats.reduce((sum, s) => sum + s.widthHz, 0);
+  const min = stats.reduce((best, s) => (s.min.value < best.value ? s.min : best), stats[0].min);
+  const max = stats.reduce((best, s) => (s.max.value > best.value ? s.max : best), stats[0].max);
+  const average = totalWidth === 0 ? stats.reduce((sum, s) => sum + s.average, 0) / stats.length : stats.reduce((sum, s) => sum + s.average * s.widthHz, 0) / totalWidth;
+  return { min, max, average, widthHz: totalWidth };
+}
+
+function linearStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
+  const stats = bandStatistics(curve, range, 'linear');
+  if (stats.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${stats.reason})`);
+  return { min: { value: stats.min, atHz: stats.minAtHz }, max: { value: stats.max, atHz: stats.maxAtHz }, average: stats.average, widthHz: range.toHz - range.fromHz };
+}
+
+function efficiencyStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
+  const eff = efficiencyInBand(curve, range);
+  if (eff.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${eff.reason})`);
+  return { min: { value: eff.minPercent, atHz: eff.minAtHz }, max: { value: eff.maxPercent, atHz: eff.minAtHz }, average: eff.averagePercent, widthHz: range.toHz - range.fromHz };
+}
+
+function gainStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
+  const gain = gainInBand(curve, range);
+  if (gain.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${gain.reason})`);
+  return { min: { value: gain.minDbi, atHz: gain.peakAtHz }, max: { value: gain.peakDbi, atHz: gain.peakAtHz }, average: gain.averageDbi, widthHz: range.toHz - range.fromHz };
+}
+
+interface CoverageResult {
+  fraction: number;
+  uncovered: FrequencyRange[];
+}
+
+function coverageAt(part: PartEvaluationData, ranges: readonly FrequencyRange[], maxVswr: number): CoverageResult | null {
+  let coveredWidth = 0;
+  let totalWidth = 0;
+  let fractionSum = 0;
+  const uncovered: FrequencyRange[] = [];
+  const specMatched = part.specBands.filter((b) => specGamma(b) !== null);
+  for (const range of ranges) {
+    let fraction: number;
+    let gaps: readonly FrequencyRange[];
+    const measured = part.reflection ? bandMatch(part.reflection, range, { kind: 'vswr', maxVswr }) : null;
+    if (measured && measured.status === 'ok') {
+      fraction = measured.coveredFraction;
+      gaps = measured.uncoveredRanges;
+    } else if (specMatched.length > 0) {
+      const limit = gammaMagnitudeFromVswr(maxVswr);
+      const good = mergeRanges(specMatched.filter((b) => specGamma(b)! <= limit).map((b) => ({ fromHz: b.fromHz, toHz: b.toHz })));
+      const coverage = coverageOfBand(good, range);
+      fraction = coverage.coveredFraction;
+      gaps = coverage.uncoveredRanges;
+    } else {
+      return null;
+    }
+    const width = range.toHz - range.fromHz;
+    coveredWidth += fraction * width;
+    totalWidth += width;
+    fractionSum += fraction;
+    uncovered.push(...gaps);
+  }
+  return { fraction: totalWidth === 0 ? fractionSum / ranges.length : coveredWidth / totalWidth, uncovered };
+}
+
+const mhz = (hz: number) => hz / 1e6;
+
+function formatMhzValue(hz: number): string {
+  return String(Number(mhz(hz).toFixed(3)));
+}
+
+export function describeRanges(ranges: readonly FrequencyRange[]): string {
+  if (ranges.length === 0) return 'none';
+  return ranges.map((r) => (r.fromHz === r.toHz ? `${formatMhzValue(r.fromHz)} MHz` : `${formatMhzValue(r.fromHz)}–${formatMhzValue(r.toHz)} MHz`)).join(', ');
+}
+
+function transmitRanges(requirement: RadioBandRequirement): readonly BandRange[] {
+  if (requirement.txPowerDbm === null) return [];
+  const tx = requirement.ranges.filter((r) => r.role === 'uplink' || r.role === 'tdd');
+  // A transmitting radio whose band names no transmit range: every range counts.
+  return tx.length > 0 ? tx : requirement.ranges;
+}
+
+function overlap(a: FrequencyRange, b: FrequencyRange): FrequencyRange | null {
+  const fromHz = Math.max(a.fromHz, b.fromHz);
+  const toHz = Math.min(a.toHz, b.toHz);
+  if (fromHz < toHz || (fromHz === toHz && (a.fromHz === a.toHz || b.fromHz === b.toHz))) return { fromHz, toHz };
+  return null;
+}
+
+function sortedSides(lengthMm: number, widthMm: number): [number, number] {
+  return lengthMm >= widthMm ? [lengthMm, widthMm] : [widthMm, lengthMm];
+}
+
+/** Row facts depend on the radio band only, so a matrix computes them once per row. */
+export function computeRowFacts(requirement: RadioBandRequirement): Record<string, FactValue> {
+  const lowestHz = Math.min(...requirement.ranges.map((r) => r.fromHz));
+  const highestHz = Math.max(...requirement.ranges.map((r) => r.toHz));
+  const product = requirement.productGroundPlane ? sortedSides(requirement.productGroundPlane.lengthMm, requirement.productGroundPlane.widthMm) : null;
+  const quarterWaveMm = wavelengthFractionMm(lowestHz, 0.25);
+  const tx = transmitRanges(requirement);
+  const limitCount = requirement.regulatoryLimits.filter((limit) => tx.some((r) => overlap(r, limit) !== null)).length;
+  const facts: Partial<Record<FactName, FactValue>> = {
+    technology: requirement.technology,
+    designation: requirement.designation,
+    bandLowestMHz: mhz(lowestHz),
+    bandHighestMHz: mhz(highestHz),
+    radioTransmits: requirement.txPowerDbm !== null,
+    txPowerDbm: requirement.txPowerDbm,
+    feedLossDb: requirement.feedLossDb,
+    certifiedMaxGainDbi: requirement.certifiedMaxGainDbi,
+    requiredPolarization: requirement.requiredPolarization,
+    productGroundPlaneLengthMm: product ? product[0] : null,
+    productGroundPlaneWidthMm: product ? product[1] : null,
+    quarterWaveMm,
+    groundPlaneVsQuarterWavePct: product ? (product[0] / quarterWaveMm) * 100 : null,
+    regionalLimitCount: limitCount,
+  };
+  return roundFacts(facts) as Record<string, FactValue>;
+}
+
+/**
+ * The facts of one (radio band × part) pair, from the part's curves where they cover a range and
+ * from its spec bands otherwise. Anything unknown is null, so rules that need it report no data.
+ */
+export function computeFacts(requirement: RadioBandRequirement, part: PartEvaluationData, rowFacts: Record<string, FactValue> = computeRowFacts(requirement)): Facts {
+  if (requirement.ranges.length === 0) throw new RangeError(`band ${requirement.designation} has no frequency ranges`);
+  const ranges = requirement.ranges;
+  const sources = new Set<Source>();
+  const missing: string[] = [];
+
+  const gammas = ranges.map((r) => gammaSampler(part, r));
+  const efficiencies = ranges.map((r) => efficiencySampler(part, r));
+  const gains = ranges.map((r) => gainSampler(part, r));
+  const note = (samplers: (RangeSampler | null)[], label: string) => {
+    if (samplers.some((s) => s === null)) missing.push(label);
+    for (const s of samplers) if (s) sources.add(s.source);
+  };
+  note(gammas, 'S11/VSWR');
+  note(efficiencies, 'efficiency');
+  note(gains, 'gain');
+
+  const gammaStats = acrossRanges(ranges.map((r, i) => (gammas[i] ? linearStats(combinedCurve(r, [gammas[i]!], ([g]) => g), r) : null)));
+  const radiation = acrossRanges(ranges.map((r, i) => (efficiencies[i] ? efficiencyStats(combinedCurve(r, [efficiencies[i]!], ([e]) => e), r) : null)));
+  const total = acrossRanges(
+    ranges.map((r, i) =>
+      efficiencies[i] && gammas[i] ? efficiencyStats(combinedCurve(r, [efficiencies[i]!, gammas[i]!], ([e, g]) => totalEfficiency(e / 100, g) * 100), r) : null,
+    ),
+  );
+  const gain = acrossRanges(ranges.map((r, i) => (gains[i] ? gainStats(combinedCurve(r, [gains[i]!], ([g]) => g), r) : null)));
+  const realized = acrossRanges(
+    ranges.map((r, i) => (gains[i] && gammas[i] ? linearStats(combinedCurve(r, [gains[i]!, gammas[i]!], ([g, m]) => realizedGainDbi(g, m)), r) : null)),
+  );
+  const at2 = coverageAt(part, ranges, 2);
+  const at3 = coverageAt(part, ranges, 3);
+
+  const tx = transmitRanges(requirement);
+  const txGain = tx.length > 0 ? acrossRanges(tx.map((r) => {
+    const s = gainSampler(part, r);
+    return s ? gainStats(combinedCurve(r, [s], ([g]) => g), r) : null;
+  })) : null;
+  const txPeakGainDbi = txGain ? txGain.max.value : null;
+  const eirp = requirement.txPowerDbm !== null && txPeakGainDbi !== null ? eirpDbm(requirement.txPowerDbm, txPeakGainDbi, requirement.feedLossDb) : null;
+  const regional = regionalLimitFacts(requirement, part, tx);
+
+  const evalBoard = part.evaluationGroundPlane ? sortedSides(part.evaluationGroundPlane.lengthMm, part.evaluationGroundPlane.widthMm) : null;
+  const productLength = rowFacts.productGroundPlaneLengthMm as number | null;
+  const productWidth = rowFacts.productGroundPlaneWidthMm as number | null;
+  const polarizationLoss = requirement.requiredPolarization !== null && part.polarization !== null ? polarizationLossDb(part.polarization, requirement.requiredPolarization) : null;
+  const knownKinds = 3 - missing.length;
+
+  const facts: Partial<Record<FactName, FactValue>> = {
+    ...rowFacts,
+    reviewState: part.reviewState,
+    lifecycle: part.lifecycle,
+    partPolarization: part.polarization,
+    dataSource: sources.size === 0 ? 'none' : sources.size === 2 ? 'mixed' : [...sources][0],
+    dataCompletenessPct: (knownKinds / 3) * 100,
+    missingData: missing.length === 0 ? 'none' : missing.join(', '),
+    coverageAtVswr2Pct: at2 ? at2.fraction * 100 : null,
+    uncoveredAtVswr2: at2 ? describeRanges(at2.uncovered) : null,
+    coverageAtVswr3Pct: at3 ? at3.fraction * 100 : null,
+    uncoveredAtVswr3: at3 ? describeRanges(at3.uncovered) : null,
+    worstVswr: gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null,
+    worstVswrAtMHz: gammaStats ? mhz(gammaStats.max.atHz) : null,
+    worstReturnLossDb: gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null,
+    minRadiationEfficiencyPct: radiation ? radiation.min.value : null,
+    minRadiationEfficiencyAtMHz: radiation ? mhz(radiation.min.atHz) : null,
+    avgRadiationEfficiencyPct: radiation ? radiation.average : null,
+    minTotalEfficiencyPct: total ? total.min.value : null,
+    minTotalEfficiencyAtMHz: total ? mhz(total.min.atHz) : null,
+    avgTotalEfficiencyPct: total ? total.average : null,
+    avgTotalEfficiencyDb: total ? powerRatioToDb(total.average / 100) : null,
+    peakGainDbi: gain ? gain.max.value : null,
+    peakGainAtMHz: gain ? mhz(gain.max.atHz) : null,
+    realizedPeakGainDbi: realized ? realized.max.value : null,
+    txPeakGainDbi,
+    gainOverCertifiedDb: txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null,
+    eirpDbm: eirp,
+    erpDbm: eirp === null ? null : erpDbmFromEirpDbm(eirp),
+    ...regional,
+    evalGroundPlaneLengthMm: evalBoard ? evalBoard[0] : null,
+    evalGroundPlaneWidthMm: evalBoard ? evalBoard[1] : null,
+    groundPlaneVsEvalPct: evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null,
+    polarizationLossDb: polarizationLoss,
+  };
+  return roundFacts(facts);
+}
+
+/** 12 significant digits: a value that sits on a threshold (VSWR 2 from |Γ| = 1/3) stays on it instead of 1e-16 over. */
+function roundFacts(facts: Partial<Record<FactName, FactValue>>): Facts {
+  const out: Record<string, FactValue> = {};
+  for (const [name, value] of Object.entries(facts)) out[name] = typeof value === 'number' && Number.isFinite(value) ? Number(value.toPrecision(12)) : (value as FactValue);
+  return out;
+}
+
+/** The tightest regional limit over the transmit ranges; margin null when the gain there is unknown. */
+function regionalLimitFacts(requirement: RadioBandRequirement, part: PartEvaluationData, tx: readonly BandRange[]): Partial<Record<FactName, FactValue>> {
+  const empty = { regionalLimitDbm: null, regionalLimitKind: null, regionalLimitRegion: null, regionalLimitSource: null, regionalRadiatedDbm: null, regionalLimitMarginDb: null };
+  if (requirement.txPowerDbm === null) return empty;
+  let tightest: Partial<Record<FactName, FactValue>> | null = null;
+  let tightestMargin = Infinity;
+  let unknown: Partial<Record<FactName, FactValue>> | null = null;
+  for (const limit of requirement.regulatoryLimits) {
+    for (const range of tx) {
+      const shared = overlap(range, limit);
+      if (!shared) continue;
+      const base = { regionalLimitDbm: limit.valueDbm, regionalLimitKind: limit.kind, regionalLimitRegion: limit.region, regionalLimitSource: limit.source };
+      const sampler = gainSampler(part, shared);
+      if (!sampler) {
+        unknown ??= { ...base, regionalRadiatedDbm: null, regionalLimitMarginDb: null };
+        continue;
+      }
+      const peak = gainStats(combinedCurve(shared, [sampler], ([g]) => g), shared).max.value;
+      const eirp = eirpDbm(requirement.txPowerDbm, peak, requirement.feedLossDb);
+      const radiated = limit.kind === 'erp' ? erpDbmFromEirpDbm(eirp) : eirp;
+      const margin = limit.valueDbm - radiated;
+      if (margin < tightestMargin) {
+        tightestMargin = margin;
+        tightest = { ...base, regionalRadiatedDbm: radiated, regionalLimitMarginDb: margin };
+      }
+    }
+  }
+  // An unknown gain under any limit makes the verdict unknown, even if another limit is met.
+  return unknown ?? tightest ?? empty;
+}

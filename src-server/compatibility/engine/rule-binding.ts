@@ -1,0 +1,134 @@
+import { FACT_CATALOG, FACT_NAMES, isFactName } from './fact-catalog';
+import { type ConditionNode, type ConditionValue, type ParameterValue, type RuleDefinition, factsNamedBy, messagePlaceholders } from './rule-definition';
+import type { CellStatus, CellVerdict, FactValue, Facts, Finding } from './types';
+
+/** A condition as json-rules-engine takes it: parameters replaced by their values. */
+export type EngineValue = number | string | boolean | null | readonly (number | string | boolean)[] | { readonly fact: string };
+export type EngineCondition =
+  | { readonly fact: string; readonly operator: string; readonly value: EngineValue }
+  | { readonly all: readonly EngineCondition[] }
+  | { readonly any: readonly EngineCondition[] }
+  | { readonly not: EngineCondition };
+
+/** A rule with its parameters resolved for one radio band (tables looked up by the row's facts). */
+export interface BoundRule {
+  readonly rule: RuleDefinition;
+  /** Position in the rule set; findings are listed in this order. */
+  readonly index: number;
+  readonly values: Readonly<Record<string, ParameterValue>>;
+  readonly appliesWhen: EngineCondition | null;
+  readonly conditions: EngineCondition;
+  /** Facts the conditions name: if one is null the pair has no data for this rule. */
+  readonly requiredFacts: readonly string[];
+}
+
+/** Which row facts pick table entries; two rows with the same values share one binding. */
+export function bindingKey(rule: RuleDefinition, rowFacts: Facts): string {
+  const keys = new Set<string>();
+  const collect = (node: ConditionNode | null | undefined): void => {
+    if (!node) return;
+    if ('all' in node) node.all.forEach(collect);
+    else if ('any' in node) node.any.forEach(collect);
+    else if ('not' in node) collect(node.not);
+    else if (typeof node.value === 'object' && node.value !== null && 'param' in node.value && node.value.key) keys.add(node.value.key);
+  };
+  collect(rule.appliesWhen);
+  collect(rule.conditions);
+  return `${rule.id}@${rule.version}` + [...keys].sort().map((k) => `|${k}=${String(rowFacts[k])}`).join('');
+}
+
+function lookup(rule: RuleDefinition, param: string, key: string | undefined, facts: Facts): ParameterValue {
+  const value = rule.parameters[param];
+  if (key === undefined) return value;
+  const table = value as Readonly<Record<string, number | string | boolean>>;
+  const entry = String(facts[key]);
+  return Object.prototype.hasOwnProperty.call(table, entry) ? table[entry] : table.default;
+}
+
+function bindValue(rule: RuleDefinition, value: ConditionValue, facts: Facts, used: Record<string, ParameterValue>): EngineValue {
+  if (typeof value === 'object' && value !== null && !Array.isArray(value) && 'param' in value) {
+    const bound = lookup(rule, value.param, value.key, facts);
+    used[value.param] = bound;
+    return bound as EngineValue;
+  }
+  return value as EngineValue;
+}
+
+function bindNode(rule: RuleDefinition, node: ConditionNode, facts: Facts, used: Record<string, ParameterValue>): EngineCondition {
+  if ('all' in node) return { all: node.all.map((n) => bindNode(rule, n, facts, used)) };
+  if ('any' in node) return { any: node.any.map((n) => bindNode(rule, n, facts, used)) };
+  if ('not' in node) return { not: bindNode(rule, node.not, facts, used) };
+  return { fact: node.fact, operator: node.operator, value: bindValue(rule, node.value, facts, used) };
+}
+
+export function bindRule(rule: RuleDefinition, index: number, rowFacts: Facts): BoundRule {
+  const values: Record<string, ParameterValue> = { ...rule.parameters };
+  const used: Record<string, ParameterValue> = {};
+  const appliesWhen = rule.appliesWhen ? bindNode(rule, rule.appliesWhen, rowFacts, used) : null;
+  const conditions = bindNode(rule, rule.conditions, rowFacts, used);
+  return { rule, index, values: { ...values, ...used }, appliesWhen, conditions, requiredFacts: factsNamedBy(rule.conditions) };
+}
+
+/** Every catalogue fact present, unknown ones as null, so json-rules-engine never meets an undefined fact. */
+export function completeFacts(facts: Facts): Record<string, FactValue> {
+  const complete: Record<string, FactValue> = {};
+  for (const name of FACT_NAMES) complete[name] = facts[name] ?? null;
+  return complete;
+}
+
+export function formatValue(value: unknown): string {
+  if (value === null || value === undefined) return 'unknown';
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) return Number.isNaN(value) ? 'unknown' : value > 0 ? '∞' : '−∞';
+    return String(Number(value.toFixed(Math.abs(value) >= 100 ? 1 : 2)));
+  }
+  if (Array.isArray(value)) return value.map(formatValue).join(', ');
+  if (typeof value === 'object') return Object.entries(value).map(([k, v]) => `${k} ${formatValue(v)}`).join(', ');
+  return String(value);
+}
+
+/** Fills {name} and {name|upper} from the bound parameters first, then from the facts. */
+export function renderMessage(template: string, bound: BoundRule, facts: Facts): string {
+  let out = template;
+  for (const { name, filter } of messagePlaceholders(template)) {
+    const raw = Object.prototype.hasOwnProperty.call(bound.values, name) ? bound.values[name] : facts[name];
+    const text = formatValue(raw);
+    out = out.replace(filter ? `{${name}|${filter}}` : `{${name}}`, filter === 'upper' ? text.toUpperCase() : text);
+  }
+  return out;
+}
+
+export function findingOf(bound: BoundRule, facts: Facts): Finding {
+  return { ruleId: bound.rule.id, severity: bound.rule.severity, code: bound.rule.event.params.code, message: renderMessage(bound.rule.event.params.message, bound, facts) };
+}
+
+export function noDataFindingOf(bound: BoundRule, facts: Facts): Finding {
+  const unknown = bound.requiredFacts.filter((name) => facts[name] === null || facts[name] === undefined);
+  const needs = unknown.map((name) => (isFactName(name) ? FACT_CATALOG[name].description : name)).join('; ');
+  const missing = facts.missingData && facts.missingData !== 'none' ? ` (no ${facts.missingData} data for this band)` : '';
+  return { ruleId: bound.rule.id, severity: 'no-data', code: `${bound.rule.event.params.code}_NO_DATA`, message: `cannot check "${bound.rule.title}": ${needs} is not known${missing}` };
+}
+
+const STATUS_ORDER: Record<CellStatus, number> = { pass: 0, marginal: 1, 'no-data': 2, fail: 3 };
+
+/** fail beats no-data beats marginal: an unchecked limit is worse than a known caveat, a broken one worse still. */
+export function statusOf(findings: readonly Finding[]): CellStatus {
+  let status: CellStatus = 'pass';
+  for (const f of findings) {
+    const s: CellStatus = f.severity === 'info' ? 'pass' : f.severity;
+    if (STATUS_ORDER[s] > STATUS_ORDER[status]) status = s;
+  }
+  return status;
+}
+
+export function worseStatus(a: CellStatus, b: CellStatus): CellStatus {
+  return STATUS_ORDER[a] >= STATUS_ORDER[b] ? a : b;
+}
+
+export function statusRank(status: CellStatus): number {
+  return STATUS_ORDER[status];
+}
+
+export function verdictOf(findings: Finding[]): CellVerdict {
+  return { status: statusOf(findings), findings };
+}

@@ -1,0 +1,225 @@
+import { Rule } from 'json-rules-engine';
+import { FACT_CATALOG, isFactName } from './fact-catalog';
+import { SEVERITIES, type Severity } from './types';
+
+/** A scalar, a list of scalars, or a table keyed by a row fact (with a "default" entry). */
+export type ParameterValue = number | string | boolean | readonly (number | string | boolean)[] | Readonly<Record<string, number | string | boolean>>;
+
+/** A comparison value: a literal, another fact, or a parameter of the rule (optionally looked up by a row fact). */
+export type ConditionValue = number | string | boolean | null | readonly (number | string | boolean)[] | { readonly fact: string } | { readonly param: string; readonly key?: string };
+
+export interface LeafCondition {
+  readonly fact: string;
+  readonly operator: string;
+  readonly value: ConditionValue;
+}
+
+export type ConditionNode = LeafCondition | { readonly all: readonly ConditionNode[] } | { readonly any: readonly ConditionNode[] } | { readonly not: ConditionNode };
+
+/** One rule as it is stored in rules/<id>.json or in the database. */
+export interface RuleDefinition {
+  readonly id: string;
+  readonly title: string;
+  readonly description: string;
+  readonly severity: Severity;
+  readonly enabled: boolean;
+  readonly version: number;
+  /** Where the threshold comes from: a standard, a book, or "common practice". */
+  readonly source: string;
+  readonly parameters: Readonly<Record<string, ParameterValue>>;
+  /** When false (or when a fact it names is null) the rule does not apply to the pair at all. */
+  readonly appliesWhen?: ConditionNode | null;
+  /** The finding fires when these hold; every fact they name must be known, else the pair gets "no data". */
+  readonly conditions: ConditionNode;
+  readonly event: { readonly type: 'finding'; readonly params: { readonly code: string; readonly message: string } };
+}
+
+export interface RuleProblem {
+  /** Where in the rule, e.g. "conditions.all[1].fact". */
+  readonly path: string;
+  readonly message: string;
+}
+
+/** The operators of json-rules-engine 7 that the compiled path reproduces. */
+export const SUPPORTED_OPERATORS = ['equal', 'notEqual', 'in', 'notIn', 'contains', 'doesNotContain', 'lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive'] as const;
+const NUMERIC_OPERATORS = new Set(['lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive']);
+const LIST_OPERATORS = new Set(['in', 'notIn']);
+
+const RULE_KEYS = new Set(['id', 'title', 'description', 'severity', 'enabled', 'version', 'source', 'parameters', 'appliesWhen', 'conditions', 'event']);
+const PLACEHOLDER = /\{([A-Za-z][A-Za-z0-9]*)(?:\|([a-z]+))?\}/g;
+export const MESSAGE_FILTERS = ['upper'] as const;
+
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+const isScalar = (v: unknown): v is number | string | boolean => (typeof v === 'number' && Number.isFinite(v)) || typeof v === 'string' || typeof v === 'boolean';
+
+function validateParameter(name: string, value: unknown, problems: RuleProblem[]): void {
+  const path = `parameters.${name}`;
+  if (!/^[A-Za-z][A-Za-z0-9]*$/.test(name)) problems.push({ path, message: 'a parameter name is letters and digits, starting with a letter' });
+  if (isScalar(value)) return;
+  if (Array.isArray(value)) {
+    value.forEach((item, i) => {
+      if (!isScalar(item)) problems.push({ path: `${path}[${i}]`, message: 'list entries must be numbers, text or true/false' });
+    });
+    return;
+  }
+  if (isRecord(value)) {
+    for (const [key, entry] of Object.entries(value)) if (!isScalar(entry)) problems.push({ path: `${path}.${key}`, message: 'table entries must be numbers, text or true/false' });
+    if (!('default' in value)) problems.push({ path, message: 'a table needs a "default" entry for keys it does not list' });
+    return;
+  }
+  problems.push({ path, message: 'must be a number, text, true/false, a list or a table' });
+}
+
+function validateValue(value: unknown, path: string, operator: string, factType: string | undefined, parameters: Record<string, unknown>, problems: RuleProblem[]): void {
+  if (isRecord(value)) {
+    if ('fact' in value) {
+      if (Object.keys(value).length !== 1) problems.push({ path, message: 'a fact reference holds only "fact"' });
+      if (typeof value.fact !== 'string' || !isFactName(value.fact)) problems.push({ path: `${path}.fact`, message: `unknown fact "${String(value.fact)}"` });
+      return;
+    }
+    if ('param' in value) {
+      const extra = Object.keys(value).filter((k) => k !== 'param' && k !== 'key');
+      if (extra.length > 0) problems.push({ path, message: `a parameter reference holds only "param" and "key", not ${extra.join(', ')}` });
+      const param = parameters[String(value.param)];
+      if (typeof value.param !== 'string' || param === undefined) {
+        problems.push({ path: `${path}.param`, message: `unknown parameter "${String(value.param)}"` });
+        return;
+      }
+      if (value.key !== undefined) {
+        const key = String(value.key);
+        if (!isFactName(key)) problems.push({ path: `${path}.key`, message: `unknown fact "${key}"` });
+        else if (FACT_CATALOG[key].scope !== 'row' || FACT_CATALOG[key].type !== 'string') problems.push({ path: `${path}.key`, message: `"${key}" cannot key a table: only text facts of the radio band can` });
+        if (!isRecord(param)) problems.push({ path: `${path}.param`, message: `parameter "${value.param}" is not a table, so it takes no key` });
+      } else if (isRecord(param)) {
+        problems.push({ path, message: `parameter "${value.param}" is a table: name the fact that picks the entry with "key"` });
+      }
+      return;
+    }
+    problems.push({ path, message: 'must be a number, text, true/false, null, a list, {"fact": …} or {"param": …}' });
+    return;
+  }
+  if (LIST_OPERATORS.has(operator) && !Array.isArray(value)) problems.push({ path, message: `operator "${operator}" needs a list` });
+  if (NUMERIC_OPERATORS.has(operator) && typeof value !== 'number') problems.push({ path, message: `operator "${operator}" needs a number` });
+  if (NUMERIC_OPERATORS.has(operator) && factType !== undefined && factType !== 'number') problems.push({ path, message: `operator "${operator}" compares numbers, and this fact is ${factType}` });
+  if (!(value === null || isScalar(value) || (Array.isArray(value) && value.every(isScalar)))) problems.push({ path, message: 'must be a number, text, true/false, null or a list of those' });
+}
+
+function validateCondition(node: unknown, path: string, parameters: Record<string, unknown>, problems: RuleProblem[]): void {
+  if (!isRecord(node)) {
+    problems.push({ path, message: 'a condition must be an object' });
+    return;
+  }
+  const booleanKeys = ['all', 'any', 'not'].filter((k) => k in node);
+  if (booleanKeys.length > 1) {
+    problems.push({ path, message: `a condition holds one of "all", "any", "not", not ${booleanKeys.join(' and ')}` });
+    return;
+  }
+  if (booleanKeys.length === 1) {
+    const key = booleanKeys[0];
+    const extra = Object.keys(node).filter((k) => k !== key);
+    if (extra.length > 0) problems.push({ path, message: `unexpected ${extra.map((k) => `"${k}"`).join(', ')} beside "${key}"` });
+    const inner = node[key];
+    if (key === 'not') {
+      if (Array.isArray(inner)) problems.push({ path: `${path}.not`, message: '"not" takes one condition, not a list' });
+      else validateCondition(inner, `${path}.not`, parameters, problems);
+    } else if (!Array.isArray(inner)) {
+      problems.push({ path: `${path}.${key}`, message: `"${key}" takes a list of conditions` });
+    } else {
+      inner.forEach((child, i) => validateCondition(child, `${path}.${key}[${i}]`, parameters, problems));
+    }
+    return;
+  }
+  if ('condition' in node) {
+    problems.push({ path: `${path}.condition`, message: 'shared condition references are not supported; write the condition out' });
+    return;
+  }
+  for (const k of Object.keys(node)) {
+    if (k === 'path' || k === 'params') problems.push({ path: `${path}.${k}`, message: `"${k}" is not supported: facts here are plain values` });
+    else if (k !== 'fact' && k !== 'operator' && k !== 'value') problems.push({ path: `${path}.${k}`, message: `unexpected "${k}"` });
+  }
+  const fact = node.fact;
+  if (typeof fact !== 'string') problems.push({ path: `${path}.fact`, message: 'names a fact' });
+  else if (!isFactName(fact)) problems.push({ path: `${path}.fact`, message: `unknown fact "${fact}"` });
+  const operator = node.operator;
+  if (typeof operator !== 'string' || !(SUPPORTED_OPERATORS as readonly string[]).includes(operator)) {
+    problems.push({ path: `${path}.operator`, message: `unknown operator "${String(operator)}"; use one of ${SUPPORTED_OPERATORS.join(', ')}` });
+  }
+  if (!('value' in node)) problems.push({ path: `${path}.value`, message: 'a condition needs a value' });
+  else validateValue(node.value, `${path}.value`, String(operator), typeof fact === 'string' && isFactName(fact) ? FACT_CATALOG[fact].type : undefined, parameters, problems);
+}
+
+/** Placeholders {name} or {name|upper} in a message must name a fact or a parameter. */
+export function messagePlaceholders(message: string): { name: string; filter: string | undefined }[] {
+  return [...message.matchAll(PLACEHOLDER)].map((m) => ({ name: m[1], filter: m[2] }));
+}
+
+/**
+ * Checks a rule before it is saved or loaded: our shape, our fact names, our parameters, and
+ * json-rules-engine's own constructor. Returns every problem found, each with its place in the rule.
+ */
+export function validateRuleDefinition(input: unknown): RuleProblem[] {
+  const problems: RuleProblem[] = [];
+  if (!isRecord(input)) return [{ path: '', message: 'a rule must be a JSON object' }];
+  for (const key of Object.keys(input)) if (!RULE_KEYS.has(key)) problems.push({ path: key, message: `unexpected field "${key}"` });
+  if (typeof input.id !== 'string' || !/^[a-z0-9][a-z0-9-]{1,62}[a-z0-9]$/.test(input.id)) problems.push({ path: 'id', message: 'lower-case letters, digits and dashes, 3 to 64 characters' });
+  if (typeof input.title !== 'string' || input.title.trim().length === 0 || input.title.length > 120) problems.push({ path: 'title', message: 'text of 1 to 120 characters' });
+  if (typeof input.description !== 'string' || input.description.length > 2000) problems.push({ path: 'description', message: 'text of at most 2000 characters' });
+  if (typeof input.source !== 'string' || input.source.trim().length === 0 || input.source.length > 500) problems.push({ path: 'source', message: 'name where the threshold comes from (a standard, a book, or "common practice"), at most 500 characters' });
+  if (!(SEVERITIES as readonly unknown[]).includes(input.severity)) problems.push({ path: 'severity', message: `one of ${SEVERITIES.join(', ')}` });
+  if (typeof input.enabled !== 'boolean') problems.push({ path: 'enabled', message: 'true or false' });
+  if (!Number.isInteger(input.version) || (input.version as number) < 1) problems.push({ path: 'version', message: 'a whole number from 1' });
+  const parameters = isRecord(input.parameters) ? input.parameters : {};
+  if (!isRecord(input.parameters)) problems.push({ path: 'parameters', message: 'an object of named thresholds (may be empty)' });
+  else for (const [name, value] of Object.entries(input.parameters)) validateParameter(name, value, problems);
+  if (input.appliesWhen !== undefined && input.appliesWhen !== null) validateCondition(input.appliesWhen, 'appliesWhen', parameters, problems);
+  if (!isRecord(input.conditions) || !['all', 'any', 'not'].some((k) => k in (input.conditions as object))) {
+    problems.push({ path: 'conditions', message: 'must hold "all", "any" or "not" at the top' });
+  } else {
+    validateCondition(input.conditions, 'conditions', parameters, problems);
+  }
+  const event = input.event;
+  if (!isRecord(event) || event.type !== 'finding' || !isRecord(event.params)) {
+    problems.push({ path: 'event', message: 'must be {"type": "finding", "params": {"code": …, "message": …}}' });
+  } else {
+    const { code, message } = event.params;
+    if (typeof code !== 'string' || !/^[A-Z][A-Z0-9_]{2,63}$/.test(code)) problems.push({ path: 'event.params.code', message: 'upper-case letters, digits and underscores, 3 to 64 characters' });
+    if (typeof message !== 'string' || message.trim().length === 0 || message.length > 500) problems.push({ path: 'event.params.message', message: 'text of 1 to 500 characters' });
+    else {
+      for (const { name, filter } of messagePlaceholders(message)) {
+        if (!isFactName(name) && !(name in parameters)) problems.push({ path: 'event.params.message', message: `unknown placeholder {${name}}: name a fact or a parameter` });
+        if (filter !== undefined && !(MESSAGE_FILTERS as readonly string[]).includes(filter)) problems.push({ path: 'event.params.message', message: `unknown filter "|${filter}" in {${name}|${filter}}` });
+      }
+    }
+  }
+  if (problems.length === 0) {
+    try {
+      // json-rules-engine's own shape check, on the rule as the engine will see it (parameters bound to placeholders).
+      new Rule({ conditions: stripParams(input.conditions as ConditionNode) as never, event: { type: 'finding' } });
+    } catch (error) {
+      problems.push({ path: 'conditions', message: `json-rules-engine refuses it: ${(error as Error).message}` });
+    }
+  }
+  return problems;
+}
+
+function stripParams(node: ConditionNode): unknown {
+  if ('all' in node) return { all: node.all.map(stripParams) };
+  if ('any' in node) return { any: node.any.map(stripParams) };
+  if ('not' in node) return { not: stripParams(node.not) };
+  const value = node.value;
+  return { ...node, value: typeof value === 'object' && value !== null && 'param' in value ? 0 : value };
+}
+
+/** Every fact a condition tree names, in order of first appearance. */
+export function factsNamedBy(node: ConditionNode | null | undefined, into: string[] = []): string[] {
+  if (!node) return into;
+  if ('all' in node) node.all.forEach((n) => factsNamedBy(n, into));
+  else if ('any' in node) node.any.forEach((n) => factsNamedBy(n, into));
+  else if ('not' in node) factsNamedBy(node.not, into);
+  else {
+    if (!into.includes(node.fact)) into.push(node.fact);
+    const value = node.value;
+    if (typeof value === 'object' && value !== null && 'fact' in value && !into.includes(value.fact)) into.push(value.fact);
+  }
+  return into;
+}

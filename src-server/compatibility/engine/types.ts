@@ -1,0 +1,106 @@
+import type { SampledCurve } from '../../rf/curves';
+import type { ReflectionCurve } from '../../rf/reflection';
+import type { Polarization } from '../../rf/link-budget';
+
+export type { Polarization };
+
+export const TECHNOLOGIES = ['lte', 'nr', 'gnss', 'wifi', 'ble', 'ism', 'uwb', 'other'] as const;
+export type Technology = (typeof TECHNOLOGIES)[number];
+
+export const REVIEW_STATES = ['draft', 'in-review', 'approved', 'restricted', 'retired', 'rejected'] as const;
+export type ReviewState = (typeof REVIEW_STATES)[number];
+
+export const LIFECYCLES = ['active', 'nrnd', 'eol'] as const;
+export type Lifecycle = (typeof LIFECYCLES)[number];
+
+export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive-only';
+
+export interface BandRange {
+  readonly fromHz: number;
+  readonly toHz: number;
+  readonly role: RangeRole;
+}
+
+export interface GroundPlane {
+  readonly lengthMm: number;
+  readonly widthMm: number;
+}
+
+/** A datasheet line for a frequency range, used where no measured curve covers the band. */
+export interface SpecBand {
+  readonly fromHz: number;
+  readonly toHz: number;
+  readonly maxVswr: number | null;
+  readonly minReturnLossDb: number | null;
+  readonly efficiencyPercent: number | null;
+  readonly peakGainDbi: number | null;
+  readonly averageGainDbi: number | null;
+}
+
+/** Everything the engine needs to know about one antenna part; any piece may be missing. */
+export interface PartEvaluationData {
+  readonly partId: number;
+  readonly mpn: string;
+  readonly title: string;
+  readonly reflection: ReflectionCurve | null;
+  readonly radiationEfficiencyPercent: SampledCurve | null;
+  readonly peakGainDbi: SampledCurve | null;
+  readonly averageGainDbi: SampledCurve | null;
+  readonly specBands: readonly SpecBand[];
+  readonly evaluationGroundPlane: GroundPlane | null;
+  readonly polarization: Polarization | null;
+  readonly reviewState: ReviewState;
+  readonly lifecycle: Lifecycle;
+}
+
+export type LimitKind = 'eirp' | 'erp';
+
+/** A regional radiated-power limit that applies to part of a band. */
+export interface RegulatoryLimit {
+  readonly region: string;
+  readonly fromHz: number;
+  readonly toHz: number;
+  readonly kind: LimitKind;
+  readonly valueDbm: number;
+  readonly source: string;
+}
+
+/** One band of one radio of a product, with everything of the radio the rules look at. */
+export interface RadioBandRequirement {
+  readonly radioId: number;
+  readonly radioName: string;
+  readonly technology: Technology;
+  readonly bandId: number;
+  readonly designation: string;
+  readonly ranges: readonly BandRange[];
+  /** Null for a receive-only radio (GNSS). */
+  readonly txPowerDbm: number | null;
+  /** The module's certified maximum antenna gain for this band; null when the grant states none. */
+  readonly certifiedMaxGainDbi: number | null;
+  readonly feedLossDb: number;
+  readonly requiredPolarization: Polarization | null;
+  readonly productGroundPlane: GroundPlane | null;
+  readonly regulatoryLimits: readonly RegulatoryLimit[];
+}
+
+export type FactValue = number | string | boolean | null;
+
+/** Flat facts of one (radio band × part) pair; null means "not known", never "zero". */
+export type Facts = Readonly<Record<string, FactValue>>;
+
+export const SEVERITIES = ['fail', 'marginal', 'info'] as const;
+export type Severity = (typeof SEVERITIES)[number];
+
+export type CellStatus = 'pass' | 'marginal' | 'fail' | 'no-data';
+
+export interface Finding {
+  readonly ruleId: string;
+  readonly severity: Severity | 'no-data';
+  readonly code: string;
+  readonly message: string;
+}
+
+export interface CellVerdict {
+  readonly status: CellStatus;
+  readonly findings: readonly Finding[];
+}
