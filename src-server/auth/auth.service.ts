@@ -90,12 +90,18 @@ export class AuthService {
       this.logger.log('password reset asked for an unknown or inactive e-mail');
       return;
     }
-    const token = await this.dataSource.transaction((manager) => this.tokens.issue(manager, user.id, 'password-reset'));
-    await this.mail.send({
-      to: user.email,
-      subject: 'Reset your Bandwright password',
-      text: `Hello ${user.name},\n\nSomeone (hopefully you) asked to reset your Bandwright password.\nSet a new one here within the next hour:\n\n${this.config.appUrl}/reset-password?token=${token}\n\nIf it was not you, ignore this message; your password stays as it is.\n`,
+    await this.dataSource.transaction(async (manager) => {
+      const token = await this.tokens.issue(manager, user.id, 'password-reset');
+      await this.mail.send(
+        {
+          to: user.email,
+          subject: 'Reset your Bandwright password',
+          text: `Hello ${user.name},\n\nSomeone (hopefully you) asked to reset your Bandwright password.\nSet a new one here within the next hour:\n\n${this.config.appUrl}/reset-password?token=${token}\n\nIf it was not you, ignore this message; your password stays as it is.\n`,
+        },
+        manager,
+      );
     });
+    await this.mail.deliverDue();
   }
 
   async resetPassword(token: string, password: string): Promise<LoginResponseDto> {

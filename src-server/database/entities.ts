@@ -1,6 +1,7 @@
 import { AuditEntry } from '../audit/audit-entry.entity';
 import { User } from '../users/user.entity';
 import { UserToken } from '../users/user-token.entity';
+import { OutboxMail } from '../mail/outbox-mail.entity';
 import { PART_ENTITIES } from '../parts/part-entities';
 import { Band, BandRange } from '../bands/band.entity';
 import { BandSet, BandSetMember } from '../bands/band-set.entity';
@@ -9,4 +10,4 @@ import { Product } from '../products/product.entity';
 import { Radio, RadioBand } from '../products/radio.entity';
 
 /** Every TypeORM entity; add new domains here. */
-export const ENTITIES = [User, UserToken, AuditEntry, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand];
+export const ENTITIES = [User, UserToken, AuditEntry, OutboxMail, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand];

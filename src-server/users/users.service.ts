@@ -31,7 +31,7 @@ export class UsersService {
 
   /** Creates an invited user and e-mails a single-use link; re-inviting an unaccepted user sends a fresh link. */
   async invite(input: InviteUserDto, actor: AuthUser): Promise<UserResponseDto> {
-    const { user, token } = await this.dataSource.transaction(async (manager) => {
+    const { user } = await this.dataSource.transaction(async (manager) => {
       let user = await manager.findOneBy(User, { email: input.email });
       if (user && user.status !== 'invited') {
         throw new DomainError('USER_EMAIL_TAKEN', `${input.email} already has an account`, 409, { field: 'email' });
@@ -44,13 +44,19 @@ export class UsersService {
       }
       await this.audit.record(manager, { entityType: 'user', entityId: user.id, action: 'invited', userId: actor.id, changes: { email: input.email, role: input.role } });
       const token = await this.tokens.issue(manager, user.id, 'invitation');
-      return { user: await manager.findOneByOrFail(User, { id: user.id }), token };
+      const saved = await manager.findOneByOrFail(User, { id: user.id });
+      // Queued in the same transaction: no invitation row without its e-mail, and no e-mail without the row.
+      await this.mail.send(
+        {
+          to: saved.email,
+          subject: 'You are invited to Bandwright',
+          text: `Hello ${saved.name},\n\n${actor.name} invited you to Bandwright as ${saved.role}.\nChoose your password here within 72 hours:\n\n${this.config.appUrl}/accept-invitation?token=${token}\n\nThe link works once.\n`,
+        },
+        manager,
+      );
+      return { user: saved };
     });
-    await this.mail.send({
-      to: user.email,
-      subject: 'You are invited to Bandwright',
-      text: `Hello ${user.name},\n\n${actor.name} invited you to Bandwright as ${user.role}.\nChoose your password here within 72 hours:\n\n${this.config.appUrl}/accept-invitation?token=${token}\n\nThe link works once.\n`,
-    });
+    await this.mail.deliverDue();
     return toDto(user);
   }
 
