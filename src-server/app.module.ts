@@ -16,6 +16,9 @@ import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { StorageModule } from './storage/storage.module';
 import { UsersModule } from './users/users.module';
+import { BandsModule } from './bands/bands.module';
+import { RegulatoryModule } from './regulatory/regulatory.module';
+import { ProductsModule } from './products/products.module';
 
 @Module({
   imports: [
@@ -33,6 +36,9 @@ import { UsersModule } from './users/users.module';
     HealthModule,
     AuthModule,
     UsersModule,
+    BandsModule,
+    RegulatoryModule,
+    ProductsModule,
   ],
   providers: [
     { provide: APP_PIPE, useFactory: createValidationPipe },

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, OneToMany, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import { Radio } from './radio.entity';
+// Type-only import and a string target keep product ↔ radio free of a runtime import cycle.
+import type { Radio } from './radio.entity';
 
 /** A device under design: its ground plane, markets and radios. */
 @Entity({ name: 'products' })
@@ -31,7 +32,7 @@ export class Product {
   @Column({ type: 'int', unsigned: true, default: 1 })
   version: number;
 
-  @OneToMany(() => Radio, (radio) => radio.product)
+  @OneToMany('Radio', (radio: Radio) => radio.product)
   radios: Radio[];
 
   @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })

@@ -1,0 +1,62 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { PartialType } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, ValidateNested } from 'class-validator';
+import { EnumField, NumberField, StringField } from '../../common/dto-fields';
+import { DUPLEX_MODES, type DuplexMode, RANGE_ROLES, type RangeRole, REGIONS, TECHNOLOGIES, type Technology } from '../band-domain';
+
+export class BandRangeInputDto {
+  @EnumField(RANGE_ROLES)
+  role: RangeRole;
+
+  @NumberField({ min: 0.001, max: 300000, example: 699 })
+  fromMHz: number;
+
+  @NumberField({ min: 0.001, max: 300000, example: 716 })
+  toMHz: number;
+}
+
+export class CreateBandDto {
+  @EnumField(TECHNOLOGIES)
+  technology: Technology;
+
+  @StringField({ maxLength: 40, example: 'B12' })
+  designation: string;
+
+  @StringField({ maxLength: 160 })
+  name: string;
+
+  @EnumField(DUPLEX_MODES)
+  duplex: DuplexMode;
+
+  @ApiProperty({ type: [BandRangeInputDto] })
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(8)
+  @ValidateNested({ each: true })
+  @Type(() => BandRangeInputDto)
+  ranges: BandRangeInputDto[];
+
+  @NumberField({ optional: true, min: 0.001, max: 300000 })
+  centreMHz?: number | null;
+
+  @NumberField({ optional: true, min: 0.001, max: 300000 })
+  bandwidthMHz?: number | null;
+
+  @ApiProperty({ enum: REGIONS, isArray: true })
+  @IsArray()
+  @ArrayMaxSize(REGIONS.length)
+  @IsIn(REGIONS, { each: true, message: `each value must be one of: ${REGIONS.join(', ')}` })
+  regions: string[];
+
+  @StringField({ maxLength: 200, example: '3GPP TS 36.101' })
+  sourceDocument: string;
+
+  @StringField({ maxLength: 200, example: 'Table 5.5-1' })
+  sourceTable: string;
+
+  @StringField({ optional: true, maxLength: 600 })
+  sourceNote?: string | null;
+}
+
+export class UpdateBandDto extends PartialType(CreateBandDto) {}

@@ -1,0 +1,56 @@
+import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
+import { IntField, NumberField, StringField } from '../../common/dto-fields';
+import { REGIONS } from '../../bands/band-domain';
+import { RadioDto } from './radio.dto';
+
+export class CreateProductDto {
+  @StringField({ maxLength: 120, example: 'Livestock tracker (collar unit)' })
+  name: string;
+
+  @StringField({ maxLength: 40, example: 'DEMO-LT1', description: 'Unique product code' })
+  code: string;
+
+  @StringField({ maxLength: 120, example: 'Eli Marsh' })
+  owner: string;
+
+  @NumberField({ min: 1, max: 2000, description: 'Ground-plane (board) length in mm' })
+  groundPlaneLengthMm: number;
+
+  @NumberField({ min: 1, max: 2000, description: 'Ground-plane (board) width in mm' })
+  groundPlaneWidthMm: number;
+
+  @ApiProperty({ enum: REGIONS, isArray: true, example: ['EU', 'US'] })
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(REGIONS.length)
+  @IsIn(REGIONS, { each: true, message: `each value must be one of: ${REGIONS.join(', ')}` })
+  targetRegions: string[];
+
+  @StringField({ optional: true, maxLength: 4000 })
+  notes?: string | null;
+}
+
+export class UpdateProductDto extends PartialType(CreateProductDto) {
+  @IntField({ min: 1, description: 'The version you edited; a stale one gets 409 PRODUCT_VERSION_CONFLICT' })
+  version: number;
+}
+
+export class VersionQueryDto {
+  @IntField({ optional: true, min: 1, description: 'When given, the delete only happens if this is still the current version' })
+  version?: number;
+}
+
+export class ProductSummaryDto extends OmitType(CreateProductDto, ['notes'] as const) {
+  @ApiProperty() id: number;
+  @ApiPropertyOptional({ nullable: true }) notes: string | null;
+  @ApiProperty() version: number;
+  @ApiProperty() radioCount: number;
+  @ApiProperty({ type: [String], description: 'Technologies of its radios' }) technologies: string[];
+  @ApiProperty() createdAt: string;
+  @ApiProperty() updatedAt: string;
+}
+
+export class ProductDetailDto extends ProductSummaryDto {
+  @ApiProperty({ type: [RadioDto] }) radios: RadioDto[];
+}

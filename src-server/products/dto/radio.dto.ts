@@ -1,0 +1,76 @@
+import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, IsArray, ValidateNested } from 'class-validator';
+import { EnumField, IntField, NumberField, StringField } from '../../common/dto-fields';
+import { TECHNOLOGIES, type Technology } from '../../bands/band-domain';
+import { BandDto } from '../../bands/dto/band-response.dto';
+import { CONNECTORS, type Connector, POLARIZATIONS, type Polarization } from '../radio.entity';
+
+export class RadioBandInputDto {
+  @IntField({ min: 1, description: 'A band id from /api/bands' })
+  bandId: number;
+
+  @NumberField({ optional: true, min: -20, max: 20, description: "The module's certified maximum antenna gain in this band (dBi); empty for receive-only radios" })
+  certifiedMaxGainDbi?: number | null;
+}
+
+export class CreateRadioDto {
+  @StringField({ maxLength: 120, example: 'Cellular LTE-M / NB-IoT' })
+  name: string;
+
+  @EnumField(TECHNOLOGIES, { description: 'LTE-M, NB-IoT and Cat-1 radios are lte; 5G is nr' })
+  technology: Technology;
+
+  @StringField({ maxLength: 160, example: 'Halvorn HM-410 (invented)' })
+  module: string;
+
+  @NumberField({ optional: true, min: -40, max: 36, description: 'Conducted transmit power (dBm); must be empty for receive-only radios (GNSS)' })
+  transmitPowerDbm?: number | null;
+
+  @EnumField(POLARIZATIONS)
+  polarization: Polarization;
+
+  @EnumField(CONNECTORS)
+  connector: Connector;
+
+  @NumberField({ min: 0, max: 20, description: 'Cable or feed loss between module and antenna (dB)' })
+  feedLossDb: number;
+
+  @StringField({ optional: true, maxLength: 4000 })
+  notes?: string | null;
+
+  @ApiProperty({ type: [RadioBandInputDto] })
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(80)
+  @ValidateNested({ each: true })
+  @Type(() => RadioBandInputDto)
+  bands: RadioBandInputDto[];
+}
+
+export class UpdateRadioDto extends PartialType(CreateRadioDto) {
+  @IntField({ min: 1, description: 'The version you edited; a stale one gets 409 RADIO_VERSION_CONFLICT' })
+  version: number;
+}
+
+export class RadioBandDto {
+  @ApiProperty({ type: BandDto }) band: BandDto;
+  @ApiPropertyOptional({ nullable: true }) certifiedMaxGainDbi: number | null;
+}
+
+export class RadioDto {
+  @ApiProperty() id: number;
+  @ApiProperty() productId: number;
+  @ApiProperty() name: string;
+  @ApiProperty({ enum: TECHNOLOGIES }) technology: Technology;
+  @ApiProperty() module: string;
+  @ApiProperty() receiveOnly: boolean;
+  @ApiPropertyOptional({ nullable: true }) transmitPowerDbm: number | null;
+  @ApiProperty({ enum: POLARIZATIONS }) polarization: Polarization;
+  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
+  @ApiProperty() feedLossDb: number;
+  @ApiPropertyOptional({ nullable: true }) notes: string | null;
+  @ApiProperty() version: number;
+  @ApiProperty({ type: [RadioBandDto] }) bands: RadioBandDto[];
+  @ApiProperty() updatedAt: string;
+}

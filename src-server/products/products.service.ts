@@ -1,0 +1,233 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource, EntityManager, In, Not } from 'typeorm';
+import { DomainError, NotFoundError, ValidationFailedError, VersionConflictError } from '../common/domain-error';
+import type { AuthUser } from '../common/auth.decorators';
+import { AuditService, type AuditEntryView, diffFields } from '../audit/audit.service';
+import { Band } from '../bands/band.entity';
+import { toBandDto } from '../bands/bands.service';
+import { Product } from './product.entity';
+import { Radio, RadioBand } from './radio.entity';
+import { isReceiveOnly, type KnownBand, radioProblems } from './radio-rules';
+import type { CreateProductDto, ProductDetailDto, ProductSummaryDto, UpdateProductDto } from './dto/product.dto';
+import type { CreateRadioDto, RadioDto, UpdateRadioDto } from './dto/radio.dto';
+
+const PRODUCT_FIELDS: (keyof Product)[] = ['name', 'code', 'owner', 'groundPlaneLengthMm', 'groundPlaneWidthMm', 'targetRegions', 'notes'];
+const RADIO_FIELDS: (keyof Radio)[] = ['name', 'technology', 'module', 'transmitPowerDbm', 'polarization', 'connector', 'feedLossDb', 'notes'];
+
+function toRadioDto(radio: Radio): RadioDto {
+  const bands = [...(radio.bands ?? [])].sort((a, b) => a.position - b.position);
+  return {
+    id: radio.id,
+    productId: radio.productId,
+    name: radio.name,
+    technology: radio.technology,
+    module: radio.module,
+    receiveOnly: isReceiveOnly(radio.technology),
+    transmitPowerDbm: radio.transmitPowerDbm,
+    polarization: radio.polarization,
+    connector: radio.connector,
+    feedLossDb: radio.feedLossDb,
+    notes: radio.notes,
+    version: radio.version,
+    bands: bands.map((rb) => ({ band: toBandDto(rb.band), certifiedMaxGainDbi: rb.certifiedMaxGainDbi })),
+    updatedAt: radio.updatedAt.toISOString(),
+  };
+}
+
+function toSummary(product: Product, radios: Pick<Radio, 'technology'>[]): ProductSummaryDto {
+  return {
+    id: product.id,
+    name: product.name,
+    code: product.code,
+    owner: product.owner,
+    groundPlaneLengthMm: product.groundPlaneLengthMm,
+    groundPlaneWidthMm: product.groundPlaneWidthMm,
+    targetRegions: product.targetRegions ?? [],
+    notes: product.notes,
+    version: product.version,
+    radioCount: radios.length,
+    technologies: [...new Set(radios.map((r) => r.technology))],
+    createdAt: product.createdAt.toISOString(),
+    updatedAt: product.updatedAt.toISOString(),
+  };
+}
+
+/** What the audit log keeps of a radio's bands: readable, and enough to see a gain change. */
+const bandsForAudit = (bands: { designation: string; certifiedMaxGainDbi: number | null }[]) =>
+  bands.map((b) => (b.certifiedMaxGainDbi === null ? b.designation : `${b.designation} (${b.certifiedMaxGainDbi} dBi)`));
+
+@Injectable()
+export class ProductsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditService,
+  ) {}
+
+  async list(): Promise<ProductSummaryDto[]> {
+    const products = await this.dataSource.getRepository(Product).find({ order: { name: 'ASC', id: 'ASC' } });
+    const radios = await this.dataSource.getRepository(Radio).find({ select: { productId: true, technology: true } });
+    return products.map((p) => toSummary(p, radios.filter((r) => r.productId === p.id)));
+  }
+
+  /**
+   * One product with its radios, each radio with its bands (ranges in MHz), certified gains,
+   * transmit power, feed loss and polarization; used by the product page and by other domains.
+   */
+  async getWithRadios(id: number, manager: EntityManager = this.dataSource.manager): Promise<ProductDetailDto> {
+    const product = await manager.findOne(Product, { where: { id } });
+    if (!product) throw new NotFoundError('product', id);
+    const radios = await manager.find(Radio, { where: { productId: id }, relations: { bands: { band: { ranges: true } } }, order: { id: 'ASC' } });
+    return { ...toSummary(product, radios), radios: radios.map(toRadioDto) };
+  }
+
+  async create(input: CreateProductDto, actor: AuthUser): Promise<ProductDetailDto> {
+    return this.dataSource.transaction(async (manager) => {
+      await this.assertCodeFree(manager, input.code);
+      const row = { ...input, notes: input.notes ?? null };
+      const inserted = await manager.insert(Product, row);
+      const id = Number(inserted.identifiers[0].id);
+      await this.audit.record(manager, { entityType: 'product', entityId: id, action: 'created', userId: actor.id, changes: { ...row } });
+      return this.getWithRadios(id, manager);
+    });
+  }
+
+  async update(id: number, input: UpdateProductDto, actor: AuthUser): Promise<ProductDetailDto> {
+    return this.dataSource.transaction(async (manager) => {
+      const before = await this.lockProduct(manager, id, input.version);
+      const { version: _version, ...patch } = input;
+      if (patch.code !== undefined && patch.code !== before.code) await this.assertCodeFree(manager, patch.code, id);
+      const changes = diffFields(before, patch as Partial<Product>, PRODUCT_FIELDS);
+      if (Object.keys(changes).length) {
+        await manager.update(Product, { id }, { ...(patch as Partial<Product>), version: before.version + 1 });
+        await this.audit.record(manager, { entityType: 'product', entityId: id, action: 'updated', userId: actor.id, changes });
+      }
+      return this.getWithRadios(id, manager);
+    });
+  }
+
+  async remove(id: number, version: number | undefined, actor: AuthUser): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const before = await this.lockProduct(manager, id, version);
+      const radioCount = await manager.countBy(Radio, { productId: id });
+      await manager.delete(Product, { id });
+      await this.audit.record(manager, { entityType: 'product', entityId: id, action: 'deleted', userId: actor.id, changes: { name: before.name, code: before.code, radioCount } });
+    });
+  }
+
+  async history(id: number): Promise<{ items: AuditEntryView[]; total: number }> {
+    const exists = await this.dataSource.getRepository(Product).existsBy({ id });
+    if (!exists) throw new NotFoundError('product', id);
+    return this.audit.list({ entityType: 'product', entityId: id, limit: 500 });
+  }
+
+  async listRadios(productId: number): Promise<RadioDto[]> {
+    return (await this.getWithRadios(productId)).radios;
+  }
+
+  async getRadio(productId: number, radioId: number, manager: EntityManager = this.dataSource.manager): Promise<RadioDto> {
+    const radio = await manager.findOne(Radio, { where: { id: radioId, productId }, relations: { bands: { band: { ranges: true } } } });
+    if (!radio) {
+      if (!(await manager.existsBy(Product, { id: productId }))) throw new NotFoundError('product', productId);
+      throw new NotFoundError('radio', radioId);
+    }
+    return toRadioDto(radio);
+  }
+
+  async createRadio(productId: number, input: CreateRadioDto, actor: AuthUser): Promise<RadioDto> {
+    return this.dataSource.transaction(async (manager) => {
+      // Lock the product row so a concurrent product delete cannot orphan the radio half-way.
+      const product = await manager.findOne(Product, { where: { id: productId }, lock: { mode: 'pessimistic_write' } });
+      if (!product) throw new NotFoundError('product', productId);
+      const transmitPowerDbm = input.transmitPowerDbm ?? null;
+      const library = await this.checkRadio(manager, { technology: input.technology, transmitPowerDbm, bands: input.bands });
+      const { bands, ...fields } = input;
+      const inserted = await manager.insert(Radio, { ...fields, transmitPowerDbm, notes: input.notes ?? null, productId });
+      const radioId = Number(inserted.identifiers[0].id);
+      await this.writeRadioBands(manager, radioId, bands);
+      await this.audit.record(manager, {
+        entityType: 'product', entityId: productId, action: 'radio-created', userId: actor.id,
+        changes: { radioId, ...fields, transmitPowerDbm, bands: bandsForAudit(bands.map((b) => ({ designation: library.get(b.bandId)!.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null }))) },
+      });
+      return this.getRadio(productId, radioId, manager);
+    });
+  }
+
+  async updateRadio(productId: number, radioId: number, input: UpdateRadioDto, actor: AuthUser): Promise<RadioDto> {
+    return this.dataSource.transaction(async (manager) => {
+      const before = await this.lockRadio(manager, productId, radioId, input.version);
+      const { version: _version, bands, ...patch } = input;
+      const beforeDto = toRadioDto(before);
+      const beforeBands = beforeDto.bands.map((b) => ({ bandId: b.band.id, certifiedMaxGainDbi: b.certifiedMaxGainDbi }));
+      const merged = {
+        technology: patch.technology ?? before.technology,
+        transmitPowerDbm: patch.transmitPowerDbm !== undefined ? patch.transmitPowerDbm : before.transmitPowerDbm,
+        bands: bands ?? beforeBands,
+      };
+      const library = await this.checkRadio(manager, merged);
+      const changes: Record<string, unknown> = diffFields(before, patch as Partial<Radio>, RADIO_FIELDS);
+      const nextBands = bands?.map((b) => ({ bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null }));
+      const bandsChanged = nextBands !== undefined && JSON.stringify(nextBands) !== JSON.stringify(beforeBands);
+      if (bandsChanged) {
+        changes.bands = [
+          bandsForAudit(beforeDto.bands.map((b) => ({ designation: b.band.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi }))),
+          bandsForAudit(nextBands.map((b) => ({ designation: library.get(b.bandId)!.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi }))),
+        ];
+      }
+      if (Object.keys(changes).length) {
+        await manager.update(Radio, { id: radioId }, { ...(patch as Partial<Radio>), version: before.version + 1 });
+        if (bandsChanged) {
+          await manager.delete(RadioBand, { radioId });
+          await this.writeRadioBands(manager, radioId, nextBands);
+        }
+        await this.audit.record(manager, { entityType: 'product', entityId: productId, action: 'radio-updated', userId: actor.id, changes: { radioId, radio: before.name, ...changes } });
+      }
+      return this.getRadio(productId, radioId, manager);
+    });
+  }
+
+  async removeRadio(productId: number, radioId: number, version: number | undefined, actor: AuthUser): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const before = await this.lockRadio(manager, productId, radioId, version);
+      await manager.delete(Radio, { id: radioId });
+      await this.audit.record(manager, { entityType: 'product', entityId: productId, action: 'radio-deleted', userId: actor.id, changes: { radioId, radio: before.name, technology: before.technology } });
+    });
+  }
+
+  private async lockProduct(manager: EntityManager, id: number, expectedVersion: number | undefined): Promise<Product> {
+    const product = await manager.findOne(Product, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    if (!product) throw new NotFoundError('product', id);
+    if (expectedVersion !== undefined && expectedVersion !== product.version) throw new VersionConflictError('product', id, expectedVersion, product.version);
+    return product;
+  }
+
+  private async lockRadio(manager: EntityManager, productId: number, radioId: number, expectedVersion: number | undefined): Promise<Radio> {
+    const locked = await manager.findOne(Radio, { where: { id: radioId, productId }, lock: { mode: 'pessimistic_write' } });
+    if (!locked) {
+      if (!(await manager.existsBy(Product, { id: productId }))) throw new NotFoundError('product', productId);
+      throw new NotFoundError('radio', radioId);
+    }
+    if (expectedVersion !== undefined && expectedVersion !== locked.version) throw new VersionConflictError('radio', radioId, expectedVersion, locked.version);
+    return manager.findOneOrFail(Radio, { where: { id: radioId }, relations: { bands: { band: { ranges: true } } } });
+  }
+
+  /** Runs the cross-field radio rules against the band library; returns the bands it looked up. */
+  private async checkRadio(manager: EntityManager, draft: Parameters<typeof radioProblems>[0]): Promise<Map<number, KnownBand>> {
+    const ids = draft.bands.map((b) => b.bandId);
+    const found = ids.length ? await manager.find(Band, { select: { id: true, technology: true, designation: true }, where: { id: In(ids) } }) : [];
+    const library = new Map(found.map((b) => [b.id, b]));
+    const problems = radioProblems(draft, library);
+    if (problems.length) throw new ValidationFailedError(problems);
+    return library;
+  }
+
+  private async writeRadioBands(manager: EntityManager, radioId: number, bands: { bandId: number; certifiedMaxGainDbi?: number | null }[]): Promise<void> {
+    await manager.insert(RadioBand, bands.map((b, position) => ({ radioId, bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null, position })));
+  }
+
+  private async assertCodeFree(manager: EntityManager, code: string, exceptId?: number): Promise<void> {
+    if (await manager.existsBy(Product, { code, ...(exceptId ? { id: Not(exceptId) } : {}) })) {
+      throw new DomainError('PRODUCT_CODE_TAKEN', `Another product already has the code ${code}`, 409, { field: 'code' });
+    }
+  }
+}
