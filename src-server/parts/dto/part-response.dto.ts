@@ -1,0 +1,189 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  CONNECTORS, type Connector, DOCUMENT_KINDS, type DocumentKind, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle,
+  MEASUREMENT_KINDS, type MeasurementKind, POLARIZATIONS, type PartPolarization, REVIEW_STATES, type ReviewState,
+} from '../part.types';
+
+export class UserRefDto {
+  @ApiProperty() id: number;
+  @ApiProperty() name: string;
+}
+
+export class PriceDto {
+  @ApiProperty({ example: 'USD' }) currency: string;
+  @ApiProperty({ example: '0.4200', description: 'Decimal string' }) unitPrice: string;
+}
+
+/** One row of the catalogue table. */
+export class PartSummaryDto {
+  @ApiProperty() id: number;
+  @ApiProperty() manufacturer: string;
+  @ApiProperty() mpn: string;
+  @ApiProperty() title: string;
+  @ApiProperty({ enum: FORM_FACTORS }) formFactor: FormFactor;
+  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
+  @ApiProperty({ enum: POLARIZATIONS }) polarization: PartPolarization;
+  @ApiProperty({ enum: LIFECYCLES }) lifecycle: Lifecycle;
+  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, isArray: true }) measuredKinds: MeasurementKind[];
+  @ApiProperty({ type: [PriceDto], description: 'Lowest unit price per currency over all offers' }) lowestPrices: PriceDto[];
+  @ApiProperty() updatedAt: string;
+}
+
+export class PartListDto {
+  @ApiProperty({ type: [PartSummaryDto] }) items: PartSummaryDto[];
+  @ApiProperty() total: number;
+}
+
+export class SpecBandDto {
+  @ApiProperty() id: number;
+  @ApiProperty() fromMhz: number;
+  @ApiProperty() toMhz: number;
+  @ApiProperty({ nullable: true }) maxVswr: number | null;
+  @ApiProperty({ nullable: true }) minReturnLossDb: number | null;
+  @ApiProperty({ nullable: true }) efficiencyPct: number | null;
+  @ApiProperty({ nullable: true }) peakGainDbi: number | null;
+  @ApiProperty({ nullable: true }) averageGainDbi: number | null;
+}
+
+export class MeasurementDto {
+  @ApiProperty() id: number;
+  @ApiProperty({ enum: MEASUREMENT_KINDS }) kind: MeasurementKind;
+  @ApiProperty({ nullable: true }) groundLengthMm: number | null;
+  @ApiProperty({ nullable: true }) groundWidthMm: number | null;
+  @ApiProperty({ nullable: true }) conditions: string | null;
+  @ApiProperty() fileName: string;
+  @ApiProperty() sizeBytes: number;
+  @ApiProperty() sha256: string;
+  @ApiProperty() sourceFormat: string;
+  @ApiProperty({ nullable: true }) referenceOhms: number | null;
+  @ApiProperty() pointCount: number;
+  @ApiProperty() fromMhz: number;
+  @ApiProperty() toMhz: number;
+  @ApiProperty({ description: 'True for the newest measurement of its kind, the one search and checks use' }) current: boolean;
+  @ApiProperty({ type: UserRefDto, nullable: true }) uploadedBy: UserRefDto | null;
+  @ApiProperty() createdAt: string;
+}
+
+export class MeasurementPointsDto {
+  @ApiProperty() id: number;
+  @ApiProperty({ enum: MEASUREMENT_KINDS }) kind: MeasurementKind;
+  @ApiProperty({ type: [Number] }) frequenciesHz: number[];
+  @ApiProperty({ type: [Number], description: 's11: |Γ|; efficiency: %; gains: dBi' }) values: number[];
+  @ApiPropertyOptional({ type: [Number], description: 's11 only: VSWR' }) vswr?: number[];
+  @ApiPropertyOptional({ type: [Number], description: 's11 only: return loss, dB (positive)' }) returnLossDb?: number[];
+}
+
+/** Figures of one frequency range computed by the RF module from the current curves, or from spec bands. */
+export class RangeFiguresDto {
+  @ApiProperty() fromMhz: number;
+  @ApiProperty() toMhz: number;
+  @ApiProperty({ enum: ['measured', 'spec', 'no-data'] }) matchSource: 'measured' | 'spec' | 'no-data';
+  @ApiProperty({ nullable: true, description: 'Share of the range with VSWR ≤ 2, 0..1' }) coveredFractionVswr2: number | null;
+  @ApiProperty({ nullable: true }) worstVswr: number | null;
+  @ApiProperty({ nullable: true }) worstVswrAtMhz: number | null;
+  @ApiProperty({ nullable: true }) minReturnLossDb: number | null;
+  @ApiProperty({ enum: ['measured', 'spec', 'no-data'] }) efficiencySource: 'measured' | 'spec' | 'no-data';
+  @ApiProperty({ nullable: true }) minEfficiencyPct: number | null;
+  @ApiProperty({ nullable: true }) averageEfficiencyPct: number | null;
+  @ApiProperty({ nullable: true }) averageEfficiencyDb: number | null;
+  @ApiProperty({ nullable: true }) peakGainDbi: number | null;
+  @ApiProperty({ nullable: true }) averageGainDbi: number | null;
+  @ApiProperty({ type: [String], description: 'Why a figure is missing' }) notes: string[];
+}
+
+export class DocumentDto {
+  @ApiProperty() id: number;
+  @ApiProperty({ enum: DOCUMENT_KINDS }) kind: DocumentKind;
+  @ApiProperty() title: string;
+  @ApiProperty() fileName: string;
+  @ApiProperty() contentType: string;
+  @ApiProperty() sizeBytes: number;
+  @ApiProperty() sha256: string;
+  @ApiProperty({ type: UserRefDto, nullable: true }) uploadedBy: UserRefDto | null;
+  @ApiProperty() createdAt: string;
+}
+
+export class PriceBreakDto {
+  @ApiProperty() quantity: number;
+  @ApiProperty({ example: '0.4200' }) unitPrice: string;
+}
+
+export class OfferDto {
+  @ApiProperty() id: number;
+  @ApiProperty() supplier: string;
+  @ApiProperty({ nullable: true }) sku: string | null;
+  @ApiProperty() currency: string;
+  @ApiProperty({ type: [PriceBreakDto] }) priceBreaks: PriceBreakDto[];
+  @ApiProperty({ nullable: true }) moq: number | null;
+  @ApiProperty({ nullable: true }) leadTimeDays: number | null;
+  @ApiProperty({ nullable: true, example: '2025-11-20' }) lastCheckedOn: string | null;
+  @ApiProperty() version: number;
+}
+
+export class AlternateDto {
+  @ApiProperty() partId: number;
+  @ApiProperty() manufacturer: string;
+  @ApiProperty() mpn: string;
+  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
+  @ApiProperty({ enum: ['alternate', 'second-source'] }) kind: string;
+  @ApiProperty({ nullable: true }) note: string | null;
+}
+
+export class PartPermissionsDto {
+  @ApiProperty() edit: boolean;
+  @ApiProperty() uploadData: boolean;
+  @ApiProperty() submit: boolean;
+  @ApiProperty() review: boolean;
+  @ApiProperty() editSourcing: boolean;
+}
+
+export class PartDetailDto {
+  @ApiProperty() id: number;
+  @ApiProperty() manufacturer: string;
+  @ApiProperty() mpn: string;
+  @ApiProperty() title: string;
+  @ApiProperty({ enum: FORM_FACTORS }) formFactor: FormFactor;
+  @ApiProperty({ nullable: true }) mounting: string | null;
+  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
+  @ApiProperty({ enum: POLARIZATIONS }) polarization: PartPolarization;
+  @ApiProperty() nominalImpedanceOhms: number;
+  @ApiProperty({ nullable: true }) lengthMm: number | null;
+  @ApiProperty({ nullable: true }) widthMm: number | null;
+  @ApiProperty({ nullable: true }) heightMm: number | null;
+  @ApiProperty({ nullable: true }) evalGroundLengthMm: number | null;
+  @ApiProperty({ nullable: true }) evalGroundWidthMm: number | null;
+  @ApiProperty({ nullable: true }) tempMinC: number | null;
+  @ApiProperty({ nullable: true }) tempMaxC: number | null;
+  @ApiProperty({ enum: LIFECYCLES }) lifecycle: Lifecycle;
+  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
+  @ApiProperty({ nullable: true }) reviewComment: string | null;
+  @ApiProperty({ nullable: true }) notes: string | null;
+  @ApiProperty() version: number;
+  @ApiProperty({ type: UserRefDto, nullable: true }) createdBy: UserRefDto | null;
+  @ApiProperty({ type: UserRefDto, nullable: true }) submittedBy: UserRefDto | null;
+  @ApiProperty({ nullable: true }) submittedAt: string | null;
+  @ApiProperty({ type: UserRefDto, nullable: true }) reviewedBy: UserRefDto | null;
+  @ApiProperty({ nullable: true }) reviewedAt: string | null;
+  @ApiProperty() createdAt: string;
+  @ApiProperty() updatedAt: string;
+  @ApiProperty({ type: [SpecBandDto] }) specBands: SpecBandDto[];
+  @ApiProperty({ type: [MeasurementDto] }) measurements: MeasurementDto[];
+  @ApiProperty({ type: [RangeFiguresDto], description: 'Per range: the spec bands, plus any ?ranges= asked for' }) figures: RangeFiguresDto[];
+  @ApiProperty({ type: [DocumentDto] }) documents: DocumentDto[];
+  @ApiProperty({ type: [OfferDto] }) offers: OfferDto[];
+  @ApiProperty({ type: [AlternateDto] }) alternates: AlternateDto[];
+  @ApiProperty({ description: 'What the caller may do with this part' }) permissions: PartPermissionsDto;
+}
+
+export class ReviewQueueItemDto {
+  @ApiProperty() id: number;
+  @ApiProperty() manufacturer: string;
+  @ApiProperty() mpn: string;
+  @ApiProperty() title: string;
+  @ApiProperty() version: number;
+  @ApiProperty({ type: UserRefDto, nullable: true }) submittedBy: UserRefDto | null;
+  @ApiProperty({ nullable: true }) submittedAt: string | null;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, isArray: true }) measuredKinds: MeasurementKind[];
+  @ApiProperty() documentCount: number;
+}

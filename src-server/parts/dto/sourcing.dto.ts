@@ -1,0 +1,64 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsOptional, Matches, ValidateNested } from 'class-validator';
+import { EnumField, IntField, StringField } from '../../common/dto-fields';
+import { ALTERNATE_KINDS, type AlternateKind } from '../part.types';
+
+export class PriceBreakInputDto {
+  @IntField({ min: 1, max: 100_000_000, example: 1000 }) quantity: number;
+
+  @ApiProperty({ example: '0.4200', description: 'Unit price as a decimal string (up to 4 decimals)' })
+  @Matches(/^\d{1,10}(\.\d{1,4})?$/, { message: 'must be a decimal amount such as 0.42 (up to 4 decimals)' })
+  unitPrice: string;
+}
+
+class OfferFieldsDto {
+  @StringField({ optional: true, maxLength: 80 }) sku?: string | null;
+  @IntField({ optional: true, min: 1, max: 100_000_000 }) moq?: number | null;
+  @IntField({ optional: true, min: 0, max: 3650 }) leadTimeDays?: number | null;
+
+  @ApiProperty({ required: false, example: '2025-11-20', nullable: true })
+  @IsOptional()
+  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date like 2025-11-20' })
+  lastCheckedOn?: string | null;
+}
+
+export class CreateOfferDto extends OfferFieldsDto {
+  @StringField({ maxLength: 120, example: 'Brightwater Components' }) supplier: string;
+
+  @ApiProperty({ example: 'USD' })
+  @Matches(/^[A-Z]{3}$/, { message: 'must be a three-letter currency code such as USD' })
+  currency: string;
+
+  @ApiProperty({ type: [PriceBreakInputDto] })
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(20)
+  @ValidateNested({ each: true })
+  @Type(() => PriceBreakInputDto)
+  priceBreaks: PriceBreakInputDto[];
+}
+
+export class UpdateOfferDto extends OfferFieldsDto {
+  @IntField({ min: 1, description: 'The version you edited' }) version: number;
+  @StringField({ optional: true, maxLength: 120 }) supplier?: string;
+
+  @ApiProperty({ required: false, example: 'EUR' })
+  @IsOptional()
+  @Matches(/^[A-Z]{3}$/, { message: 'must be a three-letter currency code such as USD' })
+  currency?: string;
+
+  @ApiProperty({ type: [PriceBreakInputDto], required: false })
+  @IsOptional()
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(20)
+  @ValidateNested({ each: true })
+  @Type(() => PriceBreakInputDto)
+  priceBreaks?: PriceBreakInputDto[];
+}
+
+export class AlternateInputDto {
+  @EnumField(ALTERNATE_KINDS) kind: AlternateKind;
+  @StringField({ optional: true, maxLength: 300 }) note?: string;
+}

@@ -1,0 +1,162 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
+import { createHash, randomUUID } from 'node:crypto';
+import type { AuthUser } from '../common/auth.decorators';
+import { DomainError, NotFoundError } from '../common/domain-error';
+import { AuditService } from '../audit/audit.service';
+import { StorageService, objectKey } from '../storage/storage.service';
+import { reflectionCurveFromGamma, returnLossDbSeries, vswrSeries } from '../rf/reflection';
+import { touchPart } from './catalogue-revision';
+import { Measurement } from './measurement.entity';
+import { type ParsedCurve, parseCurveCsv, parseTouchstoneS11 } from './measurement-parsers';
+import { Part } from './part.entity';
+import { assertCanEdit } from './part-access';
+import { packFloat64, unpackFloat64 } from './point-codec';
+import { measurementDto, PartsService } from './parts.service';
+import type { CurvePreviewDto, UploadMeasurementDto, UploadMeasurementResultDto } from './dto/upload.dto';
+import type { MeasurementPointsDto } from './dto/part-response.dto';
+
+export interface UploadedFile {
+  originalname: string;
+  mimetype: string;
+  size: number;
+  buffer: Buffer;
+}
+
+const PREVIEW_POINTS = 400;
+
+/** A storable file name: the original's safe characters, never a path. */
+export function safeFileName(name: string): string {
+  const base = name.split(/[\\/]/).pop() ?? 'file';
+  const cleaned = base.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^[._-]+/, '').slice(0, 80);
+  return cleaned || 'file';
+}
+
+export function sha256Hex(bytes: Buffer): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}
+
+export function requireFile(file: UploadedFile | undefined): UploadedFile {
+  if (!file || file.size === 0) {
+    throw new DomainError('VALIDATION_FAILED', 'file: attach a non-empty file in the multipart field "file"', 400, { fields: [{ field: 'file', message: 'is required and must not be empty' }] });
+  }
+  return file;
+}
+
+function previewOf(curve: ParsedCurve): CurvePreviewDto {
+  const n = curve.frequenciesHz.length;
+  const step = Math.max(1, Math.ceil(n / PREVIEW_POINTS));
+  const picks: number[] = [];
+  for (let i = 0; i < n; i += step) picks.push(i);
+  if (picks[picks.length - 1] !== n - 1) picks.push(n - 1);
+  let values: ArrayLike<number> = curve.valuesA;
+  if (curve.kind === 's11') values = returnLossDbSeries(reflectionCurveFromGamma(curve.frequenciesHz, curve.valuesA, curve.valuesB!, curve.referenceOhms ?? 50));
+  return {
+    kind: curve.kind, sourceFormat: curve.sourceFormat, pointCount: n, fromMhz: curve.frequenciesHz[0] / 1e6, toMhz: curve.frequenciesHz[n - 1] / 1e6,
+    referenceOhms: curve.referenceOhms,
+    valueLabel: curve.kind === 's11' ? 'Return loss (dB)' : curve.kind === 'efficiency' ? 'Efficiency (%)' : 'Gain (dBi)',
+    frequenciesMhz: picks.map((i) => curve.frequenciesHz[i] / 1e6),
+    values: picks.map((i) => values[i]),
+  };
+}
+
+@Injectable()
+export class MeasurementsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly storage: StorageService,
+    private readonly parts: PartsService,
+    private readonly audit: AuditService,
+  ) {}
+
+  parse(file: UploadedFile, input: UploadMeasurementDto): ParsedCurve {
+    if (input.kind === 's11') return parseTouchstoneS11(file.buffer, file.originalname);
+    return parseCurveCsv(file.buffer, input.kind, { frequencyUnit: input.frequencyUnit, valueUnit: input.valueUnit });
+  }
+
+  /**
+   * Parse first (a bad file stores nothing), then the object, then the row in a transaction; if the
+   * transaction fails the object is deleted again, so no upload is ever half-stored.
+   */
+  async upload(partId: number, maybeFile: UploadedFile | undefined, input: UploadMeasurementDto, actor: AuthUser): Promise<UploadMeasurementResultDto> {
+    const part = await this.dataSource.getRepository(Part).findOneBy({ id: partId });
+    if (!part) throw new NotFoundError('part', partId);
+    assertCanEdit(actor, part, 'upload data to');
+    const file = requireFile(maybeFile);
+    const curve = this.parse(file, input);
+    const preview = previewOf(curve);
+    if (input.dryRun) return { measurement: null, preview };
+    const stored = await this.store(partId, file, input, curve, actor);
+    return { measurement: measurementDto(stored, true), preview };
+  }
+
+  /** Also used by the demo seeder, so demo curves take the same path as uploads. */
+  async store(partId: number, file: UploadedFile, input: Omit<UploadMeasurementDto, 'dryRun'>, curve: ParsedCurve, actor: AuthUser | null): Promise<Measurement> {
+    const key = objectKey('parts', partId, 'measurements', `${randomUUID()}-${safeFileName(file.originalname)}`);
+    await this.storage.put(key, file.buffer, input.kind === 's11' ? 'text/plain' : 'text/csv');
+    try {
+      const id = await this.dataSource.transaction(async (manager) => {
+        const locked = await this.parts.lockPart(manager, partId);
+        if (actor) assertCanEdit(actor, locked, 'upload data to');
+        const n = curve.frequenciesHz.length;
+        const inserted = await manager.insert(Measurement, {
+          partId, kind: curve.kind, groundLengthMm: input.groundLengthMm ?? null, groundWidthMm: input.groundWidthMm ?? null, conditions: input.conditions ?? null,
+          fileName: file.originalname.slice(0, 200), contentType: file.mimetype.slice(0, 100) || 'application/octet-stream', objectKey: key, sizeBytes: file.size,
+          sha256: sha256Hex(file.buffer), sourceFormat: curve.sourceFormat, referenceOhms: curve.referenceOhms, pointCount: n,
+          fromHz: curve.frequenciesHz[0], toHz: curve.frequenciesHz[n - 1],
+          frequenciesHz: packFloat64(curve.frequenciesHz), valuesA: packFloat64(curve.valuesA), valuesB: curve.valuesB ? packFloat64(curve.valuesB) : null,
+          uploadedById: actor?.id ?? null,
+        });
+        const measurementId: number = inserted.identifiers[0].id;
+        await touchPart(manager, partId);
+        await this.audit.record(manager, {
+          entityType: 'part', entityId: partId, action: 'measurement-uploaded', userId: actor?.id ?? null,
+          changes: { measurementId, kind: curve.kind, fileName: file.originalname, points: n, groundLengthMm: input.groundLengthMm ?? null, groundWidthMm: input.groundWidthMm ?? null },
+        });
+        return measurementId;
+      });
+      return this.dataSource.getRepository(Measurement).findOneOrFail({ where: { id }, relations: { uploadedBy: true } });
+    } catch (error) {
+      await this.storage.delete(key);
+      throw error;
+    }
+  }
+
+  async points(partId: number, measurementId: number): Promise<MeasurementPointsDto> {
+    const row = await this.dataSource.getRepository(Measurement).createQueryBuilder('m')
+      .addSelect(['m.frequenciesHz', 'm.valuesA', 'm.valuesB'])
+      .where('m.id = :measurementId AND m.part_id = :partId', { measurementId, partId })
+      .getOne();
+    if (!row) throw new NotFoundError('measurement', measurementId);
+    const frequenciesHz = unpackFloat64(row.frequenciesHz);
+    const a = unpackFloat64(row.valuesA);
+    if (row.kind !== 's11') return { id: row.id, kind: row.kind, frequenciesHz: [...frequenciesHz], values: [...a] };
+    const curve = reflectionCurveFromGamma(frequenciesHz, a, unpackFloat64(row.valuesB), row.referenceOhms ?? 50);
+    return {
+      id: row.id, kind: row.kind, frequenciesHz: [...frequenciesHz], values: [...curve.gammaMagnitude],
+      vswr: [...vswrSeries(curve)].map((v) => (Number.isFinite(v) ? v : 1e6)), returnLossDb: [...returnLossDbSeries(curve)],
+    };
+  }
+
+  async file(partId: number, measurementId: number): Promise<{ body: Buffer; fileName: string; contentType: string }> {
+    const row = await this.dataSource.getRepository(Measurement).findOneBy({ id: measurementId, partId });
+    if (!row) throw new NotFoundError('measurement', measurementId);
+    return { body: await this.storage.get(row.objectKey), fileName: row.fileName, contentType: row.contentType };
+  }
+
+  async remove(partId: number, measurementId: number, actor: AuthUser): Promise<void> {
+    const key = await this.dataSource.transaction(async (manager) => {
+      const part = await this.parts.lockPart(manager, partId);
+      assertCanEdit(actor, part, 'delete data of');
+      const row = await manager.findOneBy(Measurement, { id: measurementId, partId });
+      if (!row) throw new NotFoundError('measurement', measurementId);
+      await manager.delete(Measurement, { id: measurementId });
+      await touchPart(manager, partId);
+      await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'measurement-deleted', userId: actor.id, changes: { measurementId, kind: row.kind, fileName: row.fileName } });
+      return row.objectKey;
+    });
+    // The row is gone, so the object is unreachable; removing it afterwards cannot lose data.
+    await this.storage.delete(key);
+  }
+}

@@ -1,0 +1,89 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
+import type { AuthUser } from '../common/auth.decorators';
+import { DomainError } from '../common/domain-error';
+import { CatalogueSearchService } from './catalogue-index/catalogue-search.service';
+import { type UploadedFile, requireFile } from './measurements.service';
+import { Part } from './part.entity';
+import { type ImportProblem, PART_CSV_COLUMNS, csvLine, formatSpecBands, parsePartCsv } from './part-csv';
+import { PartsService } from './parts.service';
+import type { PartSearchDto } from './dto/part-search.dto';
+import type { ImportResultDto } from './dto/import.dto';
+
+const EXPORT_COLUMNS = ['id', ...PART_CSV_COLUMNS, 'reviewState', 'measuredKinds', 'lowestPrices'] as const;
+
+@Injectable()
+export class PartCsvService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly parts: PartsService,
+    private readonly search: CatalogueSearchService,
+  ) {}
+
+  /** Every problem by row first; a real import writes all rows in one transaction or none. */
+  async importCsv(maybeFile: UploadedFile | undefined, dryRun: boolean, actor: AuthUser): Promise<ImportResultDto> {
+    const file = requireFile(maybeFile);
+    const { parts, problems } = parsePartCsv(file.buffer);
+    if (parts.length > 0) {
+      const existing: { name: string; mpn: string }[] = await this.dataSource.query(
+        'SELECT m.name, p.mpn FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id WHERE p.mpn IN (?)', [parts.map((p) => p.input.mpn)],
+      );
+      const taken = new Set(existing.map((e) => `${e.name.toLowerCase()}\u0000${e.mpn}`));
+      for (const part of parts) {
+        if (taken.has(`${part.input.manufacturer.trim().toLowerCase()}\u0000${part.input.mpn}`)) {
+          problems.push({ row: part.row, line: part.line, field: 'mpn', message: `${part.input.manufacturer} ${part.input.mpn} is already in the catalogue` });
+        }
+      }
+    }
+    problems.sort((a, b) => a.row - b.row);
+    const badRows = new Set(problems.map((p) => p.row));
+    const rowCount = parts.length + new Set(problems.filter((p) => p.row > 0 && !parts.some((x) => x.row === p.row)).map((p) => p.row)).size;
+    const valid = parts.filter((p) => !badRows.has(p.row)).length;
+    if (dryRun) return { dryRun: true, rowCount, validRows: valid, problems, createdIds: [] };
+    if (problems.length > 0) {
+      throw new DomainError('PART_IMPORT_INVALID', `${problems.length} problem${problems.length === 1 ? '' : 's'} in the file; nothing was imported. First: row ${problems[0].row}, ${problems[0].field}: ${problems[0].message}`, 422, { line: problems[0].line, problems });
+    }
+    const createdIds = await this.dataSource.transaction(async (manager) => {
+      const ids: number[] = [];
+      for (const part of parts) {
+        try {
+          ids.push(await this.parts.createIn(manager, part.input, actor.id, 'imported'));
+        } catch (error) {
+          // A row that passed the dry run can still collide with a part created meanwhile.
+          if (error instanceof DomainError) {
+            const problem: ImportProblem = { row: part.row, line: part.line, field: String(error.details.field ?? ''), message: error.message };
+            throw new DomainError('PART_IMPORT_INVALID', `row ${part.row}: ${error.message}; nothing was imported`, 422, { line: part.line, problems: [problem] });
+          }
+          throw error;
+        }
+      }
+      return ids;
+    });
+    return { dryRun: false, rowCount, validRows: valid, problems: [], createdIds };
+  }
+
+  /** The current search (same filters and order), unpaged, as CSV. */
+  async exportCsv(dto: PartSearchDto, actor: AuthUser): Promise<string> {
+    const matches = await this.search.searchAll(dto, actor);
+    const lines = [csvLine([...EXPORT_COLUMNS])];
+    const byId = new Map<number, Part>();
+    for (let i = 0; i < matches.length; i += 1000) {
+      const ids = matches.slice(i, i + 1000).map((p) => p.id);
+      const rows = await this.dataSource.getRepository(Part).find({ where: ids.map((id) => ({ id })), relations: { manufacturer: true, specBands: true } });
+      for (const row of rows) byId.set(row.id, row);
+    }
+    for (const indexed of matches) {
+      const part = byId.get(indexed.id);
+      if (!part) continue;
+      const bands = [...part.specBands].sort((a, b) => a.fromMhz - b.fromMhz);
+      lines.push(csvLine([
+        part.id, part.manufacturer.name, part.mpn, part.title, part.formFactor, part.connector, part.polarization, part.mounting, part.nominalImpedanceOhms,
+        part.lengthMm, part.widthMm, part.heightMm, part.evalGroundLengthMm, part.evalGroundWidthMm, part.tempMinC, part.tempMaxC, part.lifecycle, part.notes,
+        formatSpecBands(bands), part.reviewState, indexed.measuredKinds.join(' '),
+        [...indexed.lowestPrices].map(([currency, price]) => `${price.toFixed(4)} ${currency}`).join(' '),
+      ]));
+    }
+    return lines.join('\r\n') + '\r\n';
+  }
+}

@@ -1,0 +1,23 @@
+import type { User } from '../users/user.entity';
+import type { Part } from './part.entity';
+import type { SpecBand } from './spec-band.entity';
+import type { SpecBandClaim } from './spec-coverage';
+import type { SpecBandDto, UserRefDto } from './dto/part-response.dto';
+
+export const userRef = (user: User | null | undefined): UserRefDto | null => (user ? { id: user.id, name: user.name } : null);
+
+export const iso = (date: Date | null | undefined): string | null => (date ? date.toISOString() : null);
+
+export const specBandDto = (band: SpecBand): SpecBandDto => ({
+  id: band.id, fromMhz: band.fromMhz, toMhz: band.toMhz, maxVswr: band.maxVswr, minReturnLossDb: band.minReturnLossDb,
+  efficiencyPct: band.efficiencyPct, peakGainDbi: band.peakGainDbi, averageGainDbi: band.averageGainDbi,
+});
+
+export const specBandClaim = (band: Pick<SpecBand, 'fromMhz' | 'toMhz' | 'maxVswr' | 'minReturnLossDb' | 'efficiencyPct' | 'peakGainDbi' | 'averageGainDbi'>): SpecBandClaim => ({
+  fromHz: band.fromMhz * 1e6, toHz: band.toMhz * 1e6, maxVswr: band.maxVswr ?? null, minReturnLossDb: band.minReturnLossDb ?? null,
+  efficiencyPct: band.efficiencyPct ?? null, peakGainDbi: band.peakGainDbi ?? null, averageGainDbi: band.averageGainDbi ?? null,
+});
+
+/** The text the search matches: manufacturer, MPN, title and notes. */
+export const searchTextOf = (manufacturer: string, part: Pick<Part, 'mpn' | 'title' | 'notes'>): string =>
+  [manufacturer, part.mpn, part.title, part.notes ?? ''].join(' ').slice(0, 6000);

@@ -1,0 +1,36 @@
+import type { INestApplication } from '@nestjs/common';
+import request from 'supertest';
+import { writeTouchstone } from '../../src-server/rf/touchstone-writer';
+import { unique } from './api-app';
+
+/** A minimal valid draft body with a unique MPN under a test-only manufacturer. */
+export function draftBody(overrides: Record<string, unknown> = {}) {
+  return {
+    manufacturer: 'Testbench Antennas',
+    mpn: unique('TB'),
+    title: 'Test chip antenna',
+    formFactor: 'chip',
+    connector: 'solder-pad',
+    polarization: 'linear',
+    ...overrides,
+  };
+}
+
+export async function createDraft(app: INestApplication, token: string, overrides: Record<string, unknown> = {}) {
+  const res = await request(app.getHttpServer()).post('/api/parts').set('Authorization', `Bearer ${token}`).send(draftBody(overrides));
+  if (res.status !== 201) throw new Error(`creating a draft failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { id: number; version: number; mpn: string; manufacturer: string };
+}
+
+/** A 1-port Touchstone file (RI) with |Γ| given per frequency; Γ is real so |Γ| is exact. */
+export function s1pWithGamma(points: [mhz: number, gammaMagnitude: number][]): string {
+  return writeTouchstone({
+    version: 1, ports: 1, frequencyUnit: 'MHz', format: 'RI', comments: ['test data, invented'],
+    frequenciesHz: points.map(([mhz]) => mhz * 1e6),
+    data: [{ re: points.map(([, g]) => g), im: points.map(() => 0) }],
+  });
+}
+
+export function csvCurve(header: string, points: [number, number][]): string {
+  return [header, ...points.map(([f, v]) => `${f},${v}`)].join('\n') + '\n';
+}
