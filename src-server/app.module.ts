@@ -19,6 +19,7 @@ import { UsersModule } from './users/users.module';
 import { BandsModule } from './bands/bands.module';
 import { RegulatoryModule } from './regulatory/regulatory.module';
 import { ProductsModule } from './products/products.module';
+import { PartsModule } from './parts/parts.module';
 
 @Module({
   imports: [
@@ -39,6 +40,7 @@ import { ProductsModule } from './products/products.module';
     BandsModule,
     RegulatoryModule,
     ProductsModule,
+    PartsModule,
   ],
   providers: [
     { provide: APP_PIPE, useFactory: createValidationPipe },
