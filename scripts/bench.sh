@@ -15,6 +15,7 @@ DB_WAS_RUNNING=0; db_ping && DB_WAS_RUNNING=1
 db_start
 db_create bandwright_bench
 build_server
+build_client
 fakes_start bench
 trap 'fakes_stop bench; [ $DB_WAS_RUNNING = 1 ] || db_stop' EXIT
 node dist/server/database/migrate.js >/dev/null
