@@ -18,4 +18,11 @@ export const protectedRoutes: RouteObject[] = [
       return { element: <RequireAuth roles={['admin']}><AuditLogPage /></RequireAuth> };
     },
   },
+  {
+    path: paths.tools,
+    lazy: async () => {
+      const { ToolsPage } = await import('../../features/tools/components/ToolsPage');
+      return { element: <RequireAuth><ToolsPage /></RequireAuth> };
+    },
+  },
 ];

@@ -1,0 +1,50 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { OverlayBand } from '../types';
+import { toolKeys } from './tool-keys';
+
+interface LibraryBand {
+  id: number;
+  designation: string;
+  name: string;
+  technology: string;
+  ranges: { fromMHz: number; toMHz: number }[];
+}
+
+/**
+ * The short built-in list, used when the band library cannot be read.
+ * Edges: 3GPP TS 36.101 Table 5.5-1 (B3, B8, B20); IS-GPS-200 (L1 ± 10.23 MHz); LoRa Alliance RP002 (EU868, US915);
+ * 47 CFR 15.247 (2.4 GHz ISM); 5 GHz Wi-Fi channels 36–165 from IEEE 802.11-2020 (rf-reference.md §1).
+ */
+export const BUILT_IN_BANDS: OverlayBand[] = [
+  { key: 'b20', label: 'LTE B20', fromHz: 791e6, toHz: 862e6 },
+  { key: 'eu868', label: 'EU868', fromHz: 863e6, toHz: 870e6 },
+  { key: 'b8', label: 'LTE B8', fromHz: 880e6, toHz: 960e6 },
+  { key: 'us915', label: 'US915', fromHz: 902e6, toHz: 928e6 },
+  { key: 'gnss-l1', label: 'GNSS L1', fromHz: 1565.19e6, toHz: 1585.65e6 },
+  { key: 'b3', label: 'LTE B3', fromHz: 1710e6, toHz: 1880e6 },
+  { key: 'ism-2g4', label: '2.4 GHz ISM', fromHz: 2400e6, toHz: 2483.5e6 },
+  { key: 'wifi-5g', label: '5 GHz Wi-Fi', fromHz: 5170e6, toHz: 5835e6 },
+];
+
+/** A library band as one overlay spanning all its ranges (uplink to downlink). */
+export function overlayFromLibrary(band: LibraryBand): OverlayBand | null {
+  if (band.ranges.length === 0) return null;
+  const fromMHz = Math.min(...band.ranges.map((r) => r.fromMHz));
+  const toMHz = Math.max(...band.ranges.map((r) => r.toMHz));
+  return { key: `band-${band.id}`, label: band.designation, fromHz: fromMHz * 1e6, toHz: toMHz * 1e6 };
+}
+
+export const getOverlayBands = async (): Promise<{ bands: OverlayBand[]; fromLibrary: boolean }> => {
+  try {
+    const library = await apiRequest<LibraryBand[]>('/bands');
+    const bands = library.map(overlayFromLibrary).filter((b): b is OverlayBand => b !== null);
+    return bands.length ? { bands: bands.sort((a, b) => a.fromHz - b.fromHz), fromLibrary: true } : { bands: BUILT_IN_BANDS, fromLibrary: false };
+  } catch {
+    return { bands: BUILT_IN_BANDS, fromLibrary: false };
+  }
+};
+
+export const getOverlayBandsQueryOptions = () => queryOptions({ queryKey: toolKeys.bands(), queryFn: getOverlayBands, staleTime: 5 * 60_000 });
+
+export const useOverlayBands = () => useQuery(getOverlayBandsQueryOptions());
