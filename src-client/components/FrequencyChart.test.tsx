@@ -60,6 +60,8 @@ describe(buildChartOptions.name, () => {
     });
     expect(options.axes).toHaveLength(2);
     expect(options.axes?.[1].label).toBe('Exact, Snapped (dB)');
+    const titled = buildChartOptions({ ...base, series: [{ label: 'Exact', unit: 'dB', values: [1, 2, 3], axisLabel: 'Return loss (dB)' }] });
+    expect(titled.options.axes?.[1].label).toBe('Return loss (dB)');
     expect(options.series[1].dash).toBeUndefined();
     expect(options.series[2].dash).toEqual([6, 4]);
     expect(options.series[1].stroke).not.toEqual(options.series[2].stroke);

@@ -18,6 +18,8 @@ export interface FrequencySeries {
   range?: [number, number];
   /** Draws the axis with larger values downwards (return loss read as a dip). @default false */
   inverted?: boolean;
+  /** Axis title for this series' unit (the first series of a unit decides). @default the series labels and unit */
+  axisLabel?: string;
   /** Dashed stroke, for a second (e.g. snapped) solution. @default false */
   dashed?: boolean;
 }
@@ -91,7 +93,7 @@ export function buildChartOptions(input: ChartInput): ChartConfig {
     axes.push({
       scale: scaleKeyFor(unit),
       side: side === 'left' ? 3 : 1,
-      label: units.length > 1 || unit ? axisLabel(input.series, unit) : undefined,
+      label: first.axisLabel ?? (units.length > 1 || unit ? axisLabel(input.series, unit) : undefined),
       stroke: LABEL_COLOUR,
       grid: { show: index === 0, stroke: Colors.LIGHT_GRAY2 },
     });

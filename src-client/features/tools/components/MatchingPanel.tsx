@@ -37,7 +37,7 @@ function SolutionCard({ solution, index, request }: { solution: MatchingSolution
   const frequencyHz = useMemo(() => solution.exact.sweep.map((p) => p.frequencyHz), [solution]);
   const series = useMemo<FrequencySeries[]>(
     () => [
-      { label: 'Exact', unit: 'dB', values: solution.exact.sweep.map((p) => p.returnLossDb), range: RETURN_LOSS_AXIS },
+      { label: 'Exact', unit: 'dB', values: solution.exact.sweep.map((p) => p.returnLossDb), range: RETURN_LOSS_AXIS, axisLabel: 'Return loss (dB)' },
       { label: `Snapped (${request.series})`, unit: 'dB', values: solution.snapped.sweep.map((p) => p.returnLossDb), dashed: true },
     ],
     [solution, request.series],
