@@ -16,6 +16,7 @@ import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { StorageModule } from './storage/storage.module';
 import { UsersModule } from './users/users.module';
+import { RfToolsModule } from './rf-tools/rf-tools.module';
 import { BandsModule } from './bands/bands.module';
 import { RegulatoryModule } from './regulatory/regulatory.module';
 import { ProductsModule } from './products/products.module';
@@ -37,6 +38,7 @@ import { PartsModule } from './parts/parts.module';
     HealthModule,
     AuthModule,
     UsersModule,
+    RfToolsModule,
     BandsModule,
     RegulatoryModule,
     ProductsModule,
