@@ -101,6 +101,18 @@ describe(FrequencyStrip.name, () => {
     expect(screen.getAllByTestId('axis-break').length).toBeGreaterThanOrEqual(2);
   });
 
+  it('stacks overlapping bands of one row in separate lanes instead of drawing them over each other', () => {
+    // B5 UL 824–849 and B26 UL 814–849 overlap (3GPP TS 36.101 Table 5.5-1); B8 UL 880–915 does not.
+    const { container } = render(<FrequencyStrip rows={[{ id: 1, label: 'Cell', ranges: [
+      { role: 'uplink', fromMHz: 824, toMHz: 849, label: 'B5' },
+      { role: 'uplink', fromMHz: 814, toMHz: 849, label: 'B26' },
+      { role: 'uplink', fromMHz: 880, toMHz: 915, label: 'B8' },
+    ] }]} />);
+    const ys = [...container.querySelectorAll('[data-role] rect')].map((r) => Number(r.getAttribute('y')));
+    expect(ys[0]).not.toBe(ys[1]);
+    expect(Math.min(...ys)).toBe(ys[2]);
+  });
+
   it('draws the covered-ranges layer when given, with its own legend entry', () => {
     const { container } = render(<FrequencyStrip rows={rows} />);
     const covered = screen.getAllByTestId('covered-range');

@@ -98,6 +98,22 @@ function RolePatterns({ prefix }: { prefix: string }) {
   );
 }
 
+const LANE_H = 20;
+
+/** Puts each bar in the first lane where it clears the previous bar, so overlapping bands stack instead of hiding each other. */
+function packLanes(spans: { x0: number; x1: number }[]): { lanes: number[]; count: number } {
+  const ends: number[] = [];
+  const order = spans.map((s, i) => i).sort((a, b) => spans[a].x0 - spans[b].x0);
+  const lanes = new Array<number>(spans.length).fill(0);
+  for (const i of order) {
+    let lane = ends.findIndex((end) => spans[i].x0 >= end + 1);
+    if (lane === -1) { lane = ends.length; ends.push(0); }
+    ends[lane] = spans[i].x1;
+    lanes[i] = lane;
+  }
+  return { lanes, count: Math.max(ends.length, 1) };
+}
+
 const rangeTitle = (row: string, r: StripRange) => `${row}: ${r.label} ${ROLE_TEXT[r.role].toLowerCase()}, ${formatMHz(r.fromMHz)} – ${formatMHz(r.toMHz)}`;
 
 /**
@@ -117,7 +133,19 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
     }
     return piecewiseAxis(all, plotWidth);
   }, [all, scale, plotWidth]);
-  const height = rows.length * ROW_H + AXIS_H + 6;
+  const layout = useMemo(() => {
+    let y = 0;
+    return rows.map((row) => {
+      const spans = row.ranges.map((r) => ({ x0: axis.x(r.fromMHz), x1: Math.max(axis.x(r.toMHz), axis.x(r.fromMHz) + 2) }));
+      const { lanes, count } = packLanes(spans);
+      const height = Math.max(ROW_H, count * LANE_H + 14);
+      const entry = { y, height, spans, lanes };
+      y += height;
+      return entry;
+    });
+  }, [rows, axis]);
+  const plotHeight = layout.reduce((sum, l) => sum + l.height, 0);
+  const height = plotHeight + AXIS_H + 6;
   const presentRoles = ROLES.filter((role) => rows.some((r) => r.ranges.some((x) => x.role === role)));
   const hasCovered = rows.some((r) => (r.covered ?? []).length > 0);
 
@@ -129,40 +157,41 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
         <g transform={`translate(${LABEL_W}, 0)`}>
           {axis.ticks.map((t) => (
             <g key={t.mhz} transform={`translate(${t.x}, 0)`} className="bw-strip__tick">
-              <line y1={0} y2={rows.length * ROW_H} className="bw-strip__grid" />
-              <text y={rows.length * ROW_H + 16} textAnchor="middle" className="bw-strip__tick-label">{t.label}</text>
+              <line y1={0} y2={plotHeight} className="bw-strip__grid" />
+              <text y={plotHeight + 16} textAnchor="middle" className="bw-strip__tick-label">{t.label}</text>
             </g>
           ))}
           {axis.breaks.map((x) => (
             <g key={x} className="bw-strip__break" data-testid="axis-break">
-              <line x1={x - 3} x2={x + 3} y1={rows.length * ROW_H + 4} y2={rows.length * ROW_H - 4} />
-              <line x1={x + 1} x2={x + 7} y1={rows.length * ROW_H + 4} y2={rows.length * ROW_H - 4} />
+              <line x1={x - 3} x2={x + 3} y1={plotHeight + 4} y2={plotHeight - 4} />
+              <line x1={x + 1} x2={x + 7} y1={plotHeight + 4} y2={plotHeight - 4} />
             </g>
           ))}
         </g>
         {rows.map((row, i) => {
-          const y = i * ROW_H;
+          const { y, height: rowHeight, spans, lanes } = layout[i];
           return (
             <g key={row.id} transform={`translate(0, ${y})`} data-testid="strip-row">
               {i > 0 && <line x1={0} x2={width} y1={0} y2={0} className="bw-strip__row-rule" />}
-              <text x={4} y={ROW_H / 2 + 4} className="bw-strip__row-label">{row.label}</text>
+              <text x={4} y={rowHeight / 2 + 4} className="bw-strip__row-label">{row.label}</text>
               <g transform={`translate(${LABEL_W}, 0)`}>
                 {row.ranges.map((r, j) => {
-                  const x0 = axis.x(r.fromMHz);
-                  const w = Math.max(axis.x(r.toMHz) - x0, 2);
+                  const { x0, x1 } = spans[j];
+                  const w = x1 - x0;
+                  const top = 4 + lanes[j] * LANE_H;
                   const fits = w > r.label.length * 6.5 + 6;
                   return (
                     <g key={`${r.label}-${r.role}-${j}`} data-role={r.role}>
                       <title>{rangeTitle(row.label, r)}</title>
-                      <rect x={x0} y={(ROW_H - BAR_H) / 2 - 2} width={w} height={BAR_H} rx={2} fill={`url(#${prefix}-${r.role})`} className="bw-strip__bar" />
-                      {fits && <text x={x0 + w / 2} y={ROW_H / 2 + 2} textAnchor="middle" className="bw-strip__bar-label">{r.label}</text>}
+                      <rect x={x0} y={top} width={w} height={BAR_H - 2} rx={2} fill={`url(#${prefix}-${r.role})`} className="bw-strip__bar" />
+                      {fits && <text x={x0 + w / 2} y={top + BAR_H / 2 + 2} textAnchor="middle" className="bw-strip__bar-label">{r.label}</text>}
                     </g>
                   );
                 })}
                 {(row.covered ?? []).map((c, j) => {
                   const x0 = axis.x(c.fromMHz);
                   return (
-                    <rect key={`cover-${j}`} x={x0} y={ROW_H - COVER_H - 2} width={Math.max(axis.x(c.toMHz) - x0, 2)} height={COVER_H} className="bw-strip__covered" data-testid="covered-range">
+                    <rect key={`cover-${j}`} x={x0} y={rowHeight - COVER_H - 3} width={Math.max(axis.x(c.toMHz) - x0, 2)} height={COVER_H} className="bw-strip__covered" data-testid="covered-range">
                       <title>{`${c.label} covers ${formatMHz(c.fromMHz)} – ${formatMHz(c.toMHz)}`}</title>
                     </rect>
                   );

@@ -5,6 +5,42 @@ import { RequireAuth } from '../RequireAuth';
 /** Pages inside the app shell, each loaded on first visit (route-level code splitting). */
 export const protectedRoutes: RouteObject[] = [
   {
+    path: paths.products,
+    lazy: async () => {
+      const { ProductsPage } = await import('../../features/products/components/ProductsPage');
+      return { element: <ProductsPage /> };
+    },
+  },
+  {
+    path: paths.product(':id'),
+    lazy: async () => {
+      const { ProductPage } = await import('../../features/products/components/ProductPage');
+      // Other features add product sections through ProductPage's `extensions` prop, composed here.
+      return { element: <ProductPage /> };
+    },
+  },
+  {
+    path: paths.bands,
+    lazy: async () => {
+      const { BandLibraryPage } = await import('../../features/bands/components/BandLibraryPage');
+      return { element: <BandLibraryPage /> };
+    },
+  },
+  {
+    path: paths.bandSets,
+    lazy: async () => {
+      const { BandSetsPage } = await import('../../features/bands/components/BandSetsPage');
+      return { element: <BandSetsPage /> };
+    },
+  },
+  {
+    path: paths.regulatoryLimits,
+    lazy: async () => {
+      const { RegulatoryLimitsPage } = await import('../../features/bands/components/RegulatoryLimitsPage');
+      return { element: <RegulatoryLimitsPage /> };
+    },
+  },
+  {
     path: paths.users,
     lazy: async () => {
       const { UsersPage } = await import('../../features/users/components/UsersPage');

@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { HistoryEntry } from '../types';
+import { productKeys } from './product-keys';
+
+export const getProductHistory = (id: number) => apiRequest<{ items: HistoryEntry[]; total: number }>(`/products/${id}/history`);
+
+export const getProductHistoryQueryOptions = (id: number) => queryOptions({ queryKey: productKeys.history(id), queryFn: () => getProductHistory(id) });
+
+export const useProductHistory = (id: number) => useQuery(getProductHistoryQueryOptions(id));

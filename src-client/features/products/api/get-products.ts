@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { ProductSummary } from '../types';
+import { productKeys } from './product-keys';
+
+export const getProducts = () => apiRequest<ProductSummary[]>('/products');
+
+export const getProductsQueryOptions = () => queryOptions({ queryKey: productKeys.list(), queryFn: getProducts });
+
+export const useProducts = () => useQuery(getProductsQueryOptions());

@@ -1,0 +1,78 @@
+import { type ReactNode, useState } from 'react';
+import { useNavigate, useParams } from 'react-router-dom';
+import { Alert, Button, Intent, NonIdealState, Tag } from '@blueprintjs/core';
+import { PageHeader } from '../../../components/PageHeader';
+import { QueryState } from '../../../components/QueryState';
+import { ScreeningCaution } from '../../../components/ScreeningCaution';
+import { paths } from '../../../app/routes/paths';
+import { useHasRole } from '../../../lib/session';
+import { useProduct } from '../api/get-product';
+import { useDeleteProduct } from '../api/save-product';
+import type { ProductDetail } from '../types';
+import { ProductDialog } from './ProductDialog';
+import { ProductHistory } from './ProductHistory';
+import { ProductStrip } from './ProductStrip';
+import { RadiosSection } from './RadiosSection';
+
+export interface ProductPageProps {
+  /**
+   * Sections other features add below the radios (the compatibility matrix), composed in the
+   * route so that features never import each other. @default none
+   */
+  extensions?: (product: ProductDetail) => ReactNode;
+}
+
+/** One product: its facts, band plan, radios, what other features add, and its history. */
+export function ProductPage({ extensions }: ProductPageProps) {
+  const id = Number(useParams().id);
+  const product = useProduct(id);
+  const canEdit = useHasRole('engineer', 'admin');
+  const remove = useDeleteProduct();
+  const navigate = useNavigate();
+  const [editing, setEditing] = useState(false);
+  const [deleting, setDeleting] = useState(false);
+  if (!Number.isInteger(id) || id < 1) return <NonIdealState icon="search" title="No such product" />;
+  const p = product.data;
+
+  return (
+    <QueryState isPending={product.isPending} error={product.error}>
+      {p && (
+        <>
+          <PageHeader
+            title={p.name}
+            subtitle={
+              <span className="bw-facts" data-testid="product-facts">
+                <Tag minimal>{p.code}</Tag> Owner {p.owner} · ground plane {p.groundPlaneLengthMm} × {p.groundPlaneWidthMm} mm · markets {p.targetRegions.join(', ')} · version {p.version}
+              </span>
+            }
+            actions={canEdit && (
+              <>
+                <Button icon="edit" text="Edit product" onClick={() => setEditing(true)} />
+                <Button icon="trash" intent={Intent.DANGER} variant="outlined" text="Delete" onClick={() => setDeleting(true)} />
+              </>
+            )}
+          />
+          {p.notes && <p className="bw-muted bw-notes">{p.notes}</p>}
+          <ProductStrip product={p} />
+          <RadiosSection product={p} canEdit={canEdit} />
+          <ScreeningCaution compact />
+          {extensions?.(p)}
+          <ProductHistory productId={p.id} />
+          {editing && <ProductDialog product={p} onClose={() => setEditing(false)} />}
+          <Alert
+            isOpen={deleting}
+            intent={Intent.DANGER}
+            icon="trash"
+            confirmButtonText="Delete product"
+            cancelButtonText="Keep it"
+            loading={remove.isPending}
+            onCancel={() => setDeleting(false)}
+            onConfirm={() => remove.mutate({ id: p.id, version: p.version }, { onSuccess: () => navigate(paths.products), onSettled: () => setDeleting(false) })}
+          >
+            Delete <b>{p.name}</b> and its {p.radios.length} radios? The history stays in the audit log.
+          </Alert>
+        </>
+      )}
+    </QueryState>
+  );
+}

@@ -1,0 +1,99 @@
+export type Technology = 'lte' | 'nr' | 'gnss' | 'wifi' | 'ble' | 'ism' | 'uwb' | 'other';
+export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
+export type Polarization = 'linear' | 'RHCP' | 'LHCP' | 'any';
+export type Connector = 'solder-pad' | 'sma' | 'rp-sma' | 'mmcx' | 'mcx' | 'n' | 'micro-coax';
+
+/** The band as the products feature needs it (its own copy: features do not import each other). */
+export interface BandChoice {
+  id: number;
+  technology: Technology;
+  designation: string;
+  name: string;
+  ranges: { role: RangeRole; fromMHz: number; toMHz: number }[];
+  duplex: string;
+}
+
+export interface BandSetChoice {
+  id: number;
+  name: string;
+  description: string;
+  bandIds: number[];
+  bands: { id: number; technology: Technology; designation: string }[];
+}
+
+export interface ProductSummary {
+  id: number;
+  name: string;
+  code: string;
+  owner: string;
+  groundPlaneLengthMm: number;
+  groundPlaneWidthMm: number;
+  targetRegions: string[];
+  notes: string | null;
+  version: number;
+  radioCount: number;
+  technologies: Technology[];
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface Radio {
+  id: number;
+  productId: number;
+  name: string;
+  technology: Technology;
+  module: string;
+  receiveOnly: boolean;
+  transmitPowerDbm: number | null;
+  polarization: Polarization;
+  connector: Connector;
+  feedLossDb: number;
+  notes: string | null;
+  version: number;
+  bands: { band: BandChoice; certifiedMaxGainDbi: number | null }[];
+  updatedAt: string;
+}
+
+export interface ProductDetail extends ProductSummary {
+  radios: Radio[];
+}
+
+export interface ProductInput {
+  name: string;
+  code: string;
+  owner: string;
+  groundPlaneLengthMm: number | string;
+  groundPlaneWidthMm: number | string;
+  targetRegions: string[];
+  notes: string | null;
+}
+
+export interface RadioInput {
+  name: string;
+  technology: Technology;
+  module: string;
+  transmitPowerDbm: number | string | null;
+  polarization: Polarization;
+  connector: Connector;
+  feedLossDb: number | string;
+  notes: string | null;
+  bands: { bandId: number; certifiedMaxGainDbi: number | string | null }[];
+}
+
+export interface HistoryEntry {
+  id: string;
+  action: string;
+  user: { id: number; name: string; email: string } | null;
+  changes: Record<string, unknown>;
+  at: string;
+}
+
+export const TECHNOLOGY_LABELS: Record<Technology, string> = {
+  lte: 'LTE (LTE-M, NB-IoT, Cat-1)', nr: '5G NR', gnss: 'GNSS (receive only)', wifi: 'Wi-Fi', ble: 'Bluetooth LE', ism: 'Sub-GHz ISM / LoRa', uwb: 'UWB', other: 'Other',
+};
+export const RECEIVE_ONLY: Technology[] = ['gnss'];
+export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
+export const POLARIZATIONS: Polarization[] = ['linear', 'RHCP', 'LHCP', 'any'];
+export const CONNECTOR_LABELS: Record<Connector, string> = {
+  'solder-pad': 'Solder pad', sma: 'SMA', 'rp-sma': 'RP-SMA', mmcx: 'MMCX', mcx: 'MCX', n: 'N', 'micro-coax': 'Micro-coax',
+};
