@@ -4,6 +4,7 @@ import { seedDemoUsers } from '../users/demo-users.seed';
 import { seedBands, seedBandSets } from '../bands/band-library.seed';
 import { seedRegulatoryLimits } from '../regulatory/regulatory-limits.seed';
 import { seedDemoProducts } from '../products/demo-products.seed';
+import { seedDemoParts } from '../parts/demo-parts.seed';
 
 export type Seeder = (dataSource: DataSource, config: AppConfig) => Promise<string>;
 
@@ -14,4 +15,5 @@ export const SEEDERS: [string, Seeder][] = [
   ['band sets', seedBandSets],
   ['regulatory limits', seedRegulatoryLimits],
   ['demo products', seedDemoProducts],
+  ['demo parts', seedDemoParts],
 ];

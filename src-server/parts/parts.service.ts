@@ -88,7 +88,7 @@ export class PartsService {
   }
 
   /** Inside the caller's transaction: used by the API, the CSV import and the demo seeder. */
-  async createIn(manager: EntityManager, input: CreatePartDto, actorId: number | null, action = 'created'): Promise<number> {
+  async createIn(manager: EntityManager, input: CreatePartDto, actorId: number | null, action = 'created', fixedId?: number): Promise<number> {
     const problems = checkSpecBands(input.specBands);
     if (problems.length) throw new ValidationFailedError(problems);
     const manufacturerId = await this.manufacturerId(manager, input.manufacturer);
@@ -101,7 +101,7 @@ export class PartsService {
       lifecycle: input.lifecycle ?? 'active', notes: input.notes ?? null,
     };
     const inserted = await manager.insert(Part, {
-      ...fields, reviewState: 'draft', createdById: actorId, searchText: searchTextOf(input.manufacturer.trim(), fields), version: 1,
+      ...(fixedId ? { id: fixedId } : {}), ...fields, reviewState: 'draft', createdById: actorId, searchText: searchTextOf(input.manufacturer.trim(), fields), version: 1,
     });
     const id: number = inserted.identifiers[0].id;
     await this.replaceSpecBands(manager, id, input.specBands ?? []);
