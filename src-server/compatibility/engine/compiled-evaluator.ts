@@ -2,26 +2,11 @@ import { FACT_CATALOG, isFactName } from './fact-catalog';
 import type { RuleDefinition } from './rule-definition';
 import { type BoundRule, type EngineCondition, bindRule, bindingKey, completeFacts, findingOf, noDataFindingOf, verdictOf } from './rule-binding';
 import { factsNamedBy } from './rule-definition';
+import { type Margin, marginOf } from './margin';
 import type { CellVerdict, Facts, Finding } from './types';
+import { OPERATORS } from './operators';
 
 export type Predicate = (facts: Facts) => boolean;
-
-type OperatorCallback = (factValue: any, compareTo: any) => boolean;
-
-// The same callbacks and fact-value validators as json-rules-engine 7's default operators, so verdicts match.
-const numberValidator = (factValue: unknown) => Number.parseFloat(factValue as string).toString() !== 'NaN';
-const OPERATORS: Record<string, { cb: OperatorCallback; validator: (factValue: unknown) => boolean }> = {
-  equal: { cb: (a, b) => a === b, validator: () => true },
-  notEqual: { cb: (a, b) => a !== b, validator: () => true },
-  in: { cb: (a, b) => b.indexOf(a) > -1, validator: () => true },
-  notIn: { cb: (a, b) => b.indexOf(a) === -1, validator: () => true },
-  contains: { cb: (a, b) => a.indexOf(b) > -1, validator: Array.isArray },
-  doesNotContain: { cb: (a, b) => a.indexOf(b) === -1, validator: Array.isArray },
-  lessThan: { cb: (a, b) => a < b, validator: numberValidator },
-  lessThanInclusive: { cb: (a, b) => a <= b, validator: numberValidator },
-  greaterThan: { cb: (a, b) => a > b, validator: numberValidator },
-  greaterThanInclusive: { cb: (a, b) => a >= b, validator: numberValidator },
-};
 
 /** A condition tree as a plain JavaScript function; empty "all" and "any" are true, as in json-rules-engine. */
 export function compileCondition(node: EngineCondition): Predicate {
@@ -62,6 +47,11 @@ export function compileCondition(node: EngineCondition): Predicate {
     const a = facts[fact];
     return validator(a) && cb(a, value);
   };
+}
+
+export interface RuleMargin {
+  readonly bound: BoundRule;
+  readonly margin: Margin;
 }
 
 interface CompiledRule {
@@ -106,6 +96,18 @@ export class CompiledRow {
       else if (r.fires(facts)) findings.push(findingOf(r.bound, facts));
     }
     return verdictOf(findings);
+  }
+
+  /** Margins of the fail and marginal rules that apply and have their facts; info rules set no limit. */
+  margins(facts: Facts): RuleMargin[] {
+    const out: RuleMargin[] = [];
+    for (const r of this.rules) {
+      if (r.bound.rule.severity === 'info') continue;
+      if (r.applies && !r.applies(facts)) continue;
+      if (r.required.some((name) => facts[name] === null)) continue;
+      out.push({ bound: r.bound, margin: marginOf(r.bound.conditions, facts) });
+    }
+    return out;
   }
 }
 

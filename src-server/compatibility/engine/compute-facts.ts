@@ -1,5 +1,5 @@
-import { type FrequencyRange, type SampledCurve, bandOutsideData, bandStatistics, coverageOfBand, efficiencyInBand, gainInBand, interpolateAt } from '../../rf/curves';
-import { bandMatch } from '../../rf/reflection';
+import { type FrequencyRange, type SampledCurve, bandStatistics, coverageOfBand, efficiencyInBand, gainInBand, interpolateAt, segmentIndex } from '../../rf/curves';
+import { type ReflectionCurve, matchedRanges } from '../../rf/reflection';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, returnLossDbFromGammaMagnitude, vswrFromGammaMagnitude } from '../../rf/mismatch';
 import { eirpDbm, erpDbmFromEirpDbm, polarizationLossDb, realizedGainDbi, totalEfficiency } from '../../rf/link-budget';
 import { powerRatioToDb, wavelengthFractionMm } from '../../rf/units';
@@ -12,19 +12,27 @@ type Source = 'measured' | 'spec';
 interface RangeSampler {
   readonly source: Source;
   readonly at: (frequencyHz: number) => number;
-  readonly breakpointsHz: readonly number[];
+  readonly breakpointsHz: () => readonly number[];
+  /** The measured curve itself, so a single quantity goes straight to the RF module's band statistics. */
+  readonly curve: SampledCurve | null;
 }
 
 type Worse = (a: number, b: number) => number;
 
+/** Inside the measured range, with the RF module's edge slack (a band outside it is "no data"). */
+function measuredCovers(curve: SampledCurve, range: FrequencyRange): boolean {
+  return interpolateAt(curve, range.fromHz) !== undefined && interpolateAt(curve, range.toHz) !== undefined;
+}
+
 function measuredSampler(curve: SampledCurve | null, range: FrequencyRange): RangeSampler | null {
-  if (!curve || bandOutsideData(curve.frequenciesHz, range)) return null;
-  const breakpointsHz: number[] = [];
-  for (let i = 0; i < curve.frequenciesHz.length; i++) {
-    const f = curve.frequenciesHz[i];
-    if (f > range.fromHz && f < range.toHz) breakpointsHz.push(f);
-  }
-  return { source: 'measured', at: (f) => interpolateAt(curve, f)!, breakpointsHz };
+  if (!curve || !measuredCovers(curve, range)) return null;
+  const breakpointsHz = () => {
+    const f = curve.frequenciesHz;
+    const points: number[] = [];
+    for (let i = segmentIndex(f, range.fromHz); i < f.length && f[i] < range.toHz; i++) if (f[i] > range.fromHz) points.push(f[i]);
+    return points;
+  };
+  return { source: 'measured', at: (f) => interpolateAt(curve, f)!, breakpointsHz, curve };
 }
 
 function mergeRanges(ranges: FrequencyRange[]): FrequencyRange[] {
@@ -43,13 +51,13 @@ function specSampler(specBands: readonly SpecBand[], range: FrequencyRange, valu
   const usable = specBands.filter((b) => value(b) !== null);
   if (usable.length === 0) return null;
   if (coverageOfBand(mergeRanges(usable.map((b) => ({ fromHz: b.fromHz, toHz: b.toHz }))), range).uncoveredRanges.length > 0) return null;
-  const breakpointsHz = usable.flatMap((b) => [b.fromHz, b.toHz]).filter((f) => f > range.fromHz && f < range.toHz);
+  const breakpointsHz = () => usable.flatMap((b) => [b.fromHz, b.toHz]).filter((f) => f > range.fromHz && f < range.toHz);
   const at = (f: number): number => {
     let result = NaN;
     for (const b of usable) if (f >= b.fromHz && f <= b.toHz) result = Number.isNaN(result) ? value(b)! : worse(result, value(b)!);
     return result;
   };
-  return { source: 'spec', at, breakpointsHz };
+  return { source: 'spec', at, breakpointsHz, curve: null };
 }
 
 function specGamma(band: SpecBand): number | null {
@@ -74,10 +82,15 @@ function gainSampler(part: PartEvaluationData, range: FrequencyRange): RangeSamp
 /** The samplers' values, combined point by point, as a curve over the range (edges included). */
 function combinedCurve(range: FrequencyRange, samplers: readonly RangeSampler[], combine: (values: number[]) => number): SampledCurve {
   const points = new Set<number>([range.fromHz, range.toHz]);
-  for (const s of samplers) for (const f of s.breakpointsHz) points.add(f);
+  for (const s of samplers) for (const f of s.breakpointsHz()) points.add(f);
   const frequenciesHz = Float64Array.from([...points].sort((a, b) => a - b));
   const values = frequenciesHz.map((f) => combine(samplers.map((s) => s.at(f))));
   return { frequenciesHz, values };
+}
+
+/** One quantity alone: its measured curve as it is, or its spec figures as a step curve over the range. */
+function single(range: FrequencyRange, sampler: RangeSampler): SampledCurve {
+  return sampler.curve ?? combinedCurve(range, [sampler], ([v]) => v);
 }
 
 interface Extreme {
@@ -126,6 +139,23 @@ interface CoverageResult {
   uncovered: FrequencyRange[];
 }
 
+const matchedCache = new WeakMap<ReflectionCurve, Map<number, FrequencyRange[]>>();
+
+/** A part's impedance bandwidth at one VSWR, worked out once per curve however many bands ask. */
+function matchedRangesOf(curve: ReflectionCurve, maxVswr: number): FrequencyRange[] {
+  let byVswr = matchedCache.get(curve);
+  if (!byVswr) {
+    byVswr = new Map();
+    matchedCache.set(curve, byVswr);
+  }
+  let ranges = byVswr.get(maxVswr);
+  if (!ranges) {
+    ranges = matchedRanges(curve, { kind: 'vswr', maxVswr });
+    byVswr.set(maxVswr, ranges);
+  }
+  return ranges;
+}
+
 function coverageAt(part: PartEvaluationData, ranges: readonly FrequencyRange[], maxVswr: number): CoverageResult | null {
   let coveredWidth = 0;
   let totalWidth = 0;
@@ -135,8 +165,9 @@ function coverageAt(part: PartEvaluationData, ranges: readonly FrequencyRange[],
   for (const range of ranges) {
     let fraction: number;
     let gaps: readonly FrequencyRange[];
-    const measured = part.reflection ? bandMatch(part.reflection, range, { kind: 'vswr', maxVswr }) : null;
-    if (measured && measured.status === 'ok') {
+    const reflection = part.reflection;
+    if (reflection && measuredCovers({ frequenciesHz: reflection.frequenciesHz, values: reflection.gammaMagnitude }, range)) {
+      const measured = coverageOfBand(matchedRangesOf(reflection, maxVswr), range);
       fraction = measured.coveredFraction;
       gaps = measured.uncoveredRanges;
     } else if (specMatched.length > 0) {
@@ -170,7 +201,7 @@ export function describeRanges(ranges: readonly FrequencyRange[]): string {
 
 function transmitRanges(requirement: RadioBandRequirement): readonly BandRange[] {
   if (requirement.txPowerDbm === null) return [];
-  const tx = requirement.ranges.filter((r) => r.role === 'uplink' || r.role === 'tdd');
+  const tx = requirement.ranges.filter((r) => r.role === 'uplink' || r.role === 'tdd' || r.role === 'transmit-receive');
   // A transmitting radio whose band names no transmit range: every range counts.
   return tx.length > 0 ? tx : requirement.ranges;
 }
@@ -185,6 +216,65 @@ function overlap(a: FrequencyRange, b: FrequencyRange): FrequencyRange | null {
 function sortedSides(lengthMm: number, widthMm: number): [number, number] {
   return lengthMm >= widthMm ? [lengthMm, widthMm] : [widthMm, lengthMm];
 }
+
+/** Every fact, unknown until set; one literal shape keeps property access fast over a whole catalogue. */
+export function blankFacts(): Record<FactName, FactValue> {
+  return {
+    technology: null,
+    designation: null,
+    bandLowestMHz: null,
+    bandHighestMHz: null,
+    radioTransmits: null,
+    txPowerDbm: null,
+    feedLossDb: null,
+    certifiedMaxGainDbi: null,
+    requiredPolarization: null,
+    productGroundPlaneLengthMm: null,
+    productGroundPlaneWidthMm: null,
+    quarterWaveMm: null,
+    regionalLimitCount: null,
+    reviewState: null,
+    lifecycle: null,
+    partPolarization: null,
+    dataSource: null,
+    dataCompletenessPct: null,
+    missingData: null,
+    coverageAtVswr2Pct: null,
+    uncoveredAtVswr2: null,
+    coverageAtVswr3Pct: null,
+    uncoveredAtVswr3: null,
+    worstVswr: null,
+    worstVswrAtMHz: null,
+    worstReturnLossDb: null,
+    minRadiationEfficiencyPct: null,
+    minRadiationEfficiencyAtMHz: null,
+    avgRadiationEfficiencyPct: null,
+    minTotalEfficiencyPct: null,
+    minTotalEfficiencyAtMHz: null,
+    avgTotalEfficiencyPct: null,
+    avgTotalEfficiencyDb: null,
+    peakGainDbi: null,
+    peakGainAtMHz: null,
+    realizedPeakGainDbi: null,
+    txPeakGainDbi: null,
+    gainOverCertifiedDb: null,
+    eirpDbm: null,
+    erpDbm: null,
+    regionalLimitDbm: null,
+    regionalLimitKind: null,
+    regionalLimitRegion: null,
+    regionalLimitSource: null,
+    regionalRadiatedDbm: null,
+    regionalLimitMarginDb: null,
+    evalGroundPlaneLengthMm: null,
+    evalGroundPlaneWidthMm: null,
+    groundPlaneVsEvalPct: null,
+    groundPlaneVsQuarterWavePct: null,
+    polarizationLossDb: null,
+  };
+}
+
+const ROW_FACT_NAMES: readonly FactName[] = ['technology', 'designation', 'bandLowestMHz', 'bandHighestMHz', 'radioTransmits', 'txPowerDbm', 'feedLossDb', 'certifiedMaxGainDbi', 'requiredPolarization', 'productGroundPlaneLengthMm', 'productGroundPlaneWidthMm', 'quarterWaveMm', 'regionalLimitCount', 'groundPlaneVsQuarterWavePct'];
 
 /** Row facts depend on the radio band only, so a matrix computes them once per row. */
 export function computeRowFacts(requirement: RadioBandRequirement): Record<string, FactValue> {
@@ -234,14 +324,14 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   note(efficiencies, 'efficiency');
   note(gains, 'gain');
 
-  const gammaStats = acrossRanges(ranges.map((r, i) => (gammas[i] ? linearStats(combinedCurve(r, [gammas[i]!], ([g]) => g), r) : null)));
-  const radiation = acrossRanges(ranges.map((r, i) => (efficiencies[i] ? efficiencyStats(combinedCurve(r, [efficiencies[i]!], ([e]) => e), r) : null)));
+  const gammaStats = acrossRanges(ranges.map((r, i) => (gammas[i] ? linearStats(single(r, gammas[i]!), r) : null)));
+  const radiation = acrossRanges(ranges.map((r, i) => (efficiencies[i] ? efficiencyStats(single(r, efficiencies[i]!), r) : null)));
   const total = acrossRanges(
     ranges.map((r, i) =>
       efficiencies[i] && gammas[i] ? efficiencyStats(combinedCurve(r, [efficiencies[i]!, gammas[i]!], ([e, g]) => totalEfficiency(e / 100, g) * 100), r) : null,
     ),
   );
-  const gain = acrossRanges(ranges.map((r, i) => (gains[i] ? gainStats(combinedCurve(r, [gains[i]!], ([g]) => g), r) : null)));
+  const gain = acrossRanges(ranges.map((r, i) => (gains[i] ? gainStats(single(r, gains[i]!), r) : null)));
   const realized = acrossRanges(
     ranges.map((r, i) => (gains[i] && gammas[i] ? linearStats(combinedCurve(r, [gains[i]!, gammas[i]!], ([g, m]) => realizedGainDbi(g, m)), r) : null)),
   );
@@ -251,7 +341,7 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   const tx = transmitRanges(requirement);
   const txGain = tx.length > 0 ? acrossRanges(tx.map((r) => {
     const s = gainSampler(part, r);
-    return s ? gainStats(combinedCurve(r, [s], ([g]) => g), r) : null;
+    return s ? gainStats(single(r, s), r) : null;
   })) : null;
   const txPeakGainDbi = txGain ? txGain.max.value : null;
   const eirp = requirement.txPowerDbm !== null && txPeakGainDbi !== null ? eirpDbm(requirement.txPowerDbm, txPeakGainDbi, requirement.feedLossDb) : null;
@@ -263,49 +353,59 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   const polarizationLoss = requirement.requiredPolarization !== null && part.polarization !== null ? polarizationLossDb(part.polarization, requirement.requiredPolarization) : null;
   const knownKinds = 3 - missing.length;
 
-  const facts: Partial<Record<FactName, FactValue>> = {
-    ...rowFacts,
-    reviewState: part.reviewState,
-    lifecycle: part.lifecycle,
-    partPolarization: part.polarization,
-    dataSource: sources.size === 0 ? 'none' : sources.size === 2 ? 'mixed' : [...sources][0],
-    dataCompletenessPct: (knownKinds / 3) * 100,
-    missingData: missing.length === 0 ? 'none' : missing.join(', '),
-    coverageAtVswr2Pct: at2 ? at2.fraction * 100 : null,
-    uncoveredAtVswr2: at2 ? describeRanges(at2.uncovered) : null,
-    coverageAtVswr3Pct: at3 ? at3.fraction * 100 : null,
-    uncoveredAtVswr3: at3 ? describeRanges(at3.uncovered) : null,
-    worstVswr: gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null,
-    worstVswrAtMHz: gammaStats ? mhz(gammaStats.max.atHz) : null,
-    worstReturnLossDb: gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null,
-    minRadiationEfficiencyPct: radiation ? radiation.min.value : null,
-    minRadiationEfficiencyAtMHz: radiation ? mhz(radiation.min.atHz) : null,
-    avgRadiationEfficiencyPct: radiation ? radiation.average : null,
-    minTotalEfficiencyPct: total ? total.min.value : null,
-    minTotalEfficiencyAtMHz: total ? mhz(total.min.atHz) : null,
-    avgTotalEfficiencyPct: total ? total.average : null,
-    avgTotalEfficiencyDb: total ? powerRatioToDb(total.average / 100) : null,
-    peakGainDbi: gain ? gain.max.value : null,
-    peakGainAtMHz: gain ? mhz(gain.max.atHz) : null,
-    realizedPeakGainDbi: realized ? realized.max.value : null,
-    txPeakGainDbi,
-    gainOverCertifiedDb: txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null,
-    eirpDbm: eirp,
-    erpDbm: eirp === null ? null : erpDbmFromEirpDbm(eirp),
-    ...regional,
-    evalGroundPlaneLengthMm: evalBoard ? evalBoard[0] : null,
-    evalGroundPlaneWidthMm: evalBoard ? evalBoard[1] : null,
-    groundPlaneVsEvalPct: evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null,
-    polarizationLossDb: polarizationLoss,
-  };
+  const facts = blankFacts();
+  for (const name of ROW_FACT_NAMES) facts[name] = rowFacts[name] ?? null;
+  facts.reviewState = part.reviewState;
+  facts.lifecycle = part.lifecycle;
+  facts.partPolarization = part.polarization;
+  facts.dataSource = sources.size === 0 ? 'none' : sources.size === 2 ? 'mixed' : [...sources][0];
+  facts.dataCompletenessPct = (knownKinds / 3) * 100;
+  facts.missingData = missing.length === 0 ? 'none' : missing.join(', ');
+  facts.coverageAtVswr2Pct = at2 ? at2.fraction * 100 : null;
+  facts.uncoveredAtVswr2 = at2 ? describeRanges(at2.uncovered) : null;
+  facts.coverageAtVswr3Pct = at3 ? at3.fraction * 100 : null;
+  facts.uncoveredAtVswr3 = at3 ? describeRanges(at3.uncovered) : null;
+  facts.worstVswr = gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null;
+  facts.worstVswrAtMHz = gammaStats ? mhz(gammaStats.max.atHz) : null;
+  facts.worstReturnLossDb = gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null;
+  facts.minRadiationEfficiencyPct = radiation ? radiation.min.value : null;
+  facts.minRadiationEfficiencyAtMHz = radiation ? mhz(radiation.min.atHz) : null;
+  facts.avgRadiationEfficiencyPct = radiation ? radiation.average : null;
+  facts.minTotalEfficiencyPct = total ? total.min.value : null;
+  facts.minTotalEfficiencyAtMHz = total ? mhz(total.min.atHz) : null;
+  facts.avgTotalEfficiencyPct = total ? total.average : null;
+  facts.avgTotalEfficiencyDb = total ? powerRatioToDb(total.average / 100) : null;
+  facts.peakGainDbi = gain ? gain.max.value : null;
+  facts.peakGainAtMHz = gain ? mhz(gain.max.atHz) : null;
+  facts.realizedPeakGainDbi = realized ? realized.max.value : null;
+  facts.txPeakGainDbi = txPeakGainDbi;
+  facts.gainOverCertifiedDb = txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null;
+  facts.eirpDbm = eirp;
+  facts.erpDbm = eirp === null ? null : erpDbmFromEirpDbm(eirp);
+  Object.assign(facts, regional);
+  facts.evalGroundPlaneLengthMm = evalBoard ? evalBoard[0] : null;
+  facts.evalGroundPlaneWidthMm = evalBoard ? evalBoard[1] : null;
+  facts.groundPlaneVsEvalPct = evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null;
+  facts.polarizationLossDb = polarizationLoss;
   return roundFacts(facts);
 }
 
 /** 12 significant digits: a value that sits on a threshold (VSWR 2 from |Γ| = 1/3) stays on it instead of 1e-16 over. */
-function roundFacts(facts: Partial<Record<FactName, FactValue>>): Facts {
-  const out: Record<string, FactValue> = {};
-  for (const [name, value] of Object.entries(facts)) out[name] = typeof value === 'number' && Number.isFinite(value) ? Number(value.toPrecision(12)) : (value as FactValue);
-  return out;
+export function roundTo12(value: number): number {
+  if (value === 0 || !Number.isFinite(value)) return value;
+  const exponent = 11 - Math.floor(Math.log10(Math.abs(value)));
+  // Split the scale so 10^exponent stays finite for tiny and huge values alike.
+  if (exponent > 300 || exponent < -300) return value;
+  const scale = 10 ** exponent;
+  return Math.round(value * scale) / scale;
+}
+
+function roundFacts<T extends Partial<Record<FactName, FactValue>>>(facts: T): T {
+  for (const name in facts) {
+    const value = facts[name];
+    if (typeof value === 'number') (facts as Record<string, FactValue>)[name] = roundTo12(value);
+  }
+  return facts;
 }
 
 /** The tightest regional limit over the transmit ranges; margin null when the gain there is unknown. */
@@ -325,7 +425,7 @@ function regionalLimitFacts(requirement: RadioBandRequirement, part: PartEvaluat
         unknown ??= { ...base, regionalRadiatedDbm: null, regionalLimitMarginDb: null };
         continue;
       }
-      const peak = gainStats(combinedCurve(shared, [sampler], ([g]) => g), shared).max.value;
+      const peak = gainStats(single(shared, sampler), shared).max.value;
       const eirp = eirpDbm(requirement.txPowerDbm, peak, requirement.feedLossDb);
       const radiated = limit.kind === 'erp' ? erpDbmFromEirpDbm(eirp) : eirp;
       const margin = limit.valueDbm - radiated;

@@ -1,5 +1,5 @@
 import { FACT_CATALOG, FACT_NAMES, isFactName } from './fact-catalog';
-import { type ConditionNode, type ConditionValue, type ParameterValue, type RuleDefinition, factsNamedBy, messagePlaceholders } from './rule-definition';
+import { type ConditionNode, type ConditionValue, type ParameterValue, type RuleDefinition, factsNamedBy } from './rule-definition';
 import type { CellStatus, CellVerdict, FactValue, Facts, Finding } from './types';
 
 /** A condition as json-rules-engine takes it: parameters replaced by their values. */
@@ -20,6 +20,22 @@ export interface BoundRule {
   readonly conditions: EngineCondition;
   /** Facts the conditions name: if one is null the pair has no data for this rule. */
   readonly requiredFacts: readonly string[];
+  /** The message split once into text and placeholders, so a finding costs a few concatenations. */
+  readonly template: readonly TemplatePiece[];
+}
+
+type TemplatePiece = string | { readonly name: string; readonly upper: boolean; readonly fromParameters: boolean };
+
+function parseTemplate(template: string, values: Readonly<Record<string, ParameterValue>>): TemplatePiece[] {
+  const pieces: TemplatePiece[] = [];
+  let last = 0;
+  for (const m of template.matchAll(/\{([A-Za-z][A-Za-z0-9]*)(?:\|([a-z]+))?\}/g)) {
+    if (m.index > last) pieces.push(template.slice(last, m.index));
+    pieces.push({ name: m[1], upper: m[2] === 'upper', fromParameters: Object.prototype.hasOwnProperty.call(values, m[1]) });
+    last = m.index + m[0].length;
+  }
+  if (last < template.length) pieces.push(template.slice(last));
+  return pieces;
 }
 
 /** Which row facts pick table entries; two rows with the same values share one binding. */
@@ -66,7 +82,8 @@ export function bindRule(rule: RuleDefinition, index: number, rowFacts: Facts): 
   const used: Record<string, ParameterValue> = {};
   const appliesWhen = rule.appliesWhen ? bindNode(rule, rule.appliesWhen, rowFacts, used) : null;
   const conditions = bindNode(rule, rule.conditions, rowFacts, used);
-  return { rule, index, values: { ...values, ...used }, appliesWhen, conditions, requiredFacts: factsNamedBy(rule.conditions) };
+  const bound = { ...values, ...used };
+  return { rule, index, values: bound, appliesWhen, conditions, requiredFacts: factsNamedBy(rule.conditions), template: parseTemplate(rule.event.params.message, bound) };
 }
 
 /** Every catalogue fact present, unknown ones as null, so json-rules-engine never meets an undefined fact. */
@@ -88,18 +105,20 @@ export function formatValue(value: unknown): string {
 }
 
 /** Fills {name} and {name|upper} from the bound parameters first, then from the facts. */
-export function renderMessage(template: string, bound: BoundRule, facts: Facts): string {
-  let out = template;
-  for (const { name, filter } of messagePlaceholders(template)) {
-    const raw = Object.prototype.hasOwnProperty.call(bound.values, name) ? bound.values[name] : facts[name];
-    const text = formatValue(raw);
-    out = out.replace(filter ? `{${name}|${filter}}` : `{${name}}`, filter === 'upper' ? text.toUpperCase() : text);
+export function renderMessage(bound: BoundRule, facts: Facts): string {
+  let out = '';
+  for (const piece of bound.template) {
+    if (typeof piece === 'string') out += piece;
+    else {
+      const text = formatValue(piece.fromParameters ? bound.values[piece.name] : facts[piece.name]);
+      out += piece.upper ? text.toUpperCase() : text;
+    }
   }
   return out;
 }
 
 export function findingOf(bound: BoundRule, facts: Facts): Finding {
-  return { ruleId: bound.rule.id, severity: bound.rule.severity, code: bound.rule.event.params.code, message: renderMessage(bound.rule.event.params.message, bound, facts) };
+  return { ruleId: bound.rule.id, severity: bound.rule.severity, code: bound.rule.event.params.code, message: renderMessage(bound, facts) };
 }
 
 export function noDataFindingOf(bound: BoundRule, facts: Facts): Finding {

@@ -118,7 +118,7 @@ describe('efficiency-floor', () => {
   });
 
   it('reads the floor from the per-technology table: 30 % for GNSS', async () => {
-    const gnss = lte({ technology: 'gnss', designation: 'GPS L1', ranges: [rangeMhz(1574.397, 1576.443, 'receive-only')], txPowerDbm: null });
+    const gnss = lte({ technology: 'gnss', designation: 'GPS L1', ranges: [rangeMhz(1574.397, 1576.443, 'receive')], txPowerDbm: null });
     expect((await check('efficiency-floor', gnss, part(30))).finding).toBeUndefined();
     expect((await check('efficiency-floor', gnss, part(29.9))).finding?.message).toContain('the floor for gnss is 30 %');
   });
@@ -250,7 +250,7 @@ describe('ground-plane-quarter-wave', () => {
   });
 
   it('uses λ/4 = 48.1 mm for GNSS upper L-band from 1559 MHz (rf-reference §5)', async () => {
-    const gnss = lte({ technology: 'gnss', ranges: [rangeMhz(1559, 1610, 'receive-only')], txPowerDbm: null, productGroundPlane: { lengthMm: 48, widthMm: 30 } });
+    const gnss = lte({ technology: 'gnss', ranges: [rangeMhz(1559, 1610, 'receive')], txPowerDbm: null, productGroundPlane: { lengthMm: 48, widthMm: 30 } });
     const { facts, finding } = await check('ground-plane-quarter-wave', gnss, constructedPart());
     expect(facts.quarterWaveMm as number).toBeCloseTo(48.1, 1);
     expect(finding?.severity).toBe('marginal');
@@ -259,7 +259,7 @@ describe('ground-plane-quarter-wave', () => {
 
 describe('gnss-polarization and polarization-opposite-sense', () => {
   // Balanis, Antenna Theory 4th ed. §2.12: linear antenna for a circular signal loses 3.01 dB; opposite senses reject.
-  const gnss = lte({ technology: 'gnss', designation: 'GPS L1', ranges: [rangeMhz(1574.397, 1576.443, 'receive-only')], txPowerDbm: null, requiredPolarization: 'rhcp' });
+  const gnss = lte({ technology: 'gnss', designation: 'GPS L1', ranges: [rangeMhz(1574.397, 1576.443, 'receive')], txPowerDbm: null, requiredPolarization: 'rhcp' });
   const withPolarization = (polarization: PartEvaluationData['polarization']) => constructedPart({}, { polarization });
 
   it('marks a linear part on an RHCP signal marginal with about 3 dB', async () => {

@@ -13,7 +13,8 @@ export type ReviewState = (typeof REVIEW_STATES)[number];
 export const LIFECYCLES = ['active', 'nrnd', 'eol'] as const;
 export type Lifecycle = (typeof LIFECYCLES)[number];
 
-export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive-only';
+/** As the band library names them (bands/band-domain.ts). */
+export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
 
 export interface BandRange {
   readonly fromHz: number;

@@ -1,0 +1,200 @@
+import { FACT_CATALOG, isFactName } from './fact-catalog';
+import { CompiledRuleSet } from './compiled-evaluator';
+import { computeFacts, computeRowFacts } from './compute-facts';
+import { formatValue, statusRank, worseStatus } from './rule-binding';
+import type { CellStatus, CellVerdict, Facts, Finding, PartEvaluationData, RadioBandRequirement } from './types';
+
+export interface MatrixRow {
+  readonly radioId: number;
+  readonly radioName: string;
+  readonly technology: string;
+  readonly bandId: number;
+  readonly designation: string;
+  readonly ranges: readonly { readonly fromMhz: number; readonly toMhz: number; readonly role: string }[];
+}
+
+export interface MatrixColumn {
+  readonly partId: number;
+  readonly mpn: string;
+  readonly title: string;
+}
+
+export interface MatrixCell {
+  /** Index into rows. */
+  readonly row: number;
+  /** Index into columns. */
+  readonly column: number;
+  readonly status: CellStatus;
+  readonly findings: readonly Finding[];
+}
+
+export interface Matrix {
+  readonly rows: readonly MatrixRow[];
+  readonly columns: readonly MatrixColumn[];
+  readonly cells: readonly MatrixCell[];
+}
+
+/**
+ * Facts of (row × part) pairs, kept while neither changes: the part's `cacheKey` moves with its data,
+ * the row key with the requirement. Oldest entries leave first once `capacity` is reached.
+ */
+export class FactsCache {
+  /** Row key → part key → facts: the long row key is hashed once per row, not once per pair. */
+  private readonly rows = new Map<string, Map<string, Facts>>();
+  private count = 0;
+
+  constructor(private readonly capacity = 400_000) {}
+
+  get size(): number {
+    return this.count;
+  }
+
+  forRow(rowKey: string): Map<string, Facts> {
+    let row = this.rows.get(rowKey);
+    if (!row) {
+      row = new Map();
+      this.rows.set(rowKey, row);
+    }
+    return row;
+  }
+
+  getOrCompute(row: Map<string, Facts>, partKey: string, compute: () => Facts): Facts {
+    const hit = row.get(partKey);
+    if (hit) return hit;
+    const facts = compute();
+    if (this.count >= this.capacity) this.clear();
+    row.set(partKey, facts);
+    this.count += 1;
+    return facts;
+  }
+
+  clear(): void {
+    for (const row of this.rows.values()) row.clear();
+    this.count = 0;
+  }
+}
+
+export function requirementKey(requirement: RadioBandRequirement): string {
+  return JSON.stringify(requirement);
+}
+
+interface PreparedRow {
+  readonly requirement: RadioBandRequirement;
+  readonly rowFacts: Facts;
+  readonly cached: Map<string, Facts> | null;
+}
+
+function prepare(requirements: readonly RadioBandRequirement[], cache: FactsCache | undefined): PreparedRow[] {
+  return requirements.map((requirement) => ({ requirement, rowFacts: computeRowFacts(requirement), cached: cache ? cache.forRow(requirementKey(requirement)) : null }));
+}
+
+function pairFacts(row: PreparedRow, part: PartEvaluationData, cache: FactsCache | undefined, partKey: (part: PartEvaluationData) => string | null): Facts {
+  const compute = () => computeFacts(row.requirement, part, row.rowFacts as Record<string, never>);
+  const key = cache ? partKey(part) : null;
+  return key === null ? compute() : cache!.getOrCompute(row.cached!, key, compute);
+}
+
+export interface EvaluationOptions {
+  readonly cache?: FactsCache;
+  /** A key that changes whenever the part's data changes (e.g. id and catalogue revision); null disables caching for the part. */
+  readonly partKey?: (part: PartEvaluationData) => string | null;
+}
+
+const defaultPartKey = () => null;
+
+export function matrixRow(requirement: RadioBandRequirement): MatrixRow {
+  return {
+    radioId: requirement.radioId,
+    radioName: requirement.radioName,
+    technology: requirement.technology,
+    bandId: requirement.bandId,
+    designation: requirement.designation,
+    ranges: requirement.ranges.map((r) => ({ fromMhz: r.fromHz / 1e6, toMhz: r.toHz / 1e6, role: r.role })),
+  };
+}
+
+/** Every radio band against every part, through the compiled rules. */
+export function evaluateMatrix(requirements: readonly RadioBandRequirement[], parts: readonly PartEvaluationData[], rules: CompiledRuleSet, options: EvaluationOptions = {}): Matrix {
+  const rows = prepare(requirements, options.cache);
+  const cells: MatrixCell[] = [];
+  rows.forEach((row, r) => {
+    const compiled = rules.forRow(row.rowFacts);
+    parts.forEach((part, c) => {
+      const verdict: CellVerdict = compiled.evaluate(pairFacts(row, part, options.cache, options.partKey ?? defaultPartKey));
+      cells.push({ row: r, column: c, status: verdict.status, findings: verdict.findings });
+    });
+  });
+  return { rows: requirements.map(matrixRow), columns: parts.map((p) => ({ partId: p.partId, mpn: p.mpn, title: p.title })), cells };
+}
+
+export interface DecidingFigure {
+  readonly ruleId: string;
+  readonly ruleTitle: string;
+  readonly designation: string;
+  readonly fact: string;
+  readonly value: number;
+  readonly threshold: number;
+  /** dB inside the limit (negative: over it). */
+  readonly marginDb: number;
+  readonly text: string;
+}
+
+export interface Candidate {
+  readonly partId: number;
+  readonly mpn: string;
+  readonly title: string;
+  /** The worst cell over the radio's bands. */
+  readonly status: CellStatus;
+  /** The smallest margin over every limit and band, in dB; null when no numeric limit applies. */
+  readonly marginDb: number | null;
+  readonly deciding: DecidingFigure | null;
+  readonly bands: readonly { readonly bandId: number; readonly designation: string; readonly status: CellStatus; readonly findings: readonly Finding[] }[];
+}
+
+function describeDeciding(ruleTitle: string, designation: string, fact: string, value: number, threshold: number, marginDb: number): string {
+  const label = isFactName(fact) ? FACT_CATALOG[fact].description : fact;
+  const side = marginDb >= 0 ? `${formatValue(marginDb)} dB inside` : `${formatValue(-marginDb)} dB beyond`;
+  return `${ruleTitle} on ${designation}: ${label} ${formatValue(value)} against ${formatValue(threshold)} (${side})`;
+}
+
+/** Larger margins first; a part with no numeric limit after every part that has one. */
+function byMarginDescending(a: number | null, b: number | null): number {
+  const x = a ?? -Infinity;
+  const y = b ?? -Infinity;
+  return x === y ? 0 : y > x ? 1 : -1;
+}
+
+/**
+ * The parts for one radio (all its bands), best first: by worst status over the bands, then by the
+ * margin of the limit they are nearest to, the deciding figure. Ties keep the catalogue order.
+ */
+export function rankCandidates(requirements: readonly RadioBandRequirement[], parts: readonly PartEvaluationData[], rules: CompiledRuleSet, options: EvaluationOptions = {}): Candidate[] {
+  const rows = prepare(requirements, options.cache);
+  const compiledRows = rows.map((row) => rules.forRow(row.rowFacts));
+  const candidates: Candidate[] = parts.map((part) => {
+    let status: CellStatus = 'pass';
+    let deciding: DecidingFigure | null = null;
+    const bands = rows.map((row, i) => {
+      const facts = pairFacts(row, part, options.cache, options.partKey ?? defaultPartKey);
+      const verdict = compiledRows[i].evaluate(facts);
+      status = worseStatus(status, verdict.status);
+      for (const { bound, margin } of compiledRows[i].margins(facts)) {
+        if (margin.fact === null || margin.value === null || margin.threshold === null || !Number.isFinite(margin.distanceDb)) continue;
+        if (deciding === null || margin.distanceDb < deciding.marginDb) {
+          const designation = row.requirement.designation;
+          deciding = {
+            ruleId: bound.rule.id, ruleTitle: bound.rule.title, designation, fact: margin.fact, value: margin.value, threshold: margin.threshold, marginDb: margin.distanceDb,
+            text: describeDeciding(bound.rule.title, designation, margin.fact, margin.value, margin.threshold, margin.distanceDb),
+          };
+        }
+      }
+      return { bandId: row.requirement.bandId, designation: row.requirement.designation, status: verdict.status, findings: verdict.findings };
+    });
+    const found = deciding as DecidingFigure | null;
+    return { partId: part.partId, mpn: part.mpn, title: part.title, status, marginDb: found ? found.marginDb : null, deciding: found, bands };
+  });
+  return candidates
+    .map((c, order) => ({ c, order }))
+    .sort((a, b) => statusRank(a.c.status) - statusRank(b.c.status) || byMarginDescending(a.c.marginDb, b.c.marginDb) || a.order - b.order)
+    .map(({ c }) => c);
+}

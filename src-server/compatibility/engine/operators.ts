@@ -1,0 +1,29 @@
+import type { Facts } from './types';
+
+type OperatorCallback = (factValue: any, compareTo: any) => boolean;
+
+// The same callbacks and fact-value validators as json-rules-engine 7's default operators, so verdicts match.
+const numberValidator = (factValue: unknown) => Number.parseFloat(factValue as string).toString() !== 'NaN';
+export const OPERATORS: Record<string, { cb: OperatorCallback; validator: (factValue: unknown) => boolean }> = {
+  equal: { cb: (a, b) => a === b, validator: () => true },
+  notEqual: { cb: (a, b) => a !== b, validator: () => true },
+  in: { cb: (a, b) => b.indexOf(a) > -1, validator: () => true },
+  notIn: { cb: (a, b) => b.indexOf(a) === -1, validator: () => true },
+  contains: { cb: (a, b) => a.indexOf(b) > -1, validator: Array.isArray },
+  doesNotContain: { cb: (a, b) => a.indexOf(b) === -1, validator: Array.isArray },
+  lessThan: { cb: (a, b) => a < b, validator: numberValidator },
+  lessThanInclusive: { cb: (a, b) => a <= b, validator: numberValidator },
+  greaterThan: { cb: (a, b) => a > b, validator: numberValidator },
+  greaterThanInclusive: { cb: (a, b) => a >= b, validator: numberValidator },
+};
+
+/** One comparison, evaluated on the spot (no closure): for margins, which look at few leaves once. */
+export function leafHolds(node: { readonly fact: string; readonly operator: string; readonly value: unknown }, facts: Facts): boolean {
+  const op = OPERATORS[node.operator];
+  if (!op) throw new Error(`unknown operator "${node.operator}"`);
+  const value = node.value;
+  const compareTo = typeof value === 'object' && value !== null && !Array.isArray(value) && 'fact' in value ? facts[(value as { fact: string }).fact] : value;
+  const a = facts[node.fact];
+  return op.validator(a) && op.cb(a, compareTo);
+}
+
