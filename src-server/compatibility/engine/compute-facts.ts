@@ -427,11 +427,19 @@ function regionalLimitFacts(requirement: RadioBandRequirement, part: PartEvaluat
       }
       const peak = gainStats(single(shared, sampler), shared).max.value;
       const eirp = eirpDbm(requirement.txPowerDbm, peak, requirement.feedLossDb);
-      const radiated = limit.kind === 'erp' ? erpDbmFromEirpDbm(eirp) : eirp;
-      const margin = limit.valueDbm - radiated;
+      let radiated: number;
+      let allowed = limit.valueDbm;
+      if (limit.kind === 'conducted-gain-rule') {
+        // e.g. 47 CFR 15.247(b)(4): conducted power reduced by (G − 6 dBi) × 1 dB/dB above 6 dBi; compared at the radio's port.
+        radiated = requirement.txPowerDbm;
+        allowed = limit.valueDbm - Math.max(0, peak - (limit.gainThresholdDbi ?? Infinity)) * (limit.reductionDbPerDb ?? 1);
+      } else {
+        radiated = limit.kind === 'erp' ? erpDbmFromEirpDbm(eirp) : eirp;
+      }
+      const margin = allowed - radiated;
       if (margin < tightestMargin) {
         tightestMargin = margin;
-        tightest = { ...base, regionalRadiatedDbm: radiated, regionalLimitMarginDb: margin };
+        tightest = { ...base, regionalLimitDbm: allowed, regionalRadiatedDbm: radiated, regionalLimitMarginDb: margin };
       }
     }
   }

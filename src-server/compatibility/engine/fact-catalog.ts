@@ -61,10 +61,10 @@ export const FACT_CATALOG = {
   eirpDbm: pair('number', 'dbm', 'EIRP = transmit power + transmit peak gain − feed loss'),
   erpDbm: pair('number', 'dbm', 'ERP = EIRP − 2.15 dB'),
   regionalLimitDbm: pair('number', 'dbm', 'the tightest regional limit that applies (in its own kind, EIRP or ERP)'),
-  regionalLimitKind: pair('string', 'none', 'kind of the tightest limit: eirp or erp'),
+  regionalLimitKind: pair('string', 'none', 'kind of the tightest limit: eirp, erp or conducted-gain-rule'),
   regionalLimitRegion: pair('string', 'none', 'region of the tightest limit'),
   regionalLimitSource: pair('string', 'none', 'published source of the tightest limit'),
-  regionalRadiatedDbm: pair('number', 'dbm', 'EIRP or ERP (as the limit counts it) within the limit’s range'),
+  regionalRadiatedDbm: pair('number', 'dbm', 'EIRP, ERP or conducted power, as the tightest limit counts it'),
   regionalLimitMarginDb: pair('number', 'db', 'limit minus radiated power (negative = over the limit)'),
 
   evalGroundPlaneLengthMm: pair('number', 'mm', "longer side of the part's evaluation board"),

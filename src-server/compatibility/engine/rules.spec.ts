@@ -203,6 +203,20 @@ describe('regional-power-limit', () => {
     expect((await check('regional-power-limit', wifi(0.5), constructedPart({ gainDbi: 6.4 }))).finding).toBeUndefined();
   });
 
+  // 47 CFR 15.247(b)(4) as a conducted rule: 30 dBm minus (G − 6) above 6 dBi; at 9 dBi 27 dBm (rf-reference §2.1 worked table).
+  const conducted = { region: 'US', fromHz: 2400 * MHZ, toHz: 2483.5 * MHZ, kind: 'conducted-gain-rule' as const, valueDbm: 30, gainThresholdDbi: 6, reductionDbPerDb: 1, source: '47 CFR 15.247(b)(4)' };
+  const wifiConducted = (txPowerDbm: number) => lte({ technology: 'wifi', designation: '2.4 GHz', ranges: [rangeMhz(2400, 2483.5, 'tdd')], txPowerDbm, regulatoryLimits: [conducted] });
+
+  it('applies the conducted gain rule: 27 dBm into 9 dBi passes (at), 26.9 passes, 27.1 fails', async () => {
+    const at = await check('regional-power-limit', wifiConducted(27), constructedPart({ gainDbi: 9 }));
+    expect(at.facts.regionalLimitDbm).toBe(27);
+    expect(at.finding).toBeUndefined();
+    expect((await check('regional-power-limit', wifiConducted(26.9), constructedPart({ gainDbi: 9 }))).finding).toBeUndefined();
+    expect((await check('regional-power-limit', wifiConducted(27.1), constructedPart({ gainDbi: 9 }))).finding?.severity).toBe('fail');
+    // Below the 6 dBi threshold the full 30 dBm is allowed.
+    expect((await check('regional-power-limit', wifiConducted(30), constructedPart({ gainDbi: 5 }))).finding).toBeUndefined();
+  });
+
   it('reports no data when the gain under the limit is unknown', async () => {
     const { finding } = await check('regional-power-limit', wifi(), constructedPart({}, { peakGainDbi: null }));
     expect(finding).toMatchObject({ severity: 'no-data', code: 'OVER_REGIONAL_LIMIT_NO_DATA' });

@@ -54,9 +54,10 @@ export interface PartEvaluationData {
   readonly lifecycle: Lifecycle;
 }
 
-export type LimitKind = 'eirp' | 'erp';
+/** As the band library stores them: radiated (EIRP, ERP) or conducted power reduced for gain above a threshold. */
+export type LimitKind = 'eirp' | 'erp' | 'conducted-gain-rule';
 
-/** A regional radiated-power limit that applies to part of a band. */
+/** A regional power limit that applies to part of a band. */
 export interface RegulatoryLimit {
   readonly region: string;
   readonly fromHz: number;
@@ -64,6 +65,10 @@ export interface RegulatoryLimit {
   readonly kind: LimitKind;
   readonly valueDbm: number;
   readonly source: string;
+  /** conducted-gain-rule: gain above this (dBi) lowers the allowed conducted power … */
+  readonly gainThresholdDbi?: number | null;
+  /** … by this many dB per dB (1 for 47 CFR 15.247(b)(4), 1/3 for fixed point-to-point (c)(1)(i)). */
+  readonly reductionDbPerDb?: number | null;
 }
 
 /** One band of one radio of a product, with everything of the radio the rules look at. */
