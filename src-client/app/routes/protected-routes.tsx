@@ -61,4 +61,25 @@ export const protectedRoutes: RouteObject[] = [
       return { element: <RequireAuth><ToolsPage /></RequireAuth> };
     },
   },
+  {
+    path: paths.catalogue,
+    lazy: async () => {
+      const { CataloguePage } = await import('../../features/catalogue/components/CataloguePage');
+      return { element: <RequireAuth><CataloguePage /></RequireAuth> };
+    },
+  },
+  {
+    path: paths.reviewQueue,
+    lazy: async () => {
+      const { ReviewQueuePage } = await import('../../features/catalogue/components/ReviewQueuePage');
+      return { element: <RequireAuth roles={['admin']}><ReviewQueuePage /></RequireAuth> };
+    },
+  },
+  {
+    path: paths.part(':id'),
+    lazy: async () => {
+      const { PartPage } = await import('../../features/catalogue/components/PartPage');
+      return { element: <RequireAuth><PartPage /></RequireAuth> };
+    },
+  },
 ];

@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { ReviewQueueItem } from '../types';
+import { partKeys } from './part-keys';
+
+export const getReviewQueue = () => apiRequest<ReviewQueueItem[]>('/parts/review-queue');
+
+export const getReviewQueueQueryOptions = () => queryOptions({ queryKey: partKeys.reviewQueue(), queryFn: getReviewQueue });
+
+export const useReviewQueue = () => useQuery(getReviewQueueQueryOptions());

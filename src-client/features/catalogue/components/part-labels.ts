@@ -1,0 +1,20 @@
+import { Intent } from '@blueprintjs/core';
+import type { Lifecycle, LibraryBand, ReviewState } from '../types';
+
+/** One colour per state, everywhere in the catalogue. */
+export const REVIEW_STATE_INTENT: Record<ReviewState, Intent> = {
+  draft: Intent.NONE, 'in-review': Intent.PRIMARY, approved: Intent.SUCCESS, restricted: Intent.WARNING, retired: Intent.DANGER,
+};
+
+export const LIFECYCLE_INTENT: Record<Lifecycle, Intent> = { active: Intent.NONE, nrnd: Intent.WARNING, eol: Intent.DANGER };
+
+export const LIFECYCLE_LABEL: Record<Lifecycle, string> = { active: 'active', nrnd: 'not for new designs', eol: 'end of life' };
+
+/** The span an antenna must cover for a band: lowest to highest edge of all its ranges (rf-reference §1.1 "Span"). */
+export function bandSpan(band: LibraryBand): { fromMhz: number; toMhz: number } {
+  return { fromMhz: Math.min(...band.ranges.map((r) => r.fromMHz)), toMhz: Math.max(...band.ranges.map((r) => r.toMHz)) };
+}
+
+export const rangesParam = (bands: LibraryBand[]) => bands.map((b) => { const s = bandSpan(b); return `${s.fromMhz}-${s.toMhz}`; }).join(',');
+
+export const fmt = (value: number | null | undefined, digits = 2) => (value === null || value === undefined || !Number.isFinite(value) ? '—' : Number(value.toFixed(digits)).toString());
