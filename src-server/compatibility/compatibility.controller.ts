@@ -1,0 +1,76 @@
+import { Body, Controller, Delete, Get, Param, Post, Put, Query } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ALL_ROLES } from '../common/roles';
+import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
+import { ParseIdPipe } from '../common/parse-id.pipe';
+import { CompatibilityService } from './compatibility.service';
+import { AssignmentDto, CandidatesDto, CandidatesQueryDto, ChoosePartDto, MatrixDto, MatrixQueryDto, ShortlistDto } from './dto/matrix.dto';
+
+@ApiTags('compatibility')
+@Controller('products/:id')
+export class CompatibilityController {
+  constructor(private readonly compatibility: CompatibilityService) {}
+
+  @Get('matrix')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({ summary: "Every radio band of the product against parts (default: its chosen and shortlisted parts), with each cell's findings" })
+  @ApiOkResponse({ type: MatrixDto })
+  matrix(@Param('id', ParseIdPipe) id: number, @Query() query: MatrixQueryDto): Promise<MatrixDto> {
+    return this.compatibility.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
+  }
+
+  @Get('radios/:radioId/candidates')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({ summary: 'Approved parts for one radio, ranked by status and by the margin to their nearest limit' })
+  @ApiOkResponse({ type: CandidatesDto })
+  candidates(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Query() query: CandidatesQueryDto): Promise<CandidatesDto> {
+    return this.compatibility.candidates(id, radioId, query.limit);
+  }
+
+  @Get('assignments')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({ summary: 'The shortlisted and chosen parts of every radio of the product' })
+  @ApiOkResponse({ type: [AssignmentDto] })
+  assignments(@Param('id', ParseIdPipe) id: number): Promise<AssignmentDto[]> {
+    return this.compatibility.listAssignments(id);
+  }
+
+  @Get('assignments/history')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({ summary: 'Who shortlisted, chose or removed which part, newest first' })
+  history(@Param('id', ParseIdPipe) id: number) {
+    return this.compatibility.history(id);
+  }
+
+  @Post('radios/:radioId/shortlist')
+  @Roles('engineer', 'admin')
+  @ApiOperation({ summary: 'Shortlist a part for a radio (engineer, admin)' })
+  @ApiOkResponse({ type: [AssignmentDto] })
+  shortlist(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Body() body: ShortlistDto, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
+    return this.compatibility.shortlist(id, radioId, body.partId, body.note, actor);
+  }
+
+  @Delete('radios/:radioId/shortlist/:partId')
+  @Roles('engineer', 'admin')
+  @ApiOperation({ summary: "Take a part off a radio's shortlist (and its choice, if it was chosen) (engineer, admin)" })
+  @ApiOkResponse({ type: [AssignmentDto] })
+  unshortlist(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Param('partId', ParseIdPipe) partId: number, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
+    return this.compatibility.removeFromShortlist(id, radioId, partId, actor);
+  }
+
+  @Put('radios/:radioId/choice')
+  @Roles('engineer', 'admin')
+  @ApiOperation({ summary: 'Choose the part for a radio; the previous choice returns to the shortlist (engineer, admin)' })
+  @ApiOkResponse({ type: [AssignmentDto] })
+  choose(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Body() body: ChoosePartDto, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
+    return this.compatibility.choose(id, radioId, body.partId, actor);
+  }
+
+  @Delete('radios/:radioId/choice')
+  @Roles('engineer', 'admin')
+  @ApiOperation({ summary: 'Clear the choice of a radio; the part stays shortlisted (engineer, admin)' })
+  @ApiOkResponse({ type: [AssignmentDto] })
+  clearChoice(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
+    return this.compatibility.clearChoice(id, radioId, actor);
+  }
+}
