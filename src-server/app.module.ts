@@ -21,6 +21,7 @@ import { BandsModule } from './bands/bands.module';
 import { RegulatoryModule } from './regulatory/regulatory.module';
 import { ProductsModule } from './products/products.module';
 import { PartsModule } from './parts/parts.module';
+import { CompatibilityModule } from './compatibility/compatibility.module';
 
 @Module({
   imports: [
@@ -43,6 +44,7 @@ import { PartsModule } from './parts/parts.module';
     RegulatoryModule,
     ProductsModule,
     PartsModule,
+    CompatibilityModule,
   ],
   providers: [
     { provide: APP_PIPE, useFactory: createValidationPipe },

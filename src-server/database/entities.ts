@@ -8,6 +8,7 @@ import { BandSet, BandSetMember } from '../bands/band-set.entity';
 import { RegulatoryLimit } from '../regulatory/regulatory-limit.entity';
 import { Product } from '../products/product.entity';
 import { Radio, RadioBand } from '../products/radio.entity';
+import { COMPATIBILITY_ENTITIES } from '../compatibility/compatibility.entities';
 
 /** Every TypeORM entity; add new domains here. */
-export const ENTITIES = [User, UserToken, AuditEntry, OutboxMail, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand];
+export const ENTITIES = [User, UserToken, AuditEntry, OutboxMail, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand, ...COMPATIBILITY_ENTITIES];
