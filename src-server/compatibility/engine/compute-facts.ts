@@ -266,6 +266,7 @@ export function blankFacts(): Record<FactName, FactValue> {
     regionalLimitSource: null,
     regionalRadiatedDbm: null,
     regionalLimitMarginDb: null,
+    evalGroundPlaneKnown: null,
     evalGroundPlaneLengthMm: null,
     evalGroundPlaneWidthMm: null,
     groundPlaneVsEvalPct: null,
@@ -383,6 +384,7 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   facts.eirpDbm = eirp;
   facts.erpDbm = eirp === null ? null : erpDbmFromEirpDbm(eirp);
   Object.assign(facts, regional);
+  facts.evalGroundPlaneKnown = evalBoard !== null;
   facts.evalGroundPlaneLengthMm = evalBoard ? evalBoard[0] : null;
   facts.evalGroundPlaneWidthMm = evalBoard ? evalBoard[1] : null;
   facts.groundPlaneVsEvalPct = evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null;

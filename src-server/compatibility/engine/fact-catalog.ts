@@ -10,6 +10,8 @@ export interface FactDescription {
   readonly unit: FactUnit;
   readonly scope: 'row' | 'pair';
   readonly description: string;
+  /** The largest value the fact can take (coverage 100 %): a part there has no margin to rank by. */
+  readonly max?: number;
 }
 
 const row = (type: FactType, unit: FactUnit, description: string): FactDescription => ({ type, unit, scope: 'row', description });
@@ -37,9 +39,9 @@ export const FACT_CATALOG = {
   dataCompletenessPct: pair('number', 'percent', 'share of match, efficiency and gain that are known over the whole band'),
   missingData: pair('string', 'none', 'what is missing for this band, in words'),
 
-  coverageAtVswr2Pct: pair('number', 'percent', 'share of the band width where VSWR ≤ 2:1'),
+  coverageAtVswr2Pct: { ...pair('number', 'percent', 'share of the band width where VSWR ≤ 2:1'), max: 100 },
   uncoveredAtVswr2: pair('string', 'none', 'sub-ranges of the band where VSWR exceeds 2:1'),
-  coverageAtVswr3Pct: pair('number', 'percent', 'share of the band width where VSWR ≤ 3:1'),
+  coverageAtVswr3Pct: { ...pair('number', 'percent', 'share of the band width where VSWR ≤ 3:1'), max: 100 },
   uncoveredAtVswr3: pair('string', 'none', 'sub-ranges of the band where VSWR exceeds 3:1'),
   worstVswr: pair('number', 'vswr', 'highest VSWR in the band'),
   worstVswrAtMHz: pair('number', 'mhz', 'frequency of the highest VSWR'),
@@ -67,6 +69,7 @@ export const FACT_CATALOG = {
   regionalRadiatedDbm: pair('number', 'dbm', 'EIRP, ERP or conducted power, as the tightest limit counts it'),
   regionalLimitMarginDb: pair('number', 'db', 'limit minus radiated power (negative = over the limit)'),
 
+  evalGroundPlaneKnown: pair('boolean', 'none', "whether the datasheet states the part's evaluation board size"),
   evalGroundPlaneLengthMm: pair('number', 'mm', "longer side of the part's evaluation board"),
   evalGroundPlaneWidthMm: pair('number', 'mm', "shorter side of the part's evaluation board"),
   groundPlaneVsEvalPct: pair('number', 'percent', "product ground plane as a share of the evaluation board (worse side)"),

@@ -28,9 +28,9 @@ async function check(id: string, requirement: RadioBandRequirement, part: PartEv
 const lte = (overrides: Partial<RadioBandRequirement> = {}) => constructedRequirement(overrides);
 
 describe('rule files', () => {
-  it('loads all fifteen starting rules, each enabled at version 1 with a named source', () => {
+  it('loads all sixteen starting rules, each enabled at version 1 with a named source', () => {
     expect(FILE_RULES.map((r) => r.id)).toEqual([
-      'band-coverage', 'certified-gain-cap', 'datasheet-only', 'efficiency-floor', 'efficiency-target', 'gnss-polarization',
+      'band-coverage', 'certified-gain-cap', 'datasheet-only', 'efficiency-floor', 'efficiency-target', 'eval-board-unknown', 'gnss-polarization',
       'ground-plane-quarter-wave', 'ground-plane-vs-eval-board', 'part-end-of-life', 'part-not-approved', 'part-not-recommended',
       'part-retired', 'polarization-opposite-sense', 'regional-power-limit', 'vswr-in-band',
     ]);
@@ -240,8 +240,13 @@ describe('ground-plane-vs-eval-board', () => {
     expect(finding!.message).toContain('is 99.88 % of the evaluation board (80 × 40 mm)');
   });
 
-  it('reports no data when the part does not state its evaluation board', async () => {
-    expect((await check('ground-plane-vs-eval-board', withBoard(80, 40), constructedPart({}, { evaluationGroundPlane: null }))).finding?.severity).toBe('no-data');
+  it('does not apply when the part states no evaluation board; eval-board-unknown notes it instead', async () => {
+    const noBoard = constructedPart({}, { evaluationGroundPlane: null });
+    expect((await check('ground-plane-vs-eval-board', withBoard(80, 40), noBoard)).verdict.findings).toEqual([]);
+    const note = await check('eval-board-unknown', withBoard(80, 40), noBoard);
+    expect(note.finding).toMatchObject({ severity: 'info', code: 'EVAL_BOARD_UNKNOWN' });
+    expect(note.verdict.status).toBe('pass');
+    expect((await check('eval-board-unknown', withBoard(80, 40), part)).finding).toBeUndefined();
   });
 });
 
