@@ -5,6 +5,7 @@ import { seedBands, seedBandSets } from '../bands/band-library.seed';
 import { seedRegulatoryLimits } from '../regulatory/regulatory-limits.seed';
 import { seedDemoProducts } from '../products/demo-products.seed';
 import { seedDemoParts } from '../parts/demo-parts.seed';
+import { seedDemoAssignments } from '../compatibility/demo-assignments.seed';
 
 export type Seeder = (dataSource: DataSource, config: AppConfig) => Promise<string>;
 
@@ -16,4 +17,5 @@ export const SEEDERS: [string, Seeder][] = [
   ['regulatory limits', seedRegulatoryLimits],
   ['demo products', seedDemoProducts],
   ['demo parts', seedDemoParts],
+  ['demo assignments', seedDemoAssignments],
 ];
