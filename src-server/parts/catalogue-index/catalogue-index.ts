@@ -99,10 +99,14 @@ export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean 
 
 const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
+const MAX_CACHED_RESULTS = 64;
+
 export class CatalogueIndex {
   private readonly parts = new Map<number, IndexedPart>();
   /** Parts in ascending order per sort key, built on first use after a change. */
   private readonly sorted = new Map<string, IndexedPart[]>();
+  /** Every match of recent queries (paging and sorting aside from offset/limit), cleared on every change. */
+  private readonly results = new Map<string, IndexedPart[]>();
 
   get size(): number {
     return this.parts.size;
@@ -111,6 +115,7 @@ export class CatalogueIndex {
   upsert(parts: Iterable<IndexedPart>): void {
     for (const part of parts) this.parts.set(part.id, part);
     this.sorted.clear();
+    this.results.clear();
   }
 
   get(id: number): IndexedPart | undefined {
@@ -147,8 +152,21 @@ export class CatalogueIndex {
     return list;
   }
 
-  /** One pass over the parts in sort order: count every match, keep the page. */
+  /** The page of a query; the full match list is kept for the next page of the same query until the catalogue changes. */
   search(query: CatalogueQuery): { items: IndexedPart[]; total: number } {
+    const key = JSON.stringify({ ...query, offset: 0, limit: 0 });
+    let all = this.results.get(key);
+    if (!all) {
+      all = this.matchAll(query);
+      if (this.results.size >= MAX_CACHED_RESULTS) this.results.delete(this.results.keys().next().value!);
+      this.results.set(key, all);
+    }
+    const items = query.limit === 0 ? all.slice(query.offset) : all.slice(query.offset, query.offset + query.limit);
+    return { items, total: all.length };
+  }
+
+  /** One pass over the parts in sort order, collecting every match. */
+  private matchAll(query: CatalogueQuery): IndexedPart[] {
     const tokens = (query.q ?? '').toLowerCase().split(/\s+/).filter((t) => t.length > 0);
     const sets = {
       formFactor: query.formFactor?.length ? new Set<string>(query.formFactor) : null,
@@ -157,6 +175,7 @@ export class CatalogueIndex {
       status: query.status?.length ? new Set<string>(query.status) : null,
       lifecycle: query.lifecycle?.length ? new Set<string>(query.lifecycle) : null,
     };
+    const coverage = query.coverage;
     const matches = (p: IndexedPart): boolean => {
       if (sets.status && !sets.status.has(p.reviewState)) return false;
       if (sets.formFactor && !sets.formFactor.has(p.formFactor)) return false;
@@ -168,14 +187,12 @@ export class CatalogueIndex {
         if (price === undefined || price > query.priceMax) return false;
       }
       for (const token of tokens) if (!p.searchText.includes(token)) return false;
-      if (query.coverage && !meetsCoverage(p, query.coverage)) return false;
+      if (coverage && !meetsCoverage(p, coverage)) return false;
       return true;
     };
     const ordered = this.inOrder(query.sort, query.currency);
     const items: IndexedPart[] = [];
     const unpriced: IndexedPart[] = [];
-    let total = 0;
-    const end = query.limit === 0 ? Infinity : query.offset + query.limit;
     const descending = query.order === 'desc';
     const priceSort = query.sort === 'price';
     for (let k = 0; k < ordered.length; k++) {
@@ -185,13 +202,10 @@ export class CatalogueIndex {
         unpriced.push(part);
         continue;
       }
-      if (total >= query.offset && total < end) items.push(part);
-      total++;
+      items.push(part);
     }
-    for (const part of descending ? unpriced.reverse() : unpriced) {
-      if (total >= query.offset && total < end) items.push(part);
-      total++;
-    }
-    return { items, total };
+    // Parts without a price in the currency come last in either order.
+    for (const part of descending ? unpriced.reverse() : unpriced) items.push(part);
+    return items;
   }
 }
