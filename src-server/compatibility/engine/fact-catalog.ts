@@ -10,8 +10,8 @@ export interface FactDescription {
   readonly unit: FactUnit;
   readonly scope: 'row' | 'pair';
   readonly description: string;
-  /** The largest value the fact can take (coverage 100 %): a part there has no margin to rank by. */
-  readonly max?: number;
+  /** The best value the fact can take (coverage 100 %, no polarization loss): a part there has no margin to rank by. */
+  readonly ideal?: number;
 }
 
 const row = (type: FactType, unit: FactUnit, description: string): FactDescription => ({ type, unit, scope: 'row', description });
@@ -39,9 +39,9 @@ export const FACT_CATALOG = {
   dataCompletenessPct: pair('number', 'percent', 'share of match, efficiency and gain that are known over the whole band'),
   missingData: pair('string', 'none', 'what is missing for this band, in words'),
 
-  coverageAtVswr2Pct: { ...pair('number', 'percent', 'share of the band width where VSWR ≤ 2:1'), max: 100 },
+  coverageAtVswr2Pct: { ...pair('number', 'percent', 'share of the band width where VSWR ≤ 2:1'), ideal: 100 },
   uncoveredAtVswr2: pair('string', 'none', 'sub-ranges of the band where VSWR exceeds 2:1'),
-  coverageAtVswr3Pct: { ...pair('number', 'percent', 'share of the band width where VSWR ≤ 3:1'), max: 100 },
+  coverageAtVswr3Pct: { ...pair('number', 'percent', 'share of the band width where VSWR ≤ 3:1'), ideal: 100 },
   uncoveredAtVswr3: pair('string', 'none', 'sub-ranges of the band where VSWR exceeds 3:1'),
   worstVswr: pair('number', 'vswr', 'highest VSWR in the band'),
   worstVswrAtMHz: pair('number', 'mhz', 'frequency of the highest VSWR'),
@@ -74,7 +74,7 @@ export const FACT_CATALOG = {
   evalGroundPlaneWidthMm: pair('number', 'mm', "shorter side of the part's evaluation board"),
   groundPlaneVsEvalPct: pair('number', 'percent', "product ground plane as a share of the evaluation board (worse side)"),
   groundPlaneVsQuarterWavePct: row('number', 'percent', "product ground-plane length as a share of λ/4 at the band's lowest frequency"),
-  polarizationLossDb: pair('number', 'db', 'polarization loss between part and required polarization (Balanis §2.12)'),
+  polarizationLossDb: { ...pair('number', 'db', 'polarization loss between part and required polarization (Balanis §2.12)'), ideal: 0 },
 } as const satisfies Record<string, FactDescription>;
 
 export type FactName = keyof typeof FACT_CATALOG;

@@ -182,8 +182,7 @@ export function rankCandidates(requirements: readonly RadioBandRequirement[], pa
         if (margin.fact === null || margin.value === null || margin.threshold === null || !Number.isFinite(margin.distanceDb)) continue;
         // A fact of the band alone (the product's ground plane vs λ/4) is the same for every part: it cannot rank them.
         if (!isFactName(margin.fact) || FACT_CATALOG[margin.fact].scope === 'row') continue;
-        const max = (FACT_CATALOG[margin.fact] as { max?: number }).max;
-        if (max !== undefined && margin.value >= max) continue;
+        if (margin.value === (FACT_CATALOG[margin.fact] as { ideal?: number }).ideal) continue;
         if (deciding === null || margin.distanceDb < deciding.marginDb) {
           const designation = row.requirement.designation;
           deciding = {

@@ -302,8 +302,9 @@ describe('gnss-polarization and polarization-opposite-sense', () => {
     expect((await check('gnss-polarization', gnss, withPolarization(null))).finding?.severity).toBe('no-data');
   });
 
-  it('does not apply to a radio that states no polarization', async () => {
+  it('does not apply to a radio that states no polarization or a linear one', async () => {
     expect((await check('gnss-polarization', lte(), withPolarization('linear'))).verdict.findings).toEqual([]);
+    expect((await check('gnss-polarization', lte({ requiredPolarization: 'linear' }), withPolarization(null))).verdict.findings).toEqual([]);
   });
 });
 

@@ -1,0 +1,100 @@
+export type CellStatus = 'pass' | 'marginal' | 'fail' | 'no-data';
+
+export interface Finding {
+  ruleId: string;
+  severity: 'fail' | 'marginal' | 'info' | 'no-data';
+  code: string;
+  message: string;
+}
+
+export interface MatrixRow {
+  radioId: number;
+  radioName: string;
+  technology: string;
+  bandId: number;
+  designation: string;
+  ranges: { fromMhz: number; toMhz: number; role: string }[];
+}
+
+export interface MatrixColumn {
+  partId: number;
+  mpn: string;
+  title: string;
+  manufacturer: string;
+  reviewState: string;
+  lifecycle: string;
+  assignments: { radioId: number; state: 'shortlisted' | 'chosen' }[];
+}
+
+export interface MatrixCell {
+  row: number;
+  column: number;
+  status: CellStatus;
+  findings: Finding[];
+}
+
+export interface Matrix {
+  productId: number;
+  productName: string;
+  rows: MatrixRow[];
+  columns: MatrixColumn[];
+  cells: MatrixCell[];
+  rules: string;
+}
+
+export interface DecidingFigure {
+  ruleId: string;
+  ruleTitle: string;
+  designation: string;
+  fact: string;
+  value: number;
+  threshold: number;
+  marginDb: number;
+  text: string;
+}
+
+export interface Candidate {
+  partId: number;
+  mpn: string;
+  title: string;
+  manufacturer: string;
+  status: CellStatus;
+  marginDb: number | null;
+  deciding: DecidingFigure | null;
+  assignment: 'shortlisted' | 'chosen' | null;
+  bands: { bandId: number; designation: string; status: CellStatus; findings: Finding[] }[];
+}
+
+export interface Candidates {
+  productId: number;
+  radioId: number;
+  radioName: string;
+  evaluated: number;
+  candidates: Candidate[];
+}
+
+export interface Assignment {
+  id: number;
+  productId: number;
+  radioId: number;
+  partId: number;
+  mpn: string;
+  title: string;
+  state: 'shortlisted' | 'chosen';
+  note: string | null;
+  updatedAt: string;
+}
+
+/** Of a part's detail, what the curve in the cell panel needs. */
+export interface PartMeasurements {
+  id: number;
+  measurements: { id: number; kind: 's11' | 'efficiency' | 'peak-gain' | 'average-gain'; current: boolean }[];
+}
+
+export interface MeasurementPoints {
+  id: number;
+  kind: string;
+  frequenciesHz: number[];
+  values: number[];
+  vswr?: number[];
+}
