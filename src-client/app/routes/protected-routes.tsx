@@ -14,9 +14,12 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.product(':id'),
     lazy: async () => {
-      const { ProductPage } = await import('../../features/products/components/ProductPage');
+      const [{ ProductPage }, { CompatibilityMatrix }] = await Promise.all([
+        import('../../features/products/components/ProductPage'),
+        import('../../features/compatibility/components/CompatibilityMatrix'),
+      ]);
       // Other features add product sections through ProductPage's `extensions` prop, composed here.
-      return { element: <ProductPage /> };
+      return { element: <ProductPage extensions={(product) => <CompatibilityMatrix productId={product.id} />} /> };
     },
   },
   {
