@@ -1,0 +1,77 @@
+import { CatalogueIndex, type IndexedPart, extremeInRange, meetsCoverage } from './catalogue-index';
+
+const MHZ = 1e6;
+
+function part(id: number, overrides: Partial<IndexedPart> = {}): IndexedPart {
+  return {
+    id, manufacturer: 'Unit Maker', mpn: `U-${id}`, title: 'unit part', formFactor: 'chip', connector: 'solder-pad', polarization: 'linear',
+    lifecycle: 'active', reviewState: 'approved', searchText: `unit maker u-${id}`, lowestPrices: new Map(), measuredKinds: [], updatedAtMs: id,
+    gamma: null, efficiency: null, specBands: [], ...overrides,
+  };
+}
+
+const curve = (points: [number, number][]) => ({ frequenciesHz: points.map(([f]) => f * MHZ), values: points.map(([, v]) => v) });
+const band = (fromMhz: number, toMhz: number, maxVswr: number | null, efficiencyPct: number | null = null, minReturnLossDb: number | null = null) =>
+  ({ fromHz: fromMhz * MHZ, toHz: toMhz * MHZ, maxVswr, minReturnLossDb, efficiencyPct, peakGainDbi: null, averageGainDbi: null });
+
+describe(extremeInRange.name, () => {
+  it('takes interpolated edges and interior samples, and says no data outside the sweep', () => {
+    const c = curve([[780, 0.5], [820, 0.2], [900, 0.2], [1000, 0.5]]);
+    expect(extremeInRange(c, { fromHz: 800 * MHZ, toHz: 900 * MHZ }, 'max')).toBeCloseTo(0.35, 12);
+    expect(extremeInRange(c, { fromHz: 820 * MHZ, toHz: 900 * MHZ }, 'max')).toBeCloseTo(0.2, 12);
+    expect(extremeInRange(c, { fromHz: 800 * MHZ, toHz: 1000 * MHZ }, 'min')).toBeCloseTo(0.2, 12);
+    expect(extremeInRange(c, { fromHz: 700 * MHZ, toHz: 900 * MHZ }, 'max')).toBeUndefined();
+  });
+});
+
+describe(meetsCoverage.name, () => {
+  // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3; rf-reference §3.2).
+  const atLimit = part(1, { gamma: curve([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6]]) });
+  const range = { fromHz: 800 * MHZ, toHz: 900 * MHZ };
+
+  it('passes at the limit, fails just below it, and ANDs every range', () => {
+    expect(meetsCoverage(atLimit, { ranges: [range], vswrMax: 2 })).toBe(true);
+    expect(meetsCoverage(atLimit, { ranges: [range], vswrMax: 1.999 })).toBe(false);
+    expect(meetsCoverage(atLimit, { ranges: [range, { fromHz: 950 * MHZ, toHz: 1000 * MHZ }], vswrMax: 2 })).toBe(false);
+  });
+
+  it('falls back to spec bands where the curve does not reach, with return loss read as VSWR (RL 10 dB = VSWR 1.925, rf-reference §3.2)', () => {
+    const mixed = part(2, { gamma: curve([[800, 0.1], [900, 0.1]]), specBands: [band(1700, 1900, 2), band(600, 800, 3)] });
+    expect(meetsCoverage(mixed, { ranges: [range, { fromHz: 1710 * MHZ, toHz: 1880 * MHZ }], vswrMax: 2 })).toBe(true);
+    expect(meetsCoverage(mixed, { ranges: [{ fromHz: 650 * MHZ, toHz: 750 * MHZ }], vswrMax: 2 })).toBe(false);
+    const rl = part(3, { specBands: [band(791, 862, null, null, 10)] });
+    expect(meetsCoverage(rl, { ranges: [{ fromHz: 791 * MHZ, toHz: 862 * MHZ }], vswrMax: 1.93 })).toBe(true);
+    expect(meetsCoverage(rl, { ranges: [{ fromHz: 791 * MHZ, toHz: 862 * MHZ }], vswrMax: 1.92 })).toBe(false);
+  });
+
+  it('applies the efficiency floor to the minimum over the range, curve first, spec second', () => {
+    const p = part(4, { gamma: curve([[700, 0.1], [1000, 0.1]]), efficiency: curve([[700, 50], [850, 40], [1000, 50]]) });
+    expect(meetsCoverage(p, { ranges: [range], vswrMax: 2, minEfficiencyPct: 40 })).toBe(true);
+    expect(meetsCoverage(p, { ranges: [range], vswrMax: 2, minEfficiencyPct: 40.01 })).toBe(false);
+    const spec = part(5, { specBands: [band(791, 862, 2, 45), band(862, 960, 2, 50)] });
+    expect(meetsCoverage(spec, { ranges: [{ fromHz: 800 * MHZ, toHz: 900 * MHZ }], vswrMax: 2, minEfficiencyPct: 45 })).toBe(true);
+    expect(meetsCoverage(spec, { ranges: [{ fromHz: 800 * MHZ, toHz: 900 * MHZ }], vswrMax: 2, minEfficiencyPct: 46 })).toBe(false);
+  });
+});
+
+describe(CatalogueIndex.name, () => {
+  const base = { currency: 'USD', sort: 'mpn' as const, order: 'asc' as const, offset: 0, limit: 2 };
+
+  it('pages and sorts without reordering the data, and sees an upsert at once', () => {
+    const index = new CatalogueIndex();
+    index.upsert([part(3), part(1), part(2, { reviewState: 'draft' })]);
+    expect(index.search(base)).toEqual({ items: [expect.objectContaining({ id: 1 }), expect.objectContaining({ id: 2 })], total: 3 });
+    expect(index.search({ ...base, order: 'desc', offset: 1 }).items.map((p) => p.id)).toEqual([2, 1]);
+    expect(index.search({ ...base, status: ['approved'] }).total).toBe(2);
+    // A cached result must not survive a change.
+    index.upsert([part(2, { reviewState: 'approved' })]);
+    expect(index.search({ ...base, status: ['approved'] }).total).toBe(3);
+  });
+
+  it('puts parts without a price in the asked currency last in both orders', () => {
+    const index = new CatalogueIndex();
+    index.upsert([part(1, { lowestPrices: new Map([['USD', 0.5]]) }), part(2), part(3, { lowestPrices: new Map([['USD', 0.2]]) })]);
+    expect(index.search({ ...base, sort: 'price', limit: 0 }).items.map((p) => p.id)).toEqual([3, 1, 2]);
+    expect(index.search({ ...base, sort: 'price', order: 'desc', limit: 0 }).items.map((p) => p.id)).toEqual([1, 3, 2]);
+  });
+});

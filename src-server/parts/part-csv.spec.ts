@@ -1,0 +1,31 @@
+import { csvCell, formatSpecBands, parsePartCsv, parseSpecBandsText } from './part-csv';
+
+describe(parseSpecBandsText.name, () => {
+  it('reads bands with their limits and round-trips through formatSpecBands', () => {
+    const { bands, error } = parseSpecBandsText('791-862 vswr=2 eff=45 peak=1.5; 880-960 rl=10 avg=-2.5');
+    expect(error).toBeNull();
+    expect(bands).toEqual([{ fromMhz: 791, toMhz: 862, maxVswr: 2, efficiencyPct: 45, peakGainDbi: 1.5 }, { fromMhz: 880, toMhz: 960, minReturnLossDb: 10, averageGainDbi: -2.5 }]);
+    expect(parseSpecBandsText(formatSpecBands(bands)).bands).toEqual(bands);
+  });
+
+  it('names the band and the token that is wrong', () => {
+    expect(parseSpecBandsText('791-862; 960-880').error).toMatch(/band 2/);
+    expect(parseSpecBandsText('791-862 gain=3').error).toMatch(/band 1: "gain=3"/);
+  });
+});
+
+describe(parsePartCsv.name, () => {
+  it('reports unknown and missing columns on the header line before any row', () => {
+    const { problems } = parsePartCsv(Buffer.from('manufacturer,mpn,colour\nA,B,red\n'));
+    expect(problems.map((p) => `${p.line}:${p.field}`)).toEqual(['1:colour', '1:title', '1:formFactor', '1:connector', '1:polarization']);
+  });
+});
+
+describe(csvCell.name, () => {
+  it('quotes per RFC 4180 and defuses spreadsheet formulas, leaving negative numbers alone', () => {
+    expect(csvCell('a,"b"')).toBe('"a,""b"""');
+    expect(csvCell('=HYPERLINK("x")')).toBe(`"'=HYPERLINK(""x"")"`);
+    expect(csvCell(-2.5)).toBe('-2.5');
+    expect(csvCell(null)).toBe('');
+  });
+});
