@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, EntityManager } from 'typeorm';
@@ -47,9 +48,9 @@ export class RulesService {
     return rules.sort((a, b) => (a.rule.id < b.rule.id ? -1 : a.rule.id > b.rule.id ? 1 : 0));
   }
 
-  /** The compiled fast path for a rule list, kept while the list (ids, versions, enabled flags) is the same. */
+  /** The compiled fast path for a rule list, kept while the rules' content is the same (a previewed edit keeps id and version). */
   compile(rules: readonly RuleDefinition[]): CompiledRuleSet {
-    const signature = rulesSignature(rules);
+    const signature = createHash('sha256').update(JSON.stringify(rules)).digest('hex');
     let set = this.compiled.get(signature);
     if (!set) {
       if (this.compiled.size > 20) this.compiled.clear();

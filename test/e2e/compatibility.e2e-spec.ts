@@ -229,6 +229,12 @@ describe('compatibility (API)', () => {
       }
       expect(tracker).toContainEqual(expect.objectContaining({ radioId: TRACKER_GNSS, partId: LINEAR_GNSS_CHIP, before: 'marginal', after: 'fail' }));
       await http().get(`/api/rules/${id}`).set(as('admin')).expect(404);
+      // An unsaved edit of an existing rule: VSWR target 1.01:1 makes passing cells marginal, and nothing is stored.
+      const vswr = (await http().get('/api/rules/vswr-in-band').set(as('admin')).expect(200)).body;
+      const strict = await http().post('/api/rules/preview').set(as('admin')).send({ definition: { ...vswr.definition, parameters: { maxVswr: 1.01 } } }).expect(200);
+      expect(strict.body.changes.length).toBeGreaterThan(0);
+      for (const change of strict.body.changes) expect([change.before, change.after]).toEqual(['pass', 'marginal']);
+      expect((await http().get('/api/rules/vswr-in-band').set(as('admin')).expect(200)).body.version).toBe(vswr.version);
       const invalid = await http().post('/api/rules/preview').set(as('admin')).send({ definition: inertRule(id, { severity: 'warning' }) }).expect(400);
       expect(invalid.body.fields[0].field).toBe('definition.severity');
     });
