@@ -19,6 +19,7 @@ export const navigation: NavEntry[] = [
   { label: 'Products', path: paths.products, icon: 'box', roles: everyone, section: 'work' },
   { label: 'Band library', path: paths.bands, icon: 'cell-tower', roles: everyone, section: 'reference' },
   { label: 'Tools', path: paths.tools, icon: 'calculator', roles: everyone, section: 'reference' },
+  { label: 'Rules', path: paths.rules, icon: 'properties', roles: ['admin', 'engineer'], section: 'admin' },
   { label: 'Users', path: paths.users, icon: 'people', roles: ['admin'], section: 'admin' },
   { label: 'Audit log', path: paths.audit, icon: 'history', roles: ['admin'], section: 'admin' },
 ];

@@ -44,6 +44,13 @@ export const protectedRoutes: RouteObject[] = [
     },
   },
   {
+    path: paths.rules,
+    lazy: async () => {
+      const { RulesPage } = await import('../../features/rules/components/RulesPage');
+      return { element: <RequireAuth roles={['admin', 'engineer']}><RulesPage /></RequireAuth> };
+    },
+  },
+  {
     path: paths.users,
     lazy: async () => {
       const { UsersPage } = await import('../../features/users/components/UsersPage');
