@@ -191,7 +191,7 @@ function coverageAt(part: PartEvaluationData, ranges: readonly FrequencyRange[],
 const mhz = (hz: number) => hz / 1e6;
 
 function formatMhzValue(hz: number): string {
-  return String(Number(mhz(hz).toFixed(3)));
+  return String(Math.round(hz / 1e3) / 1e3);
 }
 
 export function describeRanges(ranges: readonly FrequencyRange[]): string {
@@ -392,20 +392,19 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   return roundFacts(facts);
 }
 
-/** 12 significant digits: a value that sits on a threshold (VSWR 2 from |Γ| = 1/3) stays on it instead of 1e-16 over. */
-export function roundTo12(value: number): number {
-  if (value === 0 || !Number.isFinite(value)) return value;
-  const exponent = 11 - Math.floor(Math.log10(Math.abs(value)));
-  // Split the scale so 10^exponent stays finite for tiny and huge values alike.
-  if (exponent > 300 || exponent < -300) return value;
-  const scale = 10 ** exponent;
-  return Math.round(value * scale) / scale;
+/**
+ * To 1e-9 of the unit (facts are dB, %, MHz, mm: far below 1e6): a value that sits on a threshold
+ * (VSWR 2 from |Γ| = 1/3) stays on it instead of 4e-16 over.
+ */
+export function roundFactValue(value: number): number {
+  if (!Number.isFinite(value) || Math.abs(value) >= 1e6) return value;
+  return Math.round(value * 1e9) / 1e9;
 }
 
 function roundFacts<T extends Partial<Record<FactName, FactValue>>>(facts: T): T {
   for (const name in facts) {
     const value = facts[name];
-    if (typeof value === 'number') (facts as Record<string, FactValue>)[name] = roundTo12(value);
+    if (typeof value === 'number') (facts as Record<string, FactValue>)[name] = roundFactValue(value);
   }
   return facts;
 }

@@ -1,7 +1,7 @@
 import { mwToDbm } from '../../rf/units';
 import { loadRuleFiles } from '../rule-files';
 import { CompiledRuleSet } from './compiled-evaluator';
-import { computeFacts } from './compute-facts';
+import { computeFacts, roundFactValue } from './compute-facts';
 import { MHZ, constructedPart, constructedRequirement, flatCurve, flatReflection, rangeMhz, steppedReflection } from './fixtures';
 import { ReferenceEvaluator } from './reference-evaluator';
 import type { ParameterValue, RuleDefinition } from './rule-definition';
@@ -61,7 +61,7 @@ describe('band-coverage', () => {
   it('turns on the threshold exactly: at, just inside and just outside a 94.1 % minimum', async () => {
     const part = constructedPart({}, { reflection: steppedReflection(600 * MHZ, 900 * MHZ, 744 * MHZ, 3) });
     const coverage = (32 / 34) * 100;
-    expect((await check('band-coverage', lte(), part, { minCoveragePct: Number(coverage.toPrecision(12)) })).finding).toBeUndefined();
+    expect((await check('band-coverage', lte(), part, { minCoveragePct: roundFactValue(coverage) })).finding).toBeUndefined();
     expect((await check('band-coverage', lte(), part, { minCoveragePct: coverage - 0.01 })).finding).toBeUndefined();
     expect((await check('band-coverage', lte(), part, { minCoveragePct: coverage + 0.01 })).finding?.severity).toBe('fail');
   });
@@ -289,7 +289,7 @@ describe('gnss-polarization and polarization-opposite-sense', () => {
   });
 
   it('turns at the threshold: allowed 3.0103 dB (at) and 3.02 dB (inside) pass, 3.0 dB (outside) does not', async () => {
-    const loss = Number((10 * Math.log10(2)).toPrecision(12));
+    const loss = roundFactValue(10 * Math.log10(2));
     expect((await check('gnss-polarization', gnss, withPolarization('linear'), { maxLossDb: loss })).finding).toBeUndefined();
     expect((await check('gnss-polarization', gnss, withPolarization('linear'), { maxLossDb: 3.02 })).finding).toBeUndefined();
     expect((await check('gnss-polarization', gnss, withPolarization('linear'), { maxLossDb: 3.0 })).finding?.severity).toBe('marginal');
