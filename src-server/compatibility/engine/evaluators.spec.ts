@@ -1,4 +1,7 @@
 import fc from 'fast-check';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { loadRuleFiles } from '../rule-files';
 import { CompiledRuleSet } from './compiled-evaluator';
 import { FACT_CATALOG, FACT_NAMES, type FactName } from './fact-catalog';
@@ -136,5 +139,23 @@ describe(validateRuleDefinition.name, () => {
     expect(text[0]).toEqual({ path: 'conditions.all[0].value', message: 'operator "lessThan" compares numbers, and this fact is string' });
     const key = validateRuleDefinition(withChange({ conditions: { all: [{ fact: 'minTotalEfficiencyPct', operator: 'lessThan', value: { param: 'floorPctByTechnology', key: 'reviewState' } }] } }));
     expect(key[0].path).toBe('conditions.all[0].value.key');
+  });
+});
+
+describe(loadRuleFiles.name, () => {
+  it('refuses a bad rule file, naming the file and the place in it', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'rules-'));
+    try {
+      const rule = { ...FILE_RULES[0], conditions: { all: [{ fact: 'coverage', operator: 'lessThan', value: 100 }] } };
+      writeFileSync(`${dir}/${rule.id}.json`, JSON.stringify(rule));
+      expect(() => loadRuleFiles(dir)).toThrow(`${rule.id}.json: conditions.all[0].fact: unknown fact "coverage"`);
+      writeFileSync(`${dir}/${rule.id}.json`, '{ not json');
+      expect(() => loadRuleFiles(dir)).toThrow(/not valid JSON/);
+      writeFileSync(`${dir}/${rule.id}.json`, JSON.stringify(FILE_RULES[0]));
+      writeFileSync(`${dir}/wrong-name.json`, JSON.stringify(FILE_RULES[1]));
+      expect(() => loadRuleFiles(dir)).toThrow(`wrong-name.json: id: the file of rule "${FILE_RULES[1].id}" must be named ${FILE_RULES[1].id}.json`);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
