@@ -59,12 +59,12 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
 
   const input = (name: string, label: string) => (
     <FormGroup key={name} label={label} labelFor={`part-${name}`} intent={field(name) ? Intent.DANGER : Intent.NONE} helperText={field(name)}>
-      <InputGroup id={`part-${name}`} value={values[name] ?? ''} intent={field(name) ? Intent.DANGER : Intent.NONE} onChange={(e) => setValues((v) => ({ ...v, [name]: e.currentTarget.value }))} />
+      <InputGroup id={`part-${name}`} value={values[name] ?? ''} intent={field(name) ? Intent.DANGER : Intent.NONE} onChange={(e) => { const value = e.currentTarget.value; setValues((v) => ({ ...v, [name]: value })); }} />
     </FormGroup>
   );
   const select = (name: string, label: string, options: readonly string[]) => (
     <FormGroup key={name} label={label} labelFor={`part-${name}`}>
-      <HTMLSelect id={`part-${name}`} value={values[name]} options={[...options]} onChange={(e) => setValues((v) => ({ ...v, [name]: e.currentTarget.value }))} />
+      <HTMLSelect id={`part-${name}`} value={values[name]} options={[...options]} onChange={(e) => { const value = e.currentTarget.value; setValues((v) => ({ ...v, [name]: value })); }} />
     </FormGroup>
   );
 
@@ -84,7 +84,7 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
           {NUMBER_FIELDS.map((f) => input(f, NUMBER_LABELS[f]))}
         </div>
         <FormGroup label="Notes" labelFor="part-notes">
-          <TextArea id="part-notes" fill value={values.notes ?? ''} onChange={(e) => setValues((v) => ({ ...v, notes: e.currentTarget.value }))} />
+          <TextArea id="part-notes" fill value={values.notes ?? ''} onChange={(e) => { const notes = e.currentTarget.value; setValues((v) => ({ ...v, notes })); }} />
         </FormGroup>
         <h4 className={Classes.HEADING}>Datasheet bands</h4>
         <p className="bw-muted">Used by search and checks where no measured curve covers a range.</p>
