@@ -165,7 +165,7 @@ export class CompatibilityService {
     const requirements = (await this.requirements(product)).filter((r) => r.radioId === radioId);
     const catalogue = await this.approvedCatalogue();
     const { compiled } = await this.rules.currentRuleSet();
-    const ranked = rankCandidates(requirements, catalogue.map((c) => c.data), compiled, { cache: this.facts, partKey: this.partKey }).slice(0, limit);
+    const ranked = rankCandidates(requirements, catalogue.map((c) => c.data), compiled, { cache: this.facts, partKey: this.partKey, limit });
     const manufacturers = new Map(catalogue.map((c) => [c.data.partId, c.manufacturer]));
     const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { radioId } });
     return {

@@ -3,7 +3,7 @@ import type { RuleDefinition } from './rule-definition';
 import { type BoundRule, type EngineCondition, bindRule, bindingKey, completeFacts, findingOf, noDataFindingOf, verdictOf } from './rule-binding';
 import { factsNamedBy } from './rule-definition';
 import { type Margin, marginOf } from './margin';
-import type { CellVerdict, Facts, Finding } from './types';
+import type { CellStatus, CellVerdict, Facts, Finding } from './types';
 import { OPERATORS } from './operators';
 
 export type Predicate = (facts: Facts) => boolean;
@@ -96,6 +96,29 @@ export class CompiledRow {
       else if (r.fires(facts)) findings.push(findingOf(r.bound, facts));
     }
     return verdictOf(findings);
+  }
+
+  /** The cell's state alone, with no finding written: the same decisions as evaluate(), for ranking a whole catalogue. */
+  status(facts: Facts): CellStatus {
+    let noData = false;
+    let marginal = false;
+    for (const r of this.rules) {
+      if (r.applies && !r.applies(facts)) continue;
+      let known = true;
+      for (const name of r.required) {
+        if (facts[name] === null) {
+          known = false;
+          break;
+        }
+      }
+      if (!known) noData = true;
+      else if (r.fires(facts)) {
+        const severity = r.bound.rule.severity;
+        if (severity === 'fail') return 'fail';
+        if (severity === 'marginal') marginal = true;
+      }
+    }
+    return noData ? 'no-data' : marginal ? 'marginal' : 'pass';
   }
 
   /** Margins of the fail and marginal rules that apply and have their facts; info rules set no limit. */

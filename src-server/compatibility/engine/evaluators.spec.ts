@@ -6,6 +6,7 @@ import { loadRuleFiles } from '../rule-files';
 import { CompiledRuleSet } from './compiled-evaluator';
 import { FACT_CATALOG, FACT_NAMES, type FactName } from './fact-catalog';
 import { ReferenceEvaluator } from './reference-evaluator';
+import { completeFacts } from './rule-binding';
 import { type ConditionNode, type RuleDefinition, SUPPORTED_OPERATORS, validateRuleDefinition } from './rule-definition';
 import { TECHNOLOGIES, type FactValue, type Facts } from './types';
 
@@ -72,9 +73,11 @@ describe(CompiledRuleSet.name, () => {
   it('gives the same verdict as json-rules-engine for the starting rules on random facts', async () => {
     await fc.assert(
       fc.asyncProperty(perturbedFileRules, factsArbitrary, async (rules, facts) => {
-        const fast = new CompiledRuleSet(rules).evaluate(facts);
+        const set = new CompiledRuleSet(rules);
+        const fast = set.evaluate(facts);
         const reference = await new ReferenceEvaluator(rules).evaluate(facts);
         expect(fast).toEqual(reference);
+        expect(set.forRow(facts).status(completeFacts(facts))).toBe(reference.status);
       }),
       { numRuns: 400 },
     );
@@ -85,9 +88,11 @@ describe(CompiledRuleSet.name, () => {
       fc.asyncProperty(fc.array(randomRule, { minLength: 1, maxLength: 5 }), factsArbitrary, async (rules, facts) => {
         const unique = rules.filter((r, i) => rules.findIndex((o) => o.id === r.id) === i);
         for (const r of unique) expect(validateRuleDefinition(r)).toEqual([]);
-        const fast = new CompiledRuleSet(unique).evaluate(facts);
+        const set = new CompiledRuleSet(unique);
+        const fast = set.evaluate(facts);
         const reference = await new ReferenceEvaluator(unique).evaluate(facts);
         expect(fast).toEqual(reference);
+        expect(set.forRow(facts).status(completeFacts(facts))).toBe(reference.status);
       }),
       { numRuns: 400 },
     );

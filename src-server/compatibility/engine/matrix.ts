@@ -168,16 +168,22 @@ function byMarginDescending(a: number | null, b: number | null): number {
  * The parts for one radio (all its bands), best first: by worst status over the bands, then by the
  * margin of the limit they are nearest to, the deciding figure. Ties keep the catalogue order.
  */
-export function rankCandidates(requirements: readonly RadioBandRequirement[], parts: readonly PartEvaluationData[], rules: CompiledRuleSet, options: EvaluationOptions = {}): Candidate[] {
+export function rankCandidates(
+  requirements: readonly RadioBandRequirement[],
+  parts: readonly PartEvaluationData[],
+  rules: CompiledRuleSet,
+  options: EvaluationOptions & { readonly limit?: number } = {},
+): Candidate[] {
   const rows = prepare(requirements, options.cache);
   const compiledRows = rows.map((row) => rules.forRow(row.rowFacts));
-  const candidates: Candidate[] = parts.map((part) => {
+  const partKey = options.partKey ?? defaultPartKey;
+  // First pass over the whole catalogue: states and margins only, no finding is written.
+  const ranked = parts.map((part, order) => {
     let status: CellStatus = 'pass';
     let deciding: DecidingFigure | null = null;
-    const bands = rows.map((row, i) => {
-      const facts = pairFacts(row, part, options.cache, options.partKey ?? defaultPartKey);
-      const verdict = compiledRows[i].evaluate(facts);
-      status = worseStatus(status, verdict.status);
+    rows.forEach((row, i) => {
+      const facts = pairFacts(row, part, options.cache, partKey);
+      status = worseStatus(status, compiledRows[i].status(facts));
       for (const { bound, margin } of compiledRows[i].margins(facts)) {
         if (margin.fact === null || margin.value === null || margin.threshold === null || !Number.isFinite(margin.distanceDb)) continue;
         // A fact of the band alone (the product's ground plane vs λ/4) is the same for every part: it cannot rank them.
@@ -187,17 +193,25 @@ export function rankCandidates(requirements: readonly RadioBandRequirement[], pa
           const designation = row.requirement.designation;
           deciding = {
             ruleId: bound.rule.id, ruleTitle: bound.rule.title, designation, fact: margin.fact, value: margin.value, threshold: margin.threshold, marginDb: margin.distanceDb,
-            text: describeDeciding(bound.rule.title, designation, margin.fact, margin.value, margin.threshold, margin.distanceDb),
+            text: '',
           };
         }
       }
-      return { bandId: row.requirement.bandId, designation: row.requirement.designation, status: verdict.status, findings: verdict.findings };
     });
-    const found = deciding as DecidingFigure | null;
-    return { partId: part.partId, mpn: part.mpn, title: part.title, status, marginDb: found ? found.marginDb : null, deciding: found, bands };
+    return { part, order, status, deciding: deciding as DecidingFigure | null };
   });
-  return candidates
-    .map((c, order) => ({ c, order }))
-    .sort((a, b) => statusRank(a.c.status) - statusRank(b.c.status) || byMarginDescending(a.c.marginDb, b.c.marginDb) || a.order - b.order)
-    .map(({ c }) => c);
+  ranked.sort((a, b) => statusRank(a.status) - statusRank(b.status) || byMarginDescending(a.deciding?.marginDb ?? null, b.deciding?.marginDb ?? null) || a.order - b.order);
+  // Second pass for the ones shown: their findings per band and the deciding figure in words.
+  return ranked.slice(0, options.limit ?? ranked.length).map(({ part, status, deciding }) => ({
+    partId: part.partId,
+    mpn: part.mpn,
+    title: part.title,
+    status,
+    marginDb: deciding ? deciding.marginDb : null,
+    deciding: deciding ? { ...deciding, text: describeDeciding(deciding.ruleTitle, deciding.designation, deciding.fact, deciding.value, deciding.threshold, deciding.marginDb) } : null,
+    bands: rows.map((row, i) => {
+      const verdict = compiledRows[i].evaluate(pairFacts(row, part, options.cache, partKey));
+      return { bandId: row.requirement.bandId, designation: row.requirement.designation, status: verdict.status, findings: verdict.findings };
+    }),
+  }));
 }

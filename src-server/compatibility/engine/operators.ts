@@ -3,7 +3,8 @@ import type { Facts } from './types';
 type OperatorCallback = (factValue: any, compareTo: any) => boolean;
 
 // The same callbacks and fact-value validators as json-rules-engine 7's default operators, so verdicts match.
-const numberValidator = (factValue: unknown) => Number.parseFloat(factValue as string).toString() !== 'NaN';
+// For a number parseFloat is the identity, so only NaN fails; the string form is json-rules-engine's own test.
+const numberValidator = (factValue: unknown) => (typeof factValue === 'number' ? !Number.isNaN(factValue) : Number.parseFloat(factValue as string).toString() !== 'NaN');
 export const OPERATORS: Record<string, { cb: OperatorCallback; validator: (factValue: unknown) => boolean }> = {
   equal: { cb: (a, b) => a === b, validator: () => true },
   notEqual: { cb: (a, b) => a !== b, validator: () => true },

@@ -22,6 +22,7 @@ export interface BoundRule {
   readonly requiredFacts: readonly string[];
   /** The message split once into text and placeholders, so a finding costs a few concatenations. */
   readonly template: readonly TemplatePiece[];
+  readonly noDataCode: string;
 }
 
 type TemplatePiece = string | { readonly name: string; readonly upper: boolean; readonly fromParameters: boolean };
@@ -83,7 +84,7 @@ export function bindRule(rule: RuleDefinition, index: number, rowFacts: Facts): 
   const appliesWhen = rule.appliesWhen ? bindNode(rule, rule.appliesWhen, rowFacts, used) : null;
   const conditions = bindNode(rule, rule.conditions, rowFacts, used);
   const bound = { ...values, ...used };
-  return { rule, index, values: bound, appliesWhen, conditions, requiredFacts: factsNamedBy(rule.conditions), template: parseTemplate(rule.event.params.message, bound) };
+  return { rule, index, values: bound, appliesWhen, conditions, requiredFacts: factsNamedBy(rule.conditions), template: parseTemplate(rule.event.params.message, bound), noDataCode: `${rule.event.params.code}_NO_DATA` };
 }
 
 /** Every catalogue fact present, unknown ones as null, so json-rules-engine never meets an undefined fact. */
@@ -117,15 +118,33 @@ export function renderMessage(bound: BoundRule, facts: Facts): string {
   return out;
 }
 
+/**
+ * The message is written when first read (an own, enumerable getter, so JSON and deep equality see it):
+ * ranking a whole catalogue reads the states of every pair but the words of only a few.
+ */
+function lazyFinding(ruleId: string, severity: Finding['severity'], code: string, write: () => string): Finding {
+  let message: string | undefined;
+  return {
+    ruleId,
+    severity,
+    code,
+    get message() {
+      return (message ??= write());
+    },
+  };
+}
+
 export function findingOf(bound: BoundRule, facts: Facts): Finding {
-  return { ruleId: bound.rule.id, severity: bound.rule.severity, code: bound.rule.event.params.code, message: renderMessage(bound, facts) };
+  return lazyFinding(bound.rule.id, bound.rule.severity, bound.rule.event.params.code, () => renderMessage(bound, facts));
 }
 
 export function noDataFindingOf(bound: BoundRule, facts: Facts): Finding {
-  const unknown = bound.requiredFacts.filter((name) => facts[name] === null || facts[name] === undefined);
-  const needs = unknown.map((name) => (isFactName(name) ? FACT_CATALOG[name].description : name)).join('; ');
-  const missing = facts.missingData && facts.missingData !== 'none' ? ` (no ${facts.missingData} data for this band)` : '';
-  return { ruleId: bound.rule.id, severity: 'no-data', code: `${bound.rule.event.params.code}_NO_DATA`, message: `cannot check "${bound.rule.title}": ${needs} is not known${missing}` };
+  return lazyFinding(bound.rule.id, 'no-data', bound.noDataCode, () => {
+    const unknown = bound.requiredFacts.filter((name) => facts[name] === null || facts[name] === undefined);
+    const needs = unknown.map((name) => (isFactName(name) ? FACT_CATALOG[name].description : name)).join('; ');
+    const missing = facts.missingData && facts.missingData !== 'none' ? ` (no ${facts.missingData} data for this band)` : '';
+    return `cannot check "${bound.rule.title}": ${needs} is not known${missing}`;
+  });
 }
 
 const STATUS_ORDER: Record<CellStatus, number> = { pass: 0, marginal: 1, 'no-data': 2, fail: 3 };
