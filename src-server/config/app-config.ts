@@ -10,6 +10,8 @@ export interface AppConfig {
   mailWebUrl: string;
   s3: { endpoint: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string };
   uploadMaxBytes: number;
+  /** Test-only: pause after an upload's object is stored, so a test can kill the process there. 0 (off) by default, always 0 in production. */
+  uploadTestPauseMs: number;
   demoPassword: string;
   clientDir: string;
 }
@@ -77,6 +79,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
       secretAccessKey: str('S3_SECRET_ACCESS_KEY', 'S3RVER'),
     },
     uploadMaxBytes: int('UPLOAD_MAX_MB', 25, 1, 1024) * 1024 * 1024,
+    uploadTestPauseMs: nodeEnv === 'production' ? 0 : int('UPLOAD_TEST_PAUSE_MS', 0, 0, 600_000),
     demoPassword: str('DEMO_PASSWORD', 'bandwright-demo'),
     clientDir: str('CLIENT_DIR', 'dist/client'),
   };

@@ -4,6 +4,7 @@ import { join, resolve } from 'node:path';
 import type { AppConfig } from '../config/app-config';
 import { AuditService } from '../audit/audit.service';
 import { StorageService } from '../storage/storage.service';
+import { UploadLedger } from '../storage/upload-ledger.service';
 import { DocumentsService } from './documents.service';
 import { MeasurementsService } from './measurements.service';
 import { Part } from './part.entity';
@@ -43,8 +44,9 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
   const parts = new PartsService(dataSource, audit);
   const storage = new StorageService(config);
   await storage.ensureBucket();
-  const measurements = new MeasurementsService(dataSource, storage, parts, audit);
-  const documents = new DocumentsService(dataSource, storage, parts, audit);
+  const ledger = new UploadLedger(config, dataSource, storage);
+  const measurements = new MeasurementsService(dataSource, storage, ledger, parts, audit);
+  const documents = new DocumentsService(dataSource, storage, ledger, parts, audit);
   const sourcing = new SourcingService(dataSource, parts, audit);
   const existing = new Set((await dataSource.getRepository(Part).find({ select: { id: true }, where: demo.map((p) => ({ id: p.id })) })).map((p) => p.id));
   const created: SeedPart[] = [];
@@ -96,5 +98,6 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
       await dataSource.transaction((manager) => sourcing.linkIn(manager, p.id, other, { kind: 'second-source', note: 'Same footprint and cable exit (demo)' }, null));
     }
   }
+  await ledger.onModuleDestroy();
   return `${created.length} parts created, ${demo.length - created.length} already present`;
 }

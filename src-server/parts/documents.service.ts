@@ -6,6 +6,7 @@ import type { AuthUser } from '../common/auth.decorators';
 import { DomainError, NotFoundError } from '../common/domain-error';
 import { AuditService } from '../audit/audit.service';
 import { StorageService, objectKey } from '../storage/storage.service';
+import { UploadLedger } from '../storage/upload-ledger.service';
 import { touchPart } from './catalogue-revision';
 import { PartDocument } from './document.entity';
 import { DOCUMENT_MAX_BYTES, sniffDocumentType } from './document-type';
@@ -21,11 +22,12 @@ export class DocumentsService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly storage: StorageService,
+    private readonly ledger: UploadLedger,
     private readonly parts: PartsService,
     private readonly audit: AuditService,
   ) {}
 
-  /** Checked by content and size before anything is stored; object first, row second, object removed if the row fails. */
+  /** Checked by content and size before anything is stored; pending note, object, then row + note removal in one transaction (see UploadLedger). */
   async upload(partId: number, maybeFile: UploadedFile | undefined, input: UploadDocumentDto, actor: AuthUser | null): Promise<DocumentDto> {
     const part = await this.dataSource.getRepository(Part).findOneBy({ id: partId });
     if (!part) throw new NotFoundError('part', partId);
@@ -37,7 +39,7 @@ export class DocumentsService {
     const type = sniffDocumentType(file.buffer);
     if (!type) throw new DomainError('DOCUMENT_TYPE_NOT_ALLOWED', `${file.originalname} is not a PDF, PNG, SVG or DXF file (judged by its content, not its name)`, 415);
     const key = objectKey('parts', partId, 'documents', `${randomUUID()}-${safeFileName(file.originalname)}`);
-    await this.storage.put(key, file.buffer, type.contentType);
+    await this.ledger.putPending(key, file.buffer, type.contentType);
     try {
       const id = await this.dataSource.transaction(async (manager) => {
         const locked = await this.parts.lockPart(manager, partId);
@@ -47,13 +49,14 @@ export class DocumentsService {
           contentType: type.contentType, objectKey: key, sizeBytes: file.size, sha256: sha256Hex(file.buffer), uploadedById: actor?.id ?? null,
         });
         const documentId: number = inserted.identifiers[0].id;
+        await this.ledger.settle(manager, key);
         await touchPart(manager, partId);
         await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'document-added', userId: actor?.id ?? null, changes: { documentId, kind: input.kind, fileName: file.originalname, type: type.label, sizeBytes: file.size } });
         return documentId;
       });
       return documentDto(await this.dataSource.getRepository(PartDocument).findOneOrFail({ where: { id }, relations: { uploadedBy: true } }));
     } catch (error) {
-      await this.storage.delete(key);
+      await this.ledger.abandon(key);
       throw error;
     }
   }
@@ -71,10 +74,11 @@ export class DocumentsService {
       const row = await manager.findOneBy(PartDocument, { id: documentId, partId });
       if (!row) throw new NotFoundError('document', documentId);
       await manager.delete(PartDocument, { id: documentId });
+      await this.ledger.release(manager, row.objectKey);
       await touchPart(manager, partId);
       await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'document-removed', userId: actor.id, changes: { documentId, fileName: row.fileName } });
       return row.objectKey;
     });
-    await this.storage.delete(key);
+    await this.ledger.abandon(key);
   }
 }

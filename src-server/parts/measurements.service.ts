@@ -6,6 +6,7 @@ import type { AuthUser } from '../common/auth.decorators';
 import { DomainError, NotFoundError } from '../common/domain-error';
 import { AuditService } from '../audit/audit.service';
 import { StorageService, objectKey } from '../storage/storage.service';
+import { UploadLedger } from '../storage/upload-ledger.service';
 import { reflectionCurveFromGamma, returnLossDbSeries, vswrSeries } from '../rf/reflection';
 import { touchPart } from './catalogue-revision';
 import { Measurement } from './measurement.entity';
@@ -66,6 +67,7 @@ export class MeasurementsService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly storage: StorageService,
+    private readonly ledger: UploadLedger,
     private readonly parts: PartsService,
     private readonly audit: AuditService,
   ) {}
@@ -76,8 +78,8 @@ export class MeasurementsService {
   }
 
   /**
-   * Parse first (a bad file stores nothing), then the object, then the row in a transaction; if the
-   * transaction fails the object is deleted again, so no upload is ever half-stored.
+   * Parse first (a bad file stores nothing), then the object under a pending note, then the row and the
+   * note's removal in one transaction; a failed or killed upload leaves only a note the sweeper cleans up.
    */
   async upload(partId: number, maybeFile: UploadedFile | undefined, input: UploadMeasurementDto, actor: AuthUser): Promise<UploadMeasurementResultDto> {
     const part = await this.dataSource.getRepository(Part).findOneBy({ id: partId });
@@ -94,7 +96,7 @@ export class MeasurementsService {
   /** Also used by the demo seeder, so demo curves take the same path as uploads. */
   async store(partId: number, file: UploadedFile, input: Omit<UploadMeasurementDto, 'dryRun'>, curve: ParsedCurve, actor: AuthUser | null): Promise<Measurement> {
     const key = objectKey('parts', partId, 'measurements', `${randomUUID()}-${safeFileName(file.originalname)}`);
-    await this.storage.put(key, file.buffer, input.kind === 's11' ? 'text/plain' : 'text/csv');
+    await this.ledger.putPending(key, file.buffer, input.kind === 's11' ? 'text/plain' : 'text/csv');
     try {
       const id = await this.dataSource.transaction(async (manager) => {
         const locked = await this.parts.lockPart(manager, partId);
@@ -109,6 +111,7 @@ export class MeasurementsService {
           uploadedById: actor?.id ?? null,
         });
         const measurementId: number = inserted.identifiers[0].id;
+        await this.ledger.settle(manager, key);
         await touchPart(manager, partId);
         await this.audit.record(manager, {
           entityType: 'part', entityId: partId, action: 'measurement-uploaded', userId: actor?.id ?? null,
@@ -118,7 +121,7 @@ export class MeasurementsService {
       });
       return this.dataSource.getRepository(Measurement).findOneOrFail({ where: { id }, relations: { uploadedBy: true } });
     } catch (error) {
-      await this.storage.delete(key);
+      await this.ledger.abandon(key);
       throw error;
     }
   }
@@ -152,11 +155,12 @@ export class MeasurementsService {
       const row = await manager.findOneBy(Measurement, { id: measurementId, partId });
       if (!row) throw new NotFoundError('measurement', measurementId);
       await manager.delete(Measurement, { id: measurementId });
+      await this.ledger.release(manager, row.objectKey);
       await touchPart(manager, partId);
       await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'measurement-deleted', userId: actor.id, changes: { measurementId, kind: row.kind, fileName: row.fileName } });
       return row.objectKey;
     });
-    // The row is gone, so the object is unreachable; removing it afterwards cannot lose data.
-    await this.storage.delete(key);
+    // The row is gone, so the object is unreachable; a crash before this leaves a note the sweeper finishes.
+    await this.ledger.abandon(key);
   }
 }

@@ -1,8 +1,9 @@
 import { Global, Module, OnApplicationBootstrap, Logger } from '@nestjs/common';
 import { StorageService } from './storage.service';
+import { UploadLedger } from './upload-ledger.service';
 
 @Global()
-@Module({ providers: [StorageService], exports: [StorageService] })
+@Module({ providers: [StorageService, UploadLedger], exports: [StorageService, UploadLedger] })
 export class StorageModule implements OnApplicationBootstrap {
   constructor(private readonly storage: StorageService) {}
 

@@ -71,12 +71,14 @@ export class StorageService {
     }
   }
 
-  /** Best effort: used to roll back an object whose database row could not be written. */
-  async delete(key: string): Promise<void> {
+  /** Best effort: false when the store could not be reached, so a caller can keep a note and retry. */
+  async delete(key: string): Promise<boolean> {
     try {
       await this.client.send(new DeleteObjectCommand({ Bucket: this.bucket, Key: key }));
+      return true;
     } catch (error) {
       this.logger.warn(`deleting ${key} failed: ${(error as Error).message}`);
+      return false;
     }
   }
 }
