@@ -36,6 +36,13 @@ describe(bandStatistics.name, () => {
     expect(bandStatistics(efficiency, { fromHz: 900 * MHZ, toHz: 1100 * MHZ })).toMatchObject({ status: 'no-data', reason: expect.stringContaining('above') });
     expect(bandStatistics(efficiency, { fromHz: 2e9, toHz: 3e9 }).status).toBe('no-data');
   });
+  it('gives a constant code at once and the sentence on reading, also in JSON', () => {
+    const below = bandStatistics(efficiency, { fromHz: 550 * MHZ, toHz: 700 * MHZ });
+    expect(below).toMatchObject({ status: 'no-data', code: 'below-range' });
+    expect(bandStatistics(efficiency, { fromHz: 900 * MHZ, toHz: 1100 * MHZ })).toMatchObject({ code: 'above-range' });
+    expect(bandStatistics({ frequenciesHz: [], values: [] }, { fromHz: 1, toHz: 2 })).toMatchObject({ code: 'no-points', reason: 'the curve has no points' });
+    expect(JSON.parse(JSON.stringify(below)).reason).toMatch(/starts at 550 MHz, below the measured range 600 MHz–1000 MHz/);
+  });
   it('refuses a band with reversed edges', () => {
     expect(() => bandStatistics(efficiency, { fromHz: 900 * MHZ, toHz: 800 * MHZ })).toThrow(RangeError);
   });

@@ -15,8 +15,12 @@ export interface SampledCurve {
   readonly values: ArrayLike<number>;
 }
 
+/** Why a band has no result: a constant to branch on; the sentence in `reason` is written on first read. */
+export type NoDataCode = 'no-points' | 'below-range' | 'above-range';
+
 export interface NoData {
   readonly status: 'no-data';
+  readonly code: NoDataCode;
   readonly reason: string;
 }
 
@@ -35,17 +39,26 @@ function formatMhz(frequencyHz: number): string {
   return `${Number((frequencyHz / 1e6).toPrecision(9))} MHz`;
 }
 
+/** A NoData whose sentence is built only when someone reads it (a catalogue scan asks millions of bands). */
+function noData(code: NoDataCode, describe: () => string): NoData {
+  let reason: string | undefined;
+  const result = { status: 'no-data' as const, code, reason: '' };
+  // Enumerable, so JSON responses and toMatchObject still see the sentence.
+  Object.defineProperty(result, 'reason', { enumerable: true, get: () => (reason ??= describe()) });
+  return result;
+}
+
 /** "no data" when the band is not wholly inside the measured range; null when it is. */
 export function bandOutsideData(frequenciesHz: ArrayLike<number>, band: FrequencyRange): NoData | null {
   checkBand(band);
   const count = frequenciesHz.length;
-  if (count === 0) return { status: 'no-data', reason: 'the curve has no points' };
+  if (count === 0) return noData('no-points', () => 'the curve has no points');
   const first = frequenciesHz[0];
   const last = frequenciesHz[count - 1];
   const slack = EDGE_TOLERANCE * Math.max(Math.abs(first), Math.abs(last));
-  const measured = `${formatMhz(first)}–${formatMhz(last)}`;
-  if (band.fromHz < first - slack) return { status: 'no-data', reason: `the band starts at ${formatMhz(band.fromHz)}, below the measured range ${measured}` };
-  if (band.toHz > last + slack) return { status: 'no-data', reason: `the band ends at ${formatMhz(band.toHz)}, above the measured range ${measured}` };
+  const measured = () => `${formatMhz(first)}–${formatMhz(last)}`;
+  if (band.fromHz < first - slack) return noData('below-range', () => `the band starts at ${formatMhz(band.fromHz)}, below the measured range ${measured()}`);
+  if (band.toHz > last + slack) return noData('above-range', () => `the band ends at ${formatMhz(band.toHz)}, above the measured range ${measured()}`);
   return null;
 }
 
