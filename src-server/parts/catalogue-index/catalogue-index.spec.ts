@@ -1,4 +1,6 @@
-import { CatalogueIndex, type IndexedPart, extremeInRange, meetsCoverage } from './catalogue-index';
+import fc from 'fast-check';
+import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../rf/mismatch';
+import { CatalogueIndex, type CoverageQuery, type IndexedPart, coverageScreen, extremeInRange, meetsCoverage, screenLevels, screenRejects } from './catalogue-index';
 
 const MHZ = 1e6;
 
@@ -73,5 +75,49 @@ describe(CatalogueIndex.name, () => {
     index.upsert([part(1, { lowestPrices: new Map([['USD', 0.5]]) }), part(2), part(3, { lowestPrices: new Map([['USD', 0.2]]) })]);
     expect(index.search({ ...base, sort: 'price', limit: 0 }).items.map((p) => p.id)).toEqual([3, 1, 2]);
     expect(index.search({ ...base, sort: 'price', order: 'desc', limit: 0 }).items.map((p) => p.id)).toEqual([1, 3, 2]);
+  });
+});
+
+describe(screenRejects.name, () => {
+  // Values and edges are drawn so they often land exactly on a screen level or on a sample frequency.
+  const levelValues = [...[1.5, 2, 2.5, 3, 4, 6].map(gammaMagnitudeFromVswr), gammaMagnitudeFromReturnLossDb(10)];
+  const gammaValue = fc.oneof(fc.constantFrom(...levelValues), fc.double({ min: 0, max: 1, noNaN: true }));
+  const efficiencyValue = fc.oneof(fc.constantFrom(10, 20, 30, 40, 50, 60, 70, 80, 90), fc.double({ min: 0, max: 100, noNaN: true }));
+  const sampled = (value: fc.Arbitrary<number>) =>
+    fc.uniqueArray(fc.integer({ min: 600, max: 1000 }), { minLength: 1, maxLength: 30 }).chain((mhz) => {
+      const f = [...mhz].sort((a, b) => a - b);
+      return fc.array(value, { minLength: f.length, maxLength: f.length }).map((values) => ({ frequenciesHz: f.map((x) => x * MHZ), values }));
+    });
+  const specBand = fc.tuple(fc.integer({ min: 550, max: 1050 }), fc.integer({ min: 0, max: 200 }), fc.option(fc.constantFrom(1.5, 2, 3), { nil: null }), fc.option(fc.constantFrom(30, 40, 50, 60), { nil: null }))
+    .map(([from, width, vswr, efficiency]) => band(from, from + width, vswr, efficiency));
+  const edge = fc.oneof(fc.integer({ min: 550, max: 1050 }), fc.double({ min: 550, max: 1050, noNaN: true }));
+  const range = fc.tuple(edge, edge).filter(([a, b]) => a !== b).map(([a, b]) => ({ fromHz: Math.min(a, b) * MHZ, toHz: Math.max(a, b) * MHZ }));
+  const query: fc.Arbitrary<CoverageQuery> = fc.record({
+    ranges: fc.array(range, { minLength: 1, maxLength: 3 }),
+    vswrMax: fc.oneof(fc.constantFrom(1.5, 1.925, 2, 2.5, 3, 4, 6), fc.double({ min: 1, max: 8, noNaN: true })),
+    minEfficiencyPct: fc.option(fc.oneof(fc.constantFrom(10, 20, 40, 90), fc.double({ min: 0, max: 100, noNaN: true })), { nil: undefined }),
+  });
+
+  it('rejects only parts the exact check fails, so the search equals the exact filter (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.option(sampled(gammaValue), { nil: null }), fc.option(sampled(efficiencyValue), { nil: null }), fc.array(specBand, { maxLength: 3 }), query, (gamma, efficiency, specBands, q) => {
+        const p = part(1, { gamma, efficiency, specBands: [...specBands].sort((a, b) => a.fromHz - b.fromHz) });
+        const exact = meetsCoverage(p, q);
+        if (screenRejects(coverageScreen(p), screenLevels(q), q)) expect(exact).toBe(false);
+        const index = new CatalogueIndex();
+        index.upsert([p]);
+        expect(index.search({ currency: 'USD', sort: 'mpn', order: 'asc', offset: 0, limit: 0, coverage: q }).total).toBe(exact ? 1 : 0);
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it('turns a part away on a sample over the limit, and leaves one on the limit to the exact check', () => {
+    // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3; rf-reference §3.2).
+    const p = part(1, { gamma: curve([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6]]) });
+    const at = (vswrMax: number): CoverageQuery => ({ ranges: [{ fromHz: 800 * MHZ, toHz: 900 * MHZ }], vswrMax });
+    expect(screenRejects(coverageScreen(p), screenLevels(at(2)), at(2))).toBe(false);
+    expect(screenRejects(coverageScreen(p), screenLevels(at(1.5)), at(1.5))).toBe(true);
+    expect(meetsCoverage(p, at(2))).toBe(true);
   });
 });

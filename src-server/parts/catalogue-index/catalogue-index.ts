@@ -1,12 +1,12 @@
 import { type FrequencyRange, type SampledCurve, interpolateAt, segmentIndex } from '../../rf/curves';
-import { gammaMagnitudeFromVswr } from '../../rf/mismatch';
+import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../rf/mismatch';
 import type { Connector, FormFactor, Lifecycle, MeasurementKind, PartPolarization, ReviewState } from '../part.types';
 import { type SpecBandClaim, claimedMaxVswr, specBandsCover } from '../spec-coverage';
 
 /**
  * The in-memory search index of the catalogue: every part's filterable fields, its newest |Γ| and
- * efficiency curves and its spec bands. A coverage query then costs a few µs per part and is exact
- * for any threshold, where a table of precomputed intervals would fix the thresholds in advance.
+ * efficiency curves and its spec bands. A coverage query is exact for any threshold; a screen built
+ * at load (see CoverageScreen) turns most parts away in a binary search before the exact check.
  * Pure: the service loads it from the database and refreshes the parts whose revision moved.
  */
 export interface IndexedPart {
@@ -97,12 +97,142 @@ export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean 
   return true;
 }
 
+/**
+ * VSWR limits the screen is built for: common datasheet figures, with RL 10 dB (VSWR ≈ 1.925,
+ * rf-reference §3.2) among them. A query uses the tightest one still at or above its own limit.
+ */
+const SCREEN_GAMMA_LIMITS: readonly number[] = [...[1.5, 2, 2.5, 3, 4, 6].map(gammaMagnitudeFromVswr), gammaMagnitudeFromReturnLossDb(10)].sort((a, b) => a - b);
+/** Efficiency floors in % the screen is built for; a query uses the highest one at or below its own floor. */
+const SCREEN_EFFICIENCY_FLOORS: readonly number[] = [10, 20, 30, 40, 50, 60, 70, 80, 90];
+
+/** Binary search: the first index whose frequency is >= frequencyHz (length when none). */
+function firstAtOrAbove(frequenciesHz: ArrayLike<number>, frequencyHz: number): number {
+  let low = 0;
+  let high = frequenciesHz.length;
+  while (low < high) {
+    const middle = (low + high) >>> 1;
+    if (frequenciesHz[middle] < frequencyHz) low = middle + 1;
+    else high = middle;
+  }
+  return low;
+}
+
+/**
+ * One curve's screen: for each level, the index of the next sample at or after i that breaks the
+ * level (n when none). A sample that breaks a level stricter-or-equal to the query's, lying in
+ * [fromHz, toHz], is itself in extremeInRange's extreme (edges on a sample interpolate to it), so
+ * the range fails: rejections are exact, and anything not rejected gets the exact check.
+ */
+interface CurveScreen {
+  readonly frequenciesHz: ArrayLike<number>;
+  /** The range interpolateAt accepts, slack included: outside it the curve has no say. */
+  readonly lowestHz: number;
+  readonly highestHz: number;
+  /** nextBreak[level][i], flattened as level * n + i. */
+  readonly nextBreak: Uint16Array;
+}
+
+const EDGE_TOLERANCE = 1e-12;
+
+function curveScreen(curve: SampledCurve, levels: readonly number[], breaks: (value: number, level: number) => boolean): CurveScreen | null {
+  const f = curve.frequenciesHz;
+  const n = f.length;
+  if (n === 0 || n >= 0xffff) return null;
+  const slack = EDGE_TOLERANCE * Math.max(Math.abs(f[0]), Math.abs(f[n - 1]));
+  const nextBreak = new Uint16Array(levels.length * n);
+  for (let level = 0; level < levels.length; level++) {
+    let next = n;
+    for (let i = n - 1; i >= 0; i--) {
+      if (breaks(curve.values[i], levels[level])) next = i;
+      nextBreak[level * n + i] = next;
+    }
+  }
+  return { frequenciesHz: f, lowestHz: f[0] - slack, highestHz: f[n - 1] + slack, nextBreak };
+}
+
+/** True when some sample inside [fromHz, toHz] breaks the level (the curve covers the range). */
+function breaksIn(screen: CurveScreen, level: number, range: FrequencyRange): boolean {
+  const f = screen.frequenciesHz;
+  const n = f.length;
+  const start = firstAtOrAbove(f, range.fromHz);
+  if (start >= n) return false;
+  const next = screen.nextBreak[level * n + start];
+  return next < n && f[next] <= range.toHz;
+}
+
+/** interpolateAt's own test at both edges, so the screen and meetsCoverage agree on which source decides. */
+const within = (screen: CurveScreen, frequencyHz: number) => frequencyHz >= screen.lowestHz && frequencyHz <= screen.highestHz;
+const covers = (screen: CurveScreen, range: FrequencyRange) => within(screen, range.fromHz) && within(screen, range.toHz);
+
+export interface CoverageScreen {
+  readonly gamma: CurveScreen | null;
+  readonly efficiency: CurveScreen | null;
+  /** Hull of the spec bands: a range outside it cannot be covered by them. */
+  readonly specLowestHz: number;
+  readonly specHighestHz: number;
+}
+
+export function coverageScreen(part: IndexedPart): CoverageScreen {
+  let specLowestHz = Infinity;
+  let specHighestHz = -Infinity;
+  for (const band of part.specBands) {
+    specLowestHz = Math.min(specLowestHz, band.fromHz);
+    specHighestHz = Math.max(specHighestHz, band.toHz);
+  }
+  return {
+    gamma: part.gamma ? curveScreen(part.gamma, SCREEN_GAMMA_LIMITS, (value, limit) => value > limit) : null,
+    efficiency: part.efficiency ? curveScreen(part.efficiency, SCREEN_EFFICIENCY_FLOORS, (value, floor) => value < floor) : null,
+    specLowestHz,
+    specHighestHz,
+  };
+}
+
+/** The screen levels a query may use: -1 where no level is safe for it. */
+export interface ScreenLevels {
+  readonly gamma: number;
+  readonly efficiency: number;
+}
+
+export function screenLevels(query: CoverageQuery): ScreenLevels {
+  const gammaLimit = gammaMagnitudeFromVswr(query.vswrMax);
+  const gamma = SCREEN_GAMMA_LIMITS.findIndex((limit) => limit >= gammaLimit);
+  let efficiency = -1;
+  if (query.minEfficiencyPct !== undefined) {
+    for (let level = 0; level < SCREEN_EFFICIENCY_FLOORS.length; level++) if (SCREEN_EFFICIENCY_FLOORS[level] <= query.minEfficiencyPct) efficiency = level;
+  }
+  return { gamma, efficiency };
+}
+
+/**
+ * True only when meetsCoverage is certainly false: a measured sample breaks a level at least as strict
+ * as the query's, or a range the curve does not reach lies outside every spec band. False: ask meetsCoverage.
+ */
+export function screenRejects(screen: CoverageScreen, levels: ScreenLevels, query: CoverageQuery): boolean {
+  for (const range of query.ranges) {
+    const gammaCovers = screen.gamma !== null && covers(screen.gamma, range);
+    if (gammaCovers) {
+      if (levels.gamma >= 0 && breaksIn(screen.gamma!, levels.gamma, range)) return true;
+    } else if (range.fromHz < screen.specLowestHz || range.toHz > screen.specHighestHz) {
+      return true;
+    }
+    if (query.minEfficiencyPct === undefined) continue;
+    const efficiencyCovers = screen.efficiency !== null && covers(screen.efficiency, range);
+    if (efficiencyCovers) {
+      if (levels.efficiency >= 0 && breaksIn(screen.efficiency!, levels.efficiency, range)) return true;
+    } else if (range.fromHz < screen.specLowestHz || range.toHz > screen.specHighestHz) {
+      return true;
+    }
+  }
+  return false;
+}
+
 const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
 const MAX_CACHED_RESULTS = 64;
 
 export class CatalogueIndex {
   private readonly parts = new Map<number, IndexedPart>();
+  private readonly screens = new Map<IndexedPart, CoverageScreen>();
   /** Parts in ascending order per sort key, built on first use after a change. */
   private readonly sorted = new Map<string, IndexedPart[]>();
   /** Every match of recent queries (paging and sorting aside from offset/limit), cleared on every change. */
@@ -113,7 +243,12 @@ export class CatalogueIndex {
   }
 
   upsert(parts: Iterable<IndexedPart>): void {
-    for (const part of parts) this.parts.set(part.id, part);
+    for (const part of parts) {
+      const previous = this.parts.get(part.id);
+      if (previous) this.screens.delete(previous);
+      this.parts.set(part.id, part);
+      this.screens.set(part, coverageScreen(part));
+    }
     this.sorted.clear();
     this.results.clear();
   }
@@ -176,6 +311,7 @@ export class CatalogueIndex {
       lifecycle: query.lifecycle?.length ? new Set<string>(query.lifecycle) : null,
     };
     const coverage = query.coverage;
+    const levels = coverage ? screenLevels(coverage) : null;
     const matches = (p: IndexedPart): boolean => {
       if (sets.status && !sets.status.has(p.reviewState)) return false;
       if (sets.formFactor && !sets.formFactor.has(p.formFactor)) return false;
@@ -187,7 +323,7 @@ export class CatalogueIndex {
         if (price === undefined || price > query.priceMax) return false;
       }
       for (const token of tokens) if (!p.searchText.includes(token)) return false;
-      if (coverage && !meetsCoverage(p, coverage)) return false;
+      if (coverage && (screenRejects(this.screens.get(p)!, levels!, coverage) || !meetsCoverage(p, coverage))) return false;
       return true;
     };
     const ordered = this.inOrder(query.sort, query.currency);
