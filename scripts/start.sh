@@ -18,8 +18,12 @@ node dist/server/database/migrate.js
 node dist/server/database/seed.js
 build_client
 
-cleanup() { log "stopping"; kill "$APP_PID" 2>/dev/null || true; fakes_stop dev; db_stop; }
-trap cleanup INT TERM
+STOPPED=0
+cleanup() {
+  [ $STOPPED = 1 ] && return; STOPPED=1
+  log "stopping"; kill "$APP_PID" 2>/dev/null || true; fakes_stop dev; db_stop
+}
+trap 'cleanup; exit 0' INT TERM
 node dist/server/main.js &
 APP_PID=$!
 echo "$APP_PID" >"$RUN_DIR/app.pid"

@@ -1,6 +1,9 @@
 import type { LoggerService, LogLevel } from '@nestjs/common';
 import { currentRequestId } from './request-context';
 
+// Nest announces every module and route at start-up; that is noise in production logs.
+const QUIET_CONTEXTS = new Set(['InstanceLoader', 'RoutesResolver', 'RouterExplorer']);
+
 /** One JSON object per line, with the request id when the line belongs to a request. */
 export class JsonLogger implements LoggerService {
   constructor(private readonly levels: LogLevel[] = ['log', 'warn', 'error', 'fatal']) {}
@@ -8,6 +11,7 @@ export class JsonLogger implements LoggerService {
   private write(level: LogLevel, message: unknown, rest: unknown[]): void {
     if (!this.levels.includes(level)) return;
     const context = typeof rest[rest.length - 1] === 'string' ? (rest.pop() as string) : undefined;
+    if (level === 'log' && context && QUIET_CONTEXTS.has(context)) return;
     const stack = rest.find((r) => typeof r === 'string' && r.includes('\n    at '));
     const line: Record<string, unknown> = { time: new Date().toISOString(), level, context, requestId: currentRequestId(), message };
     if (stack) line.stack = stack;
