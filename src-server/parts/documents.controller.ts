@@ -1,11 +1,12 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
 import { ParseIdPipe } from '../common/parse-id.pipe';
 import { DocumentsService } from './documents.service';
-import { downloadOf, UPLOAD_LIMITS } from './file-response';
+import { LimitedFileUpload } from '../storage/limited-file-upload';
+import { DOCUMENT_MAX_BYTES } from './document-type';
+import { downloadOf } from './file-response';
 import type { UploadedFile } from './measurements.service';
 import { UploadDocumentDto } from './dto/upload.dto';
 import { DocumentDto } from './dto/part-response.dto';
@@ -17,7 +18,7 @@ export class DocumentsController {
 
   @Post()
   @Roles('engineer', 'admin')
-  @UseInterceptors(FileInterceptor('file', UPLOAD_LIMITS))
+  @UseInterceptors(LimitedFileUpload(DOCUMENT_MAX_BYTES, 'DOCUMENT_TOO_LARGE', 'a document'))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', required: ['file', 'kind'], properties: { file: { type: 'string', format: 'binary' }, kind: { type: 'string', enum: ['datasheet', 'drawing', 'other'] }, title: { type: 'string' } } } })
   @ApiOperation({ summary: 'Attach a datasheet or drawing (PDF, PNG, SVG, DXF by content; at most 20 MiB); stored with SHA-256' })

@@ -1,11 +1,11 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBody, ApiConsumes, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
 import { ParseIdPipe } from '../common/parse-id.pipe';
-import { downloadOf, UPLOAD_LIMITS } from './file-response';
-import { MeasurementsService, type UploadedFile } from './measurements.service';
+import { LimitedFileUpload } from '../storage/limited-file-upload';
+import { downloadOf } from './file-response';
+import { MEASUREMENT_MAX_BYTES, MeasurementsService, type UploadedFile } from './measurements.service';
 import { UploadMeasurementDto, UploadMeasurementResultDto } from './dto/upload.dto';
 import { MeasurementPointsDto } from './dto/part-response.dto';
 
@@ -16,10 +16,10 @@ export class MeasurementsController {
 
   @Post()
   @Roles('engineer', 'admin')
-  @UseInterceptors(FileInterceptor('file', UPLOAD_LIMITS))
+  @UseInterceptors(LimitedFileUpload(MEASUREMENT_MAX_BYTES, 'MEASUREMENT_FILE_TOO_LARGE', 'a measurement file'))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', required: ['file', 'kind'], properties: { file: { type: 'string', format: 'binary' }, kind: { type: 'string', enum: ['s11', 'efficiency', 'peak-gain', 'average-gain'] }, groundLengthMm: { type: 'number' }, groundWidthMm: { type: 'number' }, conditions: { type: 'string' }, frequencyUnit: { type: 'string' }, valueUnit: { type: 'string' }, dryRun: { type: 'boolean' } } } })
-  @ApiOperation({ summary: 'Upload a curve: s11 as Touchstone, the others as CSV; 422 { code, message, line } for a bad file, and nothing is stored' })
+  @ApiOperation({ summary: 'Upload a curve: s11 as Touchstone, the others as CSV; at most 16 MiB (413), text only (415); 422 { code, message, line } for a bad file, and nothing is stored' })
   @ApiOkResponse({ type: UploadMeasurementResultDto })
   upload(@Param('id', ParseIdPipe) id: number, @UploadedFileParam() file: UploadedFile | undefined, @Body() body: UploadMeasurementDto, @CurrentUser() user: AuthUser): Promise<UploadMeasurementResultDto> {
     return this.measurements.upload(id, file, body, user);

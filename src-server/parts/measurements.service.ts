@@ -5,6 +5,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import type { AuthUser } from '../common/auth.decorators';
 import { DomainError, NotFoundError } from '../common/domain-error';
 import { AuditService } from '../audit/audit.service';
+import { looksBinary } from '../storage/limited-file-upload';
 import { StorageService, objectKey } from '../storage/storage.service';
 import { UploadLedger } from '../storage/upload-ledger.service';
 import { reflectionCurveFromGamma, returnLossDbSeries, vswrSeries } from '../rf/reflection';
@@ -26,11 +27,14 @@ export interface UploadedFile {
 }
 
 const PREVIEW_POINTS = 400;
+/** 100,000 points of a two-port Touchstone file in RI stay well under this. */
+export const MEASUREMENT_MAX_BYTES = 16 * 1024 * 1024;
 
 /** A storable file name: the original's safe characters, never a path. */
 export function safeFileName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? 'file';
-  const cleaned = base.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/^[._-]+/, '').slice(0, 80);
+  // Runs of dots collapse to one: objectKey refuses ".." anywhere, and "rev..2.pdf" must still upload.
+  const cleaned = base.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/\.{2,}/g, '.').replace(/^[._-]+/, '').slice(0, 80);
   return cleaned || 'file';
 }
 
@@ -73,6 +77,12 @@ export class MeasurementsService {
   ) {}
 
   parse(file: UploadedFile, input: UploadMeasurementDto): ParsedCurve {
+    if (file.size > MEASUREMENT_MAX_BYTES) {
+      throw new DomainError('MEASUREMENT_FILE_TOO_LARGE', `file: a measurement file may be at most ${MEASUREMENT_MAX_BYTES / 1048576} MiB; nothing was stored`, 413, { field: 'file', limitBytes: MEASUREMENT_MAX_BYTES });
+    }
+    if (looksBinary(file.buffer)) {
+      throw new DomainError('MEASUREMENT_TYPE_NOT_ALLOWED', `file: ${file.originalname} is not a text file; curves are Touchstone (s11) or CSV text`, 415, { field: 'file' });
+    }
     if (input.kind === 's11') return parseTouchstoneS11(file.buffer, file.originalname);
     return parseCurveCsv(file.buffer, input.kind, { frequencyUnit: input.frequencyUnit, valueUnit: input.valueUnit });
   }

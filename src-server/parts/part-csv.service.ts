@@ -4,6 +4,7 @@ import { DataSource } from 'typeorm';
 import type { AuthUser } from '../common/auth.decorators';
 import { DomainError } from '../common/domain-error';
 import { CatalogueSearchService } from './catalogue-index/catalogue-search.service';
+import { looksBinary } from '../storage/limited-file-upload';
 import { type UploadedFile, requireFile } from './measurements.service';
 import { Part } from './part.entity';
 import { type ImportProblem, PART_CSV_COLUMNS, csvLine, formatSpecBands, parsePartCsv } from './part-csv';
@@ -12,6 +13,9 @@ import type { PartSearchDto } from './dto/part-search.dto';
 import type { ImportResultDto } from './dto/import.dto';
 
 const EXPORT_COLUMNS = ['id', ...PART_CSV_COLUMNS, 'reviewState', 'measuredKinds', 'lowestPrices'] as const;
+
+/** A catalogue import is a few thousand rows of text; anything bigger is a mistake. */
+export const PART_IMPORT_MAX_BYTES = 4 * 1024 * 1024;
 
 @Injectable()
 export class PartCsvService {
@@ -24,6 +28,12 @@ export class PartCsvService {
   /** Every problem by row first; a real import writes all rows in one transaction or none. */
   async importCsv(maybeFile: UploadedFile | undefined, dryRun: boolean, actor: AuthUser): Promise<ImportResultDto> {
     const file = requireFile(maybeFile);
+    if (file.size > PART_IMPORT_MAX_BYTES) {
+      throw new DomainError('PART_IMPORT_TOO_LARGE', `file: an import may be at most ${PART_IMPORT_MAX_BYTES / 1048576} MiB; split it, nothing was imported`, 413, { field: 'file', limitBytes: PART_IMPORT_MAX_BYTES });
+    }
+    if (looksBinary(file.buffer)) {
+      throw new DomainError('PART_IMPORT_NOT_CSV', `file: ${file.originalname} is not a CSV text file; nothing was imported`, 415, { field: 'file' });
+    }
     const { parts, problems } = parsePartCsv(file.buffer);
     if (parts.length > 0) {
       const existing: { name: string; mpn: string }[] = await this.dataSource.query(
