@@ -1,3 +1,4 @@
+import { JwtService } from '@nestjs/jwt';
 import { APP_URL, openBrowser, signIn, type BrowserSession } from '../support/browser';
 import { linkIn, waitForMail } from '../support/mailbox';
 
@@ -40,6 +41,21 @@ describe('signing in (browser)', () => {
     await page.goto(`${APP_URL}/admin/users`);
     await page.getByRole('button', { name: 'Sign in' }).waitFor();
     await page.getByText('Your session is no longer valid. Sign in again.').waitFor();
+  });
+
+  it('returns to sign-in saying the session expired when the token is past its expiry, and signing in again works', async () => {
+    const { page } = browser;
+    await signIn(page, 'engineer@bandwright.test');
+    const token = await page.evaluate(() => localStorage.getItem('bandwright.token'));
+    // The same claims re-signed with the server's secret, expired ten seconds ago.
+    const jwt = new JwtService({ secret: process.env.JWT_SECRET ?? 'test-secret-not-for-production-0123456789' });
+    const { exp: _exp, iat: _iat, ...claims } = jwt.decode(token!) as Record<string, unknown>;
+    const expired = jwt.sign({ ...claims, exp: Math.floor(Date.now() / 1000) - 10 });
+    await page.evaluate((value) => localStorage.setItem('bandwright.token', value), expired);
+    await page.goto(`${APP_URL}/`);
+    await page.getByRole('button', { name: 'Sign in' }).waitFor();
+    await page.getByText('Your session expired. Sign in again.').waitFor();
+    await signIn(page, 'engineer@bandwright.test');
   });
 
   it('an admin invites a user; the invitee follows the e-mailed link, sets a password and signs in', async () => {
