@@ -1,5 +1,5 @@
 import { type FrequencyRange, type SampledCurve, coverageOfBand, efficiencyInBand, gainInBand } from '../rf/curves';
-import { type ReflectionCurve, bandMatch } from '../rf/reflection';
+import { type ReflectionCurve, bandMatch, matchedRanges } from '../rf/reflection';
 import { returnLossDbFromVswr } from '../rf/mismatch';
 import { type SpecBandClaim, claimedMaxVswr, mergeRanges, overlappingBands, specBandsCover } from './spec-coverage';
 
@@ -94,4 +94,20 @@ export function figuresForRange(curves: PartCurves, range: FrequencyRange): Rang
     if (claimed.length > 0) figures.averageGainDbi = Math.min(...claimed.map((b) => b.averageGainDbi!));
   }
   return figures;
+}
+
+export interface CoveredRange {
+  fromMhz: number;
+  toMhz: number;
+  source: 'measured' | 'spec';
+}
+
+/** Where the part is matched to VSWR ≤ maxVswr: the measured S11's intervals, else its spec bands that claim it. */
+export function coveredRangesOf(curves: PartCurves, maxVswr = 2): CoveredRange[] {
+  if (curves.s11) {
+    return matchedRanges(curves.s11, { kind: 'vswr', maxVswr }).map((r) => ({ fromMhz: mhz(r.fromHz), toMhz: mhz(r.toHz), source: 'measured' as const }));
+  }
+  return curves.specBands
+    .filter((band) => { const v = claimedMaxVswr(band); return v !== null && v <= maxVswr; })
+    .map((band) => ({ fromMhz: mhz(band.fromHz), toMhz: mhz(band.toHz), source: 'spec' as const }));
 }

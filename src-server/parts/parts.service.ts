@@ -14,7 +14,7 @@ import { loadCurrentCurves } from './measurement-curves';
 import { PartOffer } from './offer.entity';
 import { Part } from './part.entity';
 import { assertCanEdit, partAccess } from './part-access';
-import { figuresForRange } from './part-figures';
+import { coveredRangesOf, figuresForRange } from './part-figures';
 import { iso, searchTextOf, specBandClaim, specBandDto, userRef } from './part-mapping';
 import { partErrors } from './parts.exception';
 import { SpecBand } from './spec-band.entity';
@@ -186,6 +186,7 @@ export class PartsService {
       specBands: specBands.map(specBandDto),
       measurements: measurements.map((m) => measurementDto(m, currentIds.has(m.id))),
       figures: figureRanges.map((range) => figuresForRange(partCurves, range)),
+      coveredRanges: coveredRangesOf(partCurves),
       documents: documents.map(documentDto),
       offers: offers.map(offerDto),
       alternates: alternates.map((a) => ({

@@ -74,6 +74,12 @@ export class MeasurementPointsDto {
   @ApiPropertyOptional({ type: [Number], description: 's11 only: return loss, dB (positive)' }) returnLossDb?: number[];
 }
 
+export class CoveredRangeDto {
+  @ApiProperty() fromMhz: number;
+  @ApiProperty() toMhz: number;
+  @ApiProperty({ enum: ['measured', 'spec'] }) source: 'measured' | 'spec';
+}
+
 /** Figures of one frequency range computed by the RF module from the current curves, or from spec bands. */
 export class RangeFiguresDto {
   @ApiProperty() fromMhz: number;
@@ -170,6 +176,7 @@ export class PartDetailDto {
   @ApiProperty({ type: [SpecBandDto] }) specBands: SpecBandDto[];
   @ApiProperty({ type: [MeasurementDto] }) measurements: MeasurementDto[];
   @ApiProperty({ type: [RangeFiguresDto], description: 'Per range: the spec bands, plus any ?ranges= asked for' }) figures: RangeFiguresDto[];
+  @ApiProperty({ type: [CoveredRangeDto], description: 'Where VSWR ≤ 2: from the current S11, else from spec bands claiming it' }) coveredRanges: CoveredRangeDto[];
   @ApiProperty({ type: [DocumentDto] }) documents: DocumentDto[];
   @ApiProperty({ type: [OfferDto] }) offers: OfferDto[];
   @ApiProperty({ type: [AlternateDto] }) alternates: AlternateDto[];

@@ -7,6 +7,8 @@ import { FrequencyStrip } from '../../../components/FrequencyStrip';
 import { useBands } from '../api/get-bands';
 import { type Band, type BandFilter, type Technology, TECHNOLOGY_LABELS } from '../types';
 import { BandsNav } from './BandsNav';
+import { PartOverlayPicker } from './PartOverlayPicker';
+import { usePartCoverage, type PartCoverage } from '../api/get-part-coverage';
 import { describeRanges, describeSource } from './band-format';
 
 const TECH_ORDER = Object.keys(TECHNOLOGY_LABELS) as Technology[];
@@ -24,9 +26,11 @@ const COLUMNS: { id: string; name: string; width: number; value: (b: Band) => st
 interface BandGroupProps {
   technology: Technology;
   bands: Band[];
+  /** A part whose covered ranges are drawn under each band, clipped to the band's span. */
+  part: PartCoverage | null;
 }
 
-function BandGroup({ technology, bands }: BandGroupProps) {
+function BandGroup({ technology, bands, part }: BandGroupProps) {
   const [showStrip, setShowStrip] = useState(false);
   const getCellData = useCallback((row: number, col: number) => COLUMNS[col].value(bands[row]), [bands]);
   const renderers = useMemo(
@@ -34,8 +38,16 @@ function BandGroup({ technology, bands }: BandGroupProps) {
     [getCellData],
   );
   const stripRows = useMemo(
-    () => bands.map((b) => ({ id: b.id, label: b.designation, ranges: b.ranges.map((r) => ({ ...r, label: b.designation })) })),
-    [bands],
+    () =>
+      bands.map((b) => {
+        const from = Math.min(...b.ranges.map((r) => r.fromMHz));
+        const to = Math.max(...b.ranges.map((r) => r.toMHz));
+        const covered = (part?.coveredRanges ?? [])
+          .filter((c) => c.toMhz > from && c.fromMhz < to)
+          .map((c) => ({ fromMHz: Math.max(c.fromMhz, from), toMHz: Math.min(c.toMhz, to), label: `${part!.mpn} VSWR ≤ 2 (${c.source})` }));
+        return { id: b.id, label: b.designation, ranges: b.ranges.map((r) => ({ ...r, label: b.designation })), covered };
+      }),
+    [bands, part],
   );
   return (
     <Section
@@ -62,6 +74,8 @@ export function BandLibraryPage() {
   const validFrequency = frequency.trim() !== '' && Number.isFinite(f) && f > 0;
   const filter: BandFilter = { technology: technology || undefined, ...(validFrequency ? { fromMHz: f, toMHz: f } : {}) };
   const bands = useBands(filter);
+  const [partId, setPartId] = useState<number | null>(null);
+  const part = usePartCoverage(partId);
   const groups = useMemo(() => {
     const all = bands.data ?? [];
     return TECH_ORDER.map((t) => ({ technology: t, bands: all.filter((b) => b.technology === t) })).filter((g) => g.bands.length);
@@ -79,9 +93,10 @@ export function BandLibraryPage() {
         <FormGroup label="Contains frequency (MHz)" labelFor="band-frequency" intent={frequency && !validFrequency ? 'danger' : 'none'} helperText={frequency && !validFrequency ? 'Enter a frequency in MHz, e.g. 1575.42' : undefined}>
           <InputGroup id="band-frequency" leftIcon="search" placeholder="e.g. 868" value={frequency} onValueChange={setFrequency} />
         </FormGroup>
+        <PartOverlayPicker selected={part.data ?? null} onSelect={setPartId} />
       </div>
       <QueryState isPending={bands.isPending} error={bands.error}>
-        {groups.length === 0 ? <NonIdealState icon="search" title="No band matches" /> : groups.map((g) => <BandGroup key={g.technology} technology={g.technology} bands={g.bands} />)}
+        {groups.length === 0 ? <NonIdealState icon="search" title="No band matches" /> : groups.map((g) => <BandGroup key={g.technology} technology={g.technology} bands={g.bands} part={part.data ?? null} />)}
       </QueryState>
     </>
   );
