@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../rf/mismatch';
-import { CatalogueIndex, type CoverageQuery, type IndexedPart, coverageScreen, extremeInRange, meetsCoverage, screenLevels, screenRejects } from './catalogue-index';
+import { CatalogueIndex, type CoverageQuery, type IndexedPart, binsInside, coverageScreen, extremeInRange, meetsCoverage, screenLevels, screenRejects } from './catalogue-index';
 
 const MHZ = 1e6;
 
@@ -110,6 +110,20 @@ describe(screenRejects.name, () => {
       }),
       { numRuns: 3000 },
     );
+  });
+
+  it('uses only the 10 MHz bins wholly inside a range, so a bad sample just outside it turns nothing away', () => {
+    // Bins are [k·10, (k+1)·10) MHz; 32 bins to a word.
+    expect(Array.from(binsInside({ fromHz: 795 * MHZ, toHz: 830 * MHZ }))).toEqual([2, (1 << 16) | (1 << 17) | (1 << 18)]);
+    expect(Array.from(binsInside({ fromHz: 800 * MHZ, toHz: 810 * MHZ }))).toEqual([2, 1 << 16]);
+    expect(Array.from(binsInside({ fromHz: 801 * MHZ, toHz: 809 * MHZ }))).toEqual([]);
+    // |Γ| 0.9 at 792 MHz and 901 MHz, 0.1 from 795 to 900 MHz: B-range 795-900 passes at VSWR 2.
+    const p = part(1, { gamma: curve([[700, 0.9], [792, 0.9], [795, 0.1], [900, 0.1], [901, 0.9], [1000, 0.9]]) });
+    const q: CoverageQuery = { ranges: [{ fromHz: 795 * MHZ, toHz: 900 * MHZ }], vswrMax: 2 };
+    expect(screenRejects(coverageScreen(p), screenLevels(q), q)).toBe(false);
+    expect(meetsCoverage(p, q)).toBe(true);
+    const wider: CoverageQuery = { ranges: [{ fromHz: 780 * MHZ, toHz: 900 * MHZ }], vswrMax: 2 };
+    expect(screenRejects(coverageScreen(p), screenLevels(wider), wider)).toBe(true);
   });
 
   it('turns a part away on a sample over the limit, and leaves one on the limit to the exact check', () => {

@@ -1,5 +1,5 @@
 import { type FrequencyRange, type SampledCurve, interpolateAt, segmentIndex } from '../../rf/curves';
-import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../rf/mismatch';
+import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, vswrFromReturnLossDb } from '../../rf/mismatch';
 import type { Connector, FormFactor, Lifecycle, MeasurementKind, PartPolarization, ReviewState } from '../part.types';
 import { type SpecBandClaim, claimedMaxVswr, specBandsCover } from '../spec-coverage';
 
@@ -102,6 +102,8 @@ export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean 
  * rf-reference §3.2) among them. A query uses the tightest one still at or above its own limit.
  */
 const SCREEN_GAMMA_LIMITS: readonly number[] = [...[1.5, 2, 2.5, 3, 4, 6].map(gammaMagnitudeFromVswr), gammaMagnitudeFromReturnLossDb(10)].sort((a, b) => a - b);
+/** The same levels as VSWR, for spec bands, which claimedMaxVswr states as VSWR. */
+const SCREEN_SPEC_VSWR: readonly number[] = [1.5, 2, 2.5, 3, 4, 6, vswrFromReturnLossDb(10)].sort((a, b) => a - b);
 /** Efficiency floors in % the screen is built for; a query uses the highest one at or below its own floor. */
 const SCREEN_EFFICIENCY_FLOORS: readonly number[] = [10, 20, 30, 40, 50, 60, 70, 80, 90];
 
@@ -130,6 +132,36 @@ interface CurveScreen {
   readonly highestHz: number;
   /** nextBreak[level][i], flattened as level * n + i. */
   readonly nextBreak: Uint16Array;
+  /** Per level, one bit per BIN_HZ-wide frequency bin holding a sample that breaks the level; flattened as level * BIN_WORDS + word. */
+  readonly dirtyBins: Uint32Array;
+}
+
+/** Fixed bins over 0..10.24 GHz: a bin wholly inside a range that holds a breaking sample fails it without a search. */
+const BIN_HZ = 10e6;
+const BIN_COUNT = 1024;
+const BIN_WORDS = BIN_COUNT / 32;
+
+function binOf(frequencyHz: number): number {
+  let bin = Math.floor(frequencyHz / BIN_HZ);
+  // Division rounds; the bin's own edges decide.
+  if (bin * BIN_HZ > frequencyHz) bin -= 1;
+  else if ((bin + 1) * BIN_HZ <= frequencyHz) bin += 1;
+  return bin;
+}
+
+/** [word, mask, word, mask, …] of the bins lying wholly inside the range (none for a narrow one). */
+export function binsInside(range: FrequencyRange): Int32Array {
+  const startBin = binOf(range.fromHz);
+  const first = Math.max(0, startBin * BIN_HZ < range.fromHz ? startBin + 1 : startBin);
+  // The bin holding toHz ends above it; the one before ends at or below it.
+  const last = Math.min(BIN_COUNT - 1, binOf(range.toHz) - 1);
+  const pairs: number[] = [];
+  for (let bin = first; bin <= last; bin++) {
+    const word = bin >>> 5;
+    if (pairs.length === 0 || pairs[pairs.length - 2] !== word) pairs.push(word, 0);
+    pairs[pairs.length - 1] |= 1 << (bin & 31);
+  }
+  return Int32Array.from(pairs);
 }
 
 const EDGE_TOLERANCE = 1e-12;
@@ -140,18 +172,26 @@ function curveScreen(curve: SampledCurve, levels: readonly number[], breaks: (va
   if (n === 0 || n >= 0xffff) return null;
   const slack = EDGE_TOLERANCE * Math.max(Math.abs(f[0]), Math.abs(f[n - 1]));
   const nextBreak = new Uint16Array(levels.length * n);
+  const dirtyBins = new Uint32Array(levels.length * BIN_WORDS);
   for (let level = 0; level < levels.length; level++) {
     let next = n;
     for (let i = n - 1; i >= 0; i--) {
-      if (breaks(curve.values[i], levels[level])) next = i;
+      if (breaks(curve.values[i], levels[level])) {
+        next = i;
+        const bin = binOf(f[i]);
+        if (bin >= 0 && bin < BIN_COUNT) dirtyBins[level * BIN_WORDS + (bin >>> 5)] |= 1 << (bin & 31);
+      }
       nextBreak[level * n + i] = next;
     }
   }
-  return { frequenciesHz: f, lowestHz: f[0] - slack, highestHz: f[n - 1] + slack, nextBreak };
+  return { frequenciesHz: f, lowestHz: f[0] - slack, highestHz: f[n - 1] + slack, nextBreak, dirtyBins };
 }
 
 /** True when some sample inside [fromHz, toHz] breaks the level (the curve covers the range). */
-function breaksIn(screen: CurveScreen, level: number, range: FrequencyRange): boolean {
+function breaksIn(screen: CurveScreen, level: number, range: FrequencyRange, bins: Int32Array): boolean {
+  const dirty = screen.dirtyBins;
+  const base = level * BIN_WORDS;
+  for (let k = 0; k < bins.length; k += 2) if ((dirty[base + bins[k]] & bins[k + 1]) !== 0) return true;
   const f = screen.frequenciesHz;
   const n = f.length;
   const start = firstAtOrAbove(f, range.fromHz);
@@ -167,30 +207,49 @@ const covers = (screen: CurveScreen, range: FrequencyRange) => within(screen, ra
 export interface CoverageScreen {
   readonly gamma: CurveScreen | null;
   readonly efficiency: CurveScreen | null;
-  /** Hull of the spec bands: a range outside it cannot be covered by them. */
-  readonly specLowestHz: number;
-  readonly specHighestHz: number;
+  /**
+   * Per spec VSWR level, then per efficiency floor: [lowest, highest] Hz of the spec bands meeting it.
+   * A range outside the hull at a level no stricter than the query's cannot be covered by them.
+   */
+  readonly specVswrHull: Float64Array;
+  readonly specEfficiencyHull: Float64Array;
 }
 
-export function coverageScreen(part: IndexedPart): CoverageScreen {
-  let specLowestHz = Infinity;
-  let specHighestHz = -Infinity;
-  for (const band of part.specBands) {
-    specLowestHz = Math.min(specLowestHz, band.fromHz);
-    specHighestHz = Math.max(specHighestHz, band.toHz);
+function specHull(bands: readonly SpecBandClaim[], levels: readonly number[], meets: (band: SpecBandClaim, level: number) => boolean): Float64Array {
+  const hull = new Float64Array(levels.length * 2);
+  for (let level = 0; level < levels.length; level++) {
+    let lowest = Infinity;
+    let highest = -Infinity;
+    for (const band of bands) {
+      if (!meets(band, levels[level])) continue;
+      lowest = Math.min(lowest, band.fromHz);
+      highest = Math.max(highest, band.toHz);
+    }
+    hull[level * 2] = lowest;
+    hull[level * 2 + 1] = highest;
   }
+  return hull;
+}
+
+/** Level -1 (a query looser than every level): nothing is turned away here. */
+const outsideHull = (hull: Float64Array, level: number, range: FrequencyRange) => level >= 0 && (range.fromHz < hull[level * 2] || range.toHz > hull[level * 2 + 1]);
+
+export function coverageScreen(part: IndexedPart): CoverageScreen {
   return {
     gamma: part.gamma ? curveScreen(part.gamma, SCREEN_GAMMA_LIMITS, (value, limit) => value > limit) : null,
     efficiency: part.efficiency ? curveScreen(part.efficiency, SCREEN_EFFICIENCY_FLOORS, (value, floor) => value < floor) : null,
-    specLowestHz,
-    specHighestHz,
+    specVswrHull: specHull(part.specBands, SCREEN_SPEC_VSWR, (band, level) => { const v = claimedMaxVswr(band); return v !== null && v <= level; }),
+    specEfficiencyHull: specHull(part.specBands, SCREEN_EFFICIENCY_FLOORS, (band, floor) => band.efficiencyPct !== null && band.efficiencyPct >= floor),
   };
 }
 
 /** The screen levels a query may use: -1 where no level is safe for it. */
 export interface ScreenLevels {
   readonly gamma: number;
+  readonly specVswr: number;
   readonly efficiency: number;
+  /** binsInside of each query range. */
+  readonly bins: readonly Int32Array[];
 }
 
 export function screenLevels(query: CoverageQuery): ScreenLevels {
@@ -200,7 +259,8 @@ export function screenLevels(query: CoverageQuery): ScreenLevels {
   if (query.minEfficiencyPct !== undefined) {
     for (let level = 0; level < SCREEN_EFFICIENCY_FLOORS.length; level++) if (SCREEN_EFFICIENCY_FLOORS[level] <= query.minEfficiencyPct) efficiency = level;
   }
-  return { gamma, efficiency };
+  const specVswr = SCREEN_SPEC_VSWR.findIndex((level) => level >= query.vswrMax);
+  return { gamma, specVswr, efficiency, bins: query.ranges.map(binsInside) };
 }
 
 /**
@@ -208,18 +268,19 @@ export function screenLevels(query: CoverageQuery): ScreenLevels {
  * as the query's, or a range the curve does not reach lies outside every spec band. False: ask meetsCoverage.
  */
 export function screenRejects(screen: CoverageScreen, levels: ScreenLevels, query: CoverageQuery): boolean {
-  for (const range of query.ranges) {
+  for (let r = 0; r < query.ranges.length; r++) {
+    const range = query.ranges[r];
     const gammaCovers = screen.gamma !== null && covers(screen.gamma, range);
     if (gammaCovers) {
-      if (levels.gamma >= 0 && breaksIn(screen.gamma!, levels.gamma, range)) return true;
-    } else if (range.fromHz < screen.specLowestHz || range.toHz > screen.specHighestHz) {
+      if (levels.gamma >= 0 && breaksIn(screen.gamma!, levels.gamma, range, levels.bins[r])) return true;
+    } else if (outsideHull(screen.specVswrHull, levels.specVswr, range)) {
       return true;
     }
     if (query.minEfficiencyPct === undefined) continue;
     const efficiencyCovers = screen.efficiency !== null && covers(screen.efficiency, range);
     if (efficiencyCovers) {
-      if (levels.efficiency >= 0 && breaksIn(screen.efficiency!, levels.efficiency, range)) return true;
-    } else if (range.fromHz < screen.specLowestHz || range.toHz > screen.specHighestHz) {
+      if (levels.efficiency >= 0 && breaksIn(screen.efficiency!, levels.efficiency, range, levels.bins[r])) return true;
+    } else if (outsideHull(screen.specEfficiencyHull, levels.efficiency, range)) {
       return true;
     }
   }
