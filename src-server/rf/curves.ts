@@ -74,13 +74,19 @@ export function segmentIndex(frequenciesHz: ArrayLike<number>, frequencyHz: numb
   return low;
 }
 
+/** Whether interpolateAt has a value there: inside the measured range, within its 1e-12 relative slack. */
+export function inMeasuredRange(frequenciesHz: ArrayLike<number>, frequencyHz: number): boolean {
+  const n = frequenciesHz.length;
+  if (n === 0) return false;
+  const slack = EDGE_TOLERANCE * Math.max(Math.abs(frequenciesHz[0]), Math.abs(frequenciesHz[n - 1]));
+  return !(frequencyHz < frequenciesHz[0] - slack || frequencyHz > frequenciesHz[n - 1] + slack);
+}
+
 /** Linear interpolation; undefined outside the measured range (within a 1e-12 relative slack at the ends). */
 export function interpolateAt(curve: SampledCurve, frequencyHz: number): number | undefined {
   const f = curve.frequenciesHz;
   const n = f.length;
-  if (n === 0) return undefined;
-  const slack = EDGE_TOLERANCE * Math.max(Math.abs(f[0]), Math.abs(f[n - 1]));
-  if (frequencyHz < f[0] - slack || frequencyHz > f[n - 1] + slack) return undefined;
+  if (!inMeasuredRange(f, frequencyHz)) return undefined;
   if (n === 1) return curve.values[0];
   if (frequencyHz <= f[0]) return curve.values[0];
   if (frequencyHz >= f[n - 1]) return curve.values[n - 1];

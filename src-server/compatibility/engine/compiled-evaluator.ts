@@ -127,7 +127,14 @@ export class CompiledRow {
     for (const r of this.rules) {
       if (r.bound.rule.severity === 'info') continue;
       if (r.applies && !r.applies(facts)) continue;
-      if (r.required.some((name) => facts[name] === null)) continue;
+      let known = true;
+      for (const name of r.required) {
+        if (facts[name] === null) {
+          known = false;
+          break;
+        }
+      }
+      if (!known) continue;
       out.push({ bound: r.bound, margin: marginOf(r.bound.conditions, facts) });
     }
     return out;

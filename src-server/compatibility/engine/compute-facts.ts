@@ -1,4 +1,4 @@
-import { type FrequencyRange, type SampledCurve, bandStatistics, coverageOfBand, efficiencyInBand, gainInBand, interpolateAt, segmentIndex } from '../../rf/curves';
+import { type FrequencyRange, type SampledCurve, bandStatistics, coverageOfBand, efficiencyInBand, gainInBand, inMeasuredRange, interpolateAt, segmentIndex } from '../../rf/curves';
 import { type ReflectionCurve, matchedRanges } from '../../rf/reflection';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, returnLossDbFromGammaMagnitude, vswrFromGammaMagnitude } from '../../rf/mismatch';
 import { eirpDbm, erpDbmFromEirpDbm, polarizationLossDb, realizedGainDbi, totalEfficiency } from '../../rf/link-budget';
@@ -21,7 +21,19 @@ type Worse = (a: number, b: number) => number;
 
 /** Inside the measured range, with the RF module's edge slack (a band outside it is "no data"). */
 function measuredCovers(curve: SampledCurve, range: FrequencyRange): boolean {
-  return interpolateAt(curve, range.fromHz) !== undefined && interpolateAt(curve, range.toHz) !== undefined;
+  return inMeasuredRange(curve.frequenciesHz, range.fromHz) && inMeasuredRange(curve.frequenciesHz, range.toHz);
+}
+
+const gammaCurves = new WeakMap<ReflectionCurve, SampledCurve>();
+
+/** |Γ| of a reflection curve as a sampled curve, one object per curve however many bands ask. */
+function gammaCurveOf(reflection: ReflectionCurve): SampledCurve {
+  let curve = gammaCurves.get(reflection);
+  if (!curve) {
+    curve = { frequenciesHz: reflection.frequenciesHz, values: reflection.gammaMagnitude };
+    gammaCurves.set(reflection, curve);
+  }
+  return curve;
 }
 
 function measuredSampler(curve: SampledCurve | null, range: FrequencyRange): RangeSampler | null {
@@ -48,6 +60,9 @@ function mergeRanges(ranges: FrequencyRange[]): FrequencyRange[] {
 
 /** Spec bands hold one figure per range; where two overlap the worse one counts. Null unless they cover the whole range. */
 function specSampler(specBands: readonly SpecBand[], range: FrequencyRange, value: (band: SpecBand) => number | null, worse: Worse): RangeSampler | null {
+  let any = false;
+  for (let i = 0; i < specBands.length && !any; i++) any = value(specBands[i]) !== null;
+  if (!any) return null;
   const usable = specBands.filter((b) => value(b) !== null);
   if (usable.length === 0) return null;
   if (coverageOfBand(mergeRanges(usable.map((b) => ({ fromHz: b.fromHz, toHz: b.toHz }))), range).uncoveredRanges.length > 0) return null;
@@ -67,8 +82,7 @@ function specGamma(band: SpecBand): number | null {
 }
 
 function gammaSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
-  const curve = part.reflection ? { frequenciesHz: part.reflection.frequenciesHz, values: part.reflection.gammaMagnitude } : null;
-  return measuredSampler(curve, range) ?? specSampler(part.specBands, range, specGamma, Math.max);
+  return measuredSampler(part.reflection ? gammaCurveOf(part.reflection) : null, range) ?? specSampler(part.specBands, range, specGamma, Math.max);
 }
 
 function efficiencySampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
@@ -81,10 +95,19 @@ function gainSampler(part: PartEvaluationData, range: FrequencyRange): RangeSamp
 
 /** The samplers' values, combined point by point, as a curve over the range (edges included). */
 function combinedCurve(range: FrequencyRange, samplers: readonly RangeSampler[], combine: (values: number[]) => number): SampledCurve {
-  const points = new Set<number>([range.fromHz, range.toHz]);
-  for (const s of samplers) for (const f of s.breakpointsHz()) points.add(f);
-  const frequenciesHz = Float64Array.from([...points].sort((a, b) => a - b));
-  const values = frequenciesHz.map((f) => combine(samplers.map((s) => s.at(f))));
+  const points: number[] = [range.fromHz, range.toHz];
+  for (const s of samplers) for (const f of s.breakpointsHz()) points.push(f);
+  // A typed array sorts numerically; equal frequencies are then neighbours and kept once.
+  const sorted = Float64Array.from(points).sort();
+  let count = 0;
+  for (let k = 0; k < sorted.length; k++) if (count === 0 || sorted[k] !== sorted[count - 1]) sorted[count++] = sorted[k];
+  const frequenciesHz = sorted.slice(0, count);
+  const values = new Float64Array(count);
+  const at: number[] = new Array(samplers.length);
+  for (let k = 0; k < count; k++) {
+    for (let j = 0; j < samplers.length; j++) at[j] = samplers[j].at(frequenciesHz[k]);
+    values[k] = combine(at);
+  }
   return { frequenciesHz, values };
 }
 
@@ -114,6 +137,93 @@ function acrossRanges(perRange: (RangeStats | null)[]): RangeStats | null {
   const max = stats.reduce((best, s) => (s.max.value > best.value ? s.max : best), stats[0].max);
   const average = totalWidth === 0 ? stats.reduce((sum, s) => sum + s.average, 0) / stats.length : stats.reduce((sum, s) => sum + s.average * s.widthHz, 0) / totalWidth;
   return { min, max, average, widthHz: totalWidth };
+}
+
+/**
+ * bandStatistics(…, 'linear') over a sequence of points fed in frequency order, without building the
+ * sliced curve: the same comparisons and the same trapezoid sums in the same order, so the same numbers.
+ */
+class LinearStatsAccumulator {
+  min = Infinity;
+  max = -Infinity;
+  minAtHz: number;
+  maxAtHz: number;
+  private area = 0;
+  private count = 0;
+  private lastHz = NaN;
+  private lastValue = NaN;
+
+  constructor(private readonly range: FrequencyRange) {
+    this.minAtHz = range.fromHz;
+    this.maxAtHz = range.fromHz;
+  }
+
+  add(frequencyHz: number, value: number): void {
+    if (value < this.min) {
+      this.min = value;
+      this.minAtHz = frequencyHz;
+    }
+    if (value > this.max) {
+      this.max = value;
+      this.maxAtHz = frequencyHz;
+    }
+    if (this.count > 0) this.area += ((this.lastValue + value) / 2) * (frequencyHz - this.lastHz);
+    this.count += 1;
+    this.lastHz = frequencyHz;
+    this.lastValue = value;
+  }
+
+  get average(): number {
+    return this.count === 1 ? this.lastValue : this.area / (this.range.toHz - this.range.fromHz);
+  }
+}
+
+/** First sample index strictly above frequencyHz. */
+function firstAbove(f: ArrayLike<number>, frequencyHz: number): number {
+  let i = segmentIndex(f, frequencyHz);
+  while (i < f.length && f[i] <= frequencyHz) i++;
+  return i;
+}
+
+/** sliceBand's points of a measured curve (edges interpolated, samples strictly inside), into the accumulator. */
+function accumulateMeasured(curve: SampledCurve, range: FrequencyRange, stats: LinearStatsAccumulator): LinearStatsAccumulator {
+  const f = curve.frequenciesHz;
+  stats.add(range.fromHz, interpolateAt(curve, range.fromHz)!);
+  for (let i = firstAbove(f, range.fromHz); i < f.length && f[i] < range.toHz; i++) stats.add(f[i], curve.values[i]);
+  if (range.toHz > range.fromHz) stats.add(range.toHz, interpolateAt(curve, range.toHz)!);
+  return stats;
+}
+
+/** linearStats of a measured curve that covers the range, without slicing it. */
+function measuredLinearStats(curve: SampledCurve, range: FrequencyRange, maxAtMin = false): RangeStats {
+  const s = accumulateMeasured(curve, range, new LinearStatsAccumulator(range));
+  // efficiencyInBand reports no frequency of its maximum; efficiencyStats has always put the minimum's there.
+  return { min: { value: s.min, atHz: s.minAtHz }, max: { value: s.max, atHz: maxAtMin ? s.minAtHz : s.maxAtHz }, average: s.average, widthHz: range.toHz - range.fromHz };
+}
+
+/**
+ * efficiencyStats of combinedCurve(range, [efficiency, gamma], total efficiency) for two measured
+ * curves: the edges and the union of both curves' samples inside, merged in order without a set.
+ */
+function measuredTotalEfficiencyStats(efficiency: SampledCurve, gamma: SampledCurve, range: FrequencyRange): RangeStats {
+  const s = new LinearStatsAccumulator(range);
+  const fe = efficiency.frequenciesHz;
+  const fg = gamma.frequenciesHz;
+  const total = (frequencyHz: number) => totalEfficiency(interpolateAt(efficiency, frequencyHz)! / 100, interpolateAt(gamma, frequencyHz)!) * 100;
+  s.add(range.fromHz, total(range.fromHz));
+  let i = firstAbove(fe, range.fromHz);
+  let j = firstAbove(fg, range.fromHz);
+  for (;;) {
+    const nextE = i < fe.length && fe[i] < range.toHz ? fe[i] : Infinity;
+    const nextG = j < fg.length && fg[j] < range.toHz ? fg[j] : Infinity;
+    const next = Math.min(nextE, nextG);
+    if (next === Infinity) break;
+    s.add(next, total(next));
+    if (nextE === next) i++;
+    if (nextG === next) j++;
+  }
+  if (range.toHz > range.fromHz) s.add(range.toHz, total(range.toHz));
+  return { min: { value: s.min, atHz: s.minAtHz }, max: { value: s.max, atHz: s.minAtHz }, average: s.average, widthHz: range.toHz - range.fromHz };
 }
 
 function linearStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
@@ -166,7 +276,7 @@ function coverageAt(part: PartEvaluationData, ranges: readonly FrequencyRange[],
     let fraction: number;
     let gaps: readonly FrequencyRange[];
     const reflection = part.reflection;
-    if (reflection && measuredCovers({ frequenciesHz: reflection.frequenciesHz, values: reflection.gammaMagnitude }, range)) {
+    if (reflection && measuredCovers(gammaCurveOf(reflection), range)) {
       const measured = coverageOfBand(matchedRangesOf(reflection, maxVswr), range);
       fraction = measured.coveredFraction;
       gaps = measured.uncoveredRanges;
@@ -325,12 +435,23 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   note(efficiencies, 'efficiency');
   note(gains, 'gain');
 
-  const gammaStats = acrossRanges(ranges.map((r, i) => (gammas[i] ? linearStats(single(r, gammas[i]!), r) : null)));
-  const radiation = acrossRanges(ranges.map((r, i) => (efficiencies[i] ? efficiencyStats(single(r, efficiencies[i]!), r) : null)));
+  // Measured curves take the allocation-free paths; spec step curves go through combinedCurve.
+  const gammaStats = acrossRanges(ranges.map((r, i) => {
+    const g = gammas[i];
+    return g ? (g.curve ? measuredLinearStats(g.curve, r) : linearStats(single(r, g), r)) : null;
+  }));
+  const radiation = acrossRanges(ranges.map((r, i) => {
+    const e = efficiencies[i];
+    return e ? (e.curve ? measuredLinearStats(e.curve, r, true) : efficiencyStats(single(r, e), r)) : null;
+  }));
   const total = acrossRanges(
-    ranges.map((r, i) =>
-      efficiencies[i] && gammas[i] ? efficiencyStats(combinedCurve(r, [efficiencies[i]!, gammas[i]!], ([e, g]) => totalEfficiency(e / 100, g) * 100), r) : null,
-    ),
+    ranges.map((r, i) => {
+      const e = efficiencies[i];
+      const g = gammas[i];
+      if (!e || !g) return null;
+      if (e.curve && g.curve) return measuredTotalEfficiencyStats(e.curve, g.curve, r);
+      return efficiencyStats(combinedCurve(r, [e, g], ([ev, gv]) => totalEfficiency(ev / 100, gv) * 100), r);
+    }),
   );
   const gain = acrossRanges(ranges.map((r, i) => (gains[i] ? gainStats(single(r, gains[i]!), r) : null)));
   const realized = acrossRanges(

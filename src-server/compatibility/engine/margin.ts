@@ -25,21 +25,32 @@ function onDbScale(fact: string, value: number): number {
   return value > 0 ? powerRatioToDb(value) : -Infinity;
 }
 
-const BELOW = new Set(['lessThan', 'lessThanInclusive']);
-const ABOVE = new Set(['greaterThan', 'greaterThanInclusive']);
+const isBelow = (operator: string) => operator === 'lessThan' || operator === 'lessThanInclusive';
+const isAbove = (operator: string) => operator === 'greaterThan' || operator === 'greaterThanInclusive';
 
 /**
  * The margin of a (bound) condition tree: a numeric comparison measures the gap to its threshold;
  * "all" needs every part to hold (the farthest decides), "any" one (the nearest decides).
+ * Plain loops: a catalogue ranking asks this for every rule of every pair.
  */
 export function marginOf(node: EngineCondition, facts: Facts): Margin {
   if ('all' in node) {
     if (node.all.length === 0) return NO_NUMBER_TRUE;
-    return node.all.map((n) => marginOf(n, facts)).reduce((a, b) => (b.distanceDb > a.distanceDb ? b : a));
+    let farthest = marginOf(node.all[0], facts);
+    for (let k = 1; k < node.all.length; k++) {
+      const m = marginOf(node.all[k], facts);
+      if (m.distanceDb > farthest.distanceDb) farthest = m;
+    }
+    return farthest;
   }
   if ('any' in node) {
     if (node.any.length === 0) return NO_NUMBER_TRUE;
-    return node.any.map((n) => marginOf(n, facts)).reduce((a, b) => (b.distanceDb < a.distanceDb ? b : a));
+    let nearest = marginOf(node.any[0], facts);
+    for (let k = 1; k < node.any.length; k++) {
+      const m = marginOf(node.any[k], facts);
+      if (m.distanceDb < nearest.distanceDb) nearest = m;
+    }
+    return nearest;
   }
   if ('not' in node) {
     const inner = marginOf(node.not, facts);
@@ -47,9 +58,10 @@ export function marginOf(node: EngineCondition, facts: Facts): Margin {
   }
   const value = facts[node.fact];
   const threshold = typeof node.value === 'object' && node.value !== null && !Array.isArray(node.value) && 'fact' in node.value ? facts[(node.value as { fact: string }).fact] : node.value;
-  if ((BELOW.has(node.operator) || ABOVE.has(node.operator)) && typeof value === 'number' && typeof threshold === 'number' && Number.isFinite(threshold)) {
+  const below = isBelow(node.operator);
+  if ((below || isAbove(node.operator)) && typeof value === 'number' && typeof threshold === 'number' && Number.isFinite(threshold)) {
     const gap = onDbScale(node.fact, value) - onDbScale(node.fact, threshold);
-    return { distanceDb: BELOW.has(node.operator) ? gap : -gap, fact: node.fact, value, threshold };
+    return { distanceDb: below ? gap : -gap, fact: node.fact, value, threshold };
   }
   return leafHolds(node, facts) ? NO_NUMBER_TRUE : NO_NUMBER_FALSE;
 }
