@@ -58,15 +58,45 @@ function mergeRanges(ranges: FrequencyRange[]): FrequencyRange[] {
   return merged;
 }
 
+type SpecFigure = 'gamma' | 'efficiency' | 'gain';
+
+interface UsableSpec {
+  readonly usable: readonly SpecBand[];
+  readonly merged: readonly FrequencyRange[];
+}
+
+const usableSpecs = new WeakMap<readonly SpecBand[], Partial<Record<SpecFigure, UsableSpec>>>();
+
+/** The spec bands stating a figure and their merged union: per part, not per band asked. */
+function usableSpecOf(specBands: readonly SpecBand[], figure: SpecFigure, value: (band: SpecBand) => number | null): UsableSpec {
+  let byFigure = usableSpecs.get(specBands);
+  if (!byFigure) {
+    byFigure = {};
+    usableSpecs.set(specBands, byFigure);
+  }
+  let spec = byFigure[figure];
+  if (!spec) {
+    const usable = specBands.filter((b) => value(b) !== null);
+    spec = { usable, merged: mergeRanges(usable.map((b) => ({ fromHz: b.fromHz, toHz: b.toHz }))) };
+    byFigure[figure] = spec;
+  }
+  return spec;
+}
+
 /** Spec bands hold one figure per range; where two overlap the worse one counts. Null unless they cover the whole range. */
-function specSampler(specBands: readonly SpecBand[], range: FrequencyRange, value: (band: SpecBand) => number | null, worse: Worse): RangeSampler | null {
-  let any = false;
-  for (let i = 0; i < specBands.length && !any; i++) any = value(specBands[i]) !== null;
-  if (!any) return null;
-  const usable = specBands.filter((b) => value(b) !== null);
+function specSampler(specBands: readonly SpecBand[], range: FrequencyRange, figure: SpecFigure, value: (band: SpecBand) => number | null, worse: Worse): RangeSampler | null {
+  if (specBands.length === 0) return null;
+  const { usable, merged } = usableSpecOf(specBands, figure, value);
   if (usable.length === 0) return null;
-  if (coverageOfBand(mergeRanges(usable.map((b) => ({ fromHz: b.fromHz, toHz: b.toHz }))), range).uncoveredRanges.length > 0) return null;
-  const breakpointsHz = () => usable.flatMap((b) => [b.fromHz, b.toHz]).filter((f) => f > range.fromHz && f < range.toHz);
+  if (coverageOfBand(merged, range).uncoveredRanges.length > 0) return null;
+  const breakpointsHz = () => {
+    const points: number[] = [];
+    for (const b of usable) {
+      if (b.fromHz > range.fromHz && b.fromHz < range.toHz) points.push(b.fromHz);
+      if (b.toHz > range.fromHz && b.toHz < range.toHz) points.push(b.toHz);
+    }
+    return points;
+  };
   const at = (f: number): number => {
     let result = NaN;
     for (const b of usable) if (f >= b.fromHz && f <= b.toHz) result = Number.isNaN(result) ? value(b)! : worse(result, value(b)!);
@@ -81,16 +111,19 @@ function specGamma(band: SpecBand): number | null {
   return null;
 }
 
+const efficiencyPercentOf = (band: SpecBand) => band.efficiencyPercent;
+const peakGainOf = (band: SpecBand) => band.peakGainDbi;
+
 function gammaSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
-  return measuredSampler(part.reflection ? gammaCurveOf(part.reflection) : null, range) ?? specSampler(part.specBands, range, specGamma, Math.max);
+  return measuredSampler(part.reflection ? gammaCurveOf(part.reflection) : null, range) ?? specSampler(part.specBands, range, 'gamma', specGamma, Math.max);
 }
 
 function efficiencySampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
-  return measuredSampler(part.radiationEfficiencyPercent, range) ?? specSampler(part.specBands, range, (b) => b.efficiencyPercent, Math.min);
+  return measuredSampler(part.radiationEfficiencyPercent, range) ?? specSampler(part.specBands, range, 'efficiency', efficiencyPercentOf, Math.min);
 }
 
 function gainSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
-  return measuredSampler(part.peakGainDbi, range) ?? specSampler(part.specBands, range, (b) => b.peakGainDbi, Math.max);
+  return measuredSampler(part.peakGainDbi, range) ?? specSampler(part.specBands, range, 'gain', peakGainOf, Math.max);
 }
 
 /** The samplers' values, combined point by point, as a curve over the range (edges included). */
@@ -271,7 +304,8 @@ function coverageAt(part: PartEvaluationData, ranges: readonly FrequencyRange[],
   let totalWidth = 0;
   let fractionSum = 0;
   const uncovered: FrequencyRange[] = [];
-  const specMatched = part.specBands.filter((b) => specGamma(b) !== null);
+  const specMatched = usableSpecOf(part.specBands, 'gamma', specGamma).usable;
+  let good: FrequencyRange[] | null = null;
   for (const range of ranges) {
     let fraction: number;
     let gaps: readonly FrequencyRange[];
@@ -282,7 +316,7 @@ function coverageAt(part: PartEvaluationData, ranges: readonly FrequencyRange[],
       gaps = measured.uncoveredRanges;
     } else if (specMatched.length > 0) {
       const limit = gammaMagnitudeFromVswr(maxVswr);
-      const good = mergeRanges(specMatched.filter((b) => specGamma(b)! <= limit).map((b) => ({ fromHz: b.fromHz, toHz: b.toHz })));
+      good ??= mergeRanges(specMatched.filter((b) => specGamma(b)! <= limit).map((b) => ({ fromHz: b.fromHz, toHz: b.toHz })));
       const coverage = coverageOfBand(good, range);
       fraction = coverage.coveredFraction;
       gaps = coverage.uncoveredRanges;
@@ -476,41 +510,47 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   const knownKinds = 3 - missing.length;
 
   const facts = blankFacts();
-  for (const name of ROW_FACT_NAMES) facts[name] = rowFacts[name] ?? null;
+  for (const name of ROW_FACT_NAMES) facts[name] = rounded(rowFacts[name] ?? null);
   facts.reviewState = part.reviewState;
   facts.lifecycle = part.lifecycle;
   facts.partPolarization = part.polarization;
   facts.dataSource = sources.size === 0 ? 'none' : sources.size === 2 ? 'mixed' : [...sources][0];
-  facts.dataCompletenessPct = (knownKinds / 3) * 100;
+  facts.dataCompletenessPct = rounded((knownKinds / 3) * 100);
   facts.missingData = missing.length === 0 ? 'none' : missing.join(', ');
-  facts.coverageAtVswr2Pct = at2 ? at2.fraction * 100 : null;
+  facts.coverageAtVswr2Pct = rounded(at2 ? at2.fraction * 100 : null);
   facts.uncoveredAtVswr2 = at2 ? describeRanges(at2.uncovered) : null;
-  facts.coverageAtVswr3Pct = at3 ? at3.fraction * 100 : null;
+  facts.coverageAtVswr3Pct = rounded(at3 ? at3.fraction * 100 : null);
   facts.uncoveredAtVswr3 = at3 ? describeRanges(at3.uncovered) : null;
-  facts.worstVswr = gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null;
-  facts.worstVswrAtMHz = gammaStats ? mhz(gammaStats.max.atHz) : null;
-  facts.worstReturnLossDb = gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null;
-  facts.minRadiationEfficiencyPct = radiation ? radiation.min.value : null;
-  facts.minRadiationEfficiencyAtMHz = radiation ? mhz(radiation.min.atHz) : null;
-  facts.avgRadiationEfficiencyPct = radiation ? radiation.average : null;
-  facts.minTotalEfficiencyPct = total ? total.min.value : null;
-  facts.minTotalEfficiencyAtMHz = total ? mhz(total.min.atHz) : null;
-  facts.avgTotalEfficiencyPct = total ? total.average : null;
-  facts.avgTotalEfficiencyDb = total ? powerRatioToDb(total.average / 100) : null;
-  facts.peakGainDbi = gain ? gain.max.value : null;
-  facts.peakGainAtMHz = gain ? mhz(gain.max.atHz) : null;
-  facts.realizedPeakGainDbi = realized ? realized.max.value : null;
-  facts.txPeakGainDbi = txPeakGainDbi;
-  facts.gainOverCertifiedDb = txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null;
-  facts.eirpDbm = eirp;
-  facts.erpDbm = eirp === null ? null : erpDbmFromEirpDbm(eirp);
-  Object.assign(facts, regional);
+  facts.worstVswr = rounded(gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null);
+  facts.worstVswrAtMHz = rounded(gammaStats ? mhz(gammaStats.max.atHz) : null);
+  facts.worstReturnLossDb = rounded(gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null);
+  facts.minRadiationEfficiencyPct = rounded(radiation ? radiation.min.value : null);
+  facts.minRadiationEfficiencyAtMHz = rounded(radiation ? mhz(radiation.min.atHz) : null);
+  facts.avgRadiationEfficiencyPct = rounded(radiation ? radiation.average : null);
+  facts.minTotalEfficiencyPct = rounded(total ? total.min.value : null);
+  facts.minTotalEfficiencyAtMHz = rounded(total ? mhz(total.min.atHz) : null);
+  facts.avgTotalEfficiencyPct = rounded(total ? total.average : null);
+  facts.avgTotalEfficiencyDb = rounded(total ? powerRatioToDb(total.average / 100) : null);
+  facts.peakGainDbi = rounded(gain ? gain.max.value : null);
+  facts.peakGainAtMHz = rounded(gain ? mhz(gain.max.atHz) : null);
+  facts.realizedPeakGainDbi = rounded(realized ? realized.max.value : null);
+  facts.txPeakGainDbi = rounded(txPeakGainDbi);
+  facts.gainOverCertifiedDb = rounded(txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null);
+  facts.eirpDbm = rounded(eirp);
+  facts.erpDbm = rounded(eirp === null ? null : erpDbmFromEirpDbm(eirp));
+  facts.regionalLimitDbm = rounded(regional.regionalLimitDbm ?? null);
+  facts.regionalLimitKind = regional.regionalLimitKind ?? null;
+  facts.regionalLimitRegion = regional.regionalLimitRegion ?? null;
+  facts.regionalLimitSource = regional.regionalLimitSource ?? null;
+  facts.regionalRadiatedDbm = rounded(regional.regionalRadiatedDbm ?? null);
+  facts.regionalLimitMarginDb = rounded(regional.regionalLimitMarginDb ?? null);
   facts.evalGroundPlaneKnown = evalBoard !== null;
-  facts.evalGroundPlaneLengthMm = evalBoard ? evalBoard[0] : null;
-  facts.evalGroundPlaneWidthMm = evalBoard ? evalBoard[1] : null;
-  facts.groundPlaneVsEvalPct = evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null;
-  facts.polarizationLossDb = polarizationLoss;
-  return roundFacts(facts);
+  facts.evalGroundPlaneLengthMm = rounded(evalBoard ? evalBoard[0] : null);
+  facts.evalGroundPlaneWidthMm = rounded(evalBoard ? evalBoard[1] : null);
+  facts.groundPlaneVsEvalPct = rounded(evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null);
+  facts.polarizationLossDb = rounded(polarizationLoss);
+  // Every number above went through rounded(): a loop over all facts here cost a fifth of a catalogue ranking.
+  return facts;
 }
 
 /**
@@ -520,6 +560,11 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
 export function roundFactValue(value: number): number {
   if (!Number.isFinite(value) || Math.abs(value) >= 1e6) return value;
   return Math.round(value * 1e9) / 1e9;
+}
+
+/** roundFactValue for numbers; anything else as it is. */
+function rounded<T extends FactValue | undefined>(value: T): T {
+  return (typeof value === 'number' ? roundFactValue(value) : value) as T;
 }
 
 function roundFacts<T extends Partial<Record<FactName, FactValue>>>(facts: T): T {
