@@ -17,6 +17,7 @@ import { assertCanEdit, partAccess } from './part-access';
 import { coveredRangesOf, figuresForRange } from './part-figures';
 import { iso, searchTextOf, specBandClaim, specBandDto, userRef } from './part-mapping';
 import { partErrors } from './parts.exception';
+import type { ReviewState } from './part.types';
 import { SpecBand } from './spec-band.entity';
 import type { CreatePartDto, SpecBandInputDto, UpdatePartDto } from './dto/part-input.dto';
 import type { DocumentDto, MeasurementDto, OfferDto, PartDetailDto } from './dto/part-response.dto';
@@ -52,8 +53,16 @@ export function checkSpecBands(bands: SpecBandInputDto[] | undefined, prefix = '
   return problems;
 }
 
+/** What the per-caller permissions of a part page depend on. */
+type PartOwner = { id: number; createdById: number | null; reviewState: ReviewState };
+
+const DETAIL_CACHE_SIZE = 500;
+
 @Injectable()
 export class PartsService {
+  /** Part pages by part and asked ranges, valid while the catalogue revision stands (every write bumps it). */
+  private readonly detailCache = new Map<string, { revision: number; owner: PartOwner; detail: Omit<PartDetailDto, 'permissions'> }>();
+
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly audit: AuditService,
@@ -155,6 +164,26 @@ export class PartsService {
 
   /** The part with everything the part page shows; figures per spec band and per asked range. */
   async getDetail(id: number, actor: AuthUser, ranges: FrequencyRange[] = []): Promise<PartDetailDto> {
+    const [{ revision }] = await this.dataSource.query('SELECT revision FROM catalogue_revision WHERE id = 1');
+    const key = `${id}|${ranges.map((r) => `${r.fromHz}-${r.toHz}`).join(',')}`;
+    let entry = this.detailCache.get(key);
+    if (!entry || entry.revision !== Number(revision)) {
+      const built = await this.buildDetail(id, ranges);
+      entry = { revision: Number(revision), ...built };
+      if (this.detailCache.size >= DETAIL_CACHE_SIZE) this.detailCache.delete(this.detailCache.keys().next().value!);
+      this.detailCache.set(key, entry);
+    }
+    const { owner } = entry;
+    return {
+      ...entry.detail,
+      permissions: {
+        edit: partAccess.canEdit(actor, owner), uploadData: partAccess.canUploadData(actor, owner), submit: partAccess.canSubmit(actor, owner),
+        review: partAccess.canReview(actor), editSourcing: partAccess.canEditSourcing(actor),
+      },
+    };
+  }
+
+  private async buildDetail(id: number, ranges: FrequencyRange[]): Promise<{ owner: PartOwner; detail: Omit<PartDetailDto, 'permissions'> }> {
     const manager = this.dataSource.manager;
     const part = await manager.findOne(Part, {
       where: { id },
@@ -176,7 +205,7 @@ export class PartsService {
       averageGainDbi: curves?.averageGain?.curve ?? null, specBands: specBands.map(specBandClaim),
     };
     const currentIds = new Set([curves?.s11?.measurementId, curves?.efficiency?.measurementId, curves?.peakGain?.measurementId, curves?.averageGain?.measurementId]);
-    return {
+    const detail: Omit<PartDetailDto, 'permissions'> = {
       id: part.id, manufacturer: part.manufacturer.name, mpn: part.mpn, title: part.title, formFactor: part.formFactor, mounting: part.mounting,
       connector: part.connector, polarization: part.polarization, nominalImpedanceOhms: part.nominalImpedanceOhms, lengthMm: part.lengthMm,
       widthMm: part.widthMm, heightMm: part.heightMm, evalGroundLengthMm: part.evalGroundLengthMm, evalGroundWidthMm: part.evalGroundWidthMm,
@@ -192,11 +221,8 @@ export class PartsService {
       alternates: alternates.map((a) => ({
         partId: a.alternatePartId, manufacturer: a.alternatePart.manufacturer.name, mpn: a.alternatePart.mpn, reviewState: a.alternatePart.reviewState, kind: a.kind, note: a.note,
       })),
-      permissions: {
-        edit: partAccess.canEdit(actor, part), uploadData: partAccess.canUploadData(actor, part), submit: partAccess.canSubmit(actor, part),
-        review: partAccess.canReview(actor), editSourcing: partAccess.canEditSourcing(actor),
-      },
     };
+    return { owner: { id: part.id, createdById: part.createdById, reviewState: part.reviewState }, detail };
   }
 
   async history(id: number, limit?: number, offset?: number) {
