@@ -11,8 +11,8 @@ type Source = 'measured' | 'spec';
 /** One quantity over one range: its value at any frequency inside, and where it changes slope or steps. */
 interface RangeSampler {
   readonly source: Source;
-  readonly at: (frequencyHz: number) => number;
-  readonly breakpointsHz: () => readonly number[];
+  at(frequencyHz: number): number;
+  breakpointsHz(): readonly number[];
   /** The measured curve itself, so a single quantity goes straight to the RF module's band statistics. */
   readonly curve: SampledCurve | null;
 }
@@ -36,15 +36,27 @@ function gammaCurveOf(reflection: ReflectionCurve): SampledCurve {
   return curve;
 }
 
+/** A class, not closures: a catalogue ranking makes several per pair and mostly reads only `curve`. */
+class MeasuredSampler implements RangeSampler {
+  readonly source = 'measured' as const;
+
+  constructor(readonly curve: SampledCurve, private readonly range: FrequencyRange) {}
+
+  at(frequencyHz: number): number {
+    return interpolateAt(this.curve, frequencyHz)!;
+  }
+
+  breakpointsHz(): number[] {
+    const f = this.curve.frequenciesHz;
+    const points: number[] = [];
+    for (let i = segmentIndex(f, this.range.fromHz); i < f.length && f[i] < this.range.toHz; i++) if (f[i] > this.range.fromHz) points.push(f[i]);
+    return points;
+  }
+}
+
 function measuredSampler(curve: SampledCurve | null, range: FrequencyRange): RangeSampler | null {
   if (!curve || !measuredCovers(curve, range)) return null;
-  const breakpointsHz = () => {
-    const f = curve.frequenciesHz;
-    const points: number[] = [];
-    for (let i = segmentIndex(f, range.fromHz); i < f.length && f[i] < range.toHz; i++) if (f[i] > range.fromHz) points.push(f[i]);
-    return points;
-  };
-  return { source: 'measured', at: (f) => interpolateAt(curve, f)!, breakpointsHz, curve };
+  return new MeasuredSampler(curve, range);
 }
 
 function mergeRanges(ranges: FrequencyRange[]): FrequencyRange[] {
@@ -361,6 +373,12 @@ function sortedSides(lengthMm: number, widthMm: number): [number, number] {
   return lengthMm >= widthMm ? [lengthMm, widthMm] : [widthMm, lengthMm];
 }
 
+/** missingData by bit mask (1 S11/VSWR, 2 efficiency, 4 gain), in that order: one string each, not one per pair. */
+const MISSING_DATA_TEXT: readonly string[] = Array.from({ length: 8 }, (_, mask) => {
+  const labels = ['S11/VSWR', 'efficiency', 'gain'].filter((_, bit) => (mask & (1 << bit)) !== 0);
+  return labels.length === 0 ? 'none' : labels.join(', ');
+});
+
 /** Every fact, unknown until set; one literal shape keeps property access fast over a whole catalogue. */
 export function blankFacts(): Record<FactName, FactValue> {
   return {
@@ -456,18 +474,20 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   if (requirement.ranges.length === 0) throw new RangeError(`band ${requirement.designation} has no frequency ranges`);
   const ranges = requirement.ranges;
   const sources = new Set<Source>();
-  const missing: string[] = [];
+  let missingMask = 0;
 
   const gammas = ranges.map((r) => gammaSampler(part, r));
   const efficiencies = ranges.map((r) => efficiencySampler(part, r));
   const gains = ranges.map((r) => gainSampler(part, r));
-  const note = (samplers: (RangeSampler | null)[], label: string) => {
-    if (samplers.some((s) => s === null)) missing.push(label);
-    for (const s of samplers) if (s) sources.add(s.source);
+  const note = (samplers: (RangeSampler | null)[], bit: number) => {
+    for (const s of samplers) {
+      if (s) sources.add(s.source);
+      else missingMask |= bit;
+    }
   };
-  note(gammas, 'S11/VSWR');
-  note(efficiencies, 'efficiency');
-  note(gains, 'gain');
+  note(gammas, 1);
+  note(efficiencies, 2);
+  note(gains, 4);
 
   // Measured curves take the allocation-free paths; spec step curves go through combinedCurve.
   const gammaStats = acrossRanges(ranges.map((r, i) => {
@@ -507,7 +527,8 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   const productLength = rowFacts.productGroundPlaneLengthMm as number | null;
   const productWidth = rowFacts.productGroundPlaneWidthMm as number | null;
   const polarizationLoss = requirement.requiredPolarization !== null && part.polarization !== null ? polarizationLossDb(part.polarization, requirement.requiredPolarization) : null;
-  const knownKinds = 3 - missing.length;
+  const missingKinds = (missingMask & 1) + ((missingMask >> 1) & 1) + ((missingMask >> 2) & 1);
+  const knownKinds = 3 - missingKinds;
 
   const facts = blankFacts();
   for (const name of ROW_FACT_NAMES) facts[name] = rounded(rowFacts[name] ?? null);
@@ -516,7 +537,7 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   facts.partPolarization = part.polarization;
   facts.dataSource = sources.size === 0 ? 'none' : sources.size === 2 ? 'mixed' : [...sources][0];
   facts.dataCompletenessPct = rounded((knownKinds / 3) * 100);
-  facts.missingData = missing.length === 0 ? 'none' : missing.join(', ');
+  facts.missingData = MISSING_DATA_TEXT[missingMask];
   facts.coverageAtVswr2Pct = rounded(at2 ? at2.fraction * 100 : null);
   facts.uncoveredAtVswr2 = at2 ? describeRanges(at2.uncovered) : null;
   facts.coverageAtVswr3Pct = rounded(at3 ? at3.fraction * 100 : null);

@@ -296,6 +296,8 @@ export class CatalogueIndex {
   private readonly screens = new Map<IndexedPart, CoverageScreen>();
   /** Parts in ascending order per sort key, built on first use after a change. */
   private readonly sorted = new Map<string, IndexedPart[]>();
+  /** The screens in the same order as each sorted list: a Map lookup per part cost more than the screen. */
+  private readonly sortedScreens = new Map<IndexedPart[], CoverageScreen[]>();
   /** Every match of recent queries (paging and sorting aside from offset/limit), cleared on every change. */
   private readonly results = new Map<string, IndexedPart[]>();
 
@@ -311,6 +313,7 @@ export class CatalogueIndex {
       this.screens.set(part, coverageScreen(part));
     }
     this.sorted.clear();
+    this.sortedScreens.clear();
     this.results.clear();
   }
 
@@ -384,17 +387,24 @@ export class CatalogueIndex {
         if (price === undefined || price > query.priceMax) return false;
       }
       for (const token of tokens) if (!p.searchText.includes(token)) return false;
-      if (coverage && (screenRejects(this.screens.get(p)!, levels!, coverage) || !meetsCoverage(p, coverage))) return false;
       return true;
     };
     const ordered = this.inOrder(query.sort, query.currency);
+    let screens = this.sortedScreens.get(ordered);
+    if (!screens) {
+      screens = ordered.map((p) => this.screens.get(p)!);
+      this.sortedScreens.set(ordered, screens);
+    }
     const items: IndexedPart[] = [];
     const unpriced: IndexedPart[] = [];
     const descending = query.order === 'desc';
     const priceSort = query.sort === 'price';
     for (let k = 0; k < ordered.length; k++) {
-      const part = ordered[descending ? ordered.length - 1 - k : k];
+      const at = descending ? ordered.length - 1 - k : k;
+      if (coverage && screenRejects(screens[at], levels!, coverage)) continue;
+      const part = ordered[at];
       if (!matches(part)) continue;
+      if (coverage && !meetsCoverage(part, coverage)) continue;
       if (priceSort && !part.lowestPrices.has(query.currency)) {
         unpriced.push(part);
         continue;

@@ -21,7 +21,19 @@ export function parseCovers(covers: string): FrequencyRange[] {
   });
 }
 
+const summaries = new WeakMap<IndexedPart, PartSummaryDto>();
+
+/** The list DTO of a part, written once per indexed version (a reload replaces the IndexedPart). */
 export function summaryOf(part: IndexedPart): PartSummaryDto {
+  let summary = summaries.get(part);
+  if (!summary) {
+    summary = writeSummary(part);
+    summaries.set(part, summary);
+  }
+  return summary;
+}
+
+function writeSummary(part: IndexedPart): PartSummaryDto {
   return {
     id: part.id, manufacturer: part.manufacturer, mpn: part.mpn, title: part.title, formFactor: part.formFactor, connector: part.connector,
     polarization: part.polarization, lifecycle: part.lifecycle, reviewState: part.reviewState, measuredKinds: [...part.measuredKinds],
@@ -55,6 +67,8 @@ export class CatalogueSearchService {
   private readonly index = new CatalogueIndex();
   private loadedRevision = -1;
   private refreshing: Promise<void> | null = null;
+  private revisionRead: Promise<number> | null = null;
+  private queuedRevisionRead: Promise<number> | null = null;
 
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
@@ -86,9 +100,33 @@ export class CatalogueSearchService {
     };
   }
 
+  /**
+   * The catalogue revision from a read that began after this call, so a client sees its own writes;
+   * callers arriving while one read runs share the next one instead of each sending their own.
+   */
+  private currentRevision(): Promise<number> {
+    if (!this.revisionRead) return this.startRevisionRead();
+    const running = this.revisionRead;
+    this.queuedRevisionRead ??= running.then(() => undefined, () => undefined).then(() => {
+      this.queuedRevisionRead = null;
+      return this.startRevisionRead();
+    });
+    return this.queuedRevisionRead;
+  }
+
+  private startRevisionRead(): Promise<number> {
+    const read = (this.dataSource.query('SELECT revision FROM catalogue_revision WHERE id = 1') as Promise<{ revision: string | number }[]>).then(([row]) => Number(row.revision));
+    this.revisionRead = read;
+    const clear = () => {
+      if (this.revisionRead === read) this.revisionRead = null;
+    };
+    read.then(clear, clear);
+    return read;
+  }
+
   async ensureFresh(): Promise<void> {
-    const [{ revision }] = await this.dataSource.query('SELECT revision FROM catalogue_revision WHERE id = 1');
-    if (Number(revision) === this.loadedRevision) return;
+    const revision = await this.currentRevision();
+    if (revision === this.loadedRevision) return;
     // One reload at a time; requests arriving meanwhile wait for it.
     while (this.refreshing) await this.refreshing;
     if (Number(revision) <= this.loadedRevision) return;
