@@ -124,6 +124,12 @@ export class CompiledRow {
   /** Margins of the fail and marginal rules that apply and have their facts; info rules set no limit. */
   margins(facts: Facts): RuleMargin[] {
     const out: RuleMargin[] = [];
+    this.visitMargins(facts, (bound, margin) => out.push({ bound, margin }));
+    return out;
+  }
+
+  /** margins() without the array and the wrappers, for a ranking that keeps only the nearest. */
+  visitMargins(facts: Facts, visit: (bound: BoundRule, margin: Margin) => void): void {
     for (const r of this.rules) {
       if (r.bound.rule.severity === 'info') continue;
       if (r.applies && !r.applies(facts)) continue;
@@ -135,10 +141,10 @@ export class CompiledRow {
         }
       }
       if (!known) continue;
-      out.push({ bound: r.bound, margin: marginOf(r.bound.conditions, facts) });
+      visit(r.bound, marginOf(r.bound.conditions, facts));
     }
-    return out;
   }
+
 }
 
 /**

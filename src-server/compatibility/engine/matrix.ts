@@ -2,6 +2,8 @@ import { FACT_CATALOG, isFactName } from './fact-catalog';
 import { CompiledRuleSet } from './compiled-evaluator';
 import { computeFacts, computeRowFacts } from './compute-facts';
 import { formatValue, statusRank, worseStatus } from './rule-binding';
+import type { BoundRule } from './rule-binding';
+import type { Margin } from './margin';
 import type { CellStatus, CellVerdict, Facts, Finding, PartEvaluationData, RadioBandRequirement } from './types';
 
 export interface MatrixRow {
@@ -181,23 +183,26 @@ export function rankCandidates(
   const ranked = parts.map((part, order) => {
     let status: CellStatus = 'pass';
     let deciding: DecidingFigure | null = null;
-    rows.forEach((row, i) => {
-      const facts = pairFacts(row, part, options.cache, partKey);
-      status = worseStatus(status, compiledRows[i].status(facts));
-      for (const { bound, margin } of compiledRows[i].margins(facts)) {
-        if (margin.fact === null || margin.value === null || margin.threshold === null || !Number.isFinite(margin.distanceDb)) continue;
-        // A fact of the band alone (the product's ground plane vs λ/4) is the same for every part: it cannot rank them.
-        if (!isFactName(margin.fact) || FACT_CATALOG[margin.fact].scope === 'row') continue;
-        if (margin.value === (FACT_CATALOG[margin.fact] as { ideal?: number }).ideal) continue;
-        if (deciding === null || margin.distanceDb < deciding.marginDb) {
-          const designation = row.requirement.designation;
-          deciding = {
-            ruleId: bound.rule.id, ruleTitle: bound.rule.title, designation, fact: margin.fact, value: margin.value, threshold: margin.threshold, marginDb: margin.distanceDb,
-            text: '',
-          };
-        }
+    let designation = '';
+    // One visitor per part, not one margins array per band: the ranking keeps only the nearest limit.
+    const visit = (bound: BoundRule, margin: Margin) => {
+      if (margin.fact === null || margin.value === null || margin.threshold === null || !Number.isFinite(margin.distanceDb)) return;
+      // A fact of the band alone (the product's ground plane vs λ/4) is the same for every part: it cannot rank them.
+      if (!isFactName(margin.fact) || FACT_CATALOG[margin.fact].scope === 'row') return;
+      if (margin.value === (FACT_CATALOG[margin.fact] as { ideal?: number }).ideal) return;
+      if (deciding === null || margin.distanceDb < deciding.marginDb) {
+        deciding = {
+          ruleId: bound.rule.id, ruleTitle: bound.rule.title, designation, fact: margin.fact, value: margin.value, threshold: margin.threshold, marginDb: margin.distanceDb,
+          text: '',
+        };
       }
-    });
+    };
+    for (let i = 0; i < rows.length; i++) {
+      const facts = pairFacts(rows[i], part, options.cache, partKey);
+      status = worseStatus(status, compiledRows[i].status(facts));
+      designation = rows[i].requirement.designation;
+      compiledRows[i].visitMargins(facts, visit);
+    }
     return { part, order, status, deciding: deciding as DecidingFigure | null };
   });
   ranked.sort((a, b) => statusRank(a.status) - statusRank(b.status) || byMarginDescending(a.deciding?.marginDb ?? null, b.deciding?.marginDb ?? null) || a.order - b.order);
