@@ -70,12 +70,16 @@ const assignmentDto = (a: PartAssignment, part: { mpn: string; title: string } |
   id: a.id, productId: a.productId, radioId: a.radioId, partId: a.partId, mpn: part?.mpn ?? '', title: part?.title ?? '', state: a.state, note: a.note, updatedAt: a.updatedAt.toISOString(),
 });
 
+const COLUMN_CACHE_SIZE = 2000;
+
 /** The compatibility matrix, candidates and assignments over the products, parts and rules of the other domains. */
 @Injectable()
 export class CompatibilityService {
   /** Facts per (band requirement × part), valid for one catalogue revision. */
   private readonly facts = new FactsCache(600_000);
   private factsRevision = -1;
+  /** Evaluation data of parts asked for by id (matrix columns), valid for one catalogue revision. */
+  private readonly columnsById = new Map<number, PartColumn>();
   private catalogue: { revision: number; parts: PartColumn[] } | null = null;
   private catalogueLoading: Promise<{ revision: number; parts: PartColumn[] }> | null = null;
 
@@ -93,6 +97,7 @@ export class CompatibilityService {
     const revision = Number(rows[0]?.revision ?? 0);
     if (revision !== this.factsRevision) {
       this.facts.clear();
+      this.columnsById.clear();
       this.factsRevision = revision;
     }
     return revision;
@@ -115,11 +120,17 @@ export class CompatibilityService {
     return [...new Set([...rows.filter((r) => r.state === 'chosen'), ...rows.filter((r) => r.state === 'shortlisted')].map((r) => r.partId))];
   }
 
+  /** Call after catalogueRevision(), which empties the cache when the catalogue changed. */
   private async partColumns(ids: number[]): Promise<PartColumn[]> {
-    const found = await this.partData.getPartData(ids);
-    const missing = ids.filter((id) => !found.some((p) => p.id === id));
-    if (missing.length > 0) throw new DomainError('PART_NOT_FOUND', `part ${missing.join(', ')} was not found`, 404, { field: 'parts', missing });
-    return found.map(toEvaluationData);
+    const unknown = ids.filter((id) => !this.columnsById.has(id));
+    if (unknown.length > 0) {
+      const found = await this.partData.getPartData(unknown);
+      const missing = unknown.filter((id) => !found.some((p) => p.id === id));
+      if (missing.length > 0) throw new DomainError('PART_NOT_FOUND', `part ${missing.join(', ')} was not found`, 404, { field: 'parts', missing });
+      if (this.columnsById.size + found.length > COLUMN_CACHE_SIZE) this.columnsById.clear();
+      for (const part of found) this.columnsById.set(part.id, toEvaluationData(part));
+    }
+    return ids.map((id) => this.columnsById.get(id)!);
   }
 
   async matrix(productId: number, partIds?: number[], rules?: RuleDefinition[]): Promise<MatrixDto> {
