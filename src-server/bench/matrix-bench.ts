@@ -99,20 +99,24 @@ async function main(): Promise<void> {
     for (const c of m.cells) acc[c.status] = (acc[c.status] ?? 0) + 1;
     return acc;
   };
-  const cold = time(() => countStatuses(evaluateMatrix(requirements, parts, compiled, { cache, partKey })));
-  const warm = time(() => countStatuses(evaluateMatrix(requirements, parts, compiled, { cache, partKey })));
-  const counts = cold.result;
-  console.log(`matrix ${requirements.length} bands x ${parts.length} parts = ${pairs} cells: cold (facts computed) ${cold.ms.toFixed(0)} ms (${(pairs / cold.ms * 1000).toFixed(0)} cells/s); warm (facts cached) ${warm.ms.toFixed(0)} ms (${(pairs / warm.ms * 1000).toFixed(0)} cells/s)`);
-  console.log(`  statuses: ${JSON.stringify(counts)}`);
-
   const approved = parts.filter((p) => p.reviewState === 'approved');
   const biggestRadio = [...new Set(requirements.map((r) => r.radioId))].map((id) => requirements.filter((r) => r.radioId === id)).sort((a, b) => b.length - a.length)[0];
+  // First, as in a server just after a catalogue change: no facts cached yet, and no 300,000-cell matrix in the heap.
   const candidateCache = new FactsCache(pairs + 1000);
   const candidatesCold = time(() => rankCandidates(biggestRadio, approved, compiled, { cache: candidateCache, partKey, limit: 20 }));
   const candidatesWarm = time(() => rankCandidates(biggestRadio, approved, compiled, { cache: candidateCache, partKey, limit: 20 }));
   const best = candidatesCold.result[0];
   console.log(`candidates for "${biggestRadio[0].radioName}" (${biggestRadio.length} bands) over ${approved.length} approved parts: cold ${candidatesCold.ms.toFixed(0)} ms, warm ${candidatesWarm.ms.toFixed(0)} ms (target < 1000 ms)`);
   console.log(`  best: ${best.mpn} ${best.status}, ${best.deciding?.text ?? 'no numeric limit'}`);
+  const cold = time(() => countStatuses(evaluateMatrix(requirements, parts, compiled, { cache, partKey })));
+  const warm = time(() => countStatuses(evaluateMatrix(requirements, parts, compiled, { cache, partKey })));
+  const counts = cold.result;
+  console.log(`matrix ${requirements.length} bands x ${parts.length} parts = ${pairs} cells: cold (facts computed) ${cold.ms.toFixed(0)} ms (${(pairs / cold.ms * 1000).toFixed(0)} cells/s); warm (facts cached) ${warm.ms.toFixed(0)} ms (${(pairs / warm.ms * 1000).toFixed(0)} cells/s)`);
+  console.log(`  statuses: ${JSON.stringify(counts)}`);
+  // The same call again with the whole matrix's facts alive in the heap (garbage collection dominates then).
+  const afterMatrix = time(() => rankCandidates(biggestRadio, approved, compiled, { cache: new FactsCache(pairs + 1000), partKey, limit: 20 }));
+  console.log(`candidates again, cold, with the matrix's ${pairs} cached facts alive in the heap: ${afterMatrix.ms.toFixed(0)} ms`);
+
 
   // Evaluation only, same facts for both: the compiled rules against hand-written predicates.
   const facts: { row: number; facts: Facts }[] = [];
