@@ -10,6 +10,7 @@ import type { ProductDetailDto } from '../products/dto/product.dto';
 import { RegulatoryLimitsService } from '../regulatory/regulatory-limits.service';
 import { PartAssignment } from './compatibility.entities';
 import type { RuleDefinition } from './engine/rule-definition';
+import type { CompiledRuleSet } from './engine/compiled-evaluator';
 import { FactsCache, evaluateMatrix, rankCandidates } from './engine/matrix';
 import type { Polarization, PartEvaluationData, RadioBandRequirement, RegulatoryLimit, Technology } from './engine/types';
 import type { AssignmentDto, CandidatesDto, MatrixColumnDto, MatrixDto } from './dto/matrix.dto';
@@ -71,6 +72,7 @@ const assignmentDto = (a: PartAssignment, part: { mpn: string; title: string } |
 });
 
 const COLUMN_CACHE_SIZE = 2000;
+const MATRIX_CACHE_SIZE = 200;
 
 /** The compatibility matrix, candidates and assignments over the products, parts and rules of the other domains. */
 @Injectable()
@@ -80,6 +82,7 @@ export class CompatibilityService {
   private factsRevision = -1;
   /** Evaluation data of parts asked for by id (matrix columns), valid for one catalogue revision. */
   private readonly columnsById = new Map<number, PartColumn>();
+  private readonly matrixCache = new Map<string, MatrixDto>();
   private catalogue: { revision: number; parts: PartColumn[] } | null = null;
   private catalogueLoading: Promise<{ revision: number; parts: PartColumn[] }> | null = null;
 
@@ -133,12 +136,47 @@ export class CompatibilityService {
     return ids.map((id) => this.columnsById.get(id)!);
   }
 
+  /**
+   * Everything a product's matrix depends on, read in one query so that every API instance sees a change
+   * made through any other: the product, its radios and their bands, its assignments, the band ranges,
+   * the regulatory limits and the catalogue revision (rules are keyed by their own signature).
+   */
+  private async matrixFingerprint(productId: number): Promise<string> {
+    const [row] = await this.dataSource.query(
+      `SELECT
+         (SELECT CONCAT(version, '/', updated_at) FROM products WHERE id = ?) AS product,
+         (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(version), 0), '/', COALESCE(MAX(updated_at), '')) FROM radios WHERE product_id = ?) AS radios,
+         (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', rb.radio_id, rb.band_id, COALESCE(rb.certified_max_gain_dbi, 'n'), rb.position))), 0))
+            FROM radio_bands rb JOIN radios r ON r.id = rb.radio_id WHERE r.product_id = ?) AS radioBands,
+         (SELECT CONCAT(COUNT(*), '/', COALESCE(MAX(updated_at), ''), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', id, part_id, radio_id, state))), 0)) FROM part_assignments WHERE product_id = ?) AS assignments,
+         (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', id, band_id, role, from_mhz, to_mhz))), 0)) FROM band_ranges) AS bandRanges,
+         (SELECT CONCAT(COUNT(*), '/', COALESCE(MAX(updated_at), '')) FROM bands) AS bands,
+         (SELECT CONCAT(COUNT(*), '/', COALESCE(MAX(updated_at), '')) FROM regulatory_limits) AS limits,
+         (SELECT revision FROM catalogue_revision WHERE id = 1) AS catalogue`,
+      [productId, productId, productId, productId],
+    );
+    if (row.product === null) throw new NotFoundError('product', productId);
+    return Object.values(row).map(String).join('|');
+  }
+
+  /** The matrix of a product; answers are reused until the fingerprint or the rules change. */
   async matrix(productId: number, partIds?: number[], rules?: RuleDefinition[]): Promise<MatrixDto> {
+    if (rules) return this.computeMatrix(productId, partIds, { compiled: this.rules.compile(rules), signature: '' });
+    const ruleSet = await this.rules.currentRuleSet();
+    const key = `${productId}|${partIds?.join(',') ?? '*'}|${ruleSet.signature}|${await this.matrixFingerprint(productId)}`;
+    const cached = this.matrixCache.get(key);
+    if (cached) return cached;
+    const result = await this.computeMatrix(productId, partIds, ruleSet);
+    if (this.matrixCache.size >= MATRIX_CACHE_SIZE) this.matrixCache.delete(this.matrixCache.keys().next().value!);
+    this.matrixCache.set(key, result);
+    return result;
+  }
+
+  private async computeMatrix(productId: number, partIds: number[] | undefined, ruleSet: { compiled: CompiledRuleSet; signature: string }): Promise<MatrixDto> {
     const product = await this.products.getWithRadios(productId);
     await this.catalogueRevision();
     const ids = partIds ?? (await this.assignedPartIds(productId));
     const columns = await this.partColumns(ids);
-    const ruleSet = rules ? { compiled: this.rules.compile(rules), signature: '' } : await this.rules.currentRuleSet();
     const requirements = await this.requirements(product);
     const matrix = evaluateMatrix(requirements, columns.map((c) => c.data), ruleSet.compiled, { cache: this.facts, partKey: this.partKey });
     const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { productId } });
