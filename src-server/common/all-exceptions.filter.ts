@@ -2,6 +2,7 @@ import { ArgumentsHost, Catch, ExceptionFilter, HttpException, Logger } from '@n
 import type { Request, Response } from 'express';
 import { randomUUID } from 'node:crypto';
 import { DomainError } from './domain-error';
+import { isRetryableLockError } from './transaction-retry';
 
 const HTTP_CODES: Record<number, string> = {
   400: 'BAD_REQUEST', 401: 'AUTH_REQUIRED', 403: 'FORBIDDEN', 404: 'NOT_FOUND', 405: 'METHOD_NOT_ALLOWED',
@@ -53,6 +54,10 @@ export class AllExceptionsFilter implements ExceptionFilter {
     if (err?.code && DB_DOWN_CODES.has(err.code)) {
       this.logger.warn(`database unavailable during ${request.method} ${request.url}: ${err.code}`);
       return { statusCode: 503, code: 'DATABASE_UNAVAILABLE', message: 'The database is unavailable; try again shortly' };
+    }
+    if (isRetryableLockError(exception)) {
+      this.logger.warn(`lock contention during ${request.method} ${request.url}`);
+      return { statusCode: 503, code: 'DATABASE_BUSY', message: 'The database was busy with a conflicting change; try again' };
     }
     const correlationId = request.id ?? randomUUID();
     this.logger.error(`unhandled error ${correlationId} during ${request.method} ${request.url}`, (exception as Error)?.stack);

@@ -29,8 +29,10 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
   }
 
   override handleRequest<TUser>(err: unknown, user: TUser, info: unknown): TUser {
-    if (err instanceof DomainError) throw err;
-    if (err || !user) {
+    // A failure inside validate() (revoked token, or the database being down) keeps its own meaning:
+    // an outage must answer 503, not 401, or every client would sign its user out.
+    if (err) throw err;
+    if (!user) {
       const expired = info instanceof Error && info.name === 'TokenExpiredError';
       throw new DomainError(
         expired ? 'AUTH_TOKEN_EXPIRED' : 'AUTH_REQUIRED',

@@ -4,6 +4,7 @@ import { DataSource, EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/auth.decorators';
 import { NotFoundError, ValidationFailedError, type FieldProblem } from '../common/domain-error';
 import { AuditService, diffFields } from '../audit/audit.service';
+import { transactionWithRetry } from '../common/transaction-retry';
 import type { FrequencyRange } from '../rf/curves';
 import { PartAlternate } from './alternate.entity';
 import { touchPart } from './catalogue-revision';
@@ -123,7 +124,7 @@ export class PartsService {
   }
 
   async create(input: CreatePartDto, actor: AuthUser): Promise<PartDetailDto> {
-    const id = await this.dataSource.transaction((manager) => this.createIn(manager, input, actor.id));
+    const id = await transactionWithRetry(this.dataSource, (manager) => this.createIn(manager, input, actor.id));
     return this.getDetail(id, actor);
   }
 
