@@ -32,6 +32,29 @@ describe(rankCandidates.name, () => {
   });
 });
 
+describe(`${rankCandidates.name} with a limit`, () => {
+  const requirements = [constructedRequirement(), constructedRequirement({ bandId: 13, designation: 'B12 (second row)' })];
+  // A catalogue where most parts fail (as in practice) and a few pass or are marginal.
+  const catalogue = Array.from({ length: 40 }, (_, i) =>
+    constructedPart({ vswr: [1.2, 1.6, 1.9, 2.4, 3.5, 5, 8][i % 7], efficiencyPercent: [70, 55, 35, 12, 60][i % 5] }, { partId: 100 + i, mpn: `P${i}` }),
+  );
+  const summary = (list: ReturnType<typeof rankCandidates>) => list.map((c) => [c.partId, c.status, c.marginDb, c.deciding?.ruleId ?? null]);
+
+  it.each([3, 8, 40])('top %i equals the top of the full ranking, also when failures must fill the list', (limit) => {
+    const full = rankCandidates(requirements, catalogue, RULES, { limit: catalogue.length });
+    const limited = rankCandidates(requirements, catalogue, RULES, { limit });
+    expect(summary(limited)).toEqual(summary(full).slice(0, limit));
+    expect(limited.map((c) => c.bands)).toEqual(full.slice(0, limit).map((c) => c.bands));
+  });
+
+  it('has fewer non-failing parts than the larger limits here, so the fill-up path is exercised', () => {
+    const full = rankCandidates(requirements, catalogue, RULES, { limit: catalogue.length });
+    const notFailing = full.filter((c) => c.status !== 'fail').length;
+    expect(notFailing).toBeGreaterThan(3);
+    expect(notFailing).toBeLessThan(40);
+  });
+});
+
 describe(evaluateMatrix.name, () => {
   it('gives one cell per band and part, and reuses cached facts on the second call', () => {
     const cache = new FactsCache();

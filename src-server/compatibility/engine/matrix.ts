@@ -179,8 +179,10 @@ export function rankCandidates(
   const rows = prepare(requirements, options.cache);
   const compiledRows = rows.map((row) => rules.forRow(row.rowFacts));
   const partKey = options.partKey ?? defaultPartKey;
-  // First pass over the whole catalogue: states and margins only, no finding is written.
-  const ranked = parts.map((part, order) => {
+  // First pass over the whole catalogue: states and margins only, no finding is written. A part that fails a
+  // band stops there: fail ranks last, so its margins only matter when fewer than `limit` parts do not fail.
+  const limit = options.limit ?? parts.length;
+  const assess = (part: PartEvaluationData, order: number, stopAtFail: boolean) => {
     let status: CellStatus = 'pass';
     let deciding: DecidingFigure | null = null;
     let designation = '';
@@ -200,14 +202,19 @@ export function rankCandidates(
     for (let i = 0; i < rows.length; i++) {
       const facts = pairFacts(rows[i], part, options.cache, partKey);
       status = worseStatus(status, compiledRows[i].status(facts));
+      if (stopAtFail && status === 'fail') return { part, order, status, deciding: null, complete: false };
       designation = rows[i].requirement.designation;
       compiledRows[i].visitMargins(facts, visit);
     }
-    return { part, order, status, deciding: deciding as DecidingFigure | null };
-  });
+    return { part, order, status, deciding: deciding as DecidingFigure | null, complete: true };
+  };
+  let ranked = parts.map((part, order) => assess(part, order, true));
+  if (ranked.filter((r) => r.status !== 'fail').length < limit) {
+    ranked = ranked.map((r) => (r.complete ? r : assess(r.part, r.order, false)));
+  }
   ranked.sort((a, b) => statusRank(a.status) - statusRank(b.status) || byMarginDescending(a.deciding?.marginDb ?? null, b.deciding?.marginDb ?? null) || a.order - b.order);
   // Second pass for the ones shown: their findings per band and the deciding figure in words.
-  return ranked.slice(0, options.limit ?? ranked.length).map(({ part, status, deciding }) => ({
+  return ranked.slice(0, limit).map(({ part, status, deciding }) => ({
     partId: part.partId,
     mpn: part.mpn,
     title: part.title,
