@@ -1,3 +1,5 @@
+import { checkJwtSecret, isLocalMode, publishedDefaultsInProduction } from './fail-closed';
+
 /** Every setting Bandwright reads from the environment, validated once at boot. */
 export interface AppConfig {
   nodeEnv: 'development' | 'test' | 'production';
@@ -13,6 +15,8 @@ export interface AppConfig {
   /** Test-only: pause after an upload's object is stored, so a test can kill the process there. 0 (off) by default, always 0 in production. */
   uploadTestPauseMs: number;
   demoPassword: string;
+  /** SEED_DEMO_ACCOUNTS=1: the seed creates the demo accounts (npm start and the test scripts ask; production does not). */
+  seedDemoAccounts: boolean;
   clientDir: string;
 }
 
@@ -21,8 +25,6 @@ export class ConfigError extends Error {
     super(`Invalid configuration: ${badKeys.join('; ')}`);
   }
 }
-
-const DEV_JWT_SECRET = 'dev-only-secret-change-me-0123456789abcdef';
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const problems: string[] = [];
@@ -49,8 +51,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (!['development', 'test', 'production'].includes(nodeEnv)) {
     problems.push(`NODE_ENV must be development, test or production, got "${env.NODE_ENV}"`);
   }
-  const jwtSecret = str('JWT_SECRET', nodeEnv === 'production' ? undefined : DEV_JWT_SECRET);
-  if (jwtSecret && jwtSecret.length < 32) problems.push('JWT_SECRET must be at least 32 characters');
+  const host = str('HOST', '127.0.0.1');
+  const { secret: jwtSecret, problem: jwtProblem } = checkJwtSecret(env.JWT_SECRET, isLocalMode(env, host));
+  if (jwtProblem) problems.push(jwtProblem);
+  const seedDemoAccounts = env.SEED_DEMO_ACCOUNTS === '1';
+  if (![undefined, '', '0', '1'].includes(env.SEED_DEMO_ACCOUNTS)) problems.push(`SEED_DEMO_ACCOUNTS must be 1 or 0, got "${env.SEED_DEMO_ACCOUNTS}"`);
   const port = int('PORT', 3000, 1, 65535);
   const s3Port = int('S3_PORT', 4569, 1, 65535);
   const smtpPort = int('SMTP_PORT', 1025, 1, 65535);
@@ -59,7 +64,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const config: AppConfig = {
     nodeEnv,
     port,
-    host: str('HOST', '127.0.0.1'),
+    host,
     appUrl: str('APP_URL', `http://127.0.0.1:${port}`),
     db: {
       host: str('DB_HOST', '127.0.0.1'),
@@ -81,8 +86,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     uploadMaxBytes: int('UPLOAD_MAX_MB', 25, 1, 1024) * 1024 * 1024,
     uploadTestPauseMs: nodeEnv === 'production' ? 0 : int('UPLOAD_TEST_PAUSE_MS', 0, 0, 600_000),
     demoPassword: str('DEMO_PASSWORD', 'bandwright-demo'),
+    seedDemoAccounts,
     clientDir: str('CLIENT_DIR', 'dist/client'),
   };
+  if (nodeEnv === 'production') {
+    const { db, s3, demoPassword } = config;
+    const published = { DB_PASSWORD: db.password, S3_ACCESS_KEY_ID: s3.accessKeyId, S3_SECRET_ACCESS_KEY: s3.secretAccessKey, DEMO_PASSWORD: demoPassword };
+    problems.push(...publishedDefaultsInProduction(published, seedDemoAccounts || Boolean(env.DEMO_PASSWORD)));
+  }
   if (problems.length > 0) throw new ConfigError(problems);
   return config;
 }
