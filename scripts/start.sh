@@ -6,6 +6,10 @@ export PORT="${PORT:-3000}" DB_PORT="${DB_PORT:-3307}" DB_USER="${DB_USER:-bandw
 export DB_NAME="${DB_NAME:-bandwright}"
 export S3_PORT="${S3_PORT:-4569}" SMTP_PORT="${SMTP_PORT:-1025}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1080}"
 export FAKES_DIR="$DATA_DIR/fakes"
+# A secret of this install's own unless one is configured; demo accounts unless this is a production start.
+[ -n "${JWT_SECRET:-}" ] || JWT_SECRET="$(bash scripts/jwt-secret.sh "$DATA_DIR")"
+export JWT_SECRET
+if [ "${NODE_ENV:-}" = production ]; then export SEED_DEMO_ACCOUNTS="${SEED_DEMO_ACCOUNTS:-0}"; else export SEED_DEMO_ACCOUNTS="${SEED_DEMO_ACCOUNTS:-1}"; fi
 
 ensure_node_modules
 ensure_debian_packages
@@ -33,11 +37,16 @@ cat <<MSG
   Bandwright is running at http://127.0.0.1:$PORT
   API documentation:        http://127.0.0.1:$PORT/api/docs
   Caught e-mail (fake SMTP): http://127.0.0.1:$MAIL_WEB_PORT
+MSG
+if [ "$SEED_DEMO_ACCOUNTS" = 1 ]; then cat <<MSG
 
   Demo accounts (demo only), password: ${DEMO_PASSWORD:-bandwright-demo}
     admin@bandwright.test      admin
     engineer@bandwright.test   engineer
     buyer@bandwright.test      procurement
+MSG
+fi
+cat <<MSG
 
   Ctrl-C stops the app, the fakes and MariaDB (or run: npm run stop).
 MSG
