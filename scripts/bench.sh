@@ -6,7 +6,7 @@ export NODE_ENV=test
 export DB_PORT="${DB_PORT:-3307}" DB_USER="${DB_USER:-bandwright}" DB_PASSWORD="${DB_PASSWORD:-bandwright-local}"
 export DB_NAME=bandwright_bench
 export S3_PORT="${S3_PORT:-4599}" SMTP_PORT="${SMTP_PORT:-1046}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1101}" FAKES_DIR="$DATA_DIR/fakes-bench"
-export JWT_SECRET="${JWT_SECRET:-bench-secret-not-for-production-0123456789}"
+export JWT_SECRET="${JWT_SECRET:-bench-secret-not-for-production-0123456789}" SEED_DEMO_ACCOUNTS=1
 export BENCH_PORT="${BENCH_PORT:-3200}"
 
 ensure_node_modules

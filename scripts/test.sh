@@ -5,7 +5,7 @@ export NODE_ENV=test
 export DB_PORT="${DB_PORT:-3307}" DB_USER="${DB_USER:-bandwright}" DB_PASSWORD="${DB_PASSWORD:-bandwright-local}"
 export DB_NAME=bandwright_test
 export S3_PORT="${S3_PORT:-4579}" SMTP_PORT="${SMTP_PORT:-1026}" MAIL_WEB_PORT="${MAIL_WEB_PORT:-1081}" FAKES_DIR="$DATA_DIR/fakes-test"
-export JWT_SECRET="${JWT_SECRET:-test-secret-not-for-production-0123456789}"
+export JWT_SECRET="${JWT_SECRET:-test-secret-not-for-production-0123456789}" SEED_DEMO_ACCOUNTS=1
 BROWSER_PORT="${BROWSER_PORT:-3100}"
 RESULTS="$RUN_DIR/results"; rm -rf "$RESULTS"; mkdir -p "$RESULTS"
 

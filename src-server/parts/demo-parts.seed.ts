@@ -11,6 +11,7 @@ import { Part } from './part.entity';
 import { touchPart } from './catalogue-revision';
 import { PartsService } from './parts.service';
 import { SourcingService } from './sourcing.service';
+import { demoAccountId } from '../users/demo-users.seed';
 import type { DemoOffer } from './demo/demo-catalogue';
 import type { DocumentKind, Lifecycle, MeasurementKind, ReviewState } from './part.types';
 import type { CreatePartDto } from './dto/part-input.dto';
@@ -29,9 +30,6 @@ interface SeedPart extends Omit<CreatePartDto, 'specBands'> {
 }
 
 const SEED_DIR = 'catalog-seed/parts';
-// Demo accounts from catalog-seed/users.json: the engineer drafts and submits, the admin reviews.
-const ENGINEER_ID = 2;
-const ADMIN_ID = 1;
 
 /**
  * Demo parts with stable ids 1001–1060 from catalog-seed/parts/ (written by parts/demo/write-demo-catalogue.ts).
@@ -48,6 +46,8 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
   const measurements = new MeasurementsService(dataSource, storage, ledger, parts, audit);
   const documents = new DocumentsService(dataSource, storage, ledger, parts, audit);
   const sourcing = new SourcingService(dataSource, parts, audit);
+  // The demo engineer drafts and submits, the demo admin reviews; nobody when the demo accounts were not created.
+  const [engineerId, adminId] = await Promise.all([demoAccountId(dataSource, 'engineer'), demoAccountId(dataSource, 'admin')]);
   const existing = new Set((await dataSource.getRepository(Part).find({ select: { id: true }, where: demo.map((p) => ({ id: p.id })) })).map((p) => p.id));
   const created: SeedPart[] = [];
   for (const p of demo) {
@@ -59,7 +59,7 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
       specBands: p.specBands.map(([fromMhz, toMhz, maxVswr, efficiencyPct, peakGainDbi]) => ({ fromMhz, toMhz, maxVswr, efficiencyPct, peakGainDbi })),
     };
     await dataSource.transaction(async (manager) => {
-      await parts.createIn(manager, input, ENGINEER_ID, 'seeded', p.id);
+      await parts.createIn(manager, input, engineerId, 'seeded', p.id);
       for (const offer of p.offers) {
         await sourcing.createOfferIn(manager, p.id, {
           supplier: offer.supplier, currency: offer.currency, sku: `${offer.supplier.slice(0, 3).toUpperCase()}-${p.mpn}`, moq: offer.moq,
@@ -83,8 +83,8 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
         const submittedAt = new Date('2025-10-20T09:00:00Z');
         const reviewed = p.reviewState !== 'in-review';
         await manager.update(Part, { id: p.id }, {
-          reviewState: p.reviewState, submittedById: ENGINEER_ID, submittedAt, version: reviewed ? 3 : 2,
-          reviewedById: reviewed ? ADMIN_ID : null, reviewedAt: reviewed ? new Date('2025-10-27T14:00:00Z') : null,
+          reviewState: p.reviewState, submittedById: engineerId, submittedAt, version: reviewed ? 3 : 2,
+          reviewedById: reviewed ? adminId : null, reviewedAt: reviewed ? new Date('2025-10-27T14:00:00Z') : null,
           reviewComment: p.reviewState === 'restricted' || p.reviewState === 'retired' ? p.notes : null,
         });
         await touchPart(manager, p.id);

@@ -13,9 +13,12 @@ interface DemoUser {
   role: Role;
 }
 
-/** Demo accounts from catalog-seed/users.json with stable ids; passwords only set when the account is new. */
+const readDemoUsers = (): DemoUser[] => JSON.parse(readFileSync(resolve('catalog-seed/users.json'), 'utf8'));
+
+/** Demo accounts from catalog-seed/users.json with stable ids, only when SEED_DEMO_ACCOUNTS=1; passwords only set when the account is new. */
 export async function seedDemoUsers(dataSource: DataSource, config: AppConfig): Promise<string> {
-  const demo: DemoUser[] = JSON.parse(readFileSync(resolve('catalog-seed/users.json'), 'utf8'));
+  if (!config.seedDemoAccounts) return 'skipped (created only with SEED_DEMO_ACCOUNTS=1)';
+  const demo = readDemoUsers();
   const repo = dataSource.getRepository(User);
   let created = 0;
   for (const user of demo) {
@@ -24,4 +27,11 @@ export async function seedDemoUsers(dataSource: DataSource, config: AppConfig): 
     created += 1;
   }
   return `${created} created, ${demo.length - created} already present`;
+}
+
+/** The id of the demo account with this role when it exists, else null, so demo data never names a real user. */
+export async function demoAccountId(dataSource: DataSource, role: Role): Promise<number | null> {
+  const email = readDemoUsers().find((user) => user.role === role)?.email;
+  if (!email) return null;
+  return (await dataSource.getRepository(User).findOne({ select: { id: true }, where: { email } }))?.id ?? null;
 }
