@@ -52,6 +52,11 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
     clearInterval(this.timer);
   }
 
+  /** Whether the SMTP relay answers (connect and greeting); used by /api/health. */
+  async isUp(): Promise<boolean> {
+    return this.transport.verify().then(() => true, () => false);
+  }
+
   /** Queues the message; with a manager it commits or rolls back together with the caller's change. */
   async send(mail: OutgoingMail, manager?: EntityManager): Promise<void> {
     const to = Array.isArray(mail.to) ? mail.to : [mail.to];

@@ -29,9 +29,9 @@ describe('GET /api/health', () => {
     await app.close();
   });
 
-  it('is public and reports the database and object storage up', async () => {
+  it('is public and reports the database, object storage and mail relay up', async () => {
     const res = await request(app.getHttpServer()).get('/api/health').expect(200);
-    expect(res.body).toEqual({ status: 'ok', db: 'up', storage: 'up' });
+    expect(res.body).toEqual({ status: 'ok', db: 'up', storage: 'up', mail: 'up', down: [] });
   });
 
   it('answers 503 with db "down" while MariaDB is stopped, and recovers by itself when it returns', async () => {

@@ -48,9 +48,9 @@ describe('object storage down', () => {
   });
 
   describe('GET /api/health', () => {
-    it('stays 200 while the database is up and reports storage "down" (uploads fail, reading the catalogue still works)', async () => {
+    it('stays 200 while the database is up and reports "degraded" with storage "down" (uploads fail, reading the catalogue still works)', async () => {
       const res = await request(app.getHttpServer()).get('/api/health').expect(200);
-      expect(res.body).toEqual({ status: 'ok', db: 'up', storage: 'down' });
+      expect(res.body).toMatchObject({ status: 'degraded', db: 'up', storage: 'down', down: ['storage'] });
     });
   });
 
