@@ -13,7 +13,7 @@ interface DemoUser {
   role: Role;
 }
 
-const readDemoUsers = (): DemoUser[] => JSON.parse(readFileSync(resolve('catalog-seed/users.json'), 'utf8'));
+export const readDemoUsers = (): DemoUser[] => JSON.parse(readFileSync(resolve('catalog-seed/users.json'), 'utf8'));
 
 /** Demo accounts from catalog-seed/users.json with stable ids, only when SEED_DEMO_ACCOUNTS=1; passwords only set when the account is new. */
 export async function seedDemoUsers(dataSource: DataSource, config: AppConfig): Promise<string> {
