@@ -4,7 +4,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { resolve } from 'node:path';
-import { APP_CONFIG, type AppConfig, loadConfig } from './config/app-config';
+import { APP_CONFIG, type AppConfig } from './config/app-config';
 import { ConfigModule } from './config/config.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
 import { JwtAuthGuard } from './common/jwt-auth.guard';
@@ -32,7 +32,8 @@ import { CompatibilityModule } from './compatibility/compatibility.module';
     }),
     // Only the routes that opt in with AuthThrottlerGuard are limited (sign-in, invitations, resets).
     ThrottlerModule.forRoot([{ name: 'auth', ttl: 60_000, limit: 30 }]),
-    ServeStaticModule.forRoot({ rootPath: resolve(loadConfig().clientDir), exclude: ['/api/{*path}'] }),
+    // Async, so the configuration is read once at boot (after .env) and a refusal reaches main's clean message.
+    ServeStaticModule.forRootAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => [{ rootPath: resolve(config.clientDir), exclude: ['/api/{*path}'] }] }),
     AuditModule,
     MailModule,
     StorageModule,
