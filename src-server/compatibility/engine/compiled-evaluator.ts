@@ -1,6 +1,8 @@
 import { FACT_CATALOG, isFactName } from './fact-catalog';
 import type { RuleDefinition } from './rule-definition';
-import { type BoundRule, type EngineCondition, bindRule, bindingKey, completeFacts, findingOf, noDataFindingOf, verdictOf } from './rule-binding';
+import {
+  type BoundRule, type EngineCondition, EVALUATION_FAILED, PREPARATION_FAILED, bindOrBreak, bindingKeyOrBroken, brokenFindingOf, completeFacts, findingOf, noDataFindingOf, ruleDefect, verdictOf,
+} from './rule-binding';
 import { factsNamedBy } from './rule-definition';
 import { type Margin, marginOf } from './margin';
 import type { CellStatus, CellVerdict, Facts, Finding } from './types';
@@ -55,6 +57,8 @@ export interface RuleMargin {
 }
 
 interface CompiledRule {
+  /** Null for a sound rule; a faulty one carries the finding every cell of the row gets instead. */
+  readonly broken: null;
   readonly bound: BoundRule;
   /** Null when the rule applies to every pair of the row (decided once, from the row's facts). */
   readonly applies: Predicate | null;
@@ -62,38 +66,51 @@ interface CompiledRule {
   readonly required: readonly string[];
 }
 
+interface BrokenRule {
+  readonly broken: Finding;
+}
+
 /** The rules bound to one row, with rules that cannot apply to the row already dropped. */
 export class CompiledRow {
-  readonly rules: readonly CompiledRule[];
+  readonly rules: readonly (CompiledRule | BrokenRule)[];
 
-  constructor(bound: readonly BoundRule[], rowFacts: Facts) {
-    const rules: CompiledRule[] = [];
+  constructor(bound: readonly (BoundRule | BrokenRule)[], rowFacts: Facts) {
+    const rules: (CompiledRule | BrokenRule)[] = [];
     for (const b of bound) {
-      let applies = b.appliesWhen ? compileCondition(b.appliesWhen) : null;
-      const onlyRowFacts = b.appliesWhen !== null && factsNamedBy(b.rule.appliesWhen).every((f) => isFactName(f) && FACT_CATALOG[f].scope === 'row');
-      if (applies && onlyRowFacts) {
-        if (!applies(rowFacts)) continue;
-        applies = null;
+      if ('broken' in b) {
+        rules.push(b);
+        continue;
       }
-      rules.push({ bound: b, applies, fires: compileCondition(b.conditions), required: b.requiredFacts });
+      try {
+        let applies = b.appliesWhen ? compileCondition(b.appliesWhen) : null;
+        const onlyRowFacts = b.appliesWhen !== null && factsNamedBy(b.rule.appliesWhen).every((f) => isFactName(f) && FACT_CATALOG[f].scope === 'row');
+        if (applies && onlyRowFacts) {
+          if (!applies(rowFacts)) continue;
+          applies = null;
+        }
+        rules.push({ broken: null, bound: b, applies, fires: compileCondition(b.conditions), required: b.requiredFacts });
+      } catch {
+        rules.push({ broken: brokenFindingOf(b.rule, PREPARATION_FAILED) });
+      }
     }
     this.rules = rules;
   }
 
-  /** Facts must be complete (every catalogue fact present, unknown as null). */
+  /** Facts must be complete (every catalogue fact present, unknown as null). A rule that throws marks the cell, never the response. */
   evaluate(facts: Facts): CellVerdict {
     const findings: Finding[] = [];
     for (const r of this.rules) {
-      if (r.applies && !r.applies(facts)) continue;
-      let known = true;
-      for (const name of r.required) {
-        if (facts[name] === null) {
-          known = false;
-          break;
-        }
+      if (r.broken !== null) {
+        findings.push(r.broken);
+        continue;
       }
-      if (!known) findings.push(noDataFindingOf(r.bound, facts));
-      else if (r.fires(facts)) findings.push(findingOf(r.bound, facts));
+      try {
+        if (r.applies && !r.applies(facts)) continue;
+        if (!knowsAll(r.required, facts)) findings.push(noDataFindingOf(r.bound, facts));
+        else if (r.fires(facts)) findings.push(findingOf(r.bound, facts));
+      } catch {
+        findings.push(brokenFindingOf(r.bound.rule, EVALUATION_FAILED));
+      }
     }
     return verdictOf(findings);
   }
@@ -103,19 +120,20 @@ export class CompiledRow {
     let noData = false;
     let marginal = false;
     for (const r of this.rules) {
-      if (r.applies && !r.applies(facts)) continue;
-      let known = true;
-      for (const name of r.required) {
-        if (facts[name] === null) {
-          known = false;
-          break;
-        }
+      if (r.broken !== null) {
+        noData = true;
+        continue;
       }
-      if (!known) noData = true;
-      else if (r.fires(facts)) {
-        const severity = r.bound.rule.severity;
-        if (severity === 'fail') return 'fail';
-        if (severity === 'marginal') marginal = true;
+      try {
+        if (r.applies && !r.applies(facts)) continue;
+        if (!knowsAll(r.required, facts)) noData = true;
+        else if (r.fires(facts)) {
+          const severity = r.bound.rule.severity;
+          if (severity === 'fail') return 'fail';
+          if (severity === 'marginal') marginal = true;
+        }
+      } catch {
+        noData = true;
       }
     }
     return noData ? 'no-data' : marginal ? 'marginal' : 'pass';
@@ -131,20 +149,24 @@ export class CompiledRow {
   /** margins() without the array and the wrappers, for a ranking that keeps only the nearest. */
   visitMargins(facts: Facts, visit: (bound: BoundRule, margin: Margin) => void): void {
     for (const r of this.rules) {
-      if (r.bound.rule.severity === 'info') continue;
-      if (r.applies && !r.applies(facts)) continue;
-      let known = true;
-      for (const name of r.required) {
-        if (facts[name] === null) {
-          known = false;
-          break;
-        }
+      // A faulty rule sets no limit: its cells are already "not checked".
+      if (r.broken !== null || r.bound.rule.severity === 'info') continue;
+      let margin: Margin;
+      try {
+        if (r.applies && !r.applies(facts)) continue;
+        if (!knowsAll(r.required, facts)) continue;
+        margin = marginOf(r.bound.conditions, facts);
+      } catch {
+        continue;
       }
-      if (!known) continue;
-      visit(r.bound, marginOf(r.bound.conditions, facts));
+      visit(r.bound, margin);
     }
   }
+}
 
+function knowsAll(required: readonly string[], facts: Facts): boolean {
+  for (const name of required) if (facts[name] === null) return false;
+  return true;
 }
 
 /**
@@ -153,18 +175,21 @@ export class CompiledRow {
  */
 export class CompiledRuleSet {
   readonly rules: readonly RuleDefinition[];
+  /** Per rule, why it is faulty (checked once, as ReferenceEvaluator does), or null. */
+  private readonly defects: readonly (string | null)[];
   private readonly rows = new Map<string, CompiledRow>();
 
   constructor(rules: readonly RuleDefinition[]) {
     this.rules = rules.filter((r) => r.enabled);
+    this.defects = this.rules.map(ruleDefect);
   }
 
   forRow(rowFacts: Facts): CompiledRow {
     const complete = completeFacts(rowFacts);
-    const key = this.rules.map((r) => bindingKey(r, complete)).join('\n') + '\n' + rowKey(complete);
+    const key = this.rules.map((r, i) => bindingKeyOrBroken(r, i, this.defects[i], complete)).join('\n') + '\n' + rowKey(complete);
     let row = this.rows.get(key);
     if (!row) {
-      row = new CompiledRow(this.rules.map((rule, index) => bindRule(rule, index, complete)), complete);
+      row = new CompiledRow(this.rules.map((rule, index) => bindOrBreak(rule, index, this.defects[index], complete)), complete);
       this.rows.set(key, row);
     }
     return row;

@@ -24,26 +24,33 @@ const factValue = (name: FactName): fc.Arbitrary<FactValue> => {
 };
 const factsArbitrary: fc.Arbitrary<Facts> = fc.record(Object.fromEntries(FACT_NAMES.map((n) => [n, factValue(n)])) as Record<string, fc.Arbitrary<FactValue>>);
 
+const NUMBER_FACTS = FACT_NAMES.filter((n) => FACT_CATALOG[n].type === 'number');
 const scalar = fc.oneof(fc.constantFrom(...NUMBERS), fc.constantFrom(...WORDS), fc.boolean());
 const leaf: fc.Arbitrary<ConditionNode> = fc
-  .record({ fact: fc.constantFrom(...FACT_NAMES), operator: fc.constantFrom(...SUPPORTED_OPERATORS), pick: fc.nat(4), other: fc.constantFrom(...FACT_NAMES), n: fc.constantFrom(...NUMBERS), s: scalar, list: fc.array(scalar, { maxLength: 4 }) })
-  .map(({ fact, operator, pick, other, n, s, list }) => {
+  .record({
+    fact: fc.constantFrom(...FACT_NAMES), operator: fc.constantFrom(...SUPPORTED_OPERATORS), pick: fc.nat(4), other: fc.constantFrom(...FACT_NAMES), otherNumber: fc.constantFrom(...NUMBER_FACTS),
+    n: fc.constantFrom(...NUMBERS), s: scalar, list: fc.array(scalar, { maxLength: 4 }),
+  })
+  .map(({ fact, operator, pick, other, otherNumber, n, s, list }) => {
     if (operator === 'in' || operator === 'notIn') return { fact, operator, value: list };
     if (operator.startsWith('less') || operator.startsWith('greater')) {
       const numeric = FACT_CATALOG[fact].type === 'number' ? fact : 'worstVswr';
-      return { fact: numeric, operator, value: pick === 0 ? { fact: other } : pick === 1 ? { param: 'threshold' } : n };
+      return { fact: numeric, operator, value: pick === 0 ? { fact: otherNumber } : pick === 1 ? { param: 'threshold' } : n };
     }
     return { fact, operator, value: pick === 0 ? { fact: other } : pick === 1 ? null : s };
   });
+const countConditions = (node: ConditionNode): number =>
+  1 + ('all' in node ? node.all.reduce((n, c) => n + countConditions(c), 0) : 'any' in node ? node.any.reduce((n, c) => n + countConditions(c), 0) : 'not' in node ? countConditions(node.not) : 0);
+/** Trees within the rule limits (RULE_LIMITS): at most 6 levels, and both trees of a rule together at most 200 conditions. */
 const tree: fc.Arbitrary<ConditionNode> = fc.letrec<{ node: ConditionNode }>((self) => ({
   node: fc.oneof(
-    { depthSize: 'small', withCrossShrink: true },
+    { depthSize: 'small', withCrossShrink: true, maxDepth: 5 },
     leaf,
     fc.array(self('node'), { maxLength: 3 }).map((all) => ({ all })),
     fc.array(self('node'), { maxLength: 3 }).map((any) => ({ any })),
     self('node').map((not) => ({ not })),
   ),
-})).node;
+})).node.filter((node) => countConditions(node) <= 99);
 
 const randomRule = fc
   .record({ n: fc.nat(9999), severity: fc.constantFrom('fail', 'marginal', 'info' as const), conditions: tree, appliesWhen: fc.option(tree, { nil: undefined }), threshold: fc.constantFrom(...NUMBERS), enabled: fc.boolean() })

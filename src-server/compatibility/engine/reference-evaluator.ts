@@ -1,6 +1,8 @@
 import { Engine, type RuleProperties, type TopLevelCondition } from 'json-rules-engine';
 import type { RuleDefinition } from './rule-definition';
-import { type BoundRule, type EngineCondition, bindRule, bindingKey, completeFacts, findingOf, noDataFindingOf, verdictOf } from './rule-binding';
+import {
+  type BoundRule, type EngineCondition, EVALUATION_FAILED, PREPARATION_FAILED, bindOrBreak, bindingKeyOrBroken, brokenFindingOf, completeFacts, findingOf, noDataFindingOf, ruleDefect, verdictOf,
+} from './rule-binding';
 import type { CellVerdict, Facts, Finding } from './types';
 
 /** "All required facts are known", in json-rules-engine's own terms. */
@@ -31,37 +33,58 @@ export function engineRulesOf(bound: BoundRule): RuleProperties[] {
   return rules;
 }
 
-/** Evaluation by json-rules-engine itself: the source of truth the compiled path is checked against. */
+type Slot = { readonly broken: null; readonly bound: BoundRule; readonly engine: Engine } | { readonly broken: Finding };
+
+/**
+ * Evaluation by json-rules-engine itself: the source of truth the compiled path is checked against.
+ * One engine per rule of ours, so a rule that throws marks its own finding as broken and stops nothing else.
+ */
 export class ReferenceEvaluator {
   private readonly rules: readonly RuleDefinition[];
-  private readonly engines = new Map<string, { engine: Engine; bound: BoundRule[] }>();
+  private readonly defects: readonly (string | null)[];
+  private readonly slots = new Map<string, Slot[]>();
 
   constructor(rules: readonly RuleDefinition[]) {
     this.rules = rules.filter((r) => r.enabled);
+    this.defects = this.rules.map(ruleDefect);
   }
 
-  private engineFor(facts: Facts): { engine: Engine; bound: BoundRule[] } {
-    const key = this.rules.map((r) => bindingKey(r, facts)).join('\n');
-    let entry = this.engines.get(key);
-    if (!entry) {
-      const bound = this.rules.map((rule, index) => bindRule(rule, index, facts));
-      const engine = new Engine([], { allowUndefinedFacts: false });
-      for (const b of bound) for (const r of engineRulesOf(b)) engine.addRule(r);
-      entry = { engine, bound };
-      this.engines.set(key, entry);
+  private slotsFor(facts: Facts): Slot[] {
+    const key = this.rules.map((r, i) => bindingKeyOrBroken(r, i, this.defects[i], facts)).join('\n');
+    let slots = this.slots.get(key);
+    if (!slots) {
+      slots = this.rules.map((rule, index): Slot => {
+        const bound = bindOrBreak(rule, index, this.defects[index], facts);
+        if ('broken' in bound) return bound;
+        try {
+          const engine = new Engine([], { allowUndefinedFacts: false });
+          for (const r of engineRulesOf(bound)) engine.addRule(r);
+          return { broken: null, bound, engine };
+        } catch {
+          return { broken: brokenFindingOf(rule, PREPARATION_FAILED) };
+        }
+      });
+      this.slots.set(key, slots);
     }
-    return entry;
+    return slots;
   }
 
   async evaluate(facts: Facts): Promise<CellVerdict> {
     const complete = completeFacts(facts);
-    const { engine, bound } = this.engineFor(complete);
-    const { events } = await engine.run(complete);
-    const findings: [number, Finding][] = events.map((event) => {
-      const b = bound[event.params!.index as number];
-      return [b.index, event.type === 'finding' ? findingOf(b, complete) : noDataFindingOf(b, complete)];
-    });
-    findings.sort((a, b) => a[0] - b[0]);
-    return verdictOf(findings.map(([, f]) => f));
+    const findings: Finding[] = [];
+    for (const slot of this.slotsFor(complete)) {
+      if (slot.broken !== null) {
+        findings.push(slot.broken);
+        continue;
+      }
+      try {
+        // "finding" and "no-data" exclude each other, so one rule gives at most one event.
+        const { events } = await slot.engine.run(complete);
+        for (const event of events) findings.push(event.type === 'finding' ? findingOf(slot.bound, complete) : noDataFindingOf(slot.bound, complete));
+      } catch {
+        findings.push(brokenFindingOf(slot.bound.rule, EVALUATION_FAILED));
+      }
+    }
+    return verdictOf(findings);
   }
 }

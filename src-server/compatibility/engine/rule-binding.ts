@@ -1,5 +1,5 @@
 import { FACT_CATALOG, FACT_NAMES, isFactName } from './fact-catalog';
-import { type ConditionNode, type ConditionValue, type ParameterValue, type RuleDefinition, factsNamedBy } from './rule-definition';
+import { type ConditionNode, type ConditionValue, type ParameterValue, type RuleDefinition, factsNamedBy, validateRuleDefinition } from './rule-definition';
 import type { CellStatus, CellVerdict, FactValue, Facts, Finding } from './types';
 
 /** A condition as json-rules-engine takes it: parameters replaced by their values. */
@@ -129,9 +129,63 @@ function lazyFinding(ruleId: string, severity: Finding['severity'], code: string
     severity,
     code,
     get message() {
-      return (message ??= write());
+      if (message === undefined) {
+        // Written while the answer is serialised: a throw here would turn the whole response into a 500.
+        try {
+          message = write();
+        } catch {
+          message = 'the message of this finding could not be written';
+        }
+      }
+      return message;
     },
   };
+}
+
+/** The code of the finding a rule gets on every cell it could not check because the rule itself is faulty. */
+export const RULE_BROKEN_CODE = 'RULE_BROKEN';
+export const EVALUATION_FAILED = 'it failed while checking this pair';
+export const PREPARATION_FAILED = 'it could not be prepared for this band';
+
+/**
+ * Why a rule cannot be evaluated (its first validation problem), or null when it is sound. A rule from the
+ * database was validated when saved, but may predate a stricter check or have been written around the API.
+ */
+export function ruleDefect(rule: unknown): string | null {
+  try {
+    const [first] = validateRuleDefinition(rule);
+    if (!first) return null;
+    return first.path ? `${first.path}: ${first.message}` : first.message;
+  } catch {
+    return 'the rule cannot be read';
+  }
+}
+
+/** "Not checked" (shown as no data, never as a pass), naming the faulty rule and why. */
+export function brokenFindingOf(rule: RuleDefinition, reason: string): Finding {
+  const id = typeof rule?.id === 'string' ? rule.id : String(rule?.id);
+  const title = typeof rule?.title === 'string' ? rule.title : id;
+  return { ruleId: id, severity: 'no-data', code: RULE_BROKEN_CODE, message: `rule "${title}" (${id}) is broken and was not checked: ${reason}; an admin must correct or disable it` };
+}
+
+/** The rule bound to a row, or its broken finding when it is faulty or binding it throws. */
+export function bindOrBreak(rule: RuleDefinition, index: number, defect: string | null, rowFacts: Facts): BoundRule | { readonly broken: Finding } {
+  if (defect !== null) return { broken: brokenFindingOf(rule, defect) };
+  try {
+    return bindRule(rule, index, rowFacts);
+  } catch {
+    return { broken: brokenFindingOf(rule, PREPARATION_FAILED) };
+  }
+}
+
+/** bindingKey, with a faulty rule (known by its position) keyed apart instead of read. */
+export function bindingKeyOrBroken(rule: RuleDefinition, index: number, defect: string | null, rowFacts: Facts): string {
+  if (defect !== null) return `#broken-${index}`;
+  try {
+    return bindingKey(rule, rowFacts);
+  } catch {
+    return `#broken-${index}`;
+  }
 }
 
 export function findingOf(bound: BoundRule, facts: Facts): Finding {

@@ -45,16 +45,39 @@ export const SUPPORTED_OPERATORS = ['equal', 'notEqual', 'in', 'notIn', 'contain
 const NUMERIC_OPERATORS = new Set(['lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive']);
 const LIST_OPERATORS = new Set(['in', 'notIn']);
 
+/** Limits on one rule, so no rule can make validation or evaluation recurse deeply or run long. */
+export const RULE_LIMITS = { maxDepth: 8, maxConditions: 200, maxJsonBytes: 64 * 1024 } as const;
+
+/** Names every plain object inherits (constructor, __proto__, toString, …): never a parameter, fact or table key. */
+const INHERITED_NAMES: ReadonlySet<string> = new Set(Object.getOwnPropertyNames(Object.prototype));
+
 const RULE_KEYS = new Set(['id', 'title', 'description', 'severity', 'enabled', 'version', 'source', 'parameters', 'appliesWhen', 'conditions', 'event']);
 const PLACEHOLDER = /\{([A-Za-z][A-Za-z0-9]*)(?:\|([a-z]+))?\}/g;
 export const MESSAGE_FILTERS = ['upper'] as const;
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 const isScalar = (v: unknown): v is number | string | boolean => (typeof v === 'number' && Number.isFinite(v)) || typeof v === 'string' || typeof v === 'boolean';
+const has = (object: object, key: string): boolean => Object.hasOwn(object, key);
+
+/** What a parameter holds, in words, for the operator checks. */
+function parameterKind(value: unknown): 'number' | 'text' | 'true/false' | 'list' | 'table' | 'nothing' {
+  if (typeof value === 'number') return 'number';
+  if (typeof value === 'string') return 'text';
+  if (typeof value === 'boolean') return 'true/false';
+  if (Array.isArray(value)) return 'list';
+  return isRecord(value) ? 'table' : 'nothing';
+}
+
+/** Walk state shared by every condition of one rule: the count stops a rule of thousands of conditions early. */
+interface WalkState {
+  conditions: number;
+  tooMany: boolean;
+}
 
 function validateParameter(name: string, value: unknown, problems: RuleProblem[]): void {
   const path = `parameters.${name}`;
   if (!/^[A-Za-z][A-Za-z0-9]*$/.test(name)) problems.push({ path, message: 'a parameter name is letters and digits, starting with a letter' });
+  else if (INHERITED_NAMES.has(name)) problems.push({ path, message: `"${name}" is a reserved name; choose another parameter name` });
   if (isScalar(value)) return;
   if (Array.isArray(value)) {
     value.forEach((item, i) => {
@@ -63,53 +86,83 @@ function validateParameter(name: string, value: unknown, problems: RuleProblem[]
     return;
   }
   if (isRecord(value)) {
-    for (const [key, entry] of Object.entries(value)) if (!isScalar(entry)) problems.push({ path: `${path}.${key}`, message: 'table entries must be numbers, text or true/false' });
-    if (!('default' in value)) problems.push({ path, message: 'a table needs a "default" entry for keys it does not list' });
+    for (const [key, entry] of Object.entries(value)) {
+      if (INHERITED_NAMES.has(key)) problems.push({ path: `${path}.${key}`, message: `"${key}" is a reserved name; it cannot be a table key` });
+      else if (!isScalar(entry)) problems.push({ path: `${path}.${key}`, message: 'table entries must be numbers, text or true/false' });
+    }
+    if (!has(value, 'default')) problems.push({ path, message: 'a table needs a "default" entry for keys it does not list' });
     return;
   }
   problems.push({ path, message: 'must be a number, text, true/false, a list or a table' });
 }
 
 function validateValue(value: unknown, path: string, operator: string, factType: string | undefined, parameters: Record<string, unknown>, problems: RuleProblem[]): void {
+  const numeric = NUMERIC_OPERATORS.has(operator);
+  const list = LIST_OPERATORS.has(operator);
+  if (numeric && factType !== undefined && factType !== 'number') problems.push({ path, message: `operator "${operator}" compares numbers, and this fact is ${factType}` });
   if (isRecord(value)) {
-    if ('fact' in value) {
+    if (has(value, 'fact')) {
       if (Object.keys(value).length !== 1) problems.push({ path, message: 'a fact reference holds only "fact"' });
-      if (typeof value.fact !== 'string' || !isFactName(value.fact)) problems.push({ path: `${path}.fact`, message: `unknown fact "${String(value.fact)}"` });
+      if (typeof value.fact !== 'string' || !isFactName(value.fact)) {
+        problems.push({ path: `${path}.fact`, message: `unknown fact "${String(value.fact)}"` });
+        return;
+      }
+      // Every fact is one value, never a list, so "in" cannot take one; numeric comparisons need a numeric fact.
+      if (list) problems.push({ path, message: `operator "${operator}" needs a list, and a fact is a single value` });
+      const otherType = FACT_CATALOG[value.fact].type;
+      if (numeric && otherType !== 'number') problems.push({ path: `${path}.fact`, message: `operator "${operator}" compares numbers, and "${value.fact}" is ${otherType}` });
       return;
     }
-    if ('param' in value) {
+    if (has(value, 'param')) {
       const extra = Object.keys(value).filter((k) => k !== 'param' && k !== 'key');
       if (extra.length > 0) problems.push({ path, message: `a parameter reference holds only "param" and "key", not ${extra.join(', ')}` });
-      const param = parameters[String(value.param)];
-      if (typeof value.param !== 'string' || param === undefined) {
+      if (typeof value.param !== 'string' || !has(parameters, value.param) || INHERITED_NAMES.has(value.param)) {
         problems.push({ path: `${path}.param`, message: `unknown parameter "${String(value.param)}"` });
         return;
       }
-      if (value.key !== undefined) {
+      const param = parameters[value.param];
+      if (has(value, 'key')) {
         const key = String(value.key);
-        if (!isFactName(key)) problems.push({ path: `${path}.key`, message: `unknown fact "${key}"` });
+        if (typeof value.key !== 'string' || !isFactName(key)) problems.push({ path: `${path}.key`, message: `unknown fact "${key}"` });
         else if (FACT_CATALOG[key].scope !== 'row' || FACT_CATALOG[key].type !== 'string') problems.push({ path: `${path}.key`, message: `"${key}" cannot key a table: only text facts of the radio band can` });
         if (!isRecord(param)) problems.push({ path: `${path}.param`, message: `parameter "${value.param}" is not a table, so it takes no key` });
       } else if (isRecord(param)) {
         problems.push({ path, message: `parameter "${value.param}" is a table: name the fact that picks the entry with "key"` });
+        return;
       }
+      // What the comparison meets: the parameter itself, or any entry of its table.
+      const kinds = isRecord(param) ? [...new Set(Object.values(param).map(parameterKind))] : [parameterKind(param)];
+      if (list && kinds.some((k) => k !== 'list')) problems.push({ path: `${path}.param`, message: `operator "${operator}" needs a list, and parameter "${value.param}" holds ${kinds.join(' and ')}` });
+      if (numeric && kinds.some((k) => k !== 'number')) problems.push({ path: `${path}.param`, message: `operator "${operator}" needs a number, and parameter "${value.param}" holds ${kinds.join(' and ')}` });
+      if (!list && !numeric && kinds.includes('list')) problems.push({ path: `${path}.param`, message: `operator "${operator}" compares single values, and parameter "${value.param}" is a list` });
       return;
     }
     problems.push({ path, message: 'must be a number, text, true/false, null, a list, {"fact": …} or {"param": …}' });
     return;
   }
-  if (LIST_OPERATORS.has(operator) && !Array.isArray(value)) problems.push({ path, message: `operator "${operator}" needs a list` });
-  if (NUMERIC_OPERATORS.has(operator) && typeof value !== 'number') problems.push({ path, message: `operator "${operator}" needs a number` });
-  if (NUMERIC_OPERATORS.has(operator) && factType !== undefined && factType !== 'number') problems.push({ path, message: `operator "${operator}" compares numbers, and this fact is ${factType}` });
+  if (list && !Array.isArray(value)) problems.push({ path, message: `operator "${operator}" needs a list` });
+  if (numeric && !(typeof value === 'number' && Number.isFinite(value))) problems.push({ path, message: `operator "${operator}" needs a number` });
+  if (!list && Array.isArray(value)) problems.push({ path, message: `operator "${operator}" compares single values, not a list` });
   if (!(value === null || isScalar(value) || (Array.isArray(value) && value.every(isScalar)))) problems.push({ path, message: 'must be a number, text, true/false, null or a list of those' });
 }
 
-function validateCondition(node: unknown, path: string, parameters: Record<string, unknown>, problems: RuleProblem[]): void {
+function validateCondition(node: unknown, path: string, depth: number, parameters: Record<string, unknown>, state: WalkState, problems: RuleProblem[]): void {
+  if (state.tooMany) return;
+  state.conditions += 1;
+  if (state.conditions > RULE_LIMITS.maxConditions) {
+    state.tooMany = true;
+    problems.push({ path, message: `a rule holds at most ${RULE_LIMITS.maxConditions} conditions (appliesWhen and conditions together)` });
+    return;
+  }
+  if (depth > RULE_LIMITS.maxDepth) {
+    problems.push({ path, message: `conditions nest at most ${RULE_LIMITS.maxDepth} levels deep` });
+    return;
+  }
   if (!isRecord(node)) {
     problems.push({ path, message: 'a condition must be an object' });
     return;
   }
-  const booleanKeys = ['all', 'any', 'not'].filter((k) => k in node);
+  const booleanKeys = ['all', 'any', 'not'].filter((k) => has(node, k));
   if (booleanKeys.length > 1) {
     problems.push({ path, message: `a condition holds one of "all", "any", "not", not ${booleanKeys.join(' and ')}` });
     return;
@@ -121,15 +174,15 @@ function validateCondition(node: unknown, path: string, parameters: Record<strin
     const inner = node[key];
     if (key === 'not') {
       if (Array.isArray(inner)) problems.push({ path: `${path}.not`, message: '"not" takes one condition, not a list' });
-      else validateCondition(inner, `${path}.not`, parameters, problems);
+      else validateCondition(inner, `${path}.not`, depth + 1, parameters, state, problems);
     } else if (!Array.isArray(inner)) {
       problems.push({ path: `${path}.${key}`, message: `"${key}" takes a list of conditions` });
     } else {
-      inner.forEach((child, i) => validateCondition(child, `${path}.${key}[${i}]`, parameters, problems));
+      inner.forEach((child, i) => validateCondition(child, `${path}.${key}[${i}]`, depth + 1, parameters, state, problems));
     }
     return;
   }
-  if ('condition' in node) {
+  if (has(node, 'condition')) {
     problems.push({ path: `${path}.condition`, message: 'shared condition references are not supported; write the condition out' });
     return;
   }
@@ -144,7 +197,7 @@ function validateCondition(node: unknown, path: string, parameters: Record<strin
   if (typeof operator !== 'string' || !(SUPPORTED_OPERATORS as readonly string[]).includes(operator)) {
     problems.push({ path: `${path}.operator`, message: `unknown operator "${String(operator)}"; use one of ${SUPPORTED_OPERATORS.join(', ')}` });
   }
-  if (!('value' in node)) problems.push({ path: `${path}.value`, message: 'a condition needs a value' });
+  if (!has(node, 'value')) problems.push({ path: `${path}.value`, message: 'a condition needs a value' });
   else validateValue(node.value, `${path}.value`, String(operator), typeof fact === 'string' && isFactName(fact) ? FACT_CATALOG[fact].type : undefined, parameters, problems);
 }
 
@@ -160,6 +213,8 @@ export function messagePlaceholders(message: string): { name: string; filter: st
 export function validateRuleDefinition(input: unknown): RuleProblem[] {
   const problems: RuleProblem[] = [];
   if (!isRecord(input)) return [{ path: '', message: 'a rule must be a JSON object' }];
+  const tooLarge = sizeProblem(input);
+  if (tooLarge) return [tooLarge];
   for (const key of Object.keys(input)) if (!RULE_KEYS.has(key)) problems.push({ path: key, message: `unexpected field "${key}"` });
   if (typeof input.id !== 'string' || !/^[a-z0-9][a-z0-9-]{1,62}[a-z0-9]$/.test(input.id)) problems.push({ path: 'id', message: 'lower-case letters, digits and dashes, 3 to 64 characters' });
   if (typeof input.title !== 'string' || input.title.trim().length === 0 || input.title.length > 120) problems.push({ path: 'title', message: 'text of 1 to 120 characters' });
@@ -171,11 +226,13 @@ export function validateRuleDefinition(input: unknown): RuleProblem[] {
   const parameters = isRecord(input.parameters) ? input.parameters : {};
   if (!isRecord(input.parameters)) problems.push({ path: 'parameters', message: 'an object of named thresholds (may be empty)' });
   else for (const [name, value] of Object.entries(input.parameters)) validateParameter(name, value, problems);
-  if (input.appliesWhen !== undefined && input.appliesWhen !== null) validateCondition(input.appliesWhen, 'appliesWhen', parameters, problems);
-  if (!isRecord(input.conditions) || !['all', 'any', 'not'].some((k) => k in (input.conditions as object))) {
+  const state: WalkState = { conditions: 0, tooMany: false };
+  if (input.appliesWhen !== undefined && input.appliesWhen !== null) validateCondition(input.appliesWhen, 'appliesWhen', 1, parameters, state, problems);
+  const conditions = input.conditions;
+  if (!isRecord(conditions) || !['all', 'any', 'not'].some((k) => has(conditions, k))) {
     problems.push({ path: 'conditions', message: 'must hold "all", "any" or "not" at the top' });
   } else {
-    validateCondition(input.conditions, 'conditions', parameters, problems);
+    validateCondition(conditions, 'conditions', 1, parameters, state, problems);
   }
   const event = input.event;
   if (!isRecord(event) || event.type !== 'finding' || !isRecord(event.params)) {
@@ -186,7 +243,7 @@ export function validateRuleDefinition(input: unknown): RuleProblem[] {
     if (typeof message !== 'string' || message.trim().length === 0 || message.length > 500) problems.push({ path: 'event.params.message', message: 'text of 1 to 500 characters' });
     else {
       for (const { name, filter } of messagePlaceholders(message)) {
-        if (!isFactName(name) && !(name in parameters)) problems.push({ path: 'event.params.message', message: `unknown placeholder {${name}}: name a fact or a parameter` });
+        if (!isFactName(name) && !(has(parameters, name) && !INHERITED_NAMES.has(name))) problems.push({ path: 'event.params.message', message: `unknown placeholder {${name}}: name a fact or a parameter` });
         if (filter !== undefined && !(MESSAGE_FILTERS as readonly string[]).includes(filter)) problems.push({ path: 'event.params.message', message: `unknown filter "|${filter}" in {${name}|${filter}}` });
       }
     }
@@ -200,6 +257,18 @@ export function validateRuleDefinition(input: unknown): RuleProblem[] {
     }
   }
   return problems;
+}
+
+/** The whole rule as JSON at most 64 KiB; JSON.stringify itself refuses a structure nested past the stack. */
+function sizeProblem(input: Record<string, unknown>): RuleProblem | null {
+  let bytes: number;
+  try {
+    bytes = Buffer.byteLength(JSON.stringify(input), 'utf8');
+  } catch {
+    return { path: '', message: 'the rule cannot be read as JSON (nested too deeply, or not plain data)' };
+  }
+  if (bytes > RULE_LIMITS.maxJsonBytes) return { path: '', message: `the rule is ${bytes} bytes of JSON; at most ${RULE_LIMITS.maxJsonBytes / 1024} KiB` };
+  return null;
 }
 
 function stripParams(node: ConditionNode): unknown {
