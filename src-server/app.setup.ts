@@ -7,11 +7,15 @@ import { AppModule } from './app.module';
 import { loadConfig } from './config/app-config';
 import { JsonLogger } from './common/json-logger';
 import { requestIdMiddleware } from './common/request-context';
+import { verifyJsonBody } from './common/json-body';
 
 /** Everything main.ts does except listen, so the tests run the production app. */
 export function configureApp(app: INestApplication): INestApplication {
   const config = loadConfig();
   app.use(requestIdMiddleware);
+  // Registered here (Nest then skips its default) so every app, tests included, refuses over-deep JSON and lone surrogates.
+  // Nest's option type leaves out `verify` because its rawBody mode uses it; this app does not use rawBody.
+  (app as NestExpressApplication).useBodyParser('json', { verify: verifyJsonBody } as Record<string, unknown>);
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, EntityManager, In, Not } from 'typeorm';
+import { transactionWithRetry } from '../common/transaction-retry';
 import { DomainError, NotFoundError, ValidationFailedError } from '../common/domain-error';
 import type { AuthUser } from '../common/auth.decorators';
 import { AuditService } from '../audit/audit.service';
@@ -39,7 +40,7 @@ export class BandSetsService {
   }
 
   async create(input: CreateBandSetDto, actor: AuthUser): Promise<BandSetDto> {
-    return this.dataSource.transaction(async (manager) => {
+    return transactionWithRetry(this.dataSource, async (manager) => {
       await this.assertNameFree(manager, input.name);
       await this.assertBandsExist(manager, input.bandIds);
       const inserted = await manager.insert(BandSet, { name: input.name, description: input.description });
@@ -51,7 +52,7 @@ export class BandSetsService {
   }
 
   async update(id: number, input: UpdateBandSetDto, actor: AuthUser): Promise<BandSetDto> {
-    return this.dataSource.transaction(async (manager) => {
+    return transactionWithRetry(this.dataSource, async (manager) => {
       // Lock the row first; MariaDB has no FOR UPDATE OF, so relations load in a second query.
       if (!(await manager.findOne(BandSet, { where: { id }, lock: { mode: 'pessimistic_write' } }))) throw new NotFoundError('band set', id);
       const before = await manager.findOneOrFail(BandSet, { where: { id }, relations: { members: { band: true } } });

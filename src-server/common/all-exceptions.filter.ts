@@ -2,6 +2,7 @@ import { ArgumentsHost, Catch, ExceptionFilter, HttpException, Logger } from '@n
 import type { Request, Response } from 'express';
 import { randomUUID } from 'node:crypto';
 import { DomainError } from './domain-error';
+import { duplicateKeyConflict } from './duplicate-key';
 import { isRetryableLockError } from './transaction-retry';
 
 const HTTP_CODES: Record<number, string> = {
@@ -28,6 +29,8 @@ export class AllExceptionsFilter implements ExceptionFilter {
       return { statusCode: exception.status, code: exception.code, message: exception.message, ...exception.details };
     }
     if (exception instanceof HttpException) {
+      // Express wraps errors thrown in body-parser's verify hook (the JSON depth and Unicode check): answer the DomainError.
+      if (exception.cause instanceof DomainError) return this.toBody(exception.cause, request);
       const cause = exception.cause as { type?: string } | undefined;
       if (cause?.type === 'entity.parse.failed') {
         return { statusCode: 400, code: 'MALFORMED_JSON', message: `The request body is not valid JSON: ${exception.message}` };
@@ -55,6 +58,9 @@ export class AllExceptionsFilter implements ExceptionFilter {
       this.logger.warn(`database unavailable during ${request.method} ${request.url}: ${err.code}`);
       return { statusCode: 503, code: 'DATABASE_UNAVAILABLE', message: 'The database is unavailable; try again shortly' };
     }
+    // A parallel write won the race past the service's own check: the unique key says which record and field.
+    const duplicate = duplicateKeyConflict(exception);
+    if (duplicate) return { statusCode: 409, code: duplicate.code, message: duplicate.message, ...duplicate.details };
     if (isRetryableLockError(exception)) {
       this.logger.warn(`lock contention during ${request.method} ${request.url}`);
       return { statusCode: 503, code: 'DATABASE_BUSY', message: 'The database was busy with a conflicting change; try again' };

@@ -8,13 +8,18 @@ export const isRetryableLockError = (error: unknown): boolean => {
   return RETRYABLE.has(driver.driverError?.errno ?? driver.errno ?? -1);
 };
 
-/** Runs the work in a transaction, again (up to `attempts` times) when the database chose it as a deadlock victim. */
-export async function transactionWithRetry<T>(dataSource: DataSource, work: (manager: EntityManager) => Promise<T>, attempts = 4): Promise<T> {
+/**
+ * Runs the work in a transaction, again (up to `attempts` times) when the database chose it as a deadlock victim
+ * (or `retryOn` says so, e.g. an idempotent insert that lost a race and will find the winner's row next time).
+ */
+export async function transactionWithRetry<T>(
+  dataSource: DataSource, work: (manager: EntityManager) => Promise<T>, attempts = 4, retryOn: (error: unknown) => boolean = isRetryableLockError,
+): Promise<T> {
   for (let attempt = 1; ; attempt += 1) {
     try {
       return await dataSource.transaction(work);
     } catch (error) {
-      if (attempt >= attempts || !isRetryableLockError(error)) throw error;
+      if (attempt >= attempts || !retryOn(error)) throw error;
       await new Promise((r) => setTimeout(r, 5 + Math.random() * 20 * attempt));
     }
   }

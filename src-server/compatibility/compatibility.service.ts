@@ -1,6 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
+import { duplicateKeyName } from '../common/duplicate-key';
+import { isRetryableLockError, transactionWithRetry } from '../common/transaction-retry';
 import { AuditService, type AuditEntryView } from '../audit/audit.service';
 import type { AuthUser } from '../common/auth.decorators';
 import { DomainError, NotFoundError } from '../common/domain-error';
@@ -75,6 +77,10 @@ const COLUMN_CACHE_SIZE = 2000;
 const MATRIX_CACHE_SIZE = 200;
 
 /** The compatibility matrix, candidates and assignments over the products, parts and rules of the other domains. */
+const ASSIGNMENT_ATTEMPTS = 6;
+// Parallel shortlist/choice calls on one radio deadlock on gap locks or collide on a unique key; rerun, they then see the winner's row.
+const retryAssignmentRace = (error: unknown) => isRetryableLockError(error) || (duplicateKeyName(error) ?? '').startsWith('uq_assignment_');
+
 @Injectable()
 export class CompatibilityService {
   /** Facts per (band requirement × part), valid for one catalogue revision. */
@@ -267,29 +273,29 @@ export class CompatibilityService {
 
   async shortlist(productId: number, radioId: number, partId: number, note: string | undefined, actor: AuthUser): Promise<AssignmentDto[]> {
     await this.checkRadioAndPart(productId, radioId, partId);
-    await this.dataSource.transaction(async (manager) => {
+    await transactionWithRetry(this.dataSource, async (manager) => {
       const existing = await manager.findOne(PartAssignment, { where: { radioId, partId }, lock: { mode: 'pessimistic_write' } });
       if (existing) return;
       await manager.insert(PartAssignment, { productId, radioId, partId, state: 'shortlisted', note: note ?? null, createdById: actor.id });
       await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'shortlisted', userId: actor.id, changes: { radioId, partId } });
-    });
+    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
     return this.listAssignments(productId);
   }
 
   async removeFromShortlist(productId: number, radioId: number, partId: number, actor: AuthUser): Promise<AssignmentDto[]> {
-    await this.dataSource.transaction(async (manager) => {
+    await transactionWithRetry(this.dataSource, async (manager) => {
       const existing = await manager.findOne(PartAssignment, { where: { productId, radioId, partId }, lock: { mode: 'pessimistic_write' } });
       if (!existing) throw new DomainError('ASSIGNMENT_NOT_FOUND', `part ${partId} is not on the shortlist of radio ${radioId}`, 404);
       await manager.delete(PartAssignment, { id: existing.id });
       await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'removed', userId: actor.id, changes: { radioId, partId, state: existing.state } });
-    });
+    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
     return this.listAssignments(productId);
   }
 
   /** One chosen part per radio: the previous choice goes back to the shortlist, in the same transaction. */
   async choose(productId: number, radioId: number, partId: number, actor: AuthUser): Promise<AssignmentDto[]> {
     await this.checkRadioAndPart(productId, radioId, partId);
-    await this.dataSource.transaction(async (manager) => {
+    await transactionWithRetry(this.dataSource, async (manager) => {
       const rows = await manager.find(PartAssignment, { where: { radioId }, lock: { mode: 'pessimistic_write' } });
       const previous = rows.find((r) => r.state === 'chosen');
       if (previous?.partId === partId) return;
@@ -298,17 +304,17 @@ export class CompatibilityService {
       if (existing) await manager.update(PartAssignment, { id: existing.id }, { state: 'chosen' });
       else await manager.insert(PartAssignment, { productId, radioId, partId, state: 'chosen', createdById: actor.id });
       await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'chosen', userId: actor.id, changes: { radioId, partId: [previous?.partId ?? null, partId] } });
-    });
+    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
     return this.listAssignments(productId);
   }
 
   async clearChoice(productId: number, radioId: number, actor: AuthUser): Promise<AssignmentDto[]> {
-    await this.dataSource.transaction(async (manager) => {
+    await transactionWithRetry(this.dataSource, async (manager) => {
       const chosen = await manager.findOne(PartAssignment, { where: { productId, radioId, state: 'chosen' }, lock: { mode: 'pessimistic_write' } });
       if (!chosen) throw new DomainError('ASSIGNMENT_NOT_FOUND', `radio ${radioId} has no chosen part`, 404);
       await manager.update(PartAssignment, { id: chosen.id }, { state: 'shortlisted' });
       await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'unchosen', userId: actor.id, changes: { radioId, partId: chosen.partId } });
-    });
+    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
     return this.listAssignments(productId);
   }
 

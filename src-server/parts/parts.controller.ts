@@ -67,7 +67,7 @@ export class PartsController {
   @ApiOperation({ summary: 'A part with spec bands, measurements, per-range figures, documents and sourcing' })
   @ApiOkResponse({ type: PartDetailDto })
   get(@Param('id', ParseIdPipe) id: number, @Query() query: PartDetailQueryDto, @CurrentUser() user: AuthUser): Promise<PartDetailDto> {
-    return this.parts.getDetail(id, user, query.ranges ? parseCovers(query.ranges) : []);
+    return this.parts.getDetail(id, user, query.ranges ? parseCovers(query.ranges, 'ranges') : []);
   }
 
   @Patch(':id')

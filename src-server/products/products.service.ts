@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, EntityManager, In, Not } from 'typeorm';
+import { transactionWithRetry } from '../common/transaction-retry';
 import { DomainError, NotFoundError, ValidationFailedError, VersionConflictError } from '../common/domain-error';
 import type { AuthUser } from '../common/auth.decorators';
 import { AuditService, type AuditEntryView, diffFields } from '../audit/audit.service';
@@ -82,7 +83,7 @@ export class ProductsService {
   }
 
   async create(input: CreateProductDto, actor: AuthUser): Promise<ProductDetailDto> {
-    return this.dataSource.transaction(async (manager) => {
+    return transactionWithRetry(this.dataSource, async (manager) => {
       await this.assertCodeFree(manager, input.code);
       const row = { ...input, notes: input.notes ?? null };
       const inserted = await manager.insert(Product, row);
@@ -93,7 +94,7 @@ export class ProductsService {
   }
 
   async update(id: number, input: UpdateProductDto, actor: AuthUser): Promise<ProductDetailDto> {
-    return this.dataSource.transaction(async (manager) => {
+    return transactionWithRetry(this.dataSource, async (manager) => {
       const before = await this.lockProduct(manager, id, input.version);
       const { version: _version, ...patch } = input;
       if (patch.code !== undefined && patch.code !== before.code) await this.assertCodeFree(manager, patch.code, id);

@@ -1,6 +1,6 @@
-import { ApiProperty, PartialType } from '@nestjs/swagger';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, Min } from 'class-validator';
-import { StringField } from '../../common/dto-fields';
+import { ApiProperty } from '@nestjs/swagger';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, Max, Min } from 'class-validator';
+import { INT_MAX, PatchType, StringField } from '../../common/dto-fields';
 import { BandRefDto } from './band-response.dto';
 
 export class CreateBandSetDto {
@@ -16,10 +16,11 @@ export class CreateBandSetDto {
   @ArrayMaxSize(100)
   @IsInt({ each: true, message: 'each value must be an integer band id' })
   @Min(1, { each: true, message: 'each value must be a positive band id' })
+  @Max(INT_MAX, { each: true, message: 'each value must be a band id' })
   bandIds: number[];
 }
 
-export class UpdateBandSetDto extends PartialType(CreateBandSetDto) {}
+export class UpdateBandSetDto extends PatchType(CreateBandSetDto) {}
 
 export class BandSetDto {
   @ApiProperty() id: number;

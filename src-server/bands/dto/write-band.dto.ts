@@ -1,8 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, ValidateNested } from 'class-validator';
-import { EnumField, NumberField, StringField } from '../../common/dto-fields';
+import { EnumField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { DUPLEX_MODES, type DuplexMode, RANGE_ROLES, type RangeRole, REGIONS, TECHNOLOGIES, type Technology } from '../band-domain';
 
 export class BandRangeInputDto {
@@ -37,10 +36,10 @@ export class CreateBandDto {
   @Type(() => BandRangeInputDto)
   ranges: BandRangeInputDto[];
 
-  @NumberField({ optional: true, min: 0.001, max: 300000 })
+  @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000 })
   centreMHz?: number | null;
 
-  @NumberField({ optional: true, min: 0.001, max: 300000 })
+  @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000 })
   bandwidthMHz?: number | null;
 
   @ApiProperty({ enum: REGIONS, isArray: true })
@@ -55,8 +54,8 @@ export class CreateBandDto {
   @StringField({ maxLength: 200, example: 'Table 5.5-1' })
   sourceTable: string;
 
-  @StringField({ optional: true, maxLength: 600 })
+  @StringField({ optional: true, nullable: true, maxLength: 600 })
   sourceNote?: string | null;
 }
 
-export class UpdateBandDto extends PartialType(CreateBandDto) {}
+export class UpdateBandDto extends PatchType(CreateBandDto) {}

@@ -12,11 +12,15 @@ import type { PartSearchDto } from '../dto/part-search.dto';
 import type { PartListDto, PartSummaryDto } from '../dto/part-response.dto';
 import { CatalogueIndex, type CatalogueQuery, type IndexedPart } from './catalogue-index';
 
-/** `791-862,880-960` → ranges in Hz; a reversed range is a 400 naming its position. */
-export function parseCovers(covers: string): FrequencyRange[] {
+/** The highest frequency any band or part field accepts, MHz. */
+export const MAX_RANGE_MHZ = 300_000;
+
+/** `791-862,880-960` → ranges in Hz; a reversed or out-of-range bound (e.g. 309 digits) is a 400 naming the field and position. */
+export function parseCovers(covers: string, field = 'covers'): FrequencyRange[] {
   return covers.split(',').map((text, i) => {
     const [from, to] = text.split('-').map((v) => Number(v.trim()));
-    if (!(from < to)) throw new ValidationFailedError([{ field: 'covers', message: `range ${i + 1} (${text.trim()}) must go from a lower to a higher frequency` }]);
+    if (!(to <= MAX_RANGE_MHZ)) throw new ValidationFailedError([{ field, message: `range ${i + 1} must end at or below ${MAX_RANGE_MHZ} MHz` }]);
+    if (!(from < to)) throw new ValidationFailedError([{ field, message: `range ${i + 1} (${text.trim().slice(0, 40)}) must go from a lower to a higher frequency` }]);
     return { fromHz: from * 1e6, toHz: to * 1e6 };
   });
 }

@@ -1,7 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsOptional, ValidateNested } from 'class-validator';
-import { EnumField, IntField, NumberField, StringField } from '../../common/dto-fields';
+import { ArrayMaxSize, IsArray, ValidateNested } from 'class-validator';
+import { EnumField, IntField, NumberField, OptionalField, StringField } from '../../common/dto-fields';
 import {
   CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, POLARIZATIONS, type PartPolarization,
 } from '../part.types';
@@ -9,29 +9,29 @@ import {
 export class SpecBandInputDto {
   @NumberField({ min: 1, max: 300000, example: 791, description: 'Lower edge, MHz' }) fromMhz: number;
   @NumberField({ min: 1, max: 300000, example: 862, description: 'Upper edge, MHz' }) toMhz: number;
-  @NumberField({ optional: true, min: 1, max: 100, example: 2.5 }) maxVswr?: number | null;
-  @NumberField({ optional: true, min: 0, max: 80, example: 7.4 }) minReturnLossDb?: number | null;
-  @NumberField({ optional: true, min: 0, max: 100, example: 45 }) efficiencyPct?: number | null;
-  @NumberField({ optional: true, min: -60, max: 40, example: 1.5 }) peakGainDbi?: number | null;
-  @NumberField({ optional: true, min: -60, max: 40, example: -2 }) averageGainDbi?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 1, max: 100, example: 2.5 }) maxVswr?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 0, max: 80, example: 7.4 }) minReturnLossDb?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 0, max: 100, example: 45 }) efficiencyPct?: number | null;
+  @NumberField({ optional: true, nullable: true, min: -60, max: 40, example: 1.5 }) peakGainDbi?: number | null;
+  @NumberField({ optional: true, nullable: true, min: -60, max: 40, example: -2 }) averageGainDbi?: number | null;
 }
 
 /** Fields shared by create and update; every one optional here, required ones enforced in CreatePartDto. */
 class PartFieldsDto {
-  @StringField({ optional: true, maxLength: 80, example: 'SMD 1.6 mm reflow' }) mounting?: string | null;
+  @StringField({ optional: true, nullable: true, maxLength: 80, example: 'SMD 1.6 mm reflow' }) mounting?: string | null;
   @NumberField({ optional: true, min: 1, max: 1000, example: 50 }) nominalImpedanceOhms?: number;
-  @NumberField({ optional: true, min: 0, max: 5000 }) lengthMm?: number | null;
-  @NumberField({ optional: true, min: 0, max: 5000 }) widthMm?: number | null;
-  @NumberField({ optional: true, min: 0, max: 5000 }) heightMm?: number | null;
-  @NumberField({ optional: true, min: 0, max: 5000, description: 'Evaluation ground plane length, mm' }) evalGroundLengthMm?: number | null;
-  @NumberField({ optional: true, min: 0, max: 5000, description: 'Evaluation ground plane width, mm' }) evalGroundWidthMm?: number | null;
-  @NumberField({ optional: true, min: -273, max: 500 }) tempMinC?: number | null;
-  @NumberField({ optional: true, min: -273, max: 500 }) tempMaxC?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 0, max: 5000 }) lengthMm?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 0, max: 5000 }) widthMm?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 0, max: 5000 }) heightMm?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 0, max: 5000, description: 'Evaluation ground plane length, mm' }) evalGroundLengthMm?: number | null;
+  @NumberField({ optional: true, nullable: true, min: 0, max: 5000, description: 'Evaluation ground plane width, mm' }) evalGroundWidthMm?: number | null;
+  @NumberField({ optional: true, nullable: true, min: -273, max: 500 }) tempMinC?: number | null;
+  @NumberField({ optional: true, nullable: true, min: -273, max: 500 }) tempMaxC?: number | null;
   @EnumField(LIFECYCLES, { optional: true }) lifecycle?: Lifecycle;
-  @StringField({ optional: true, maxLength: 4000 }) notes?: string | null;
+  @StringField({ optional: true, nullable: true, maxLength: 4000 }) notes?: string | null;
 
   @ApiPropertyOptional({ type: [SpecBandInputDto], description: 'Replaces all spec bands when given' })
-  @IsOptional()
+  @OptionalField()
   @IsArray()
   @ArrayMaxSize(64)
   @ValidateNested({ each: true })

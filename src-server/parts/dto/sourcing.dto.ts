@@ -1,7 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsOptional, Matches, ValidateNested } from 'class-validator';
-import { EnumField, IntField, StringField } from '../../common/dto-fields';
+import { ArrayMaxSize, ArrayMinSize, IsArray, Matches, ValidateNested } from 'class-validator';
+import { DateField, EnumField, IntField, OptionalField, StringField } from '../../common/dto-fields';
 import { ALTERNATE_KINDS, type AlternateKind } from '../part.types';
 
 export class PriceBreakInputDto {
@@ -13,13 +13,11 @@ export class PriceBreakInputDto {
 }
 
 class OfferFieldsDto {
-  @StringField({ optional: true, maxLength: 80 }) sku?: string | null;
-  @IntField({ optional: true, min: 1, max: 100_000_000 }) moq?: number | null;
-  @IntField({ optional: true, min: 0, max: 3650 }) leadTimeDays?: number | null;
+  @StringField({ optional: true, nullable: true, maxLength: 80 }) sku?: string | null;
+  @IntField({ optional: true, nullable: true, min: 1, max: 100_000_000 }) moq?: number | null;
+  @IntField({ optional: true, nullable: true, min: 0, max: 3650 }) leadTimeDays?: number | null;
 
-  @ApiProperty({ required: false, example: '2025-11-20', nullable: true })
-  @IsOptional()
-  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date like 2025-11-20' })
+  @DateField({ optional: true, nullable: true })
   lastCheckedOn?: string | null;
 }
 
@@ -44,12 +42,12 @@ export class UpdateOfferDto extends OfferFieldsDto {
   @StringField({ optional: true, maxLength: 120 }) supplier?: string;
 
   @ApiProperty({ required: false, example: 'EUR' })
-  @IsOptional()
+  @OptionalField()
   @Matches(/^[A-Z]{3}$/, { message: 'must be a three-letter currency code such as USD' })
   currency?: string;
 
   @ApiProperty({ type: [PriceBreakInputDto], required: false })
-  @IsOptional()
+  @OptionalField()
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(20)

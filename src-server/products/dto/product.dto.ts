@@ -1,6 +1,6 @@
-import { ApiProperty, ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
-import { IntField, NumberField, StringField } from '../../common/dto-fields';
+import { IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { REGIONS } from '../../bands/band-domain';
 import { RadioDto } from './radio.dto';
 
@@ -27,11 +27,11 @@ export class CreateProductDto {
   @IsIn(REGIONS, { each: true, message: `each value must be one of: ${REGIONS.join(', ')}` })
   targetRegions: string[];
 
-  @StringField({ optional: true, maxLength: 4000 })
+  @StringField({ optional: true, nullable: true, maxLength: 4000 })
   notes?: string | null;
 }
 
-export class UpdateProductDto extends PartialType(CreateProductDto) {
+export class UpdateProductDto extends PatchType(CreateProductDto) {
   @IntField({ min: 1, description: 'The version you edited; a stale one gets 409 PRODUCT_VERSION_CONFLICT' })
   version: number;
 }

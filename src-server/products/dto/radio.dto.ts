@@ -1,7 +1,7 @@
-import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, ValidateNested } from 'class-validator';
-import { EnumField, IntField, NumberField, StringField } from '../../common/dto-fields';
+import { EnumField, IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { BandDto } from '../../bands/dto/band-response.dto';
 import { CONNECTORS, type Connector, POLARIZATIONS, type Polarization } from '../radio.entity';
@@ -10,7 +10,7 @@ export class RadioBandInputDto {
   @IntField({ min: 1, description: 'A band id from /api/bands' })
   bandId: number;
 
-  @NumberField({ optional: true, min: -20, max: 20, description: "The module's certified maximum antenna gain in this band (dBi); empty for receive-only radios" })
+  @NumberField({ optional: true, nullable: true, min: -20, max: 20, description: "The module's certified maximum antenna gain in this band (dBi); empty for receive-only radios" })
   certifiedMaxGainDbi?: number | null;
 }
 
@@ -24,7 +24,7 @@ export class CreateRadioDto {
   @StringField({ maxLength: 160, example: 'Halvorn HM-410 (invented)' })
   module: string;
 
-  @NumberField({ optional: true, min: -40, max: 36, description: 'Conducted transmit power (dBm); must be empty for receive-only radios (GNSS)' })
+  @NumberField({ optional: true, nullable: true, min: -40, max: 36, description: 'Conducted transmit power (dBm); must be empty for receive-only radios (GNSS)' })
   transmitPowerDbm?: number | null;
 
   @EnumField(POLARIZATIONS)
@@ -36,7 +36,7 @@ export class CreateRadioDto {
   @NumberField({ min: 0, max: 20, description: 'Cable or feed loss between module and antenna (dB)' })
   feedLossDb: number;
 
-  @StringField({ optional: true, maxLength: 4000 })
+  @StringField({ optional: true, nullable: true, maxLength: 4000 })
   notes?: string | null;
 
   @ApiProperty({ type: [RadioBandInputDto] })
@@ -48,7 +48,7 @@ export class CreateRadioDto {
   bands: RadioBandInputDto[];
 }
 
-export class UpdateRadioDto extends PartialType(CreateRadioDto) {
+export class UpdateRadioDto extends PatchType(CreateRadioDto) {
   @IntField({ min: 1, description: 'The version you edited; a stale one gets 409 RADIO_VERSION_CONFLICT' })
   version: number;
 }

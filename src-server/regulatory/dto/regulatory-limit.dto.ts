@@ -1,5 +1,5 @@
-import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
-import { EnumField, NumberField, StringField } from '../../common/dto-fields';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { EnumField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { REGIONS } from '../../bands/band-domain';
 import { LIMIT_KINDS, type LimitKind } from '../regulatory-limit.entity';
 
@@ -25,23 +25,23 @@ export class CreateRegulatoryLimitDto {
   @StringField({ maxLength: 80, example: '25 mW e.r.p.' })
   valueText: string;
 
-  @NumberField({ optional: true, min: -10, max: 40, description: 'conducted-gain-rule: gain above which power is reduced' })
+  @NumberField({ optional: true, nullable: true, min: -10, max: 40, description: 'conducted-gain-rule: gain above which power is reduced' })
   gainThresholdDbi?: number | null;
 
-  @NumberField({ optional: true, min: 0, max: 10, description: 'conducted-gain-rule: dB of power reduction per dB of gain above the threshold' })
+  @NumberField({ optional: true, nullable: true, min: 0, max: 10, description: 'conducted-gain-rule: dB of power reduction per dB of gain above the threshold' })
   reductionDbPerDb?: number | null;
 
-  @StringField({ optional: true, maxLength: 600 })
+  @StringField({ optional: true, nullable: true, maxLength: 600 })
   conditions?: string | null;
 
   @StringField({ maxLength: 300, example: '47 CFR 15.247(b)(3), (b)(4)' })
   source: string;
 
-  @StringField({ optional: true, maxLength: 600, description: 'Corroboration or from-memory tags' })
+  @StringField({ optional: true, nullable: true, maxLength: 600, description: 'Corroboration or from-memory tags' })
   note?: string | null;
 }
 
-export class UpdateRegulatoryLimitDto extends PartialType(CreateRegulatoryLimitDto) {}
+export class UpdateRegulatoryLimitDto extends PatchType(CreateRegulatoryLimitDto) {}
 
 export class RegulatoryLimitQueryDto {
   @EnumField(REGIONS, { optional: true })
