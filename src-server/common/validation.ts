@@ -1,7 +1,8 @@
 import { ValidationError, ValidationPipe } from '@nestjs/common';
 import { FieldProblem, ValidationFailedError } from './domain-error';
 
-function flatten(errors: ValidationError[], prefix = ''): FieldProblem[] {
+/** class-validator's error tree as { field, message } pairs, nested fields as `a.0.b`. */
+export function flattenValidationErrors(errors: ValidationError[], prefix = ''): FieldProblem[] {
   return errors.flatMap((error) => {
     const field = prefix ? `${prefix}.${error.property}` : error.property;
     const own = Object.values(error.constraints ?? {}).map((message) => ({
@@ -9,7 +10,7 @@ function flatten(errors: ValidationError[], prefix = ''): FieldProblem[] {
       // class-validator starts each message with the property name; keep the field separate.
       message: message.startsWith(`${error.property} `) ? message.slice(error.property.length + 1) : message,
     }));
-    return [...own, ...flatten(error.children ?? [], field)];
+    return [...own, ...flattenValidationErrors(error.children ?? [], field)];
   });
 }
 
@@ -18,6 +19,6 @@ export function createValidationPipe(): ValidationPipe {
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,
-    exceptionFactory: (errors) => new ValidationFailedError(flatten(errors)),
+    exceptionFactory: (errors) => new ValidationFailedError(flattenValidationErrors(errors)),
   });
 }

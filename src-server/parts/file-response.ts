@@ -9,6 +9,3 @@ export function downloadOf(file: { body: Buffer; fileName: string; contentType: 
     disposition: `attachment; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(file.fileName)}`,
   });
 }
-
-/** Multer limit for every catalogue upload; each kind checks its own tighter limit after. */
-export const UPLOAD_LIMITS = { limits: { fileSize: 32 * 1024 * 1024, files: 1 } };

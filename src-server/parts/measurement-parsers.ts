@@ -3,6 +3,7 @@ import { DomainError } from '../common/domain-error';
 import { reflectionCurveFromNetwork } from '../rf/reflection';
 import { FREQUENCY_UNIT_HZ, type FrequencyUnit, portsFromFileName, readTouchstone } from '../rf/touchstone';
 import { efficiencyDbToPercent } from '../rf/units';
+import { type CsvBounds, csvParseLimits, firstLineBeyond } from './csv-bounds';
 import type { MeasurementKind } from './part.types';
 
 /** A curve ready to store: s11 as Re/Im of Γ, efficiency in %, gains in dBi. */
@@ -13,14 +14,24 @@ export interface ParsedCurve {
   frequenciesHz: Float64Array;
   valuesA: Float64Array;
   valuesB: Float64Array | null;
+  /** The 1-based file line of each point, so every later check names its line. */
+  lines: Int32Array;
 }
 
 export const VALUE_UNITS = ['%', 'dB', 'ratio', 'dBi'] as const;
 export type ValueUnit = (typeof VALUE_UNITS)[number];
 export const FREQUENCY_UNITS: FrequencyUnit[] = ['Hz', 'kHz', 'MHz', 'GHz'];
 
-const MAX_POINTS = 100_000;
+/** Most points of a stored curve, Touchstone or CSV. */
+export const MEASUREMENT_MAX_POINTS = 100_000;
 const MAX_REPORTED_ROWS = 50;
+/**
+ * Largest |S11| stored: a passive antenna reflects at most what it receives (|S11| ≤ 1); the small margin
+ * is for measurement noise near total reflection (common practice, from memory: a few thousandths).
+ */
+export const PASSIVE_REFLECTION_LIMIT = 1.005;
+/** Room for a header, comments and blank lines around the largest curve; a data row is far under 1 KiB. */
+export const CURVE_CSV_BOUNDS: CsvBounds = { maxLines: 2 * MEASUREMENT_MAX_POINTS, maxRecordSize: 1024 };
 
 export interface RowProblem {
   line: number;
@@ -37,7 +48,7 @@ export class CurveFileError extends DomainError {
 
 /** S11 of a .s1p, or port 1 of a .s2p, through the RF module's Touchstone reader. */
 export function parseTouchstoneS11(bytes: Uint8Array, fileName: string): ParsedCurve {
-  const network = readTouchstone(bytes, { expectedPorts: portsFromFileName(fileName) });
+  const network = readTouchstone(bytes, { expectedPorts: portsFromFileName(fileName), maxPoints: MEASUREMENT_MAX_POINTS });
   const curve = reflectionCurveFromNetwork(network, 1);
   return {
     kind: 's11',
@@ -46,7 +57,42 @@ export function parseTouchstoneS11(bytes: Uint8Array, fileName: string): ParsedC
     frequenciesHz: curve.frequenciesHz,
     valuesA: curve.gammaRe,
     valuesB: curve.gammaIm,
+    lines: network.pointLines,
   };
+}
+
+/**
+ * Everything a curve must satisfy to be stored, in one place, so "Check file" and the upload can never
+ * disagree: a point count the store takes, finite increasing frequencies, finite values and, for S11,
+ * a reflection a passive antenna can have. Each refusal names the file line.
+ */
+export function checkStorableCurve(curve: ParsedCurve): ParsedCurve {
+  const n = curve.frequenciesHz.length;
+  if (n < 2) throw new CurveFileError('MEASUREMENT_TOO_FEW_POINTS', `A curve needs at least two points; the file has ${n}`, null);
+  if (n > MEASUREMENT_MAX_POINTS) throw new CurveFileError('MEASUREMENT_TOO_MANY_POINTS', `The file has ${n} points; the limit is ${MEASUREMENT_MAX_POINTS}`, curve.lines[MEASUREMENT_MAX_POINTS] ?? null);
+  let previousHz = 0;
+  for (let i = 0; i < n; i++) {
+    const line = curve.lines[i];
+    const hz = curve.frequenciesHz[i];
+    if (!Number.isFinite(hz) || !(hz > previousHz)) {
+      throw new CurveFileError('MEASUREMENT_BAD_FREQUENCY', `line ${line}: the frequency must be a finite number of Hz above the one before`, line);
+    }
+    previousHz = hz;
+    const a = curve.valuesA[i];
+    const b = curve.valuesB ? curve.valuesB[i] : 0;
+    if (!Number.isFinite(a) || !Number.isFinite(b)) throw new CurveFileError('MEASUREMENT_VALUE_NOT_FINITE', `line ${line}: the value is not a finite number`, line);
+    if (curve.kind === 's11') {
+      const magnitude = Math.sqrt(a * a + b * b);
+      if (!(magnitude <= PASSIVE_REFLECTION_LIMIT)) {
+        throw new CurveFileError(
+          'MEASUREMENT_REFLECTION_ABOVE_ONE',
+          `line ${line}: |S11| is ${magnitude.toPrecision(4)} at ${hz / 1e6} MHz. A passive antenna reflects at most what it receives (|S11| ≤ 1), so this points to a calibration error; recalibrate and measure again`,
+          line,
+        );
+      }
+    }
+  }
+  return curve;
 }
 
 const FREQUENCY_UNIT_IN_HEADER = /(?:^|[^a-z])(ghz|mhz|khz|hz)(?:$|[^a-z])/i;
@@ -96,9 +142,15 @@ function pickUnit<T extends string>(fromHeader: T | null, fromForm: T | undefine
  * header ("frequency (MHz)", "efficiency (%)") or from the form; every bad row is reported by line.
  */
 export function parseCurveCsv(bytes: Uint8Array, kind: Exclude<MeasurementKind, 's11'>, form: { frequencyUnit?: FrequencyUnit; valueUnit?: ValueUnit } = {}): ParsedCurve {
+  const lineTooMany = firstLineBeyond(bytes, CURVE_CSV_BOUNDS.maxLines);
+  if (lineTooMany !== null) {
+    throw new CurveFileError('CSV_TOO_MANY_LINES', `line ${lineTooMany}: the file has more than ${CURVE_CSV_BOUNDS.maxLines} lines; a curve has at most ${MEASUREMENT_MAX_POINTS} points`, lineTooMany);
+  }
   let records: { record: string[]; info: { lines: number } }[];
   try {
-    records = parse(Buffer.from(bytes), { info: true, relax_column_count: true, skip_empty_lines: true, comment: '#', trim: true, bom: true }) as unknown as typeof records;
+    records = parse(Buffer.from(bytes), {
+      info: true, relax_column_count: true, skip_empty_lines: true, comment: '#', trim: true, bom: true, ...csvParseLimits(CURVE_CSV_BOUNDS),
+    }) as unknown as typeof records;
   } catch (error) {
     const e = error as { message: string; lines?: number };
     throw new CurveFileError('CSV_MALFORMED', `line ${e.lines ?? 1}: ${e.message}`, e.lines ?? 1);
@@ -111,12 +163,13 @@ export function parseCurveCsv(bytes: Uint8Array, kind: Exclude<MeasurementKind, 
   const frequencyUnit = pickUnit(frequencyUnitFromHeader(header.record[0]), form.frequencyUnit, 'frequency', FREQUENCY_UNITS, header.info.lines);
   const valueUnit = pickUnit(valueUnitFromHeader(header.record[1]), form.valueUnit, 'value', UNITS_FOR_KIND[kind], header.info.lines);
   if (data.length < 2) throw new CurveFileError('CSV_TOO_FEW_POINTS', `A curve needs at least two data rows; the file has ${data.length}`, null);
-  if (data.length > MAX_POINTS) throw new CurveFileError('CSV_TOO_MANY_POINTS', `The file has ${data.length} rows; the limit is ${MAX_POINTS}`, null);
+  if (data.length > MEASUREMENT_MAX_POINTS) throw new CurveFileError('CSV_TOO_MANY_POINTS', `The file has ${data.length} rows; the limit is ${MEASUREMENT_MAX_POINTS}`, null);
 
   const multiplier = FREQUENCY_UNIT_HZ[frequencyUnit];
   const [low, high, shown] = VALUE_LIMITS[kind];
   const frequenciesHz = new Float64Array(data.length);
   const values = new Float64Array(data.length);
+  const lines = new Int32Array(data.length);
   const problems: RowProblem[] = [];
   let problemCount = 0;
   let previousHz = -Infinity;
@@ -132,16 +185,18 @@ export function parseCurveCsv(bytes: Uint8Array, kind: Exclude<MeasurementKind, 
     if (!Number.isFinite(raw)) return report(`value "${record[1].slice(0, 30)}" is not a number`);
     const hz = frequency * multiplier;
     if (!(hz > 0)) return report('frequency must be positive');
+    if (!Number.isFinite(hz)) return report(`frequency ${frequency} ${frequencyUnit} is beyond any representable number of Hz`);
     if (hz <= previousHz) return report(`frequency ${frequency} ${frequencyUnit} does not increase (the row before is ${previousHz / multiplier} ${frequencyUnit})`);
     previousHz = hz;
     const value = valueUnit === 'dB' ? efficiencyDbToPercent(raw) : valueUnit === 'ratio' ? raw * 100 : raw;
     if (value < low || value > high) return report(`value ${raw} ${valueUnit} is outside ${low}…${high} ${shown}`);
     frequenciesHz[i] = hz;
     values[i] = value;
+    lines[i] = info.lines;
   });
   if (problemCount > 0) {
     const first = problems[0];
     throw new CurveFileError('CSV_BAD_ROWS', `${problemCount} row${problemCount === 1 ? ' is' : 's are'} invalid; first at line ${first.line}: ${first.message}`, first.line, problems);
   }
-  return { kind, sourceFormat: `CSV, ${frequencyUnit}, ${valueUnit}`, referenceOhms: null, frequenciesHz, valuesA: values, valuesB: null };
+  return { kind, sourceFormat: `CSV, ${frequencyUnit}, ${valueUnit}`, referenceOhms: null, frequenciesHz, valuesA: values, valuesB: null, lines };
 }

@@ -11,7 +11,7 @@ import { UploadLedger } from '../storage/upload-ledger.service';
 import { reflectionCurveFromGamma, returnLossDbSeries, vswrSeries } from '../rf/reflection';
 import { touchPart } from './catalogue-revision';
 import { Measurement } from './measurement.entity';
-import { type ParsedCurve, parseCurveCsv, parseTouchstoneS11 } from './measurement-parsers';
+import { type ParsedCurve, checkStorableCurve, parseCurveCsv, parseTouchstoneS11 } from './measurement-parsers';
 import { Part } from './part.entity';
 import { assertCanEdit } from './part-access';
 import { packFloat64, unpackFloat64 } from './point-codec';
@@ -76,6 +76,7 @@ export class MeasurementsService {
     private readonly audit: AuditService,
   ) {}
 
+  /** The one validation of a measurement file: the dry run ("Check file"), the upload and the demo seeder all call it. */
   parse(file: UploadedFile, input: UploadMeasurementDto): ParsedCurve {
     if (file.size > MEASUREMENT_MAX_BYTES) {
       throw new DomainError('MEASUREMENT_FILE_TOO_LARGE', `file: a measurement file may be at most ${MEASUREMENT_MAX_BYTES / 1048576} MiB; nothing was stored`, 413, { field: 'file', limitBytes: MEASUREMENT_MAX_BYTES });
@@ -83,8 +84,10 @@ export class MeasurementsService {
     if (looksBinary(file.buffer)) {
       throw new DomainError('MEASUREMENT_TYPE_NOT_ALLOWED', `file: ${file.originalname} is not a text file; curves are Touchstone (s11) or CSV text`, 415, { field: 'file' });
     }
-    if (input.kind === 's11') return parseTouchstoneS11(file.buffer, file.originalname);
-    return parseCurveCsv(file.buffer, input.kind, { frequencyUnit: input.frequencyUnit, valueUnit: input.valueUnit });
+    const curve = input.kind === 's11'
+      ? parseTouchstoneS11(file.buffer, file.originalname)
+      : parseCurveCsv(file.buffer, input.kind, { frequencyUnit: input.frequencyUnit, valueUnit: input.valueUnit });
+    return checkStorableCurve(curve);
   }
 
   /**

@@ -48,7 +48,8 @@ export class PartCsvService {
     }
     problems.sort((a, b) => a.row - b.row);
     const badRows = new Set(problems.map((p) => p.row));
-    const rowCount = parts.length + new Set(problems.filter((p) => p.row > 0 && !parts.some((x) => x.row === p.row)).map((p) => p.row)).size;
+    const partRows = new Set(parts.map((p) => p.row));
+    const rowCount = parts.length + new Set(problems.filter((p) => p.row > 0 && !partRows.has(p.row)).map((p) => p.row)).size;
     const valid = parts.filter((p) => !badRows.has(p.row)).length;
     if (dryRun) return { dryRun: true, rowCount, validRows: valid, problems, createdIds: [] };
     if (problems.length > 0) {

@@ -1,6 +1,9 @@
+import { getMetadataStorage, validateSync } from 'class-validator';
 import { parse } from 'csv-parse/sync';
-import { CONNECTORS, FORM_FACTORS, LIFECYCLES, POLARIZATIONS } from './part.types';
-import type { CreatePartDto, SpecBandInputDto } from './dto/part-input.dto';
+import { DomainError } from '../common/domain-error';
+import { flattenValidationErrors } from '../common/validation';
+import { type CsvBounds, csvParseLimits, firstLineBeyond } from './csv-bounds';
+import { CreatePartDto, SpecBandInputDto } from './dto/part-input.dto';
 
 /** The import/export columns; the export adds id, review state, measured kinds and prices. */
 export const PART_CSV_COLUMNS = [
@@ -8,12 +11,12 @@ export const PART_CSV_COLUMNS = [
   'evalGroundLengthMm', 'evalGroundWidthMm', 'tempMinC', 'tempMaxC', 'lifecycle', 'notes', 'specBands',
 ] as const;
 const REQUIRED = ['manufacturer', 'mpn', 'title', 'formFactor', 'connector', 'polarization'] as const;
-const NUMERIC: Record<string, [number, number]> = {
-  nominalImpedanceOhms: [1, 1000], lengthMm: [0, 5000], widthMm: [0, 5000], heightMm: [0, 5000], evalGroundLengthMm: [0, 5000],
-  evalGroundWidthMm: [0, 5000], tempMinC: [-273, 500], tempMaxC: [-273, 500],
-};
-const LENGTHS: Record<string, number> = { manufacturer: 120, mpn: 80, title: 200, mounting: 80, notes: 4000 };
-const ENUMS: Record<string, readonly string[]> = { formFactor: FORM_FACTORS, connector: CONNECTORS, polarization: POLARIZATIONS, lifecycle: LIFECYCLES };
+/** Columns read as numbers; their ranges, like every other field check, are CreatePartDto's. */
+const NUMERIC = new Set<string>(['nominalImpedanceOhms', 'lengthMm', 'widthMm', 'heightMm', 'evalGroundLengthMm', 'evalGroundWidthMm', 'tempMinC', 'tempMaxC']);
+/** Most data rows of one import (a catalogue import is a few thousand rows). */
+export const PART_IMPORT_MAX_ROWS = 5_000;
+/** Room for quoted multi-line notes; a record holds at most 4,000 characters of notes and 64 spec bands. */
+export const PART_IMPORT_CSV_BOUNDS: CsvBounds = { maxLines: 5 * PART_IMPORT_MAX_ROWS, maxRecordSize: 32 * 1024 };
 const BAND_KEYS: Record<string, keyof SpecBandInputDto> = { vswr: 'maxVswr', rl: 'minReturnLossDb', eff: 'efficiencyPct', peak: 'peakGainDbi', avg: 'averageGainDbi' };
 
 export interface ImportProblem {
@@ -61,11 +64,51 @@ export function formatSpecBands(bands: readonly SpecBandInputDto[]): string {
   ].join(' ')).join('; ');
 }
 
+/** 422 for a file too long to be an import, refused before it is parsed. */
+function tooManyRows(line: number): DomainError {
+  return new DomainError('PART_IMPORT_TOO_MANY_ROWS', `line ${line}: an import may have at most ${PART_IMPORT_MAX_ROWS} rows; split the file, nothing was imported`, 422, {
+    field: 'file', line, limitRows: PART_IMPORT_MAX_ROWS,
+  });
+}
+
+/**
+ * CreatePartDto's own @ArrayMaxSize for specBands, read from its metadata so the number lives in one place:
+ * a row with more bands is refused before validation, whose cost grows with every band it is given.
+ */
+export const SPEC_BANDS_MAX: number = (() => {
+  const rule = getMetadataStorage().getTargetValidationMetadatas(CreatePartDto, '', true, false)
+    .find((m) => m.propertyName === 'specBands' && m.name === 'arrayMaxSize');
+  if (!rule) throw new Error('CreatePartDto.specBands has no @ArrayMaxSize');
+  return Number(rule.constraints[0]);
+})();
+
+/**
+ * The same checks as POST /api/parts (CreatePartDto with class-validator), reported with the CSV column.
+ * The cells are already typed, so the instances are built directly: class-transformer's plainToInstance
+ * would double the cost of a 5,000-row import for no change.
+ */
+function dtoProblems(input: Record<string, unknown>): { field: string; message: string }[] {
+  const bands = input.specBands as SpecBandInputDto[] | undefined;
+  const instance = Object.assign(new CreatePartDto(), input, bands ? { specBands: bands.map((band) => Object.assign(new SpecBandInputDto(), band)) } : {});
+  const errors = validateSync(instance, { whitelist: true, forbidNonWhitelisted: true });
+  return flattenValidationErrors(errors).map(({ field, message }) => {
+    // specBands.3.peakGainDbi → column specBands, "band 4: peakGainDbi …", as the band text numbers them.
+    const [column, index, property] = field.split('.');
+    if (column === 'specBands' && index !== undefined) return { field: column, message: `band ${Number(index) + 1}: ${property ?? ''} ${message}`.replace(/\s+/g, ' ') };
+    return { field: column, message };
+  });
+}
+
 /** Every problem of every row, so the dry run shows them all before anything is written. */
 export function parsePartCsv(bytes: Uint8Array): ParsedImport {
+  const lineTooMany = firstLineBeyond(bytes, PART_IMPORT_CSV_BOUNDS.maxLines);
+  if (lineTooMany !== null) throw tooManyRows(lineTooMany);
   let records: { record: Record<string, string>; info: { lines: number } }[];
   try {
-    records = parse(Buffer.from(bytes), { columns: (header: string[]) => header.map((h) => h.trim()), info: true, skip_empty_lines: true, trim: true, bom: true, relax_column_count: true });
+    records = parse(Buffer.from(bytes), {
+      columns: (header: string[]) => header.map((h) => h.trim()), info: true, skip_empty_lines: true, trim: true, bom: true, relax_column_count: true,
+      ...csvParseLimits(PART_IMPORT_CSV_BOUNDS),
+    });
   } catch (error) {
     const e = error as { message: string; lines?: number };
     return { parts: [], problems: [{ row: 0, line: e.lines ?? 1, field: '', message: e.message }] };
@@ -73,6 +116,7 @@ export function parsePartCsv(bytes: Uint8Array): ParsedImport {
   const problems: ImportProblem[] = [];
   const parts: ParsedImport['parts'] = [];
   if (records.length === 0) return { parts, problems: [{ row: 0, line: 1, field: '', message: 'the file has a header but no rows, or is empty' }] };
+  if (records.length > PART_IMPORT_MAX_ROWS) throw tooManyRows(records[PART_IMPORT_MAX_ROWS].info.lines);
   const header = Object.keys(records[0].record);
   for (const column of header) {
     if (!(PART_CSV_COLUMNS as readonly string[]).includes(column)) problems.push({ row: 0, line: 1, field: column, message: `unknown column; expected: ${PART_CSV_COLUMNS.join(', ')}` });
@@ -93,25 +137,27 @@ export function parsePartCsv(bytes: Uint8Array): ParsedImport {
         if ((REQUIRED as readonly string[]).includes(column)) report(column, 'is required');
         continue;
       }
-      if (column in NUMERIC) {
+      if (NUMERIC.has(column)) {
         const number = Number(value);
-        const [min, max] = NUMERIC[column];
-        if (!Number.isFinite(number)) report(column, `"${value}" is not a number`);
-        else if (number < min || number > max) report(column, `${number} is outside ${min}…${max}`);
+        if (!Number.isFinite(number)) report(column, `"${value.slice(0, 40)}" is not a finite number`);
         else input[column] = number;
-      } else if (column in ENUMS) {
-        if (!ENUMS[column].includes(value)) report(column, `"${value}" must be one of: ${ENUMS[column].join(', ')}`);
-        else input[column] = value;
       } else if (column === 'specBands') {
+        // Counted before parsing, so a row of thousands of bands costs one split, not thousands of checks.
+        const bandCount = value.split(';').filter((entry) => entry.trim() !== '').length;
+        if (bandCount > SPEC_BANDS_MAX) {
+          report(column, `has ${bandCount} bands; at most ${SPEC_BANDS_MAX}`);
+          continue;
+        }
         const { bands, error } = parseSpecBandsText(value);
         if (error) report(column, error);
         else input.specBands = bands;
-      } else if (value.length > LENGTHS[column]) {
-        report(column, `is ${value.length} characters; at most ${LENGTHS[column]}`);
       } else {
         input[column] = value;
       }
     }
+    // Only cells that read cleanly are judged by the DTO, so no column is reported twice.
+    const alreadyReported = new Set(rowProblems.map((p) => p.field));
+    for (const problem of dtoProblems(input)) if (!alreadyReported.has(problem.field)) report(problem.field, problem.message);
     const key = `${String(record.manufacturer).toLowerCase()}\u0000${record.mpn}`;
     if (record.manufacturer && record.mpn) {
       if (seen.has(key)) report('mpn', `${record.mpn} of ${record.manufacturer} appears again (first in row ${seen.get(key)})`);

@@ -1,13 +1,12 @@
 import { Body, Controller, Get, Header, HttpCode, Param, Patch, Post, Query, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
-import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
 import { ParseIdPipe } from '../common/parse-id.pipe';
 import { CatalogueSearchService, parseCovers } from './catalogue-index/catalogue-search.service';
-import { UPLOAD_LIMITS } from './file-response';
+import { LimitedFileUpload } from '../storage/limited-file-upload';
 import type { UploadedFile } from './measurements.service';
-import { PartCsvService } from './part-csv.service';
+import { PART_IMPORT_MAX_BYTES, PartCsvService } from './part-csv.service';
 import { PartsService } from './parts.service';
 import { CreatePartDto, UpdatePartDto } from './dto/part-input.dto';
 import { PartDetailDto, PartListDto } from './dto/part-response.dto';
@@ -53,10 +52,10 @@ export class PartsController {
   @Post('imports')
   @Roles('engineer', 'admin')
   @HttpCode(200)
-  @UseInterceptors(FileInterceptor('file', UPLOAD_LIMITS))
+  @UseInterceptors(LimitedFileUpload(PART_IMPORT_MAX_BYTES, 'PART_IMPORT_TOO_LARGE', 'an import'))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } } } })
-  @ApiOperation({ summary: 'Import draft parts from CSV; dryRun (default true) lists every problem by row and writes nothing' })
+  @ApiOperation({ summary: 'Import draft parts from CSV (at most 4 MiB and 5,000 rows; each row checked like POST /api/parts); dryRun (default true) lists every problem by row and column and writes nothing' })
   @ApiOkResponse({ type: ImportResultDto })
   import(@UploadedFileParam() file: UploadedFile | undefined, @Query() query: ImportQueryDto, @CurrentUser() user: AuthUser): Promise<ImportResultDto> {
     return this.csv.importCsv(file, query.dryRun ?? true, user);

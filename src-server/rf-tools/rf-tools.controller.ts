@@ -7,7 +7,8 @@ import { ConversionRequestDto, ConversionResponseDto } from './dto/conversions.d
 import { LinkBudgetRequestDto, LinkBudgetResponseDto } from './dto/link-budget.dto';
 import { MatchingRequestDto, MatchingResponseDto } from './dto/matching.dto';
 import { RfToolsService, type UploadedTouchstone } from './rf-tools.service';
-import { TouchstoneUploadInterceptor } from './touchstone-upload.interceptor';
+import { TOUCHSTONE_MAX_BYTES } from '../rf/touchstone';
+import { LimitedFileUpload } from '../storage/limited-file-upload';
 
 @ApiTags('rf')
 @Controller('rf')
@@ -17,18 +18,18 @@ export class RfToolsController {
   @Post('touchstone/analyze')
   @Roles(...ALL_ROLES)
   @HttpCode(200)
-  @UseInterceptors(TouchstoneUploadInterceptor)
+  @UseInterceptors(LimitedFileUpload(TOUCHSTONE_MAX_BYTES, 'TOUCHSTONE_TOO_LARGE', 'a Touchstone file'))
   @ApiOperation({
     summary: 'Read a Touchstone file and report its matched ranges and best match',
     description:
-      'Multipart field `file` (.s1p/.s2p: the extension must agree with the file; .ts: version 2), at most 32 MiB. ' +
+      'Multipart field `file` (.s1p/.s2p: the extension must agree with the file; .ts: version 2), at most UPLOAD_MAX_MB (25 MiB by default, never above 32 MiB), 250,000 points and 8 KiB a line. ' +
       'Matched ranges and the best match use every point of the file; `curve` is for plotting and is resampled to 2000 points for longer files. Nothing is stored.',
   })
   @ApiConsumes('multipart/form-data')
   @ApiBody({ type: AnalyzeTouchstoneFormDto })
   @ApiOkResponse({ type: TouchstoneAnalysisDto })
   @ApiUnprocessableEntityResponse({ description: 'A bad file: `{ code, message, line }` with the 1-based line, or null for the file as a whole' })
-  @ApiPayloadTooLargeResponse({ description: 'Over 32 MiB: code TOUCHSTONE_TOO_LARGE' })
+  @ApiPayloadTooLargeResponse({ description: 'Over the limit: code TOUCHSTONE_TOO_LARGE with limitBytes' })
   analyzeTouchstone(@UploadedFile() file: UploadedTouchstone | undefined, @Body() body: AnalyzeTouchstoneDto): TouchstoneAnalysisDto {
     return this.rf.analyzeTouchstone(file, body);
   }

@@ -35,6 +35,8 @@ import type { MatchingElementDto, MatchingRequestDto, MatchingResponseDto, Netwo
 
 /** Most points the analysis returns for plotting; a chart gains nothing from more. */
 export const PLOT_POINTS = 2000;
+/** Most matched ranges returned; a real antenna has a handful, a noisy file up to one per two points. */
+export const MAX_MATCHED_RANGES = 100;
 
 export interface UploadedTouchstone {
   readonly originalname: string;
@@ -57,6 +59,7 @@ export class RfToolsService {
     const gammaLimit = gammaLimitOf(criterion);
     const best = bestMatch(curve);
     const points = curve.frequenciesHz.length;
+    const ranges = matchedRanges(curve, criterion);
     return {
       version: network.version,
       ports: network.ports,
@@ -70,7 +73,8 @@ export class RfToolsService {
       criterion: criterionName,
       thresholdVswr: vswrFromGammaMagnitude(gammaLimit),
       thresholdReturnLossDb: returnLossDbFromGammaMagnitude(gammaLimit),
-      matchedRanges: matchedRanges(curve, criterion).map(({ fromHz, toHz }) => ({ fromHz, toHz })),
+      matchedRanges: ranges.slice(0, MAX_MATCHED_RANGES).map(({ fromHz, toHz }) => ({ fromHz, toHz })),
+      matchedRangeCount: ranges.length,
       bestMatch: { frequencyHz: best.frequencyHz, gammaMagnitude: best.gammaMagnitude, vswr: best.vswr, returnLossDb: best.returnLossDb },
       resampled: points > PLOT_POINTS,
       curve: plotCurve(curve),

@@ -371,3 +371,38 @@ describe(writeTouchstone.name, () => {
     );
   });
 });
+
+describe('readTouchstone bounds', () => {
+  const header = '# MHz S RI R 50\n';
+  const refused = (text: string, options: Parameters<typeof readTouchstone>[1] = {}) => {
+    try {
+      readTouchstone(text, options);
+    } catch (error) {
+      return { code: (error as TouchstoneError).code, line: (error as TouchstoneError).line };
+    }
+    throw new Error('the file was accepted');
+  };
+
+  it.each([
+    ['NaN', `${header}800 0.1 0\n900 NaN 0\n`, 3],
+    ['Infinity', `${header}800 0.1 0\n900 Infinity 0\n`, 3],
+    ['1e309', `${header}800 0.1 0\n900 1e309 0\n`, 3],
+    ['a frequency that overflows in Hz', `# GHz S RI R 50\n1 0.1 0\n1e300 0.1 0\n`, 3],
+    ['a dB value that overflows', `# MHz S DB R 50\n800 -10 0\n900 7000 0\n`, 3],
+    ['a Z point that divides by zero', `# MHz Z RI R 50\n800 1 0\n900 -1 0\n`, 3],
+  ])('refuses %s with TOUCHSTONE_BAD_NUMBER and its line', (_name, text, line) => {
+    expect(refused(text)).toEqual({ code: 'TOUCHSTONE_BAD_NUMBER', line });
+  });
+
+  it('refuses a line longer than the limit, with its line number, before reading it as text', () => {
+    expect(refused(`${header}800 0.1 0\n# ${'x'.repeat(100)}\n`, { maxLineBytes: 64 })).toEqual({ code: 'TOUCHSTONE_LINE_TOO_LONG', line: 3 });
+    expect(refused(`${header}800 0.1 0 ${' 1'.repeat(100)}\n`, { maxLineBytes: 64 })).toMatchObject({ line: 2 });
+    expect(refused(`${header}800 ${'1'.repeat(200)} 0\n`)).toEqual({ code: 'TOUCHSTONE_BAD_NUMBER', line: 2 });
+  });
+
+  it('refuses the point past maxPoints with its line, and records the line of every point', () => {
+    const text = `${header}! comment\n800 0.1 0\n\n900 0.2 0\n1000 0.3 0\n`;
+    expect(refused(text, { maxPoints: 2 })).toEqual({ code: 'TOUCHSTONE_TOO_MANY_POINTS', line: 6 });
+    expect([...readTouchstone(text, { maxPoints: 3 }).pointLines]).toEqual([3, 5, 6]);
+  });
+});

@@ -12,6 +12,10 @@ import { type Complex, add, complex, div, mul, sub } from './complex';
 
 /** Largest file accepted: 32 MiB, above the 20 MB the API promises and about 250,000 2-port points. */
 export const TOUCHSTONE_MAX_BYTES = 32 * 1024 * 1024;
+/** Most points read by default: more than any instrument sweep (they stop near 100,001), and bounded memory. */
+export const TOUCHSTONE_MAX_POINTS = 250_000;
+/** Longest line: a 2-port data line is under 200 bytes; a longer line is not Touchstone. */
+export const TOUCHSTONE_MAX_LINE_BYTES = 8192;
 
 export type TouchstoneErrorCode =
   | 'TOUCHSTONE_EMPTY'
@@ -30,7 +34,9 @@ export type TouchstoneErrorCode =
   | 'TOUCHSTONE_UNSUPPORTED_VERSION'
   | 'TOUCHSTONE_MISSING_KEYWORD'
   | 'TOUCHSTONE_BAD_KEYWORD'
-  | 'TOUCHSTONE_UNKNOWN_KEYWORD';
+  | 'TOUCHSTONE_UNKNOWN_KEYWORD'
+  | 'TOUCHSTONE_LINE_TOO_LONG'
+  | 'TOUCHSTONE_TOO_MANY_POINTS';
 
 /** A file the reader refuses; `line` is 1-based, or null when the problem is the file as a whole. */
 export class TouchstoneError extends DomainError {
@@ -76,12 +82,18 @@ export interface TouchstoneNetwork {
   readonly s: readonly ComplexSeries[];
   /** Noise-parameter points recognised and skipped. */
   readonly noisePointCount: number;
+  /** The 1-based file line each point starts on, so a later check can name it. */
+  readonly pointLines: Int32Array;
 }
 
 export interface TouchstoneReadOptions {
   /** Port count implied by the file name (.s1p → 1); a file that disagrees is refused. */
   readonly expectedPorts?: number;
   readonly maxBytes?: number;
+  /** Most network points accepted (default TOUCHSTONE_MAX_POINTS); the point past it is refused with its line. */
+  readonly maxPoints?: number;
+  /** Longest line accepted (default TOUCHSTONE_MAX_LINE_BYTES). */
+  readonly maxLineBytes?: number;
 }
 
 /** Ports implied by a Touchstone file name: `.s2p` → 2; `.ts` (version 2) and others → undefined. */
@@ -121,6 +133,8 @@ const CHAR_E_LOWER = 101;
 const POWERS_OF_TEN = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
 const MAX_EXACT_MANTISSA = 2 ** 53;
 const DEG_TO_RAD = Math.PI / 180;
+/** More digits than this add nothing to a double (17 significant digits) and only cost time. */
+const MAX_NUMBER_CHARACTERS = 64;
 
 function latin1(bytes: Uint8Array, start: number, end: number): string {
   let text = '';
@@ -212,8 +226,9 @@ function scanNumbers(bytes: Uint8Array, start: number, out: LineNumbers, lineNum
       exponent += exponentNegative ? -exponentValue : exponentValue;
     }
     if (!valid || (i < end && !endsToken(bytes[i]))) {
+      // Only as much of the token as the message shows is read, however long the token is.
       let tokenEnd = i;
-      while (tokenEnd < end && !endsToken(bytes[tokenEnd])) tokenEnd++;
+      while (tokenEnd < end && tokenEnd - tokenStart <= 40 && !endsToken(bytes[tokenEnd])) tokenEnd++;
       const token = latin1(bytes, tokenStart, tokenEnd);
       throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `'${token.length > 40 ? token.slice(0, 40) + '…' : token}' is not a number`);
     }
@@ -222,10 +237,13 @@ function scanNumbers(bytes: Uint8Array, start: number, out: LineNumbers, lineNum
       value = exponent >= 0 ? mantissa * POWERS_OF_TEN[exponent] : mantissa / POWERS_OF_TEN[-exponent];
       if (negative) value = -value;
     } else {
+      if (i - tokenStart > MAX_NUMBER_CHARACTERS) {
+        throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `a number of ${i - tokenStart} characters is too long (at most ${MAX_NUMBER_CHARACTERS})`);
+      }
       value = Number(latin1(bytes, tokenStart, i));
     }
     if (!Number.isFinite(value)) {
-      throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `'${latin1(bytes, tokenStart, i)}' is out of range`);
+      throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `'${latin1(bytes, tokenStart, Math.min(i, tokenStart + 40))}' is out of range`);
     }
     if (count < capacity) values[count] = value;
     count++;
@@ -322,12 +340,14 @@ class PointStore {
   capacity: number;
   length = 0;
   frequenciesHz: Float64Array;
+  lines: Int32Array;
   re: Float64Array[];
   im: Float64Array[];
 
   constructor(readonly elements: number, initialCapacity: number) {
     this.capacity = Math.max(16, initialCapacity);
     this.frequenciesHz = new Float64Array(this.capacity);
+    this.lines = new Int32Array(this.capacity);
     this.re = Array.from({ length: elements }, () => new Float64Array(this.capacity));
     this.im = Array.from({ length: elements }, () => new Float64Array(this.capacity));
   }
@@ -340,6 +360,9 @@ class PointStore {
       return b;
     };
     this.frequenciesHz = copy(this.frequenciesHz);
+    const lines = new Int32Array(capacity);
+    lines.set(this.lines);
+    this.lines = lines;
     this.re = this.re.map(copy);
     this.im = this.im.map(copy);
     this.capacity = capacity;
@@ -445,6 +468,8 @@ interface ReaderState {
 
 export function readTouchstone(input: string | Uint8Array, options: TouchstoneReadOptions = {}): TouchstoneNetwork {
   const maxBytes = options.maxBytes ?? TOUCHSTONE_MAX_BYTES;
+  const maxPoints = options.maxPoints ?? TOUCHSTONE_MAX_POINTS;
+  const maxLineBytes = options.maxLineBytes ?? TOUCHSTONE_MAX_LINE_BYTES;
   const tooLarge = (size: number) =>
     new TouchstoneError('TOUCHSTONE_TOO_LARGE', null, `the file is ${size} bytes; the limit is ${maxBytes} bytes (${(maxBytes / 1048576).toFixed(0)} MiB)`);
   if (typeof input === 'string' && input.length > maxBytes) throw tooLarge(input.length);
@@ -504,7 +529,8 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
     normalisation = normalisationFactors(parameter, ports, state.referenceOhms, !state.isVersion2);
     layout = pairLayout(ports, state.twoPortDataOrder ?? '21_12', state.matrixFormat);
     valuesPerPoint = 1 + 2 * layout.targets.length;
-    store = new PointStore(ports * ports, Math.ceil(bytes.length / (ports === 1 ? 24 : 72)));
+    // Sized from the file (about 24 bytes a 1-port point), never beyond the point limit.
+    store = new PointStore(ports * ports, Math.min(maxPoints, Math.ceil(bytes.length / (ports === 1 ? 24 : 72))));
   };
 
   const checkPorts = (ports: number, lineNumber: number, how: string) => {
@@ -526,10 +552,17 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
         frequencyHz < 0 ? `frequency ${values[0]} is negative` : `frequency ${values[0]} does not increase (the previous point was ${lastFrequencyHz / frequencyMultiplier})`,
       );
     }
+    if (!Number.isFinite(frequencyHz)) {
+      throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `frequency ${values[0]} ${state.option!.frequencyUnit} is beyond any representable number of Hz`);
+    }
+    if (s.length >= maxPoints) {
+      throw new TouchstoneError('TOUCHSTONE_TOO_MANY_POINTS', lineNumber, `the file has more than ${maxPoints} points; the limit is ${maxPoints}`);
+    }
     lastFrequencyHz = frequencyHz;
     if (s.length === s.capacity) s.grow();
     const index = s.length++;
     s.frequenciesHz[index] = frequencyHz;
+    s.lines[index] = lineNumber;
     const targets = layout!.targets;
     const direct = parameter === 'S';
     const converted: Complex[] | null = direct ? null : new Array<Complex>(s.elements);
@@ -568,6 +601,12 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
       for (let e = 0; e < sMatrix.length; e++) {
         s.re[e][index] = sMatrix[e].re;
         s.im[e][index] = sMatrix[e].im;
+      }
+    }
+    // A huge dB value overflows 10^(dB/20), and Z or Y data can divide by zero on the way to S.
+    for (let e = 0; e < s.elements; e++) {
+      if (!Number.isFinite(s.re[e][index]) || !Number.isFinite(s.im[e][index])) {
+        throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `the values of this point give no finite S-parameter (too large a magnitude, or a singular ${parameter} matrix)`);
       }
     }
   };
@@ -782,13 +821,21 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
     }
     return p;
   };
+  /** Every line is measured after one linear pass and before any string is made of it. */
+  const checkLineLength = (lineStart: number, lineEnd: number) => {
+    if (lineEnd - lineStart > maxLineBytes) {
+      throw new TouchstoneError('TOUCHSTONE_LINE_TOO_LONG', lineNumber, `the line is ${lineEnd - lineStart} bytes long; the limit is ${maxLineBytes}`);
+    }
+  };
   while (position < length && state.section !== 'ended') {
     lineNumber++;
+    const lineStart = position;
     let first = position;
     while (first < length && isBlank(bytes[first])) first++;
     const lead = first < length ? bytes[first] : CHAR_LF;
     if (lead === CHAR_LF || lead === CHAR_CR || lead === CHAR_BANG) {
       position = nextLine(first);
+      checkLineLength(lineStart, position);
       continue;
     }
     // Data lines, the bulk of a file, are scanned once: numbers straight from the bytes.
@@ -796,6 +843,7 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
     if (isNumberStart && state.section !== 'information' && state.referencePending === 0) {
       sawContent = true;
       position = nextLine(scanNumbers(bytes, first, numbers, lineNumber));
+      checkLineLength(lineStart, position);
       if (state.isVersion2) handleVersion2Data(lineNumber);
       else handleVersion1Data(lineNumber);
       continue;
@@ -807,6 +855,7 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
       contentEnd++;
     }
     position = nextLine(contentEnd);
+    checkLineLength(lineStart, position);
     if (state.section === 'information') {
       if (lead === CHAR_BRACKET) handleKeyword(latin1(bytes, first, contentEnd).trim(), lineNumber);
       continue;
@@ -870,5 +919,6 @@ export function readTouchstone(input: string | Uint8Array, options: TouchstoneRe
     frequenciesHz: finished.frequenciesHz.slice(0, finished.length),
     s: finished.series(),
     noisePointCount: state.noisePointCount,
+    pointLines: finished.lines.slice(0, finished.length),
   };
 }

@@ -30,6 +30,8 @@ export interface TouchstoneAnalysis {
   thresholdVswr: number;
   thresholdReturnLossDb: number;
   matchedRanges: FrequencyRange[];
+  /** All ranges meeting the criterion; matchedRanges holds the first 100. */
+  matchedRangeCount: number;
   bestMatch: { frequencyHz: number; gammaMagnitude: number; vswr: number; returnLossDb: number };
   resampled: boolean;
   curve: CurvePoint[];

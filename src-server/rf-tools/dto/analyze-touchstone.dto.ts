@@ -56,6 +56,8 @@ export class TouchstoneAnalysisDto {
   @ApiProperty({ description: 'The criterion as a minimum return loss, dB' }) thresholdReturnLossDb: number;
   @ApiProperty({ type: [FrequencyRangeDto], description: 'Ranges meeting the criterion, computed on every file point with interpolated edges' })
   matchedRanges: FrequencyRangeDto[];
+  @ApiProperty({ description: 'How many ranges meet the criterion; matchedRanges holds the first 100 of them (a noisy file can cross the limit at every point)' })
+  matchedRangeCount: number;
   @ApiProperty({ type: MatchPointDto, description: 'The file point with the lowest |Γ|' }) bestMatch: MatchPointDto;
   @ApiPropertyOptional({ description: 'True when the curve below is resampled (files with more points than curve holds)' }) resampled: boolean;
   @ApiProperty({

@@ -83,6 +83,11 @@ function AnalysisView({ analysis, overlayLabel, overlay }: { analysis: Touchston
               ))}
             </ul>
           )}
+          {analysis.matchedRangeCount > analysis.matchedRanges.length && (
+            <p className="bw-muted">
+              The first {analysis.matchedRanges.length} of {analysis.matchedRangeCount} matched ranges are listed; a curve that crosses the limit this often is usually noisy.
+            </p>
+          )}
         </div>
         <ResultList
           rows={[
