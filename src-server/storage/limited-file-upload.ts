@@ -14,7 +14,8 @@ export function looksBinary(bytes: Uint8Array): boolean {
  * 413 { code, limitBytes } in the route's own words instead of a bare "payload too large".
  */
 export function LimitedFileUpload(maxBytes: number, code: string, what: string): Type<NestInterceptor> {
-  const Multipart = FileInterceptor('file', { storage: memoryStorage(), limits: { fileSize: maxBytes, files: 1 } });
+  // Browsers send a file name's UTF-8 bytes as they are; multer would read them as latin1 ("BÃ¤nder.s1p").
+  const Multipart = FileInterceptor('file', { storage: memoryStorage(), defParamCharset: 'utf8', limits: { fileSize: maxBytes, files: 1 } });
 
   @Injectable()
   class LimitedFileUploadInterceptor implements NestInterceptor {
