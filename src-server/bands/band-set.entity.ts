@@ -13,6 +13,9 @@ export class BandSet {
   @Column({ type: 'text' })
   description: string;
 
+  @Column({ type: 'int', unsigned: true, default: 1 })
+  version: number;
+
   @OneToMany(() => BandSetMember, (member) => member.bandSet)
   members: BandSetMember[];
 

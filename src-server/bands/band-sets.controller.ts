@@ -1,10 +1,10 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
 import { ParseIdPipe } from '../common/parse-id.pipe';
 import { BandSetsService } from './band-sets.service';
-import { BandSetDto, CreateBandSetDto, UpdateBandSetDto } from './dto/band-set.dto';
+import { BandSetDto, BandSetVersionQueryDto, CreateBandSetDto, UpdateBandSetDto } from './dto/band-set.dto';
 
 @ApiTags('band sets')
 @Controller('band-sets')
@@ -37,7 +37,7 @@ export class BandSetsController {
 
   @Patch(':id')
   @Roles('admin')
-  @ApiOperation({ summary: 'Rename, describe or change the bands of a set (admin)' })
+  @ApiOperation({ summary: 'Rename, describe or change the bands of a set; send the version you edited (admin)' })
   @ApiOkResponse({ type: BandSetDto })
   update(@Param('id', ParseIdPipe) id: number, @Body() body: UpdateBandSetDto, @CurrentUser() actor: AuthUser): Promise<BandSetDto> {
     return this.sets.update(id, body, actor);
@@ -48,7 +48,7 @@ export class BandSetsController {
   @HttpCode(204)
   @ApiOperation({ summary: 'Delete a band set; radios keep their bands (admin)' })
   @ApiNoContentResponse()
-  remove(@Param('id', ParseIdPipe) id: number, @CurrentUser() actor: AuthUser): Promise<void> {
-    return this.sets.remove(id, actor);
+  remove(@Param('id', ParseIdPipe) id: number, @Query() query: BandSetVersionQueryDto, @CurrentUser() actor: AuthUser): Promise<void> {
+    return this.sets.remove(id, query.version, actor);
   }
 }

@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, EntityManager, In, Not } from 'typeorm';
 import { transactionWithRetry } from '../common/transaction-retry';
-import { DomainError, NotFoundError, ValidationFailedError } from '../common/domain-error';
+import { DomainError, NotFoundError, ValidationFailedError, VersionConflictError } from '../common/domain-error';
 import type { AuthUser } from '../common/auth.decorators';
 import { AuditService } from '../audit/audit.service';
 import { Band } from './band.entity';
@@ -17,6 +17,7 @@ function toBandSetDto(set: BandSet): BandSetDto {
     description: set.description,
     bandIds: members.map((m) => m.bandId),
     bands: members.map((m) => ({ id: m.band.id, technology: m.band.technology, designation: m.band.designation, name: m.band.name })),
+    version: set.version,
     updatedAt: set.updatedAt.toISOString(),
   };
 }
@@ -53,8 +54,7 @@ export class BandSetsService {
 
   async update(id: number, input: UpdateBandSetDto, actor: AuthUser): Promise<BandSetDto> {
     return transactionWithRetry(this.dataSource, async (manager) => {
-      // Lock the row first; MariaDB has no FOR UPDATE OF, so relations load in a second query.
-      if (!(await manager.findOne(BandSet, { where: { id }, lock: { mode: 'pessimistic_write' } }))) throw new NotFoundError('band set', id);
+      await this.lockBandSet(manager, id, input.version);
       const before = await manager.findOneOrFail(BandSet, { where: { id }, relations: { members: { band: true } } });
       const old = toBandSetDto(before);
       if (input.name !== undefined && input.name !== before.name) await this.assertNameFree(manager, input.name, id);
@@ -62,24 +62,35 @@ export class BandSetsService {
       const fields: Partial<BandSet> = {};
       if (input.name !== undefined && input.name !== old.name) { fields.name = input.name; changes.name = [old.name, input.name]; }
       if (input.description !== undefined && input.description !== old.description) { fields.description = input.description; changes.description = [old.description, input.description]; }
-      if (Object.keys(fields).length) await manager.update(BandSet, { id }, fields);
       if (input.bandIds && JSON.stringify(input.bandIds) !== JSON.stringify(old.bandIds)) {
         await this.assertBandsExist(manager, input.bandIds);
         await manager.delete(BandSetMember, { bandSetId: id });
         await this.writeMembers(manager, id, input.bandIds);
         changes.bandIds = [old.bandIds, input.bandIds];
       }
-      if (Object.keys(changes).length) await this.audit.record(manager, { entityType: 'band-set', entityId: id, action: 'updated', userId: actor.id, changes });
+      if (Object.keys(changes).length) {
+        await manager.update(BandSet, { id }, { ...fields, version: before.version + 1 });
+        await this.audit.record(manager, { entityType: 'band-set', entityId: id, action: 'updated', userId: actor.id, changes });
+      }
       return this.get(id, manager);
     });
   }
 
-  async remove(id: number, actor: AuthUser): Promise<void> {
+  async remove(id: number, version: number | undefined, actor: AuthUser): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
+      await this.lockBandSet(manager, id, version);
       const set = await this.get(id, manager);
       await manager.delete(BandSet, { id });
       await this.audit.record(manager, { entityType: 'band-set', entityId: id, action: 'deleted', userId: actor.id, changes: { name: set.name, bandIds: set.bandIds } });
     });
+  }
+
+  /** Locks the row first; MariaDB has no FOR UPDATE OF, so callers load relations in a second query. */
+  private async lockBandSet(manager: EntityManager, id: number, expectedVersion: number | undefined): Promise<BandSet> {
+    const set = await manager.findOne(BandSet, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    if (!set) throw new NotFoundError('band set', id);
+    if (expectedVersion !== undefined && expectedVersion !== set.version) throw new VersionConflictError('band set', id, expectedVersion, set.version);
+    return set;
   }
 
   private async writeMembers(manager: EntityManager, bandSetId: number, bandIds: number[]): Promise<void> {

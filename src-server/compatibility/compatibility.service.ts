@@ -150,7 +150,7 @@ export class CompatibilityService {
   private async matrixFingerprint(productId: number): Promise<string> {
     const [row] = await this.dataSource.query(
       `SELECT
-         (SELECT CONCAT(version, '/', updated_at) FROM products WHERE id = ?) AS product,
+         (SELECT CONCAT(version, '/', updated_at) FROM products WHERE id = ? AND deleted_at IS NULL) AS product,
          (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(version), 0), '/', COALESCE(MAX(updated_at), '')) FROM radios WHERE product_id = ?) AS radios,
          (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', rb.radio_id, rb.band_id, COALESCE(rb.certified_max_gain_dbi, 'n'), rb.position))), 0))
             FROM radio_bands rb JOIN radios r ON r.id = rb.radio_id WHERE r.product_id = ?) AS radioBands,
@@ -283,6 +283,7 @@ export class CompatibilityService {
   }
 
   async removeFromShortlist(productId: number, radioId: number, partId: number, actor: AuthUser): Promise<AssignmentDto[]> {
+    await this.products.assertExists(productId);
     await transactionWithRetry(this.dataSource, async (manager) => {
       const existing = await manager.findOne(PartAssignment, { where: { productId, radioId, partId }, lock: { mode: 'pessimistic_write' } });
       if (!existing) throw new DomainError('ASSIGNMENT_NOT_FOUND', `part ${partId} is not on the shortlist of radio ${radioId}`, 404);
@@ -309,6 +310,7 @@ export class CompatibilityService {
   }
 
   async clearChoice(productId: number, radioId: number, actor: AuthUser): Promise<AssignmentDto[]> {
+    await this.products.assertExists(productId);
     await transactionWithRetry(this.dataSource, async (manager) => {
       const chosen = await manager.findOne(PartAssignment, { where: { productId, radioId, state: 'chosen' }, lock: { mode: 'pessimistic_write' } });
       if (!chosen) throw new DomainError('ASSIGNMENT_NOT_FOUND', `radio ${radioId} has no chosen part`, 404);

@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
@@ -29,7 +29,8 @@ export class DocumentsController {
 
   @Get(':documentId/file')
   @Roles(...ALL_ROLES)
-  @ApiOperation({ summary: 'Download a document' })
+  @ApiOperation({ summary: 'Download a document, typed by its content as judged at upload' })
+  @Header('X-Content-Type-Options', 'nosniff')
   async file(@Param('id', ParseIdPipe) id: number, @Param('documentId', ParseIdPipe) documentId: number): Promise<StreamableFile> {
     return downloadOf(await this.documents.file(id, documentId));
   }

@@ -8,6 +8,7 @@ import { AuditService } from '../audit/audit.service';
 import { StorageService, objectKey } from '../storage/storage.service';
 import { UploadLedger } from '../storage/upload-ledger.service';
 import { touchPart } from './catalogue-revision';
+import { storedFileName } from './file-response';
 import { PartDocument } from './document.entity';
 import { DOCUMENT_MAX_BYTES, sniffDocumentType } from './document-type';
 import { type UploadedFile, requireFile, safeFileName, sha256Hex } from './measurements.service';
@@ -45,7 +46,7 @@ export class DocumentsService {
         const locked = await this.parts.lockPart(manager, partId);
         if (actor) assertCanEdit(actor, locked, 'add documents to');
         const inserted = await manager.insert(PartDocument, {
-          partId, kind: input.kind, title: (input.title?.trim() || file.originalname).slice(0, 200), fileName: file.originalname.slice(0, 200),
+          partId, kind: input.kind, title: storedFileName(input.title?.trim() || file.originalname), fileName: storedFileName(file.originalname),
           contentType: type.contentType, objectKey: key, sizeBytes: file.size, sha256: sha256Hex(file.buffer), uploadedById: actor?.id ?? null,
         });
         const documentId: number = inserted.identifiers[0].id;

@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
@@ -35,7 +35,8 @@ export class MeasurementsController {
 
   @Get(':measurementId/file')
   @Roles(...ALL_ROLES)
-  @ApiOperation({ summary: 'The original uploaded file' })
+  @ApiOperation({ summary: 'The original uploaded file, as text/plain (Touchstone) or text/csv whatever the uploader declared' })
+  @Header('X-Content-Type-Options', 'nosniff')
   async file(@Param('id', ParseIdPipe) id: number, @Param('measurementId', ParseIdPipe) measurementId: number): Promise<StreamableFile> {
     return downloadOf(await this.measurements.file(id, measurementId));
   }

@@ -10,6 +10,7 @@ import { StorageService, objectKey } from '../storage/storage.service';
 import { UploadLedger } from '../storage/upload-ledger.service';
 import { reflectionCurveFromGamma, returnLossDbSeries, vswrSeries } from '../rf/reflection';
 import { touchPart } from './catalogue-revision';
+import { storedFileName } from './file-response';
 import { Measurement } from './measurement.entity';
 import { type ParsedCurve, checkStorableCurve, parseCurveCsv, parseTouchstoneS11 } from './measurement-parsers';
 import { Part } from './part.entity';
@@ -18,6 +19,7 @@ import { packFloat64, unpackFloat64 } from './point-codec';
 import { measurementDto, PartsService } from './parts.service';
 import type { CurvePreviewDto, UploadMeasurementDto, UploadMeasurementResultDto } from './dto/upload.dto';
 import type { MeasurementPointsDto } from './dto/part-response.dto';
+import type { MeasurementKind } from './part.types';
 
 export interface UploadedFile {
   originalname: string;
@@ -36,6 +38,11 @@ export function safeFileName(name: string): string {
   // Runs of dots collapse to one: objectKey refuses ".." anywhere, and "rev..2.pdf" must still upload.
   const cleaned = base.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/\.{2,}/g, '.').replace(/^[._-]+/, '').slice(0, 80);
   return cleaned || 'file';
+}
+
+/** Served and stored by the measurement's kind (Touchstone for s11, CSV for the others), never as the uploader declared. */
+export function measurementContentType(kind: MeasurementKind): string {
+  return kind === 's11' ? 'text/plain' : 'text/csv';
 }
 
 export function sha256Hex(bytes: Buffer): string {
@@ -109,7 +116,8 @@ export class MeasurementsService {
   /** Also used by the demo seeder, so demo curves take the same path as uploads. */
   async store(partId: number, file: UploadedFile, input: Omit<UploadMeasurementDto, 'dryRun'>, curve: ParsedCurve, actor: AuthUser | null): Promise<Measurement> {
     const key = objectKey('parts', partId, 'measurements', `${randomUUID()}-${safeFileName(file.originalname)}`);
-    await this.ledger.putPending(key, file.buffer, input.kind === 's11' ? 'text/plain' : 'text/csv');
+    const contentType = measurementContentType(curve.kind);
+    await this.ledger.putPending(key, file.buffer, contentType);
     try {
       const id = await this.dataSource.transaction(async (manager) => {
         const locked = await this.parts.lockPart(manager, partId);
@@ -117,7 +125,7 @@ export class MeasurementsService {
         const n = curve.frequenciesHz.length;
         const inserted = await manager.insert(Measurement, {
           partId, kind: curve.kind, groundLengthMm: input.groundLengthMm ?? null, groundWidthMm: input.groundWidthMm ?? null, conditions: input.conditions ?? null,
-          fileName: file.originalname.slice(0, 200), contentType: file.mimetype.slice(0, 100) || 'application/octet-stream', objectKey: key, sizeBytes: file.size,
+          fileName: storedFileName(file.originalname), contentType, objectKey: key, sizeBytes: file.size,
           sha256: sha256Hex(file.buffer), sourceFormat: curve.sourceFormat, referenceOhms: curve.referenceOhms, pointCount: n,
           fromHz: curve.frequenciesHz[0], toHz: curve.frequenciesHz[n - 1],
           frequenciesHz: packFloat64(curve.frequenciesHz), valuesA: packFloat64(curve.valuesA), valuesB: curve.valuesB ? packFloat64(curve.valuesB) : null,
@@ -158,7 +166,7 @@ export class MeasurementsService {
   async file(partId: number, measurementId: number): Promise<{ body: Buffer; fileName: string; contentType: string }> {
     const row = await this.dataSource.getRepository(Measurement).findOneBy({ id: measurementId, partId });
     if (!row) throw new NotFoundError('measurement', measurementId);
-    return { body: await this.storage.get(row.objectKey), fileName: row.fileName, contentType: row.contentType };
+    return { body: await this.storage.get(row.objectKey), fileName: row.fileName, contentType: measurementContentType(row.kind) };
   }
 
   async remove(partId: number, measurementId: number, actor: AuthUser): Promise<void> {

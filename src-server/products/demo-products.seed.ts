@@ -3,13 +3,18 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { Band } from '../bands/band.entity';
 import { Product } from './product.entity';
+import { User } from '../users/user.entity';
 import { Radio, RadioBand } from './radio.entity';
 
 interface RadioSeed extends Omit<Radio, 'product' | 'productId' | 'bands' | 'version' | 'createdAt' | 'updatedAt'> {
   bands: { band: string; certifiedMaxGainDbi: number | null }[];
 }
 
-interface ProductSeed extends Omit<Product, 'radios' | 'version' | 'createdAt' | 'updatedAt'> {
+type ProductFields = Omit<Product, 'radios' | 'version' | 'createdAt' | 'updatedAt' | 'createdById' | 'createdBy' | 'deletedAt' | 'deletedById' | 'deletedBy'>;
+
+interface ProductSeed extends ProductFields {
+  /** E-mail of the demo account that created it; unknown (null) when demo accounts were not seeded. */
+  createdBy: string;
   radios: RadioSeed[];
 }
 
@@ -19,9 +24,11 @@ export async function seedDemoProducts(dataSource: DataSource): Promise<string> 
   let created = 0;
   await dataSource.transaction(async (manager) => {
     const byDesignation = new Map((await manager.find(Band, { select: { id: true, designation: true } })).map((b) => [b.designation, b.id]));
-    for (const { radios, ...product } of seed) {
-      if (await manager.existsBy(Product, { id: product.id })) continue;
-      await manager.insert(Product, product);
+    for (const { radios, createdBy, ...product } of seed) {
+      // A deleted demo product stays deleted: re-inserting its id would fail.
+      if (await manager.exists(Product, { where: { id: product.id }, withDeleted: true })) continue;
+      const creator = await manager.findOne(User, { select: { id: true }, where: { email: createdBy } });
+      await manager.insert(Product, { ...product, createdById: creator?.id ?? null });
       for (const { bands, ...radio } of radios) {
         await manager.insert(Radio, { ...radio, productId: product.id });
         await manager.insert(RadioBand, bands.map((b, position) => {

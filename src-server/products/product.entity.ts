@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, OneToMany, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, CreateDateColumn, DeleteDateColumn, Entity, JoinColumn, ManyToOne, OneToMany, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { User } from '../users/user.entity';
 // Type-only import and a string target keep product ↔ radio free of a runtime import cycle.
 import type { Radio } from './radio.entity';
 
@@ -32,6 +33,14 @@ export class Product {
   @Column({ type: 'int', unsigned: true, default: 1 })
   version: number;
 
+  /** Who created the product; null for seeded or older rows whose creator is unknown. */
+  @Column({ name: 'created_by_id', type: 'int', unsigned: true, nullable: true })
+  createdById: number | null;
+
+  @ManyToOne(() => User, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'created_by_id' })
+  createdBy?: User | null;
+
   @OneToMany('Radio', (radio: Radio) => radio.product)
   radios: Radio[];
 
@@ -40,4 +49,15 @@ export class Product {
 
   @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
   updatedAt: Date;
+
+  /** Set by a (soft) delete; TypeORM's finds leave such products out unless asked with `withDeleted`. */
+  @DeleteDateColumn({ name: 'deleted_at', type: 'datetime', precision: 3, nullable: true })
+  deletedAt: Date | null;
+
+  @Column({ name: 'deleted_by_id', type: 'int', unsigned: true, nullable: true })
+  deletedById: number | null;
+
+  @ManyToOne(() => User, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'deleted_by_id' })
+  deletedBy?: User | null;
 }

@@ -1,10 +1,11 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
+import { DomainError } from '../common/domain-error';
 import { ALL_ROLES } from '../common/roles';
 import { ParseIdPipe } from '../common/parse-id.pipe';
 import { ProductsService } from './products.service';
-import { CreateProductDto, ProductDetailDto, ProductSummaryDto, UpdateProductDto, VersionQueryDto } from './dto/product.dto';
+import { CreateProductDto, ProductDetailDto, ProductListQueryDto, ProductSummaryDto, UpdateProductDto, VersionQueryDto } from './dto/product.dto';
 import { CreateRadioDto, RadioDto, UpdateRadioDto } from './dto/radio.dto';
 
 @ApiTags('products')
@@ -14,10 +15,11 @@ export class ProductsController {
 
   @Get()
   @Roles(...ALL_ROLES)
-  @ApiOperation({ summary: 'All products' })
+  @ApiOperation({ summary: 'All products; ?deleted=true lists the deleted ones instead (admin)' })
   @ApiOkResponse({ type: [ProductSummaryDto] })
-  list(): Promise<ProductSummaryDto[]> {
-    return this.products.list();
+  list(@Query() query: ProductListQueryDto, @CurrentUser() actor: AuthUser): Promise<ProductSummaryDto[]> {
+    if (query.deleted && actor.role !== 'admin') throw new DomainError('FORBIDDEN_ROLE', 'Only admins see deleted products', 403);
+    return this.products.list({ deleted: query.deleted });
   }
 
   @Post()
@@ -47,17 +49,26 @@ export class ProductsController {
   @Delete(':id')
   @Roles('engineer', 'admin')
   @HttpCode(204)
-  @ApiOperation({ summary: 'Delete a product and its radios (engineer, admin)' })
+  @ApiOperation({ summary: 'Delete a product with its radios; an admin can restore it. Only its creator or an admin (403 PRODUCT_DELETE_FORBIDDEN)' })
   @ApiNoContentResponse()
   remove(@Param('id', ParseIdPipe) id: number, @Query() query: VersionQueryDto, @CurrentUser() actor: AuthUser): Promise<void> {
     return this.products.remove(id, query.version, actor);
   }
 
+  @Post(':id/restore')
+  @Roles('admin')
+  @HttpCode(200)
+  @ApiOperation({ summary: 'Undo the delete of a product; its radios and part assignments come back with it (admin)' })
+  @ApiOkResponse({ type: ProductDetailDto })
+  restore(@Param('id', ParseIdPipe) id: number, @CurrentUser() actor: AuthUser): Promise<ProductDetailDto> {
+    return this.products.restore(id, actor);
+  }
+
   @Get(':id/history')
   @Roles(...ALL_ROLES)
-  @ApiOperation({ summary: 'Every change to the product and its radios, newest first' })
-  history(@Param('id', ParseIdPipe) id: number) {
-    return this.products.history(id);
+  @ApiOperation({ summary: 'Every change to the product and its radios, newest first (admins: also of a deleted product)' })
+  history(@Param('id', ParseIdPipe) id: number, @CurrentUser() actor: AuthUser) {
+    return this.products.history(id, actor);
   }
 
   @Get(':id/radios')

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { DataSource, EntityManager, In, Not } from 'typeorm';
+import { DataSource, EntityManager, In, IsNull, Not } from 'typeorm';
 import { transactionWithRetry } from '../common/transaction-retry';
 import { DomainError, NotFoundError, ValidationFailedError, VersionConflictError } from '../common/domain-error';
 import type { AuthUser } from '../common/auth.decorators';
@@ -10,7 +10,7 @@ import { toBandDto } from '../bands/bands.service';
 import { Product } from './product.entity';
 import { Radio, RadioBand } from './radio.entity';
 import { isReceiveOnly, type KnownBand, radioProblems } from './radio-rules';
-import type { CreateProductDto, ProductDetailDto, ProductSummaryDto, UpdateProductDto } from './dto/product.dto';
+import type { CreateProductDto, PersonRefDto, ProductDetailDto, ProductSummaryDto, UpdateProductDto } from './dto/product.dto';
 import type { CreateRadioDto, RadioDto, UpdateRadioDto } from './dto/radio.dto';
 
 const PRODUCT_FIELDS: (keyof Product)[] = ['name', 'code', 'owner', 'groundPlaneLengthMm', 'groundPlaneWidthMm', 'targetRegions', 'notes'];
@@ -36,6 +36,11 @@ function toRadioDto(radio: Radio): RadioDto {
   };
 }
 
+const personRef = (user: { id: number; name: string } | null | undefined): PersonRefDto | null => (user ? { id: user.id, name: user.name } : null);
+
+/** Loads the people a product summary names (creator, deleter) with the product. */
+const PEOPLE = { createdBy: true, deletedBy: true } as const;
+
 function toSummary(product: Product, radios: Pick<Radio, 'technology'>[]): ProductSummaryDto {
   return {
     id: product.id,
@@ -51,6 +56,9 @@ function toSummary(product: Product, radios: Pick<Radio, 'technology'>[]): Produ
     technologies: [...new Set(radios.map((r) => r.technology))],
     createdAt: product.createdAt.toISOString(),
     updatedAt: product.updatedAt.toISOString(),
+    createdBy: personRef(product.createdBy),
+    deletedAt: product.deletedAt ? product.deletedAt.toISOString() : null,
+    deletedBy: personRef(product.deletedBy),
   };
 }
 
@@ -65,10 +73,17 @@ export class ProductsService {
     private readonly audit: AuditService,
   ) {}
 
-  async list(): Promise<ProductSummaryDto[]> {
-    const products = await this.dataSource.getRepository(Product).find({ order: { name: 'ASC', id: 'ASC' } });
-    const radios = await this.dataSource.getRepository(Radio).find({ select: { productId: true, technology: true } });
-    return products.map((p) => toSummary(p, radios.filter((r) => r.productId === p.id)));
+  /** The live products, or (deleted: true) the deleted ones, most recently deleted first. */
+  async list(options: { deleted?: boolean } = {}): Promise<ProductSummaryDto[]> {
+    const products = options.deleted
+      ? await this.dataSource.getRepository(Product).find({ where: { deletedAt: Not(IsNull()) }, withDeleted: true, relations: PEOPLE, order: { deletedAt: 'DESC', id: 'DESC' } })
+      : await this.dataSource.getRepository(Product).find({ relations: PEOPLE, order: { name: 'ASC', id: 'ASC' } });
+    const radios = products.length
+      ? await this.dataSource.getRepository(Radio).find({ select: { productId: true, technology: true }, where: { productId: In(products.map((p) => p.id)) } })
+      : [];
+    const radiosByProduct = new Map<number, Radio[]>();
+    for (const radio of radios) radiosByProduct.set(radio.productId, [...(radiosByProduct.get(radio.productId) ?? []), radio]);
+    return products.map((p) => toSummary(p, radiosByProduct.get(p.id) ?? []));
   }
 
   /**
@@ -76,7 +91,7 @@ export class ProductsService {
    * transmit power, feed loss and polarization; used by the product page and by other domains.
    */
   async getWithRadios(id: number, manager: EntityManager = this.dataSource.manager): Promise<ProductDetailDto> {
-    const product = await manager.findOne(Product, { where: { id } });
+    const product = await manager.findOne(Product, { where: { id }, relations: PEOPLE });
     if (!product) throw new NotFoundError('product', id);
     const radios = await manager.find(Radio, { where: { productId: id }, relations: { bands: { band: { ranges: true } } }, order: { id: 'ASC' } });
     return { ...toSummary(product, radios), radios: radios.map(toRadioDto) };
@@ -86,7 +101,7 @@ export class ProductsService {
     return transactionWithRetry(this.dataSource, async (manager) => {
       await this.assertCodeFree(manager, input.code);
       const row = { ...input, notes: input.notes ?? null };
-      const inserted = await manager.insert(Product, row);
+      const inserted = await manager.insert(Product, { ...row, createdById: actor.id });
       const id = Number(inserted.identifiers[0].id);
       await this.audit.record(manager, { entityType: 'product', entityId: id, action: 'created', userId: actor.id, changes: { ...row } });
       return this.getWithRadios(id, manager);
@@ -107,19 +122,48 @@ export class ProductsService {
     });
   }
 
+  /**
+   * A soft delete, allowed to the product's creator and to admins: the product leaves every list, matrix and
+   * candidate search, but its radios and part assignments stay in place so that an admin's restore brings them back.
+   */
   async remove(id: number, version: number | undefined, actor: AuthUser): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const before = await this.lockProduct(manager, id, version);
+      const before = await this.lockProduct(manager, id, undefined);
+      if (actor.role !== 'admin' && before.createdById !== actor.id) {
+        throw new DomainError('PRODUCT_DELETE_FORBIDDEN', 'Only the engineer who created this product, or an admin, may delete it', 403, { createdById: before.createdById });
+      }
+      if (version !== undefined && version !== before.version) throw new VersionConflictError('product', id, version, before.version);
       const radioCount = await manager.countBy(Radio, { productId: id });
-      await manager.delete(Product, { id });
+      await manager.update(Product, { id }, { deletedAt: new Date(), deletedById: actor.id });
       await this.audit.record(manager, { entityType: 'product', entityId: id, action: 'deleted', userId: actor.id, changes: { name: before.name, code: before.code, radioCount } });
     });
   }
 
-  async history(id: number): Promise<{ items: AuditEntryView[]; total: number }> {
-    const exists = await this.dataSource.getRepository(Product).existsBy({ id });
+  /** Undoes a delete (admin): the product comes back with its radios and assignments as they were. */
+  async restore(id: number, actor: AuthUser): Promise<ProductDetailDto> {
+    return this.dataSource.transaction(async (manager) => {
+      const product = await manager.findOne(Product, { where: { id }, withDeleted: true, lock: { mode: 'pessimistic_write' } });
+      if (!product) throw new NotFoundError('product', id);
+      if (!product.deletedAt) throw new DomainError('PRODUCT_NOT_DELETED', `product ${id} is not deleted; there is nothing to restore`, 409);
+      await manager.update(Product, { id }, { deletedAt: null, deletedById: null });
+      await this.audit.record(manager, {
+        entityType: 'product', entityId: id, action: 'restored', userId: actor.id,
+        changes: { name: product.name, code: product.code, deletedAt: product.deletedAt.toISOString(), deletedById: product.deletedById },
+      });
+      return this.getWithRadios(id, manager);
+    });
+  }
+
+  /** The audit trail; an admin still sees it for a deleted product (who deleted it, before restoring). */
+  async history(id: number, actor: AuthUser): Promise<{ items: AuditEntryView[]; total: number }> {
+    const exists = await this.dataSource.getRepository(Product).exists({ where: { id }, withDeleted: actor.role === 'admin' });
     if (!exists) throw new NotFoundError('product', id);
     return this.audit.list({ entityType: 'product', entityId: id, limit: 500 });
+  }
+
+  /** 404 unless the product exists and is not deleted; for other domains' routes under /products/:id. */
+  async assertExists(id: number, manager: EntityManager = this.dataSource.manager): Promise<void> {
+    if (!(await manager.existsBy(Product, { id }))) throw new NotFoundError('product', id);
   }
 
   async listRadios(productId: number): Promise<RadioDto[]> {
@@ -127,11 +171,10 @@ export class ProductsService {
   }
 
   async getRadio(productId: number, radioId: number, manager: EntityManager = this.dataSource.manager): Promise<RadioDto> {
+    // First, since a deleted product's radios stay in their table.
+    await this.assertExists(productId, manager);
     const radio = await manager.findOne(Radio, { where: { id: radioId, productId }, relations: { bands: { band: { ranges: true } } } });
-    if (!radio) {
-      if (!(await manager.existsBy(Product, { id: productId }))) throw new NotFoundError('product', productId);
-      throw new NotFoundError('radio', radioId);
-    }
+    if (!radio) throw new NotFoundError('radio', radioId);
     return toRadioDto(radio);
   }
 
@@ -203,11 +246,9 @@ export class ProductsService {
   }
 
   private async lockRadio(manager: EntityManager, productId: number, radioId: number, expectedVersion: number | undefined): Promise<Radio> {
+    await this.assertExists(productId, manager);
     const locked = await manager.findOne(Radio, { where: { id: radioId, productId }, lock: { mode: 'pessimistic_write' } });
-    if (!locked) {
-      if (!(await manager.existsBy(Product, { id: productId }))) throw new NotFoundError('product', productId);
-      throw new NotFoundError('radio', radioId);
-    }
+    if (!locked) throw new NotFoundError('radio', radioId);
     if (expectedVersion !== undefined && expectedVersion !== locked.version) throw new VersionConflictError('radio', radioId, expectedVersion, locked.version);
     return manager.findOneOrFail(Radio, { where: { id: radioId }, relations: { bands: { band: { ranges: true } } } });
   }
@@ -226,9 +267,12 @@ export class ProductsService {
     await manager.insert(RadioBand, bands.map((b, position) => ({ radioId, bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null, position })));
   }
 
+  /** A deleted product keeps its code until it is restored, so a restore never meets a duplicate. */
   private async assertCodeFree(manager: EntityManager, code: string, exceptId?: number): Promise<void> {
-    if (await manager.existsBy(Product, { code, ...(exceptId ? { id: Not(exceptId) } : {}) })) {
-      throw new DomainError('PRODUCT_CODE_TAKEN', `Another product already has the code ${code}`, 409, { field: 'code' });
+    const holder = await manager.findOne(Product, { select: { id: true, deletedAt: true }, where: { code, ...(exceptId ? { id: Not(exceptId) } : {}) }, withDeleted: true });
+    if (holder?.deletedAt) {
+      throw new DomainError('PRODUCT_CODE_TAKEN_BY_DELETED', `The deleted product ${holder.id} still has the code ${code}; choose another code or ask an admin to restore it`, 409, { field: 'code', productId: holder.id });
     }
+    if (holder) throw new DomainError('PRODUCT_CODE_TAKEN', `Another product already has the code ${code}`, 409, { field: 'code' });
   }
 }

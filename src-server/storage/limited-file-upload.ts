@@ -27,7 +27,10 @@ export function LimitedFileUpload(formatMaxBytes: number, code: string, what: st
 
     constructor(@Inject(APP_CONFIG) config: AppConfig) {
       this.maxBytes = uploadLimitBytes(formatMaxBytes, config);
-      const Multipart = FileInterceptor('file', { storage: memoryStorage(), limits: { fileSize: this.maxBytes, files: 1 } });
+      // Browsers send a file name's UTF-8 bytes as they are; multer would read them as latin1 ("BÃ¤nder.s1p").
+      const Multipart = FileInterceptor('file', {
+        storage: memoryStorage(), defParamCharset: 'utf8', limits: { fileSize: this.maxBytes, files: 1 },
+      });
       this.multipart = new Multipart();
     }
 

@@ -187,10 +187,10 @@ describe('band library, band sets and regulatory limits (API)', () => {
       const created = await call('post', '/api/band-sets', 'admin', input).expect(201);
       const id = created.body.id;
       expect(created.body.bandIds).toEqual([103, 120]);
-      await call('patch', `/api/band-sets/${id}`, 'admin', { bandIds: [103, 999999] }).expect(400);
+      await call('patch', `/api/band-sets/${id}`, 'admin', { version: 1, bandIds: [103, 999999] }).expect(400);
       expect((await call('get', `/api/band-sets/${id}`, 'admin').expect(200)).body.bandIds).toEqual([103, 120]);
-      const edited = await call('patch', `/api/band-sets/${id}`, 'admin', { bandIds: [108, 103], description: 'Changed' }).expect(200);
-      expect(edited.body).toMatchObject({ bandIds: [108, 103], description: 'Changed' });
+      const edited = await call('patch', `/api/band-sets/${id}`, 'admin', { version: 1, bandIds: [108, 103], description: 'Changed' }).expect(200);
+      expect(edited.body).toMatchObject({ bandIds: [108, 103], description: 'Changed', version: 2 });
       await call('delete', `/api/band-sets/${id}`, 'admin').expect(204);
       await call('get', `/api/band-sets/${id}`, 'admin').expect(404);
       const audit = await auditOf('band-set', id);

@@ -26,6 +26,7 @@ export interface BandSet {
   description: string;
   bandIds: number[];
   bands: { id: number; technology: Technology; designation: string; name: string }[];
+  version: number;
   updatedAt: string;
 }
 

@@ -35,6 +35,10 @@ export interface ProductSummary {
   technologies: Technology[];
   createdAt: string;
   updatedAt: string;
+  /** Null when unknown (seeded or older products). */
+  createdBy: { id: number; name: string } | null;
+  deletedAt: string | null;
+  deletedBy: { id: number; name: string } | null;
 }
 
 export interface Radio {

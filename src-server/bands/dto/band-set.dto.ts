@@ -1,6 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, Max, Min } from 'class-validator';
-import { INT_MAX, PatchType, StringField } from '../../common/dto-fields';
+import { INT_MAX, IntField, PatchType, StringField } from '../../common/dto-fields';
 import { BandRefDto } from './band-response.dto';
 
 export class CreateBandSetDto {
@@ -20,7 +20,15 @@ export class CreateBandSetDto {
   bandIds: number[];
 }
 
-export class UpdateBandSetDto extends PatchType(CreateBandSetDto) {}
+export class UpdateBandSetDto extends PatchType(CreateBandSetDto) {
+  @IntField({ min: 1, description: 'The version you edited; a stale one gets 409 BAND_SET_VERSION_CONFLICT' })
+  version: number;
+}
+
+export class BandSetVersionQueryDto {
+  @IntField({ optional: true, min: 1, description: 'When given, the delete only happens if this is still the current version' })
+  version?: number;
+}
 
 export class BandSetDto {
   @ApiProperty() id: number;
@@ -28,5 +36,6 @@ export class BandSetDto {
   @ApiProperty() description: string;
   @ApiProperty({ type: [Number] }) bandIds: number[];
   @ApiProperty({ type: [BandRefDto] }) bands: BandRefDto[];
+  @ApiProperty() version: number;
   @ApiProperty() updatedAt: string;
 }

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
-import { IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
+import { BoolField, IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { REGIONS } from '../../bands/band-domain';
 import { RadioDto } from './radio.dto';
 
@@ -41,6 +41,17 @@ export class VersionQueryDto {
   version?: number;
 }
 
+export class ProductListQueryDto {
+  @BoolField({ optional: true, description: 'true: the deleted products instead, newest deletion first (admin)' })
+  deleted?: boolean;
+}
+
+/** A user as other records name them: a name, never an e-mail address. */
+export class PersonRefDto {
+  @ApiProperty() id: number;
+  @ApiProperty() name: string;
+}
+
 export class ProductSummaryDto extends OmitType(CreateProductDto, ['notes'] as const) {
   @ApiProperty() id: number;
   @ApiPropertyOptional({ nullable: true }) notes: string | null;
@@ -49,6 +60,10 @@ export class ProductSummaryDto extends OmitType(CreateProductDto, ['notes'] as c
   @ApiProperty({ type: [String], description: 'Technologies of its radios' }) technologies: string[];
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
+  @ApiPropertyOptional({ type: PersonRefDto, nullable: true, description: 'Who created it; null when unknown (seeded or older products). The creator and admins may delete it.' })
+  createdBy: PersonRefDto | null;
+  @ApiPropertyOptional({ nullable: true, description: 'Set when the product was deleted; an admin can restore it' }) deletedAt: string | null;
+  @ApiPropertyOptional({ type: PersonRefDto, nullable: true }) deletedBy: PersonRefDto | null;
 }
 
 export class ProductDetailDto extends ProductSummaryDto {

@@ -25,6 +25,7 @@ export function BandSetDialog({ set, isOpen, onClose }: BandSetDialogProps) {
   const error = mutation.error instanceof ApiError ? mutation.error : null;
   const fieldErrors = error?.fieldErrors ?? {};
   const bandError = Object.entries(fieldErrors).find(([field]) => field.startsWith('bandIds'))?.[1];
+  const conflict = error?.status === 409 && error.code.endsWith('VERSION_CONFLICT');
 
   const groups = useMemo(() => {
     const needle = search.trim().toLowerCase();
@@ -37,7 +38,7 @@ export function BandSetDialog({ set, isOpen, onClose }: BandSetDialogProps) {
     event.preventDefault();
     const input = { name, description, bandIds: chosen };
     const done = { onSuccess: () => { mutation.reset(); onClose(); } };
-    if (set) update.mutate({ id: set.id, ...input }, done);
+    if (set) update.mutate({ id: set.id, version: set.version, ...input }, done);
     else create.mutate(input, done);
   };
 
@@ -45,7 +46,8 @@ export function BandSetDialog({ set, isOpen, onClose }: BandSetDialogProps) {
     <Dialog isOpen={isOpen} onClose={onClose} title={set ? `Edit band set ${set.name}` : 'New band set'} icon="layers" style={{ width: 640 }}>
       <form onSubmit={submit}>
         <DialogBody>
-          {error && !Object.keys(fieldErrors).length && <Callout intent={Intent.DANGER} className="bw-gap">{error.message}</Callout>}
+          {conflict && <Callout intent={Intent.WARNING} className="bw-gap" title="Changed by someone else">{error!.message}</Callout>}
+          {error && !conflict && !Object.keys(fieldErrors).length && <Callout intent={Intent.DANGER} className="bw-gap">{error.message}</Callout>}
           <FormGroup label="Name" labelFor="set-name" intent={fieldErrors.name ? Intent.DANGER : Intent.NONE} helperText={fieldErrors.name}>
             <InputGroup id="set-name" value={name} onValueChange={setName} maxLength={120} />
           </FormGroup>

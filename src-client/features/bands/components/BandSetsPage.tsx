@@ -55,7 +55,7 @@ export function BandSetsPage() {
         cancelButtonText="Keep it"
         loading={remove.isPending}
         onCancel={() => setDeleting(null)}
-        onConfirm={() => deleting && remove.mutate(deleting.id, {
+        onConfirm={() => deleting && remove.mutate({ id: deleting.id, version: deleting.version }, {
           onSuccess: () => setDeleting(null),
           onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
         })}

@@ -7,6 +7,7 @@ export const createProduct = (input: ProductInput) => apiRequest<ProductDetail>(
 export const updateProduct = ({ id, ...input }: Partial<ProductInput> & { id: number; version: number }) =>
   apiRequest<ProductDetail>(`/products/${id}`, { method: 'PATCH', body: input });
 export const deleteProduct = ({ id, version }: { id: number; version: number }) => apiRequest<void>(`/products/${id}`, { method: 'DELETE', query: { version } });
+export const restoreProduct = (id: number) => apiRequest<ProductDetail>(`/products/${id}/restore`, { method: 'POST' });
 
 const useProductMutation = <A, R>(fn: (arg: A) => Promise<R>) => {
   const queryClient = useQueryClient();
@@ -16,3 +17,4 @@ const useProductMutation = <A, R>(fn: (arg: A) => Promise<R>) => {
 export const useCreateProduct = () => useProductMutation(createProduct);
 export const useUpdateProduct = () => useProductMutation(updateProduct);
 export const useDeleteProduct = () => useProductMutation(deleteProduct);
+export const useRestoreProduct = () => useProductMutation(restoreProduct);

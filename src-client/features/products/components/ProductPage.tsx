@@ -1,11 +1,11 @@
 import { type ReactNode, useState } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
-import { Alert, Button, Intent, NonIdealState, Tag } from '@blueprintjs/core';
+import { Alert, Button, Intent, NonIdealState, OverlayToaster, Position, Tag } from '@blueprintjs/core';
 import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { paths } from '../../../app/routes/paths';
-import { useHasRole } from '../../../lib/session';
+import { useHasRole, useSession } from '../../../lib/session';
 import { useProduct } from '../api/get-product';
 import { useDeleteProduct } from '../api/save-product';
 import type { ProductDetail } from '../types';
@@ -13,6 +13,8 @@ import { ProductDialog } from './ProductDialog';
 import { ProductHistory } from './ProductHistory';
 import { ProductStrip } from './ProductStrip';
 import { RadiosSection } from './RadiosSection';
+
+const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 
 export interface ProductPageProps {
   /**
@@ -27,12 +29,15 @@ export function ProductPage({ extensions }: ProductPageProps) {
   const id = Number(useParams().id);
   const product = useProduct(id);
   const canEdit = useHasRole('engineer', 'admin');
+  const { user } = useSession();
   const remove = useDeleteProduct();
   const navigate = useNavigate();
   const [editing, setEditing] = useState(false);
   const [deleting, setDeleting] = useState(false);
   if (!Number.isInteger(id) || id < 1) return <NonIdealState icon="search" title="No such product" />;
   const p = product.data;
+  // The server allows a delete to the product's creator and to admins only.
+  const canDelete = canEdit && p !== undefined && (user?.role === 'admin' || (p.createdBy !== null && p.createdBy.id === user?.id));
 
   return (
     <QueryState isPending={product.isPending} error={product.error}>
@@ -42,13 +47,13 @@ export function ProductPage({ extensions }: ProductPageProps) {
             title={p.name}
             subtitle={
               <span className="bw-facts" data-testid="product-facts">
-                <Tag minimal>{p.code}</Tag> Owner {p.owner} · ground plane {p.groundPlaneLengthMm} × {p.groundPlaneWidthMm} mm · markets {p.targetRegions.join(', ')} · version {p.version}
+                <Tag minimal>{p.code}</Tag> Owner {p.owner} · created by {p.createdBy?.name ?? 'unknown'} · ground plane {p.groundPlaneLengthMm} × {p.groundPlaneWidthMm} mm · markets {p.targetRegions.join(', ')} · version {p.version}
               </span>
             }
             actions={canEdit && (
               <>
                 <Button icon="edit" text="Edit product" onClick={() => setEditing(true)} />
-                <Button icon="trash" intent={Intent.DANGER} variant="outlined" text="Delete" onClick={() => setDeleting(true)} />
+                {canDelete && <Button icon="trash" intent={Intent.DANGER} variant="outlined" text="Delete" onClick={() => setDeleting(true)} />}
               </>
             )}
           />
@@ -67,9 +72,13 @@ export function ProductPage({ extensions }: ProductPageProps) {
             cancelButtonText="Keep it"
             loading={remove.isPending}
             onCancel={() => setDeleting(false)}
-            onConfirm={() => remove.mutate({ id: p.id, version: p.version }, { onSuccess: () => navigate(paths.products), onSettled: () => setDeleting(false) })}
+            onConfirm={() => remove.mutate({ id: p.id, version: p.version }, {
+              onSuccess: () => navigate(paths.products),
+              onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
+              onSettled: () => setDeleting(false),
+            })}
           >
-            Delete <b>{p.name}</b> and its {p.radios.length} radios? The history stays in the audit log.
+            Delete <b>{p.name}</b> and its {p.radios.length} radios? It leaves the product list and the matrix; an admin can restore it with its radios and part choices. The history stays in the audit log.
           </Alert>
         </>
       )}

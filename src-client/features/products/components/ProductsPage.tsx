@@ -1,12 +1,13 @@
 import { useCallback, useMemo, useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
-import { Button, Intent, NonIdealState } from '@blueprintjs/core';
+import { Button, HTMLTable, Intent, NonIdealState, OverlayToaster, Position, Switch } from '@blueprintjs/core';
 import { Cell, Column, Table, TruncatedFormat } from '@blueprintjs/table';
 import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
 import { paths } from '../../../app/routes/paths';
 import { useHasRole } from '../../../lib/session';
-import { useProducts } from '../api/get-products';
+import { useDeletedProducts, useProducts } from '../api/get-products';
+import { useRestoreProduct } from '../api/save-product';
 import type { ProductSummary } from '../types';
 import { ProductDialog } from './ProductDialog';
 
@@ -20,9 +21,46 @@ const COLUMNS: { id: string; name: string; width: number; value: (p: ProductSumm
   { id: 'updated', name: 'Updated (UTC)', width: 150, value: (p) => p.updatedAt.replace('T', ' ').slice(0, 16) },
 ];
 
-/** Every product; engineers and admins create new ones here. */
+const toaster = OverlayToaster.createAsync({ position: Position.TOP });
+
+const whenUtc = (iso: string | null) => (iso ? iso.replace('T', ' ').slice(0, 16) : '');
+
+/** Deleted products with who deleted them and when; an admin brings one back with its radios and part choices. */
+function DeletedProducts() {
+  const deleted = useDeletedProducts(true);
+  const restore = useRestoreProduct();
+  const rows = deleted.data ?? [];
+  return (
+    <QueryState isPending={deleted.isPending} error={deleted.error}>
+      {rows.length === 0 ? <NonIdealState icon="trash" title="No deleted products" /> : (
+        <HTMLTable compact striped className="bw-gap" data-testid="deleted-products">
+          <thead><tr><th>Product</th><th>Code</th><th>Radios</th><th>Deleted (UTC)</th><th>Deleted by</th><th /></tr></thead>
+          <tbody>
+            {rows.map((p) => (
+              <tr key={p.id}>
+                <td>{p.name}</td>
+                <td>{p.code}</td>
+                <td>{p.radioCount}</td>
+                <td>{whenUtc(p.deletedAt)}</td>
+                <td>{p.deletedBy?.name ?? 'unknown'}</td>
+                <td>
+                  <Button size="small" icon="undo" text="Restore" loading={restore.isPending && restore.variables === p.id}
+                    onClick={() => restore.mutate(p.id, { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) })} />
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </HTMLTable>
+      )}
+    </QueryState>
+  );
+}
+
+/** Every product; engineers and admins create new ones here, admins also see and restore deleted ones. */
 export function ProductsPage() {
   const canEdit = useHasRole('engineer', 'admin');
+  const isAdmin = useHasRole('admin');
+  const [showDeleted, setShowDeleted] = useState(false);
   const products = useProducts();
   const navigate = useNavigate();
   const rows = useMemo(() => products.data ?? [], [products.data]);
@@ -42,8 +80,14 @@ export function ProductsPage() {
       <PageHeader
         title="Products"
         subtitle="Devices under design: their ground plane, markets and radios."
-        actions={canEdit && <Button icon="add" intent={Intent.PRIMARY} text="New product" onClick={() => setCreating(true)} />}
+        actions={(isAdmin || canEdit) && (
+          <>
+            {isAdmin && <Switch inline label="Show deleted" checked={showDeleted} onChange={(e) => setShowDeleted(e.currentTarget.checked)} />}
+            {canEdit && <Button icon="add" intent={Intent.PRIMARY} text="New product" onClick={() => setCreating(true)} />}
+          </>
+        )}
       />
+      {isAdmin && showDeleted && <DeletedProducts />}
       <QueryState isPending={products.isPending} error={products.error}>
         {rows.length === 0 ? <NonIdealState icon="box" title="No products yet" /> : (
           <div className="bw-table-wrap" data-testid="products-table">
