@@ -11,6 +11,8 @@ import { requestIdMiddleware } from './common/request-context';
 /** Everything main.ts does except listen, so the tests run the production app. */
 export function configureApp(app: INestApplication): INestApplication {
   const config = loadConfig();
+  // X-Forwarded-For is believed only when the direct peer is a proxy on this machine (README, "Behind a proxy").
+  app.getHttpAdapter().getInstance().set('trust proxy', 'loopback');
   app.use(requestIdMiddleware);
   app.use(
     helmet({
@@ -49,7 +51,6 @@ export function configureApp(app: INestApplication): INestApplication {
 
 export async function createApp(): Promise<NestExpressApplication> {
   const app = await NestFactory.create<NestExpressApplication>(AppModule, { logger: new JsonLogger() });
-  app.set('trust proxy', 'loopback');
   configureApp(app);
   return app;
 }
