@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { resolve } from 'node:path';
@@ -8,6 +9,8 @@ import { APP_CONFIG, type AppConfig } from './config/app-config';
 import { ConfigModule } from './config/config.module';
 import { AllExceptionsFilter } from './common/all-exceptions.filter';
 import { JwtAuthGuard } from './common/jwt-auth.guard';
+import { AUTH_THROTTLERS } from './common/auth-throttler.guard';
+import { DatabaseThrottlerStorage } from './common/database-throttler-storage';
 import { createValidationPipe } from './common/validation';
 import { dataSourceOptions } from './database/data-source-options';
 import { AuditModule } from './audit/audit.module';
@@ -30,8 +33,9 @@ import { CompatibilityModule } from './compatibility/compatibility.module';
       inject: [APP_CONFIG],
       useFactory: (config: AppConfig) => ({ ...dataSourceOptions(config), retryAttempts: 20, retryDelay: 1000 }),
     }),
-    // Only the routes that opt in with AuthThrottlerGuard are limited (sign-in, invitations, resets).
-    ThrottlerModule.forRoot([{ name: 'auth', ttl: 60_000, limit: 30 }]),
+    // Only the routes that opt in with AuthThrottlerGuard are limited (sign-in, invitations, resets);
+    // the counters are in the database so that several instances share one allowance.
+    ThrottlerModule.forRootAsync({ inject: [DataSource], useFactory: (dataSource: DataSource) => ({ throttlers: AUTH_THROTTLERS, storage: new DatabaseThrottlerStorage(dataSource) }) }),
     // Async, so the configuration is read once at boot (after .env) and a refusal reaches main's clean message.
     ServeStaticModule.forRootAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => [{ rootPath: resolve(config.clientDir), exclude: ['/api/{*path}'] }] }),
     AuditModule,

@@ -12,6 +12,8 @@ import { verifyJsonBody } from './common/json-body';
 /** Everything main.ts does except listen, so the tests run the production app. */
 export function configureApp(app: INestApplication): INestApplication {
   const config = loadConfig();
+  // X-Forwarded-For is believed only when the direct peer is a proxy on this machine (README, "Behind a proxy").
+  app.getHttpAdapter().getInstance().set('trust proxy', 'loopback');
   app.use(requestIdMiddleware);
   // Registered here (Nest then skips its default) so every app, tests included, refuses over-deep JSON and lone surrogates.
   // Nest's option type leaves out `verify` because its rawBody mode uses it; this app does not use rawBody.
@@ -53,7 +55,6 @@ export function configureApp(app: INestApplication): INestApplication {
 
 export async function createApp(): Promise<NestExpressApplication> {
   const app = await NestFactory.create<NestExpressApplication>(AppModule, { logger: new JsonLogger() });
-  app.set('trust proxy', 'loopback');
   configureApp(app);
   return app;
 }

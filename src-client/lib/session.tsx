@@ -35,6 +35,8 @@ export function SessionProvider({ children }: SessionProviderProps) {
 
   const signOut = useCallback(
     (reason?: string) => {
+      // Ends the token on the server too (best effort: the local sign-out happens whatever it answers).
+      if (tokenStore.get()) apiRequest('/auth/logout', { method: 'POST' }).catch(() => undefined);
       tokenStore.clear();
       setUser(null);
       setEndedReason(reason ?? null);

@@ -13,6 +13,6 @@ export class AuditController {
   @Roles('admin')
   @ApiOperation({ summary: 'The audit log, newest first (admin)' })
   list(@Query() query: AuditQueryDto) {
-    return this.audit.list(query);
+    return this.audit.list(query, { withEmails: true });
   }
 }

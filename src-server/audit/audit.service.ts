@@ -16,7 +16,8 @@ export interface AuditEntryView {
   entityType: string;
   entityId: string;
   action: string;
-  user: { id: number; name: string; email: string } | null;
+  /** Who did it: by name; the e-mail only in the admins' audit log. */
+  user: { id: number; name: string; email?: string } | null;
   changes: Record<string, unknown>;
   at: string;
 }
@@ -42,7 +43,11 @@ export class AuditService {
     await manager.insert(AuditEntry, { ...entry, entityId: String(entry.entityId), changes: entry.changes as object });
   }
 
-  async list(filter: { entityType?: string; entityId?: string | number; limit?: number; offset?: number }): Promise<{ items: AuditEntryView[]; total: number }> {
+  /** Entries newest first; `withEmails` only for the admins' audit log, since histories are shown to every role. */
+  async list(
+    filter: { entityType?: string; entityId?: string | number; limit?: number; offset?: number },
+    { withEmails = false }: { withEmails?: boolean } = {},
+  ): Promise<{ items: AuditEntryView[]; total: number }> {
     const query = this.dataSource
       .getRepository(AuditEntry)
       .createQueryBuilder('a')
@@ -61,7 +66,7 @@ export class AuditService {
         entityType: row.entityType,
         entityId: row.entityId,
         action: row.action,
-        user: row.user ? { id: row.user.id, name: row.user.name, email: row.user.email } : null,
+        user: row.user ? { id: row.user.id, name: row.user.name, ...(withEmails ? { email: row.user.email } : {}) } : null,
         changes: row.changes,
         at: row.createdAt.toISOString(),
       })),

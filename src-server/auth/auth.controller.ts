@@ -1,5 +1,5 @@
 import { Body, Controller, Get, HttpCode, Post, UseGuards } from '@nestjs/common';
-import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Public, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
 import { AuthThrottlerGuard } from '../common/auth-throttler.guard';
@@ -32,6 +32,15 @@ export class AuthController {
     return user;
   }
 
+  @Post('logout')
+  @Roles(...ALL_ROLES)
+  @HttpCode(204)
+  @ApiOperation({ summary: "Sign out: ends the caller's tokens on every device" })
+  @ApiNoContentResponse()
+  logout(@CurrentUser() user: AuthUser): Promise<void> {
+    return this.auth.logout(user);
+  }
+
   @Post('accept-invitation')
   @UseGuards(AuthThrottlerGuard)
   @Public()
@@ -47,8 +56,8 @@ export class AuthController {
   @Public()
   @HttpCode(202)
   @ApiOperation({ summary: 'E-mail a password-reset link (answers 202 whether or not the e-mail is known)' })
-  async requestReset(@Body() body: RequestResetDto): Promise<{ status: string }> {
-    await this.auth.requestPasswordReset(body.email);
+  requestReset(@Body() body: RequestResetDto): { status: string } {
+    this.auth.requestPasswordReset(body.email);
     return { status: 'accepted' };
   }
 

@@ -7,6 +7,7 @@ import { User } from '../users/user.entity';
 import { UsersModule } from '../users/users.module';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
+import { LoginAttemptsService } from './login-attempts.service';
 import { JwtStrategy } from './jwt.strategy';
 
 @Module({
@@ -17,7 +18,7 @@ import { JwtStrategy } from './jwt.strategy';
     JwtModule.registerAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => ({ secret: config.jwt.secret }) }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy],
+  providers: [AuthService, LoginAttemptsService, JwtStrategy],
   exports: [AuthService],
 })
 export class AuthModule {}

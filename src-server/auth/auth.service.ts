@@ -1,4 +1,4 @@
-import { Inject, Injectable, Logger } from '@nestjs/common';
+import { Inject, Injectable, Logger, OnModuleDestroy, OnModuleInit } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
@@ -8,6 +8,8 @@ import { MailService } from '../mail/mail.service';
 import { User } from '../users/user.entity';
 import { UserTokensService } from '../users/user-tokens.service';
 import { AuditService } from '../audit/audit.service';
+import type { AuthUser } from '../common/auth.decorators';
+import { LoginAttemptsService } from './login-attempts.service';
 import { hashPassword, verifyPassword } from './password';
 import type { LoginResponseDto, MeDto } from './dto/auth-response.dto';
 import type { JwtPayload } from './jwt.strategy';
@@ -16,14 +18,13 @@ import type { JwtPayload } from './jwt.strategy';
 let dummyHash: Promise<string> | undefined;
 const getDummyHash = () => (dummyHash ??= hashPassword('no-such-user-password'));
 
-export const MAX_FAILED_LOGINS = 5;
-export const LOCKOUT_MS = 5 * 60_000;
-
 export const toMe = (user: User): MeDto => ({ id: user.id, email: user.email, name: user.name, role: user.role });
 
 @Injectable()
-export class AuthService {
+export class AuthService implements OnModuleInit, OnModuleDestroy {
   private readonly logger = new Logger(AuthService.name);
+  /** Reset requests still being handled after their answer went out; awaited on shutdown. */
+  private readonly pendingResets = new Set<Promise<void>>();
 
   constructor(
     @Inject(APP_CONFIG) private readonly config: AppConfig,
@@ -32,35 +33,41 @@ export class AuthService {
     private readonly tokens: UserTokensService,
     private readonly mail: MailService,
     private readonly audit: AuditService,
+    private readonly attempts: LoginAttemptsService,
   ) {}
 
+  async onModuleInit(): Promise<void> {
+    // Hashed before the first sign-in, so the first unknown e-mail costs no more than a wrong password.
+    await getDummyHash();
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    await Promise.allSettled([...this.pendingResets]);
+  }
+
+  /**
+   * The attempt is counted per e-mail before the password is checked, so parallel guesses cannot pass
+   * the limit, and unknown e-mails count and lock exactly as real ones do.
+   */
   async login(email: string, password: string): Promise<LoginResponseDto> {
-    const user = await this.dataSource
-      .getRepository(User)
-      .createQueryBuilder('u')
-      .addSelect('u.passwordHash')
-      .where('u.email = :email', { email: email.trim().toLowerCase() })
-      .getOne();
-    if (user?.lockedUntil && user.lockedUntil.getTime() > Date.now()) {
-      const minutes = Math.ceil((user.lockedUntil.getTime() - Date.now()) / 60_000);
+    const normalised = email.trim().toLowerCase();
+    const attempt = await this.attempts.reserve(normalised);
+    if (!attempt.allowed) {
+      const minutes = Math.ceil(attempt.retryAfterMs / 60_000);
       throw new DomainError('AUTH_TEMPORARILY_LOCKED', `Too many failed sign-ins; try again in ${minutes} minute${minutes === 1 ? '' : 's'}`, 429);
     }
+    const user = await this.dataSource.getRepository(User).createQueryBuilder('u').addSelect('u.passwordHash').where('u.email = :email', { email: normalised }).getOne();
     const ok = await verifyPassword(password, user?.passwordHash ?? (await getDummyHash()));
     if (!user || !ok || user.status !== 'active' || !user.passwordHash) {
-      if (user) await this.recordFailedLogin(user);
       throw new DomainError('AUTH_BAD_CREDENTIALS', 'E-mail or password is not correct', 401);
     }
-    if (user.failedLogins > 0 || user.lockedUntil) await this.dataSource.getRepository(User).update({ id: user.id }, { failedLogins: 0, lockedUntil: null });
+    await this.attempts.clear(normalised);
     return this.issueToken(user);
   }
 
-  /** After MAX_FAILED_LOGINS wrong passwords in a row the account waits LOCKOUT_MS before the next try. */
-  private async recordFailedLogin(user: User): Promise<void> {
-    const failures = user.failedLogins + 1;
-    const lock = failures >= MAX_FAILED_LOGINS;
-    await this.dataSource
-      .getRepository(User)
-      .update({ id: user.id }, { failedLogins: lock ? 0 : failures, lockedUntil: lock ? new Date(Date.now() + LOCKOUT_MS) : user.lockedUntil });
+  /** Ends every token the user holds: they carry the old token version. */
+  async logout(user: AuthUser): Promise<void> {
+    await this.dataSource.getRepository(User).increment({ id: user.id }, 'tokenVersion', 1);
   }
 
   issueToken(user: User): LoginResponseDto {
@@ -83,9 +90,19 @@ export class AuthService {
     return this.issueToken(user);
   }
 
-  /** Always succeeds from the caller's point of view, so it does not reveal which e-mails exist. */
-  async requestPasswordReset(email: string): Promise<void> {
-    const user = await this.dataSource.getRepository(User).findOneBy({ email: email.trim().toLowerCase() });
+  /**
+   * Answers before the e-mail is even looked up, so a known and an unknown address get the same answer
+   * in the same time; the link is queued in the outbox afterwards and the mail poller sends it.
+   */
+  requestPasswordReset(email: string): void {
+    const work = this.queuePasswordReset(email.trim().toLowerCase())
+      .catch((error: Error) => this.logger.warn(`password reset request not queued: ${error.message}`))
+      .finally(() => this.pendingResets.delete(work));
+    this.pendingResets.add(work);
+  }
+
+  private async queuePasswordReset(email: string): Promise<void> {
+    const user = await this.dataSource.getRepository(User).findOneBy({ email });
     if (!user || user.status !== 'active') {
       this.logger.log('password reset asked for an unknown or inactive e-mail');
       return;
@@ -97,11 +114,11 @@ export class AuthService {
           to: user.email,
           subject: 'Reset your Bandwright password',
           text: `Hello ${user.name},\n\nSomeone (hopefully you) asked to reset your Bandwright password.\nSet a new one here within the next hour:\n\n${this.config.appUrl}/reset-password?token=${token}\n\nIf it was not you, ignore this message; your password stays as it is.\n`,
+          carriesLinkToken: true,
         },
         manager,
       );
     });
-    await this.mail.deliverDue();
   }
 
   async resetPassword(token: string, password: string): Promise<LoginResponseDto> {
@@ -110,10 +127,11 @@ export class AuthService {
       const row = await this.tokens.consume(manager, token, 'password-reset');
       const target = await manager.findOneByOrFail(User, { id: row.userId });
       // A new password revokes every token issued before it.
-      await manager.update(User, { id: target.id }, { passwordHash, tokenVersion: target.tokenVersion + 1, failedLogins: 0, lockedUntil: null });
+      await manager.update(User, { id: target.id }, { passwordHash, tokenVersion: target.tokenVersion + 1 });
       await this.audit.record(manager, { entityType: 'user', entityId: target.id, action: 'password-reset', userId: target.id, changes: {} });
       return manager.findOneByOrFail(User, { id: target.id });
     });
+    await this.attempts.clear(user.email);
     return this.issueToken(user);
   }
 }

@@ -2,6 +2,8 @@ import { AuditEntry } from '../audit/audit-entry.entity';
 import { User } from '../users/user.entity';
 import { UserToken } from '../users/user-token.entity';
 import { OutboxMail } from '../mail/outbox-mail.entity';
+import { LoginAttempt } from '../auth/login-attempt.entity';
+import { RateLimitCounter } from '../common/rate-limit-counter.entity';
 import { PendingUpload } from '../storage/pending-upload.entity';
 import { PART_ENTITIES } from '../parts/part-entities';
 import { Band, BandRange } from '../bands/band.entity';
@@ -12,4 +14,4 @@ import { Radio, RadioBand } from '../products/radio.entity';
 import { COMPATIBILITY_ENTITIES } from '../compatibility/compatibility.entities';
 
 /** Every TypeORM entity; add new domains here. */
-export const ENTITIES = [User, UserToken, AuditEntry, OutboxMail, PendingUpload, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand, ...COMPATIBILITY_ENTITIES];
+export const ENTITIES = [User, UserToken, AuditEntry, OutboxMail, LoginAttempt, RateLimitCounter, PendingUpload, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand, ...COMPATIBILITY_ENTITIES];

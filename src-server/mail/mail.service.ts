@@ -9,7 +9,11 @@ export interface OutgoingMail {
   to: string | string[];
   subject: string;
   text: string;
+  /** A single-use sign-in or reset link: the body is removed from the outbox once the relay has it (or gave up). */
+  carriesLinkToken?: boolean;
 }
+
+export const REMOVED_BODY = '(removed after delivery: it carried a single-use link)';
 
 export const MAX_DELIVERY_ATTEMPTS = 12;
 const POLL_MS = 2000;
@@ -65,6 +69,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
       toAddresses: to,
       subject: mail.subject.slice(0, 200),
       body: mail.text,
+      carriesLinkToken: mail.carriesLinkToken ?? false,
       nextAttemptAt: new Date(),
     });
     const id = String(result.identifiers[0].id);
@@ -98,7 +103,10 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
     const row = await this.dataSource.getRepository(OutboxMail).findOneByOrFail({ id });
     try {
       await this.transport.sendMail({ from: this.config.smtp.from, to: row.toAddresses, subject: row.subject, text: row.body });
-      await this.dataSource.getRepository(OutboxMail).update({ id }, { status: 'sent', sentAt: new Date(), attempts: row.attempts + 1, claimedUntil: null, lastError: null });
+      await this.dataSource.getRepository(OutboxMail).update(
+        { id },
+        { status: 'sent', sentAt: new Date(), attempts: row.attempts + 1, claimedUntil: null, lastError: null, ...(row.carriesLinkToken ? { body: REMOVED_BODY } : {}) },
+      );
     } catch (error) {
       const attempts = row.attempts + 1;
       const failed = attempts >= MAX_DELIVERY_ATTEMPTS;
@@ -111,6 +119,7 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
           claimedUntil: null,
           lastError: (error as Error).message.slice(0, 500),
           nextAttemptAt: new Date(Date.now() + retryDelaySeconds(attempts) * 1000),
+          ...(failed && row.carriesLinkToken ? { body: REMOVED_BODY } : {}),
         },
       );
     }

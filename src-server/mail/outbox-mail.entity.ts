@@ -17,6 +17,10 @@ export class OutboxMail {
   @Column({ type: 'mediumtext' })
   body: string;
 
+  /** The body holds a single-use link and is blanked once the message is no longer pending. */
+  @Column({ name: 'carries_link_token', type: 'boolean', default: false })
+  carriesLinkToken: boolean;
+
   @Column({ type: 'enum', enum: ['pending', 'sent', 'failed'], default: 'pending' })
   status: OutboxStatus;
 

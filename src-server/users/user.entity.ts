@@ -27,12 +27,6 @@ export class User {
   @Column({ name: 'token_version', type: 'int', unsigned: true, default: 0 })
   tokenVersion: number;
 
-  @Column({ name: 'failed_logins', type: 'int', unsigned: true, default: 0 })
-  failedLogins: number;
-
-  @Column({ name: 'locked_until', type: 'datetime', precision: 3, nullable: true })
-  lockedUntil: Date | null;
-
   @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
   createdAt: Date;
 

@@ -45,18 +45,19 @@ export class UsersService {
       await this.audit.record(manager, { entityType: 'user', entityId: user.id, action: 'invited', userId: actor.id, changes: { email: input.email, role: input.role } });
       const token = await this.tokens.issue(manager, user.id, 'invitation');
       const saved = await manager.findOneByOrFail(User, { id: user.id });
-      // Queued in the same transaction: no invitation row without its e-mail, and no e-mail without the row.
+      // Queued in the same transaction: no invitation row without its e-mail, and no e-mail without the row;
+      // the mail poller sends it, so a slow relay never holds up the answer.
       await this.mail.send(
         {
           to: saved.email,
           subject: 'You are invited to Bandwright',
           text: `Hello ${saved.name},\n\n${actor.name} invited you to Bandwright as ${saved.role}.\nChoose your password here within 72 hours:\n\n${this.config.appUrl}/accept-invitation?token=${token}\n\nThe link works once.\n`,
+          carriesLinkToken: true,
         },
         manager,
       );
       return { user: saved };
     });
-    await this.mail.deliverDue();
     return toDto(user);
   }
 

@@ -13,7 +13,9 @@ interface WriteRoute {
 
 const NO_SUCH_ID = '999999999';
 // Tables that change as a side effect of any request, not because the request was accepted.
-const VOLATILE_TABLES = new Set(['migrations', 'mail_outbox']);
+const VOLATILE_TABLES = new Set(['migrations', 'mail_outbox', 'login_attempts', 'rate_limit_counters']);
+// Signing out would end the admin token the fuzz runs with.
+const SKIPPED_ROUTES = new Set(['post /api/auth/logout']);
 
 describe('hostile input to every write route (property-based)', () => {
   let app: INestApplication;
@@ -36,7 +38,8 @@ describe('hostile input to every write route (property-based)', () => {
           path: path.replace(/\{[^}]+\}/g, NO_SUCH_ID),
           multipart: Boolean(op.requestBody?.content?.['multipart/form-data']),
           isPublic: op['x-roles']?.includes('public') ?? false,
-        })),
+        }))
+        .filter((route) => !SKIPPED_ROUTES.has(`${route.method} ${route.path}`)),
     );
   });
   afterAll(() => app.close());

@@ -49,7 +49,11 @@ describe('mail outbox: SMTP relay down, then back', () => {
 
     const db = app.get(DataSource);
     const row = async () => (await db.query('SELECT status, attempts, last_error FROM mail_outbox WHERE JSON_CONTAINS(to_addresses, JSON_QUOTE(?))', [email]))[0];
-    const pending = await row();
+    // The request only queues the mail; the poller makes the first attempt.
+    const pending = await waitFor(async () => {
+      const current = await row();
+      return current.attempts >= 1 ? current : undefined;
+    }, 10000);
     expect(pending).toMatchObject({ status: 'pending' });
     expect(pending.attempts).toBeGreaterThanOrEqual(1);
     expect(pending.last_error).toMatch(/ECONNREFUSED|connect/i);

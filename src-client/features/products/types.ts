@@ -87,7 +87,7 @@ export interface RadioInput {
 export interface HistoryEntry {
   id: string;
   action: string;
-  user: { id: number; name: string; email: string } | null;
+  user: { id: number; name: string } | null;
   changes: Record<string, unknown>;
   at: string;
 }

@@ -5,7 +5,8 @@ import { CreateCatalogue1764800000000 } from './1764800000000-create-catalogue';
 import { CreateCompatibility1764900000000 } from './1764900000000-create-compatibility';
 import { CreateMailOutbox1765000000000 } from './1765000000000-create-mail-outbox';
 import { CreatePendingUploads1765100000000 } from './1765100000000-create-pending-uploads';
+import { HardenAccounts1765300000000 } from './1765300000000-harden-accounts';
 import { OwnershipAndLocking1765310000000 } from './1765310000000-ownership-and-locking';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
-export const MIGRATIONS = [CreateUsersAndAudit1764620000000, CreateBands1764700000000, CreateProducts1764700100000, CreateCatalogue1764800000000, CreateCompatibility1764900000000, CreateMailOutbox1765000000000, CreatePendingUploads1765100000000, OwnershipAndLocking1765310000000];
+export const MIGRATIONS = [CreateUsersAndAudit1764620000000, CreateBands1764700000000, CreateProducts1764700100000, CreateCatalogue1764800000000, CreateCompatibility1764900000000, CreateMailOutbox1765000000000, CreatePendingUploads1765100000000, HardenAccounts1765300000000, OwnershipAndLocking1765310000000];
