@@ -7,11 +7,13 @@ DIR="${1:?usage: jwt-secret.sh <data dir>}"
 FILE="$DIR/jwt-secret"
 mkdir -p "$DIR"
 if [ ! -s "$FILE" ]; then
+  rm -f "$FILE"  # an empty file left by a full disk is no secret
   umask 077
   TMP="$(mktemp "$DIR/.jwt-secret.XXXXXX")"
   node -e "process.stdout.write(require('node:crypto').randomBytes(48).toString('base64url'))" >"$TMP"
-  # Two starts at once keep whichever secret landed first.
-  if [ -s "$FILE" ]; then rm -f "$TMP"; else mv -f "$TMP" "$FILE"; fi
+  # A hard link never replaces an existing file, so two starts at once keep whichever secret landed first.
+  ln "$TMP" "$FILE" 2>/dev/null || true
+  rm -f "$TMP"
 fi
 chmod 600 "$FILE"
 cat "$FILE"
