@@ -155,7 +155,7 @@ export function TouchstonePanel() {
         onDragLeave={() => setDragging(false)}
         onDrop={onDrop}
       >
-        <div>Drop a .s1p, .s2p or .ts file here, or pick one (at most 32 MiB; nothing is stored).</div>
+        <div>Drop a .s1p, .s2p or .ts file here, or pick one (at most 25 MiB unless your administrator set another limit; nothing is stored).</div>
         <FileInput
           text={file ? file.name : 'Choose a Touchstone file…'}
           buttonText="Browse"
