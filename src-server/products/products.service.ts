@@ -82,7 +82,11 @@ export class ProductsService {
       ? await this.dataSource.getRepository(Radio).find({ select: { productId: true, technology: true }, where: { productId: In(products.map((p) => p.id)) } })
       : [];
     const radiosByProduct = new Map<number, Radio[]>();
-    for (const radio of radios) radiosByProduct.set(radio.productId, [...(radiosByProduct.get(radio.productId) ?? []), radio]);
+    for (const radio of radios) {
+      const list = radiosByProduct.get(radio.productId);
+      if (list) list.push(radio);
+      else radiosByProduct.set(radio.productId, [radio]);
+    }
     return products.map((p) => toSummary(p, radiosByProduct.get(p.id) ?? []));
   }
 

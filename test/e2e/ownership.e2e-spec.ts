@@ -4,6 +4,7 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { createApiApp, DEMO, demoTokens, type DemoRole, unique } from '../support/api-app';
 import { createDraft, csvCurve, s1pWithGamma } from '../support/parts';
+import { BACKFILL_PRODUCT_CREATORS } from '../../src-server/database/migrations/1765310000000-ownership-and-locking';
 
 type Method = 'get' | 'post' | 'patch' | 'delete' | 'put';
 
@@ -50,11 +51,14 @@ describe('data ownership and edits (API)', () => {
       expect(listed).toMatchObject({ createdBy: { id: ids.engineer }, deletedAt: null });
     });
 
-    it('backfilled older products from the audit log: the column matches the "created" entry', async () => {
+    it("the migration's backfill takes an older product's creator from its audit entry", async () => {
+      const product = await createProduct('engineer');
       const ds = app.get<DataSource>(getDataSourceToken());
-      const mismatched = await ds.query(`SELECT p.id FROM products p JOIN audit_entries a ON a.entity_type = 'product' AND a.entity_id = CAST(p.id AS CHAR) AND a.action = 'created'
-        WHERE a.user_id IS NOT NULL AND NOT (p.created_by_id <=> a.user_id)`);
-      expect(mismatched).toEqual([]);
+      // As a product created before the column existed looks.
+      await ds.query('UPDATE products SET created_by_id = NULL WHERE id = ?', [product.id]);
+      await ds.query(BACKFILL_PRODUCT_CREATORS);
+      const [row] = await ds.query('SELECT created_by_id AS createdById FROM products WHERE id = ?', [product.id]);
+      expect(row.createdById).toBe(ids.engineer);
     });
   });
 

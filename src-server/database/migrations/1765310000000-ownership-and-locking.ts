@@ -1,5 +1,12 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 
+/** A product's creator is whoever the audit log names for its "created" entry; seeded rows have none and stay unknown (NULL). */
+export const BACKFILL_PRODUCT_CREATORS = `UPDATE products p SET p.created_by_id = (
+  SELECT a.user_id FROM audit_entries a
+  WHERE a.entity_type = 'product' AND a.entity_id = CAST(p.id AS CHAR) AND a.action = 'created'
+  ORDER BY a.id LIMIT 1)
+WHERE p.created_by_id IS NULL`;
+
 /**
  * Issue 10, data ownership: who created a product, soft delete of products, optimistic locking of band sets,
  * measurement files typed by their kind, and file names stored as UTF-8 whatever the server's default charset.
@@ -15,11 +22,7 @@ export class OwnershipAndLocking1765310000000 implements MigrationInterface {
       ADD KEY ix_products_deleted (deleted_at),
       ADD CONSTRAINT fk_products_created_by FOREIGN KEY (created_by_id) REFERENCES users(id) ON DELETE SET NULL,
       ADD CONSTRAINT fk_products_deleted_by FOREIGN KEY (deleted_by_id) REFERENCES users(id) ON DELETE SET NULL`);
-    // The creator is whoever the audit log names for the product's "created" entry; seeded rows have none and stay unknown (NULL).
-    await q.query(`UPDATE products p SET p.created_by_id = (
-      SELECT a.user_id FROM audit_entries a
-      WHERE a.entity_type = 'product' AND a.entity_id = CAST(p.id AS CHAR) AND a.action = 'created'
-      ORDER BY a.id LIMIT 1)`);
+    await q.query(BACKFILL_PRODUCT_CREATORS);
     await q.query('ALTER TABLE band_sets ADD COLUMN version INT UNSIGNED NOT NULL DEFAULT 1 AFTER description');
     // Downloads are typed by the measurement's kind, never by what the uploader's browser declared.
     await q.query(`UPDATE part_measurements SET content_type = IF(kind = 's11', 'text/plain', 'text/csv')`);
