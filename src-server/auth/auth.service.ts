@@ -36,9 +36,9 @@ export class AuthService implements OnModuleInit, OnModuleDestroy {
     private readonly attempts: LoginAttemptsService,
   ) {}
 
-  async onModuleInit(): Promise<void> {
-    // Hashed before the first sign-in, so the first unknown e-mail costs no more than a wrong password.
-    await getDummyHash();
+  onModuleInit(): void {
+    // Hashed ahead of the first sign-in (without holding up start), so the first unknown e-mail costs no more than a wrong password.
+    void getDummyHash();
   }
 
   async onModuleDestroy(): Promise<void> {

@@ -11,7 +11,7 @@ describe('auth and users (API)', () => {
   beforeAll(async () => {
     app = await createApiApp();
     tokens = await demoTokens(app);
-  });
+  }, 30000);
   afterAll(() => app.close());
 
   describe('POST /api/auth/login', () => {
@@ -108,7 +108,7 @@ describe('auth and users (API)', () => {
       await tokenFor(app, email, 'a-fresh-password-1');
       const again = await http().post('/api/auth/accept-invitation').send({ token, password: 'another-password-2' }).expect(400);
       expect(again.body.code).toBe('LINK_TOKEN_USED');
-    });
+    }, 30000);
 
     it('rejects an invitation to an e-mail that already has an account with 409', async () => {
       const res = await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`)
@@ -136,7 +136,7 @@ describe('auth and users (API)', () => {
       await tokenFor(app, email, 'second-password-2');
       const revoked = await http().get('/api/auth/me').set('Authorization', `Bearer ${oldToken}`).expect(401);
       expect(revoked.body.code).toBe('AUTH_TOKEN_REVOKED');
-    });
+    }, 30000);
 
     it('rejects a made-up token', async () => {
       const res = await http().post('/api/auth/password-reset').send({ token: 'x'.repeat(43), password: 'some-password-3' }).expect(400);
@@ -159,7 +159,7 @@ describe('auth and users (API)', () => {
 
       const audit = await http().get('/api/audit').query({ entityType: 'user', entityId: invited.body.id }).set('Authorization', `Bearer ${tokens.admin}`).expect(200);
       expect(audit.body.items.map((e: { action: string }) => e.action)).toEqual(expect.arrayContaining(['invited', 'invitation-accepted', 'deactivated']));
-    });
+    }, 30000);
 
     it('changes a role, and answers 400 naming the field for an unknown role and for a bad id', async () => {
       const email = `${unique('mover')}@bandwright.test`;
@@ -184,7 +184,7 @@ describe('auth and users (API)', () => {
       for (let i = 0; i < 5; i += 1) await http().post('/api/auth/login').send({ email, password: `wrong-${i}` }).expect(401);
       const locked = await http().post('/api/auth/login').send({ email, password: 'target-password-1' }).expect(429);
       expect(locked.body.code).toBe('AUTH_TEMPORARILY_LOCKED');
-    });
+    }, 30000);
 
     it('rate-limits repeated reset requests for one address and e-mail with 429', async () => {
       const email = `${unique('flood')}@bandwright.test`;
@@ -194,7 +194,7 @@ describe('auth and users (API)', () => {
       for (let i = 0; i < 32; i += 1) statuses.push((await http().post('/api/auth/password-reset-requests').set('X-Forwarded-For', address).send({ email })).status);
       expect(statuses.slice(0, 30).every((s) => s === 202)).toBe(true);
       expect(statuses.slice(30)).toEqual([429, 429]);
-    });
+    }, 30000);
 
     it('sends security headers and a request id on every answer', async () => {
       const res = await http().get('/api/health');

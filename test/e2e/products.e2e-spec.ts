@@ -105,7 +105,7 @@ describe('products and radios (API)', () => {
       const created = await call('post', '/api/products', 'engineer', input).expect(201);
       expect(created.body).toMatchObject({ ...input, version: 1, radios: [], radioCount: 0 });
       const history = await call('get', `/api/products/${created.body.id}/history`, 'procurement').expect(200);
-      expect(history.body.items[0]).toMatchObject({ action: 'created', user: { email: 'engineer@bandwright.test' }, changes: { code: input.code } });
+      expect(history.body.items[0]).toMatchObject({ action: 'created', user: { name: 'Eli Marsh' }, changes: { code: input.code } });
     });
   });
 
@@ -167,7 +167,7 @@ describe('products and radios (API)', () => {
       const product = await createProduct();
       await call('patch', `/api/products/${product.id}`, 'admin', { version: 1, groundPlaneWidthMm: 35, targetRegions: ['EU'] }).expect(200);
       const [latest] = (await call('get', `/api/products/${product.id}/history`, 'engineer').expect(200)).body.items;
-      expect(latest).toMatchObject({ action: 'updated', user: { email: 'admin@bandwright.test' }, changes: { groundPlaneWidthMm: [40, 35], targetRegions: [['EU', 'US'], ['EU']] } });
+      expect(latest).toMatchObject({ action: 'updated', user: { name: 'Ada Okonkwo' }, changes: { groundPlaneWidthMm: [40, 35], targetRegions: [['EU', 'US'], ['EU']] } });
     });
   });
 
@@ -284,7 +284,7 @@ describe('products and radios (API)', () => {
       await call('delete', `/api/products/${product.id}/radios/${radio.id}?version=2`, 'engineer').expect(204);
       expect((await call('get', `/api/products/${product.id}`, 'engineer').expect(200)).body.radios).toEqual([]);
       const [latest] = (await call('get', `/api/products/${product.id}/history`, 'engineer').expect(200)).body.items;
-      expect(latest).toMatchObject({ action: 'radio-deleted', user: { email: 'engineer@bandwright.test' }, changes: { radioId: radio.id, radio: 'GNSS' } });
+      expect(latest).toMatchObject({ action: 'radio-deleted', user: { name: 'Eli Marsh' }, changes: { radioId: radio.id, radio: 'GNSS' } });
     });
   });
 
