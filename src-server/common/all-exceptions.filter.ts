@@ -21,7 +21,10 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const response = host.switchToHttp().getResponse<Response>();
     const request = host.switchToHttp().getRequest<Request & { id?: string }>();
     const body = this.toBody(exception, request);
-    if (!response.headersSent) response.status(body.statusCode).json(body);
+    if (response.headersSent) return;
+    // A route's own @Header (a CSV download) must not relabel the error as a file.
+    response.removeHeader('Content-Disposition');
+    response.status(body.statusCode).type('application/json').json(body);
   }
 
   private toBody(exception: unknown, request: Request & { id?: string }): Record<string, unknown> & { statusCode: number } {

@@ -117,6 +117,11 @@ describe('bad input answers 4xx with a code and the field, never 5xx (API)', () 
       expect([detail.status, fieldsOf(detail)]).toEqual([400, ['ranges']]);
     });
 
+    it('a refused CSV export answers its 400 as JSON with the field, not as a CSV attachment', async () => {
+      const res = await http().get('/api/parts/export').query({ vswrMax: '1e309' }).set(as('engineer'));
+      expect([res.status, res.type, res.headers['content-disposition'], fieldsOf(res)]).toEqual([400, 'application/json', undefined, ['vswrMax']]);
+    });
+
     it('integer ids in bodies and paths beyond the INT range are 400s naming the field', async () => {
       const bandSet = await http().post('/api/band-sets').set(as('admin')).send({ ...bandSetBody(), bandIds: [1e20] });
       expect([bandSet.status, fieldsOf(bandSet)]).toEqual([400, ['bandIds']]);
