@@ -1,9 +1,11 @@
-import { Body, Controller, Delete, Get, Param, Post, Put, Query } from '@nestjs/common';
-import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Delete, Get, Param, Post, Put, Query, Res } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
 import { ALL_ROLES } from '../common/roles';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ParseIdPipe } from '../common/parse-id.pipe';
 import { CompatibilityService } from './compatibility.service';
+import { matrixCsvFileName, matrixToCsv } from './matrix-csv';
 import { AssignmentDto, CandidatesDto, CandidatesQueryDto, ChoosePartDto, MatrixDto, MatrixQueryDto, ShortlistDto } from './dto/matrix.dto';
 
 @ApiTags('compatibility')
@@ -17,6 +19,19 @@ export class CompatibilityController {
   @ApiOkResponse({ type: MatrixDto })
   matrix(@Param('id', ParseIdPipe) id: number, @Query() query: MatrixQueryDto): Promise<MatrixDto> {
     return this.compatibility.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
+  }
+
+  @Get('matrix.csv')
+  @Roles(...ALL_ROLES)
+  @ApiProduces('text/csv')
+  @ApiOperation({ summary: 'The same matrix as CSV: one line per radio band and part, with the screening caution first' })
+  async matrixCsv(@Param('id', ParseIdPipe) id: number, @Query() query: MatrixQueryDto, @Res({ passthrough: true }) response: Response): Promise<string> {
+    const matrix = await this.compatibility.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
+    const text = matrixToCsv(matrix);
+    // Set only once the file exists: an error before it must still answer as JSON.
+    response.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    response.setHeader('Content-Disposition', `attachment; filename="${matrixCsvFileName(matrix.productName)}"`);
+    return text;
   }
 
   @Get('radios/:radioId/candidates')

@@ -7,7 +7,8 @@ import { CatalogueSearchService } from './catalogue-index/catalogue-search.servi
 import { looksBinary } from '../storage/limited-file-upload';
 import { type UploadedFile, requireFile } from './measurements.service';
 import { Part } from './part.entity';
-import { type ImportProblem, PART_CSV_COLUMNS, csvLine, formatSpecBands, parsePartCsv } from './part-csv';
+import { type ImportProblem, PART_CSV_COLUMNS, formatSpecBands, parsePartCsv } from './part-csv';
+import { writeCsv } from '../common/csv-writer';
 import { PartsService } from './parts.service';
 import type { PartSearchDto } from './dto/part-search.dto';
 import type { ImportResultDto } from './dto/import.dto';
@@ -77,7 +78,7 @@ export class PartCsvService {
   /** The current search (same filters and order), unpaged, as CSV. */
   async exportCsv(dto: PartSearchDto, actor: AuthUser): Promise<string> {
     const matches = await this.search.searchAll(dto, actor);
-    const lines = [csvLine([...EXPORT_COLUMNS])];
+    const rows: unknown[][] = [];
     const byId = new Map<number, Part>();
     for (let i = 0; i < matches.length; i += 1000) {
       const ids = matches.slice(i, i + 1000).map((p) => p.id);
@@ -88,13 +89,14 @@ export class PartCsvService {
       const part = byId.get(indexed.id);
       if (!part) continue;
       const bands = [...part.specBands].sort((a, b) => a.fromMhz - b.fromMhz);
-      lines.push(csvLine([
+      rows.push([
         part.id, part.manufacturer.name, part.mpn, part.title, part.formFactor, part.connector, part.polarization, part.mounting, part.nominalImpedanceOhms,
         part.lengthMm, part.widthMm, part.heightMm, part.evalGroundLengthMm, part.evalGroundWidthMm, part.tempMinC, part.tempMaxC, part.lifecycle, part.notes,
         formatSpecBands(bands), part.reviewState, indexed.measuredKinds.join(' '),
         [...indexed.lowestPrices].map(([currency, price]) => `${price.toFixed(4)} ${currency}`).join(' '),
-      ]));
+      ]);
     }
-    return lines.join('\r\n') + '\r\n';
+    // The header keeps the import's column names, so an exported file imports again as it is.
+    return writeCsv(EXPORT_COLUMNS, rows);
   }
 }

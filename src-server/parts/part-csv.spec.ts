@@ -1,4 +1,4 @@
-import { csvCell, formatSpecBands, parsePartCsv, parseSpecBandsText } from './part-csv';
+import { formatSpecBands, parsePartCsv, parseSpecBandsText } from './part-csv';
 
 describe(parseSpecBandsText.name, () => {
   it('reads bands with their limits and round-trips through formatSpecBands', () => {
@@ -18,14 +18,5 @@ describe(parsePartCsv.name, () => {
   it('reports unknown and missing columns on the header line before any row', () => {
     const { problems } = parsePartCsv(Buffer.from('manufacturer,mpn,colour\nA,B,red\n'));
     expect(problems.map((p) => `${p.line}:${p.field}`)).toEqual(['1:colour', '1:title', '1:formFactor', '1:connector', '1:polarization']);
-  });
-});
-
-describe(csvCell.name, () => {
-  it('quotes per RFC 4180 and defuses spreadsheet formulas, leaving negative numbers alone', () => {
-    expect(csvCell('a,"b"')).toBe('"a,""b"""');
-    expect(csvCell('=HYPERLINK("x")')).toBe(`"'=HYPERLINK(""x"")"`);
-    expect(csvCell(-2.5)).toBe('-2.5');
-    expect(csvCell(null)).toBe('');
   });
 });

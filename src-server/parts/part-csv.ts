@@ -168,15 +168,3 @@ export function parsePartCsv(bytes: Uint8Array): ParsedImport {
   });
   return { parts, problems };
 }
-
-/** RFC 4180 quoting, and a leading apostrophe so a spreadsheet never runs a cell as a formula. */
-export function csvCell(value: unknown): string {
-  if (value === null || value === undefined) return '';
-  let text = String(value);
-  if (typeof value === 'string' && /^[=+@\t\r]|^-(?![\d.])/.test(text)) text = `'${text}`;
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
-export function csvLine(values: unknown[]): string {
-  return values.map(csvCell).join(',');
-}

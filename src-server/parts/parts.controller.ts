@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Header, HttpCode, Param, Patch, Post, Query, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post, Query, Res, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
+import type { Response } from 'express';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ALL_ROLES } from '../common/roles';
@@ -33,12 +34,14 @@ export class PartsController {
 
   @Get('export')
   @Roles(...ALL_ROLES)
-  @Header('Content-Type', 'text/csv; charset=utf-8')
-  @Header('Content-Disposition', 'attachment; filename="bandwright-catalogue.csv"')
   @ApiProduces('text/csv')
   @ApiOperation({ summary: 'The current search as CSV, every match, same filters and order' })
-  export(@Query() query: PartSearchDto, @CurrentUser() user: AuthUser): Promise<string> {
-    return this.csv.exportCsv(query, user);
+  async export(@Query() query: PartSearchDto, @CurrentUser() user: AuthUser, @Res({ passthrough: true }) response: Response): Promise<string> {
+    const text = await this.csv.exportCsv(query, user);
+    // Set only once the file exists: a refused query must still answer as JSON.
+    response.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    response.setHeader('Content-Disposition', 'attachment; filename="bandwright-catalogue.csv"');
+    return text;
   }
 
   @Post()

@@ -40,7 +40,7 @@ describe('rules can never break the matrix (API)', () => {
     app = await createApiApp();
     db = app.get(DataSource);
     tokens = await demoTokens(app);
-  });
+  }, 30_000);
   /** Ids these tests may have stored: removed at the end even when a refusal unexpectedly succeeded. */
   const ids: string[] = [];
   const newId = () => {

@@ -1,33 +1,26 @@
 import { useCallback, useMemo, useState } from 'react';
-import { Button, ButtonGroup, H3, HTMLTable, Icon, NonIdealState, Tag } from '@blueprintjs/core';
+import { Button, ButtonGroup, H3, HTMLTable, Icon, Intent, NonIdealState, OverlayToaster, Position, Tag } from '@blueprintjs/core';
 import { Cell, Column, ColumnHeaderCell, RowHeaderCell, Table } from '@blueprintjs/table';
 import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
+import { useDownloadMatrixCsv } from '../api/download-matrix-csv';
 import { useMatrix } from '../api/get-matrix';
 import type { Matrix, MatrixCell } from '../types';
 import { STATUS_LOOK, decidingFinding, shortCode } from './cell-status';
 import { CandidatesDialog } from './CandidatesDialog';
 import { MatrixCellDrawer } from './MatrixCellDrawer';
-import { matrixToCsv } from './matrix-csv';
 import './compatibility.css';
 
 export interface CompatibilityMatrixProps {
   productId: number;
 }
 
-function downloadCsv(matrix: Matrix): void {
-  const blob = new Blob([matrixToCsv(matrix)], { type: 'text/csv;charset=utf-8' });
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = `matrix-${matrix.productName.replace(/[^A-Za-z0-9]+/g, '-').toLowerCase()}.csv`;
-  link.click();
-  URL.revokeObjectURL(url);
-}
+const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 
 /** Every radio band of the product (rows) against its assigned and shortlisted parts (columns). */
 export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
   const matrix = useMatrix(productId);
+  const downloadCsv = useDownloadMatrixCsv();
   const [selected, setSelected] = useState<MatrixCell | null>(null);
   const [candidatesFor, setCandidatesFor] = useState<number | null>(null);
   const m = matrix.data;
@@ -102,7 +95,10 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
               <ButtonGroup>
                 {radios.map((radio) => <Button key={radio.id} icon="search" text={`Find candidates: ${radio.name}`} onClick={() => setCandidatesFor(radio.id)} />)}
               </ButtonGroup>
-              <Button icon="download" text="Export CSV" disabled={m.columns.length === 0} onClick={() => downloadCsv(m)} />
+              <Button
+                icon="download" text="Export CSV" disabled={m.columns.length === 0} loading={downloadCsv.isPending}
+                onClick={() => downloadCsv.mutate({ productId, productName: m.productName }, { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) })}
+              />
               <Button icon="print" text="Print report" onClick={() => window.print()} />
             </div>
             <ScreeningCaution compact />
