@@ -1,11 +1,11 @@
 import type { INestApplication } from '@nestjs/common';
-import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
+import { S3Client } from '@aws-sdk/client-s3';
 import { getDataSourceToken } from '@nestjs/typeorm';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { loadConfig } from '../../src-server/config/app-config';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
-import { createDraft, csvCurve, s1pWithGamma } from '../support/parts';
+import { createDraft, storedFilesOf, csvCurve, s1pWithGamma } from '../support/parts';
 
 jest.setTimeout(120_000);
 
@@ -20,12 +20,7 @@ describe('bounded parsers of uploaded files (API)', () => {
   const http = () => request(app.getHttpServer());
   const auth = () => ({ Authorization: `Bearer ${tokens.engineer}` });
   const db = () => app.get<DataSource>(getDataSourceToken());
-  const storedOf = async (partId: number) => {
-    const [m] = await db().query('SELECT COUNT(*) AS n FROM part_measurements WHERE part_id = ?', [partId]);
-    const [d] = await db().query('SELECT COUNT(*) AS n FROM part_documents WHERE part_id = ?', [partId]);
-    const objects = (await s3.send(new ListObjectsV2Command({ Bucket: config.s3.bucket, Prefix: `parts/${partId}/` }))).KeyCount ?? 0;
-    return { rows: Number(m.n) + Number(d.n), objects };
-  };
+  const storedOf = (partId: number) => storedFilesOf(app, s3, config.s3.bucket, partId);
   const upload = (partId: number, kind: string, name: string, content: string | Buffer, fields: Record<string, string> = {}) => {
     let req = http().post(`/api/parts/${partId}/measurements`).set(auth()).field('kind', kind);
     for (const [k, v] of Object.entries(fields)) req = req.field(k, v);

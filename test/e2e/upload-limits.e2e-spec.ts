@@ -7,7 +7,7 @@ import { loadConfig } from '../../src-server/config/app-config';
 import { MEASUREMENT_MAX_BYTES } from '../../src-server/parts/measurements.service';
 import { PART_IMPORT_MAX_BYTES } from '../../src-server/parts/part-csv.service';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
-import { createDraft, s1pWithGamma } from '../support/parts';
+import { createDraft, storedFilesOf, s1pWithGamma } from '../support/parts';
 
 // PNG file signature (ISO/IEC 15948 §5.2): binary, contains NUL bytes.
 const PNG = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]), Buffer.from('IHDR')]);
@@ -20,12 +20,7 @@ describe('upload size and type limits on every multipart route', () => {
   const http = () => request(app.getHttpServer());
   const auth = () => ({ Authorization: `Bearer ${tokens.engineer}` });
   const db = () => app.get<DataSource>(getDataSourceToken());
-  const storedOf = async (partId: number) => {
-    const [m] = await db().query('SELECT COUNT(*) AS n FROM part_measurements WHERE part_id = ?', [partId]);
-    const [d] = await db().query('SELECT COUNT(*) AS n FROM part_documents WHERE part_id = ?', [partId]);
-    const objects = (await s3.send(new ListObjectsV2Command({ Bucket: config.s3.bucket, Prefix: `parts/${partId}/` }))).KeyCount ?? 0;
-    return { rows: Number(m.n) + Number(d.n), objects };
-  };
+  const storedOf = (partId: number) => storedFilesOf(app, s3, config.s3.bucket, partId);
 
   beforeAll(async () => {
     app = await createApiApp();

@@ -1,4 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
+import { ListObjectsV2Command, type S3Client } from '@aws-sdk/client-s3';
+import { getDataSourceToken } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
 import request from 'supertest';
 import { writeTouchstone } from '../../src-server/rf/touchstone-writer';
 import { unique } from './api-app';
@@ -33,4 +36,13 @@ export function s1pWithGamma(points: [mhz: number, gammaMagnitude: number][]): s
 
 export function csvCurve(header: string, points: [number, number][]): string {
   return [header, ...points.map(([f, v]) => `${f},${v}`)].join('\n') + '\n';
+}
+
+/** How many file rows (measurements and documents) and stored objects a part has: after a refusal both stay 0. */
+export async function storedFilesOf(app: INestApplication, s3: S3Client, bucket: string, partId: number): Promise<{ rows: number; objects: number }> {
+  const db = app.get<DataSource>(getDataSourceToken());
+  const [m] = await db.query('SELECT COUNT(*) AS n FROM part_measurements WHERE part_id = ?', [partId]);
+  const [d] = await db.query('SELECT COUNT(*) AS n FROM part_documents WHERE part_id = ?', [partId]);
+  const objects = (await s3.send(new ListObjectsV2Command({ Bucket: bucket, Prefix: `parts/${partId}/` }))).KeyCount ?? 0;
+  return { rows: Number(m.n) + Number(d.n), objects };
 }
