@@ -1,6 +1,6 @@
 import { useCallback, useMemo, useState } from 'react';
-import { Link, useNavigate } from 'react-router-dom';
-import { Button, HTMLTable, Intent, NonIdealState, OverlayToaster, Position, Switch } from '@blueprintjs/core';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { Button, H5, HTMLTable, Intent, NonIdealState, OverlayToaster, Position, Switch } from '@blueprintjs/core';
 import { Cell, Column, Table, TruncatedFormat } from '@blueprintjs/table';
 import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
@@ -8,7 +8,7 @@ import { paths } from '../../../app/routes/paths';
 import { useHasRole } from '../../../lib/session';
 import { useDeletedProducts, useProducts } from '../api/get-products';
 import { useRestoreProduct } from '../api/save-product';
-import type { ProductSummary } from '../types';
+import { type ProductSummary, TECHNOLOGY_SHORT_LABELS } from '../types';
 import { ProductDialog } from './ProductDialog';
 
 const COLUMNS: { id: string; name: string; width: number; value: (p: ProductSummary) => string }[] = [
@@ -17,7 +17,7 @@ const COLUMNS: { id: string; name: string; width: number; value: (p: ProductSumm
   { id: 'owner', name: 'Owner', width: 150, value: (p) => p.owner },
   { id: 'ground', name: 'Ground plane (mm)', width: 150, value: (p) => `${p.groundPlaneLengthMm} × ${p.groundPlaneWidthMm}` },
   { id: 'regions', name: 'Markets', width: 130, value: (p) => p.targetRegions.join(', ') },
-  { id: 'radios', name: 'Radios', width: 260, value: (p) => `${p.radioCount}${p.technologies.length ? ` (${p.technologies.join(', ')})` : ''}` },
+  { id: 'radios', name: 'Radios', width: 260, value: (p) => `${p.radioCount}${p.technologies.length ? ` (${p.technologies.map((t) => TECHNOLOGY_SHORT_LABELS[t] ?? t).join(', ')})` : ''}` },
   { id: 'updated', name: 'Updated (UTC)', width: 150, value: (p) => p.updatedAt.replace('T', ' ').slice(0, 16) },
 ];
 
@@ -32,6 +32,7 @@ function DeletedProducts() {
   const rows = deleted.data ?? [];
   return (
     <QueryState isPending={deleted.isPending} error={deleted.error}>
+      <H5 className="bw-gap">Deleted products</H5>
       {rows.length === 0 ? <NonIdealState icon="trash" title="No deleted products" /> : (
         <HTMLTable compact striped className="bw-gap" data-testid="deleted-products">
           <thead><tr><th>Product</th><th>Code</th><th>Radios</th><th>Deleted (UTC)</th><th>Deleted by</th><th /></tr></thead>
@@ -60,7 +61,14 @@ function DeletedProducts() {
 export function ProductsPage() {
   const canEdit = useHasRole('engineer', 'admin');
   const isAdmin = useHasRole('admin');
-  const [showDeleted, setShowDeleted] = useState(false);
+  // In the URL, so that the choice survives reload and Back.
+  const [searchParams, setSearchParams] = useSearchParams();
+  const showDeleted = searchParams.get('deleted') === '1';
+  const setShowDeleted = (on: boolean) => setSearchParams((prev) => {
+    const next = new URLSearchParams(prev);
+    if (on) next.set('deleted', '1'); else next.delete('deleted');
+    return next;
+  });
   const products = useProducts();
   const navigate = useNavigate();
   const rows = useMemo(() => products.data ?? [], [products.data]);
@@ -88,6 +96,7 @@ export function ProductsPage() {
         )}
       />
       {isAdmin && showDeleted && <DeletedProducts />}
+      {isAdmin && showDeleted && <H5 className="bw-gap">Current products</H5>}
       <QueryState isPending={products.isPending} error={products.error}>
         {rows.length === 0 ? <NonIdealState icon="box" title="No products yet" /> : (
           <div className="bw-table-wrap" data-testid="products-table">
