@@ -28,7 +28,7 @@ export const tokenStore = {
   clear: () => localStorage.removeItem(TOKEN_KEY),
 };
 
-type Query = Record<string, string | number | boolean | undefined | null | (string | number)[]>;
+export type Query = Record<string, string | number | boolean | undefined | null | (string | number)[]>;
 
 export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -79,6 +79,24 @@ function xhrUpload(url: string, options: RequestOptions, token: string | null): 
   });
 }
 
+/** fetch with the session's token; a network failure becomes ApiError NETWORK_ERROR. */
+async function send(url: string, options: RequestOptions, token: string | null): Promise<Response> {
+  const headers: Record<string, string> = {};
+  if (token) headers.Authorization = `Bearer ${token}`;
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  try {
+    return await fetch(url, {
+      method: options.method ?? 'GET',
+      headers,
+      body: options.form ?? (options.body !== undefined ? JSON.stringify(options.body) : undefined),
+      signal: options.signal,
+    });
+  } catch (error) {
+    if ((error as Error).name === 'AbortError') throw error;
+    throw new ApiError(0, 'NETWORK_ERROR', 'The server could not be reached');
+  }
+}
+
 export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
   const token = tokenStore.get();
   const url = buildUrl(path, options.query);
@@ -87,25 +105,18 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   if (options.form && options.onUploadProgress) {
     ({ status, text } = await xhrUpload(url, options, token));
   } else {
-    const headers: Record<string, string> = {};
-    if (token) headers.Authorization = `Bearer ${token}`;
-    if (options.body !== undefined) headers['Content-Type'] = 'application/json';
-    let response: Response;
-    try {
-      response = await fetch(url, {
-        method: options.method ?? 'GET',
-        headers,
-        body: options.form ?? (options.body !== undefined ? JSON.stringify(options.body) : undefined),
-        signal: options.signal,
-      });
-    } catch (error) {
-      if ((error as Error).name === 'AbortError') throw error;
-      throw new ApiError(0, 'NETWORK_ERROR', 'The server could not be reached');
-    }
+    const response = await send(url, options, token);
     status = response.status;
     text = await response.text();
   }
   if (status >= 400) throw await toApiError(status, text);
   if (options.raw) return text as T;
   return (text ? JSON.parse(text) : undefined) as T;
+}
+
+/** A file route's body as bytes (a stored PDF must not pass through text), with apiRequest's token and errors. */
+export async function apiBlob(path: string, query?: Query): Promise<Blob> {
+  const response = await send(buildUrl(path, query), {}, tokenStore.get());
+  if (response.status >= 400) throw await toApiError(response.status, await response.text());
+  return response.blob();
 }

@@ -2,7 +2,7 @@ import { Navigate, useSearchParams } from 'react-router-dom';
 import { Callout, Intent } from '@blueprintjs/core';
 import { useSession } from '../../../lib/session';
 import { paths } from '../../../app/routes/paths';
-import { useAcceptInvitation } from '../api/set-password';
+import { useAcceptInvitation } from '../api/accept-invitation';
 import { AuthLayout } from './AuthLayout';
 import { SetPasswordForm } from './SetPasswordForm';
 

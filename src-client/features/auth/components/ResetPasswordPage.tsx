@@ -2,7 +2,7 @@ import { Navigate, useSearchParams } from 'react-router-dom';
 import { Callout, Intent } from '@blueprintjs/core';
 import { useSession } from '../../../lib/session';
 import { paths } from '../../../app/routes/paths';
-import { useResetPassword } from '../api/set-password';
+import { useResetPassword } from '../api/reset-password';
 import { AuthLayout } from './AuthLayout';
 import { SetPasswordForm } from './SetPasswordForm';
 

@@ -1,7 +1,7 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import { bandKeys } from './band-keys';
+import { useQuery } from '@tanstack/react-query';
+import { getPartQueryOptions } from '../../../api/parts';
 
+/** Of a part's detail, what the band strip draws. */
 export interface PartCoverage {
   id: number;
   manufacturer: string;
@@ -9,23 +9,4 @@ export interface PartCoverage {
   coveredRanges: { fromMhz: number; toMhz: number; source: 'measured' | 'spec' }[];
 }
 
-interface PartMatch {
-  id: number;
-  manufacturer: string;
-  mpn: string;
-  title: string;
-}
-
-/** Parts whose text matches, for the band strip's "compare a part" picker. */
-export const searchPartsForStrip = (q: string) => apiRequest<{ items: PartMatch[] }>('/parts', { query: { q, limit: 8 } }).then((r) => r.items);
-
-export const getPartCoverage = (id: number) => apiRequest<PartCoverage>(`/parts/${id}`);
-
-export const getPartMatchesQueryOptions = (q: string) =>
-  queryOptions({ queryKey: [...bandKeys.all, 'part-matches', q], queryFn: () => searchPartsForStrip(q), enabled: q.trim().length >= 2 });
-
-export const getPartCoverageQueryOptions = (id: number | null) =>
-  queryOptions({ queryKey: [...bandKeys.all, 'part-coverage', id], queryFn: () => getPartCoverage(id!), enabled: id !== null });
-
-export const usePartMatches = (q: string) => useQuery(getPartMatchesQueryOptions(q));
-export const usePartCoverage = (id: number | null) => useQuery(getPartCoverageQueryOptions(id));
+export const usePartCoverage = (id: number | null) => useQuery({ ...getPartQueryOptions<PartCoverage>(id ?? 0), enabled: id !== null });

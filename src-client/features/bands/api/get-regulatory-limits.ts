@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import type { RegulatoryLimit } from '../types';
-import { bandKeys } from './band-keys';
+import { limitKeys } from './limit-keys';
 
 export const getRegulatoryLimits = () => apiRequest<RegulatoryLimit[]>('/regulatory-limits');
 
-export const getRegulatoryLimitsQueryOptions = () => queryOptions({ queryKey: bandKeys.limits(), queryFn: getRegulatoryLimits });
+export const getRegulatoryLimitsQueryOptions = () => queryOptions({ queryKey: limitKeys.list(), queryFn: getRegulatoryLimits });
 
 export const useRegulatoryLimits = () => useQuery(getRegulatoryLimitsQueryOptions());

@@ -2,7 +2,8 @@ import { FormEvent, useMemo, useState } from 'react';
 import { Button, Callout, Checkbox, Dialog, DialogBody, DialogFooter, FormGroup, H6, InputGroup, Intent, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
 import { useBands } from '../api/get-bands';
-import { useCreateBandSet, useUpdateBandSet } from '../api/save-band-set';
+import { useCreateBandSet } from '../api/create-band-set';
+import { useUpdateBandSet } from '../api/update-band-set';
 import { type BandSet, type Technology, TECHNOLOGY_LABELS } from '../types';
 
 export interface BandSetDialogProps {

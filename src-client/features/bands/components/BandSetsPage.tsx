@@ -4,7 +4,7 @@ import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
 import { useHasRole } from '../../../lib/session';
 import { useBandSets } from '../api/get-band-sets';
-import { useDeleteBandSet } from '../api/save-band-set';
+import { useDeleteBandSet } from '../api/delete-band-set';
 import type { BandSet } from '../types';
 import { BandsNav } from './BandsNav';
 import { BandSetDialog } from './BandSetDialog';

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Button, FormGroup, InputGroup, Menu, MenuItem, Popover, Tag } from '@blueprintjs/core';
-import { usePartMatches, type PartCoverage } from '../api/get-part-coverage';
+import type { PartCoverage } from '../api/get-part-coverage';
+import { usePartMatches } from '../api/search-parts';
 
 export interface PartOverlayPickerProps {
   selected: PartCoverage | null;

@@ -1,7 +1,8 @@
 import { FormEvent, useState } from 'react';
 import { Button, Callout, Dialog, DialogBody, DialogFooter, FormGroup, HTMLSelect, InputGroup, Intent, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
-import { useCreateRegulatoryLimit, useUpdateRegulatoryLimit } from '../api/save-regulatory-limit';
+import { useCreateRegulatoryLimit } from '../api/create-regulatory-limit';
+import { useUpdateRegulatoryLimit } from '../api/update-regulatory-limit';
 import { LIMIT_KIND_LABELS, type LimitKind, REGIONS, type RegulatoryLimit, type RegulatoryLimitInput } from '../types';
 
 export interface RegulatoryLimitDialogProps {

@@ -6,7 +6,7 @@ import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { useHasRole } from '../../../lib/session';
 import { useRegulatoryLimits } from '../api/get-regulatory-limits';
-import { useDeleteRegulatoryLimit } from '../api/save-regulatory-limit';
+import { useDeleteRegulatoryLimit } from '../api/delete-regulatory-limit';
 import { LIMIT_KIND_LABELS, type RegulatoryLimit } from '../types';
 import { BandsNav } from './BandsNav';
 import { RegulatoryLimitDialog } from './RegulatoryLimitDialog';

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { partKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
 import type { ReviewQueueItem } from '../types';
-import { partKeys } from './part-keys';
 
 export const getReviewQueue = () => apiRequest<ReviewQueueItem[]>('/parts/review-queue');
 

@@ -7,7 +7,8 @@ import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { paths } from '../../../app/routes/paths';
 import { useHasRole, useSession } from '../../../lib/session';
-import { downloadPartsCsv, useParts } from '../api/get-parts';
+import { downloadPartsCsv } from '../api/download-parts-csv';
+import { useParts } from '../api/get-parts';
 import {
   CONNECTORS, FORM_FACTORS, LIFECYCLES, POLARIZATIONS, REVIEW_STATES, type LibraryBand, type PartFilters, type PartSummary, type SortKey,
 } from '../types';

@@ -2,7 +2,7 @@ import { useEffect, useState } from 'react';
 import { Button, Callout, Dialog, DialogBody, DialogFooter, FileInput, FormGroup, HTMLSelect, InputGroup, Intent, ProgressBar } from '@blueprintjs/core';
 import { FrequencyChart } from '../../../components/FrequencyChart';
 import { ApiError } from '../../../lib/api-client';
-import { useUploadMeasurement } from '../api/part-mutations';
+import { useUploadMeasurement } from '../api/upload-measurement';
 import { MEASUREMENT_KINDS, type CurvePreview, type MeasurementKind } from '../types';
 
 export interface MeasurementUploadDialogProps {

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { Callout, HTMLTable } from '@blueprintjs/core';
 import { FrequencyChart, type ShadedRange } from '../../../components/FrequencyChart';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
-import { useMeasurementPoints } from '../api/get-part';
+import { useMeasurementPoints } from '../api/get-measurement-points';
 import type { PartDetail } from '../types';
 import { fmt } from './part-labels';
 

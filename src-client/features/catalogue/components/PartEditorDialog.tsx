@@ -1,7 +1,8 @@
 import { useEffect, useState } from 'react';
 import { Button, Callout, Classes, Dialog, DialogBody, DialogFooter, FormGroup, HTMLSelect, InputGroup, Intent, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
-import { type PartInput, useCreatePart, useUpdatePart } from '../api/part-mutations';
+import { type PartInput, useCreatePart } from '../api/create-part';
+import { useUpdatePart } from '../api/update-part';
 import { CONNECTORS, FORM_FACTORS, LIFECYCLES, POLARIZATIONS, type PartDetail, type SpecBand } from '../types';
 
 export interface PartEditorDialogProps {

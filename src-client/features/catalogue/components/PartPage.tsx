@@ -5,9 +5,12 @@ import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
 import type { ShadedRange } from '../../../components/FrequencyChart';
 import { paths } from '../../../app/routes/paths';
-import { usePart, usePartHistory } from '../api/get-part';
-import { downloadStoredFile } from '../api/get-parts';
-import { useCreateOffer, useDeleteOffer, useUploadDocument } from '../api/part-mutations';
+import { useCreateOffer } from '../api/create-offer';
+import { useDeleteOffer } from '../api/delete-offer';
+import { downloadPartFile } from '../api/download-part-file';
+import { usePart } from '../api/get-part';
+import { usePartHistory } from '../api/get-part-history';
+import { useUploadDocument } from '../api/upload-document';
 import type { LibraryBand, PartDetail } from '../types';
 import { BandPicker } from './BandPicker';
 import { MeasurementUploadDialog } from './MeasurementUploadDialog';
@@ -49,7 +52,7 @@ function Overview({ part }: { part: PartDetail }) {
             <tbody>{part.measurements.map((m) => (
               <tr key={m.id}>
                 <td>{m.kind} {m.current && <Tag minimal intent={Intent.PRIMARY}>current</Tag>}</td>
-                <td><a onClick={() => downloadStoredFile(`/parts/${part.id}/measurements/${m.id}/file`, m.fileName).catch(fail)}>{m.fileName}</a></td>
+                <td><a onClick={() => downloadPartFile(part.id, 'measurements', m.id, m.fileName).catch(fail)}>{m.fileName}</a></td>
                 <td>{m.pointCount}</td><td>{fmt(m.fromMhz, 1)}–{fmt(m.toMhz, 1)}</td><td>{mm(m.groundLengthMm, m.groundWidthMm)}</td><td className="bw-muted">{m.sourceFormat}</td>
               </tr>
             ))}</tbody>
@@ -71,7 +74,7 @@ function Documents({ part }: { part: PartDetail }) {
         <HTMLTable compact striped>
           <thead><tr><th>Title</th><th>Kind</th><th>Type</th><th>Size</th><th>SHA-256</th></tr></thead>
           <tbody>{part.documents.map((d) => (
-            <tr key={d.id}><td><a onClick={() => downloadStoredFile(`/parts/${part.id}/documents/${d.id}/file`, d.fileName).catch(fail)}>{d.title}</a></td><td>{d.kind}</td><td>{d.contentType}</td><td>{(d.sizeBytes / 1024).toFixed(1)} KiB</td><td className="bw-mono">{d.sha256.slice(0, 16)}…</td></tr>
+            <tr key={d.id}><td><a onClick={() => downloadPartFile(part.id, 'documents', d.id, d.fileName).catch(fail)}>{d.title}</a></td><td>{d.kind}</td><td>{d.contentType}</td><td>{(d.sizeBytes / 1024).toFixed(1)} KiB</td><td className="bw-mono">{d.sha256.slice(0, 16)}…</td></tr>
           ))}</tbody>
         </HTMLTable>
       )}

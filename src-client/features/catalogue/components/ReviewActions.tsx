@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button, Dialog, DialogBody, DialogFooter, FormGroup, Intent, OverlayToaster, Position, TextArea } from '@blueprintjs/core';
-import { type ReviewAction, useReviewPart } from '../api/part-mutations';
+import { type ReviewAction, useReviewPart } from '../api/review-part';
 import type { PartDetail } from '../types';
 
 export interface ReviewActionsProps {

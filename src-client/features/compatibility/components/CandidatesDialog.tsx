@@ -3,7 +3,8 @@ import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { useHasRole } from '../../../lib/session';
 import { useCandidates } from '../api/get-candidates';
-import { useChoosePart, useShortlistPart } from '../api/save-assignment';
+import { useChoosePart } from '../api/choose-part';
+import { useShortlistPart } from '../api/shortlist-part';
 import { STATUS_LOOK } from './cell-status';
 
 export interface CandidatesDialogProps {

@@ -1,7 +1,8 @@
 import { Button, Callout, Drawer, DrawerSize, Intent, Tag } from '@blueprintjs/core';
 import { FrequencyChart } from '../../../components/FrequencyChart';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
-import { usePartMeasurements, usePoints } from '../api/get-part-curves';
+import { usePoints } from '../api/get-measurement-points';
+import { usePartMeasurements } from '../api/get-part-measurements';
 import type { Finding, Matrix, MatrixCell, MatrixRow, MeasurementPoints } from '../types';
 import { STATUS_LOOK } from './cell-status';
 

@@ -1,14 +1,12 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { useMemo } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { getBandSetsQueryOptions, getBandsQueryOptions } from '../../../api/bands';
 import type { BandChoice, BandSetChoice } from '../types';
-import { productKeys } from './product-keys';
 
-/** The band library and band sets, for picking a radio's bands. */
-export const getBandChoices = async () => {
-  const [bands, sets] = await Promise.all([apiRequest<BandChoice[]>('/bands'), apiRequest<BandSetChoice[]>('/band-sets')]);
-  return { bands, sets };
-};
-
-export const getBandChoicesQueryOptions = () => queryOptions({ queryKey: productKeys.bandChoices(), queryFn: getBandChoices, staleTime: 5 * 60_000 });
-
-export const useBandChoices = () => useQuery(getBandChoicesQueryOptions());
+/** The band library and band sets, for picking a radio's bands (the same cache the band pages use). */
+export function useBandChoices() {
+  const bands = useQuery(getBandsQueryOptions<BandChoice>());
+  const sets = useQuery(getBandSetsQueryOptions<BandSetChoice>());
+  const data = useMemo(() => (bands.data && sets.data ? { bands: bands.data, sets: sets.data } : undefined), [bands.data, sets.data]);
+  return { data, isPending: bands.isPending || sets.isPending, error: bands.error ?? sets.error };
+}

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { productKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
 import type { HistoryEntry } from '../types';
-import { productKeys } from './product-keys';
 
 export const getProductHistory = (id: number) => apiRequest<{ items: HistoryEntry[]; total: number }>(`/products/${id}/history`);
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { productKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
 import type { ProductSummary } from '../types';
-import { productKeys } from './product-keys';
 
 export const getProducts = () => apiRequest<ProductSummary[]>('/products');
 

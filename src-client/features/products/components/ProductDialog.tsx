@@ -1,7 +1,8 @@
 import { FormEvent, useState } from 'react';
 import { Button, Callout, Checkbox, Dialog, DialogBody, DialogFooter, FormGroup, InputGroup, Intent, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
-import { useCreateProduct, useUpdateProduct } from '../api/save-product';
+import { useCreateProduct } from '../api/create-product';
+import { useUpdateProduct } from '../api/update-product';
 import { type ProductDetail, type ProductSummary, REGIONS } from '../types';
 import { numberOrNull, textOf } from './form-values';
 

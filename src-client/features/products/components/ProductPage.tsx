@@ -7,7 +7,7 @@ import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { paths } from '../../../app/routes/paths';
 import { useHasRole, useSession } from '../../../lib/session';
 import { useProduct } from '../api/get-product';
-import { useDeleteProduct } from '../api/save-product';
+import { useDeleteProduct } from '../api/delete-product';
 import type { ProductDetail } from '../types';
 import { ProductDialog } from './ProductDialog';
 import { ProductHistory } from './ProductHistory';

@@ -7,7 +7,7 @@ import { QueryState } from '../../../components/QueryState';
 import { paths } from '../../../app/routes/paths';
 import { useHasRole } from '../../../lib/session';
 import { useDeletedProducts, useProducts } from '../api/get-products';
-import { useRestoreProduct } from '../api/save-product';
+import { useRestoreProduct } from '../api/restore-product';
 import { type ProductSummary, TECHNOLOGY_SHORT_LABELS } from '../types';
 import { ProductDialog } from './ProductDialog';
 

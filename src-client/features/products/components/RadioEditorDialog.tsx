@@ -2,7 +2,8 @@ import { FormEvent, useMemo, useState } from 'react';
 import { Button, Callout, Dialog, DialogBody, DialogFooter, FormGroup, HTMLSelect, InputGroup, Intent, Tag, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
 import { useBandChoices } from '../api/get-band-choices';
-import { useCreateRadio, useUpdateRadio } from '../api/save-radio';
+import { useCreateRadio } from '../api/create-radio';
+import { useUpdateRadio } from '../api/update-radio';
 import { type BandChoice, CONNECTOR_LABELS, type Connector, type Polarization, POLARIZATIONS, type Radio, RECEIVE_ONLY, type Technology, TECHNOLOGY_LABELS } from '../types';
 import { numberOrNull, textOf } from './form-values';
 

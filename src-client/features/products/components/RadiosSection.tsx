@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Alert, Button, HTMLTable, Intent, NonIdealState, OverlayToaster, Position, Section, SectionCard, Tag } from '@blueprintjs/core';
-import { useDeleteRadio } from '../api/save-radio';
+import { useDeleteRadio } from '../api/delete-radio';
 import { CONNECTOR_LABELS, type ProductDetail, type Radio, TECHNOLOGY_LABELS } from '../types';
 import { RadioEditorDialog } from './RadioEditorDialog';
 

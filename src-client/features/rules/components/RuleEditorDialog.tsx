@@ -2,7 +2,10 @@ import { useEffect, useState } from 'react';
 import { Button, Callout, Dialog, DialogBody, DialogFooter, HTMLTable, Intent, Tag, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
 import { useRule, useRuleVersions } from '../api/get-rules';
-import { useCreateRule, usePreviewRule, useUpdateRule, useValidateRule } from '../api/save-rule';
+import { useCreateRule } from '../api/create-rule';
+import { usePreviewRule } from '../api/preview-rule';
+import { useUpdateRule } from '../api/update-rule';
+import { useValidateRule } from '../api/validate-rule';
 import type { RulePreview, RuleProblem } from '../types';
 
 export interface RuleEditorDialogProps {

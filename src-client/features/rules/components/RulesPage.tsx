@@ -5,7 +5,7 @@ import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { useHasRole } from '../../../lib/session';
 import { useRules } from '../api/get-rules';
-import { useSetRuleEnabled } from '../api/save-rule';
+import { useSetRuleEnabled } from '../api/set-rule-enabled';
 import type { RuleSummary } from '../types';
 import { RuleEditorDialog } from './RuleEditorDialog';
 

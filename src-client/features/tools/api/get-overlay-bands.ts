@@ -1,7 +1,7 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { useMemo } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { getBandsQueryOptions } from '../../../api/bands';
 import type { OverlayBand } from '../types';
-import { toolKeys } from './tool-keys';
 
 interface LibraryBand {
   id: number;
@@ -35,16 +35,16 @@ export function overlayFromLibrary(band: LibraryBand): OverlayBand | null {
   return { key: `band-${band.id}`, label: band.designation, fromHz: fromMHz * 1e6, toHz: toMHz * 1e6 };
 }
 
-export const getOverlayBands = async (): Promise<{ bands: OverlayBand[]; fromLibrary: boolean }> => {
-  try {
-    const library = await apiRequest<LibraryBand[]>('/bands');
-    const bands = library.map(overlayFromLibrary).filter((b): b is OverlayBand => b !== null);
-    return bands.length ? { bands: bands.sort((a, b) => a.fromHz - b.fromHz), fromLibrary: true } : { bands: BUILT_IN_BANDS, fromLibrary: false };
-  } catch {
-    return { bands: BUILT_IN_BANDS, fromLibrary: false };
-  }
-};
+/** The library's bands as overlays, lowest first; an empty or unreadable library gives the built-in list. */
+export function overlaysFromLibrary(library: LibraryBand[] | undefined): { bands: OverlayBand[]; fromLibrary: boolean } {
+  const bands = (library ?? []).map(overlayFromLibrary).filter((b): b is OverlayBand => b !== null);
+  return bands.length ? { bands: bands.sort((a, b) => a.fromHz - b.fromHz), fromLibrary: true } : { bands: BUILT_IN_BANDS, fromLibrary: false };
+}
 
-export const getOverlayBandsQueryOptions = () => queryOptions({ queryKey: toolKeys.bands(), queryFn: getOverlayBands, staleTime: 5 * 60_000 });
-
-export const useOverlayBands = () => useQuery(getOverlayBandsQueryOptions());
+/** The same cache the band pages use; undefined only during the first attempt to load it (a failure falls back at once). */
+export function useOverlayBands() {
+  const library = useQuery(getBandsQueryOptions<LibraryBand>());
+  const loading = library.data === undefined && library.isFetching && library.failureCount === 0;
+  const data = useMemo(() => (loading ? undefined : overlaysFromLibrary(library.data)), [loading, library.data]);
+  return { data };
+}

@@ -5,5 +5,4 @@ export const toolKeys = {
   conversion: (input: ConversionRequest) => [...toolKeys.all, 'conversion', input] as const,
   linkBudget: (input: LinkBudgetRequest) => [...toolKeys.all, 'link-budget', input] as const,
   matching: (input: MatchingRequest) => [...toolKeys.all, 'matching', input] as const,
-  bands: () => [...toolKeys.all, 'bands'] as const,
 };

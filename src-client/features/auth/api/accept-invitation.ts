@@ -8,10 +8,7 @@ export interface SetPasswordInput {
   name?: string;
 }
 
-/** Accepting an invitation and finishing a reset both set a password with an e-mailed token. */
+/** Accepting an invitation sets a password (and a name) with the e-mailed token. */
 export const acceptInvitation = (input: SetPasswordInput) => apiRequest<LoginResult>('/auth/accept-invitation', { method: 'POST', body: input });
-export const resetPassword = (input: SetPasswordInput) =>
-  apiRequest<LoginResult>('/auth/password-reset', { method: 'POST', body: { token: input.token, password: input.password } });
 
 export const useAcceptInvitation = () => useMutation({ mutationFn: acceptInvitation });
-export const useResetPassword = () => useMutation({ mutationFn: resetPassword });

@@ -1,0 +1,65 @@
+import { QueryClient } from '@tanstack/react-query';
+import { describe, expect, it } from 'vitest';
+import { invalidateAssignment, invalidatePart, invalidateRadio, invalidateVerdicts } from './invalidation';
+import { bandKeys, candidateKeys, matrixKeys, partKeys, productKeys } from './query-keys';
+
+/** A cache holding one entry under each key a page may show, all fresh. */
+function filledCache() {
+  const queryClient = new QueryClient();
+  const keys = {
+    product7: productKeys.detail(7),
+    product8: productKeys.detail(8),
+    productList: productKeys.list(),
+    history7: productKeys.history(7),
+    matrix7: matrixKeys.product(7),
+    matrix8: matrixKeys.product(8),
+    candidates7: candidateKeys.radio(7, 70),
+    candidates8: candidateKeys.radio(8, 80),
+    part5: partKeys.detail(5),
+    part5Ranges: partKeys.detail(5, '791-862'),
+    part6: partKeys.detail(6),
+    points5: partKeys.points(5, 50),
+    search: partKeys.search({ q: 'chip' }),
+    queue: partKeys.reviewQueue(),
+    bands: bandKeys.list(),
+  };
+  for (const key of Object.values(keys)) queryClient.setQueryData(key, { cached: true });
+  const stale = () =>
+    Object.entries(keys)
+      .filter(([, key]) => queryClient.getQueryState(key)?.isInvalidated)
+      .map(([name]) => name)
+      .sort();
+  return { queryClient, stale };
+}
+
+describe(invalidateRadio.name, () => {
+  it("marks stale the product, its history, the list, and that product's matrix and candidates only", async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidateRadio(queryClient, 7);
+    expect(stale()).toEqual(['candidates7', 'history7', 'matrix7', 'product7', 'productList']);
+  });
+});
+
+describe(invalidatePart.name, () => {
+  it('marks stale the part under every range choice, searches, the queue and every verdict, not other parts or curves', async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidatePart(queryClient, 5);
+    expect(stale()).toEqual(['candidates7', 'candidates8', 'matrix7', 'matrix8', 'part5', 'part5Ranges', 'queue', 'search']);
+  });
+});
+
+describe(invalidateAssignment.name, () => {
+  it("marks stale that product's matrix and candidates", async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidateAssignment(queryClient, 8);
+    expect(stale()).toEqual(['candidates8', 'matrix8']);
+  });
+});
+
+describe(invalidateVerdicts.name, () => {
+  it('marks every matrix and candidate list stale', async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidateVerdicts(queryClient);
+    expect(stale()).toEqual(['candidates7', 'candidates8', 'matrix7', 'matrix8']);
+  });
+});

@@ -1,0 +1,96 @@
+import type { ReactNode } from 'react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { renderHook, waitFor } from '@testing-library/react';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { candidateKeys, matrixKeys } from '../api/query-keys';
+import { useBands } from '../features/bands/api/get-bands';
+import { usePartCoverage } from '../features/bands/api/get-part-coverage';
+import { useLibraryBands } from '../features/catalogue/api/get-library-bands';
+import { usePart } from '../features/catalogue/api/get-part';
+import { useParts } from '../features/catalogue/api/get-parts';
+import { useReviewPart } from '../features/catalogue/api/review-part';
+import { useCandidates } from '../features/compatibility/api/get-candidates';
+import { useMatrix } from '../features/compatibility/api/get-matrix';
+import { usePartMeasurements } from '../features/compatibility/api/get-part-measurements';
+import { useBandChoices } from '../features/products/api/get-band-choices';
+import { useProduct } from '../features/products/api/get-product';
+import { useUpdateRadio } from '../features/products/api/update-radio';
+import { useOverlayBands } from '../features/tools/api/get-overlay-bands';
+
+// Several features on one page read the same server resources; these tests hold them to one cache entry each.
+
+const band = { id: 1, technology: 'lte', designation: 'B20', name: 'E-UTRA 20', duplex: 'FDD', ranges: [{ role: 'uplink', fromMHz: 832, toMHz: 862 }] };
+const part = { id: 5, manufacturer: 'Kestrel', mpn: 'KA-1', title: 'Chip', version: 1, coveredRanges: [], measurements: [] };
+const answers: Record<string, unknown> = {
+  'GET /api/bands': [band],
+  'GET /api/band-sets': [],
+  'GET /api/parts': { items: [part], total: 1 },
+  'GET /api/parts/5': part,
+  'POST /api/parts/5/approval': part,
+  'GET /api/products/7': { id: 7, name: 'Tracker', radios: [] },
+  'PATCH /api/products/7/radios/70': { id: 70 },
+  'GET /api/products/7/matrix': { productId: 7, productName: 'Tracker', rows: [], columns: [], cells: [], rules: '' },
+  'GET /api/products/7/radios/70/candidates': { productId: 7, radioId: 70, radioName: 'LTE', evaluated: 0, candidates: [] },
+};
+
+let requests: string[];
+const count = (request: string) => requests.filter((r) => r === request).length;
+
+function setup() {
+  // The app's own stale time: without invalidation, nothing here would refetch for 30 s.
+  const queryClient = new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, retry: false } } });
+  const wrapper = ({ children }: { children: ReactNode }) => <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
+  return { queryClient, wrapper };
+}
+
+beforeEach(() => {
+  requests = [];
+  vi.stubGlobal('fetch', vi.fn(async (url: string, init?: RequestInit) => {
+    const request = `${init?.method ?? 'GET'} ${new URL(url, 'http://localhost').pathname}`;
+    requests.push(request);
+    if (!(request in answers)) return new Response(JSON.stringify({ code: 'NOT_FOUND', message: request }), { status: 404 });
+    return new Response(JSON.stringify(answers[request]), { status: 200 });
+  }));
+});
+
+afterEach(() => vi.unstubAllGlobals());
+
+describe('shared resources', () => {
+  it('reads the band library once for the four features that show it', async () => {
+    const { wrapper } = setup();
+    const { result } = renderHook(() => [useBands().data, useLibraryBands().data, useBandChoices().data, useOverlayBands().data] as const, { wrapper });
+    await waitFor(() => expect(result.current.every((data) => data !== undefined)).toBe(true));
+    expect(result.current[3]?.fromLibrary).toBe(true);
+    expect(count('GET /api/bands')).toBe(1);
+  });
+
+  it('reads a part once for the catalogue, the band strip and the matrix cell panel', async () => {
+    const { wrapper } = setup();
+    const { result } = renderHook(() => [usePart(5).data, usePartCoverage(5).data, usePartMeasurements(5).data] as const, { wrapper });
+    await waitFor(() => expect(result.current.every((data) => data !== undefined)).toBe(true));
+    expect(count('GET /api/parts/5')).toBe(1);
+  });
+
+  it("refreshes the product's matrix and candidates on the same page when a radio is edited", async () => {
+    const { queryClient, wrapper } = setup();
+    const { result } = renderHook(() => ({ product: useProduct(7), matrix: useMatrix(7), candidates: useCandidates(7, 70), updateRadio: useUpdateRadio() }), { wrapper });
+    await waitFor(() => expect(result.current.matrix.data && result.current.candidates.data && result.current.product.data).toBeTruthy());
+    const invalidate = vi.spyOn(queryClient, 'invalidateQueries');
+    await result.current.updateRadio.mutateAsync({ productId: 7, radioId: 70, version: 1, name: 'LTE main' });
+    expect(invalidate).toHaveBeenCalledWith({ queryKey: matrixKeys.product(7) });
+    expect(invalidate).toHaveBeenCalledWith({ queryKey: candidateKeys.product(7) });
+    await waitFor(() => expect(count('GET /api/products/7/matrix')).toBe(2));
+    expect(count('GET /api/products/7/radios/70/candidates')).toBe(2);
+    expect(count('GET /api/products/7')).toBe(2);
+  });
+
+  it('refreshes the part, the search, the band strip and the matrix when a part is reviewed', async () => {
+    const { wrapper } = setup();
+    const { result } = renderHook(() => ({ page: usePart(5), search: useParts({ q: 'KA' }), strip: usePartCoverage(5), matrix: useMatrix(7), review: useReviewPart() }), { wrapper });
+    await waitFor(() => expect(result.current.page.data && result.current.search.data && result.current.strip.data && result.current.matrix.data).toBeTruthy());
+    await result.current.review.mutateAsync({ id: 5, action: 'approval', version: 1 });
+    await waitFor(() => expect(count('GET /api/products/7/matrix')).toBe(2));
+    expect(count('GET /api/parts/5')).toBe(2);
+    expect(count('GET /api/parts')).toBe(2);
+  });
+});

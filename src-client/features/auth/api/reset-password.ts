@@ -1,0 +1,10 @@
+import { useMutation } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { SetPasswordInput } from './accept-invitation';
+import type { LoginResult } from './login';
+
+/** Finishing a reset sets a password with the e-mailed token. */
+export const resetPassword = (input: SetPasswordInput) =>
+  apiRequest<LoginResult>('/auth/password-reset', { method: 'POST', body: { token: input.token, password: input.password } });
+
+export const useResetPassword = () => useMutation({ mutationFn: resetPassword });
