@@ -2,6 +2,8 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { duplicateKeyName } from '../common/duplicate-key';
+import { RevisionCache, type RevisionReader } from '../common/revision-cache';
+import { catalogueRevisionReader } from '../parts/catalogue-revision';
 import { isRetryableLockError, transactionWithRetry } from '../common/transaction-retry';
 import { AuditService, type AuditEntryView } from '../audit/audit.service';
 import type { AuthUser } from '../common/auth.decorators';
@@ -75,6 +77,7 @@ const assignmentDto = (a: PartAssignment, part: { mpn: string; title: string } |
 
 const COLUMN_CACHE_SIZE = 2000;
 const MATRIX_CACHE_SIZE = 200;
+const FACTS_CACHE_SIZE = 600_000;
 
 /** The compatibility matrix, candidates and assignments over the products, parts and rules of the other domains. */
 const ASSIGNMENT_ATTEMPTS = 6;
@@ -83,14 +86,16 @@ const retryAssignmentRace = (error: unknown) => isRetryableLockError(error) || (
 
 @Injectable()
 export class CompatibilityService {
-  /** Facts per (band requirement × part), valid for one catalogue revision. */
-  private readonly facts = new FactsCache(600_000);
-  private factsRevision = -1;
-  /** Evaluation data of parts asked for by id (matrix columns), valid for one catalogue revision. */
-  private readonly columnsById = new Map<number, PartColumn>();
-  private readonly matrixCache = new Map<string, MatrixDto>();
-  private catalogue: { revision: number; parts: PartColumn[] } | null = null;
-  private catalogueLoading: Promise<{ revision: number; parts: PartColumn[] }> | null = null;
+  // Every cache below holds values of one catalogue revision: the one its caller read before computing.
+  /** Facts per (band requirement × part): one FactsCache per catalogue revision. */
+  private readonly facts = new RevisionCache<FactsCache>(1);
+  /** Evaluation data of parts asked for by id (matrix columns). */
+  private readonly columns = new RevisionCache<PartColumn, number>(COLUMN_CACHE_SIZE);
+  /** Matrices by product, asked parts, rule signature and the fingerprint of everything else they read. */
+  private readonly matrices = new RevisionCache<MatrixDto>(MATRIX_CACHE_SIZE);
+  /** The approved catalogue the candidates are ranked from. */
+  private readonly catalogue = new RevisionCache<PartColumn[]>(1);
+  private readonly catalogueRevision: RevisionReader;
 
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
@@ -99,17 +104,13 @@ export class CompatibilityService {
     private readonly partData: PartDataService,
     private readonly limits: RegulatoryLimitsService,
     private readonly audit: AuditService,
-  ) {}
+  ) {
+    this.catalogueRevision = catalogueRevisionReader(dataSource);
+  }
 
-  private async catalogueRevision(): Promise<number> {
-    const rows: { revision: string | number }[] = await this.dataSource.query('SELECT revision FROM catalogue_revision WHERE id = 1');
-    const revision = Number(rows[0]?.revision ?? 0);
-    if (revision !== this.factsRevision) {
-      this.facts.clear();
-      this.columnsById.clear();
-      this.factsRevision = revision;
-    }
-    return revision;
+  /** The facts of `revision`; a caller holding an older revision gets a cache of its own that nobody else reads. */
+  private factsAt(revision: number): FactsCache {
+    return this.facts.getOrCreate('facts', revision, () => new FactsCache(FACTS_CACHE_SIZE));
   }
 
   private partKey = (part: PartEvaluationData) => String(part.partId);
@@ -129,17 +130,25 @@ export class CompatibilityService {
     return [...new Set([...rows.filter((r) => r.state === 'chosen'), ...rows.filter((r) => r.state === 'shortlisted')].map((r) => r.partId))];
   }
 
-  /** Call after catalogueRevision(), which empties the cache when the catalogue changed. */
-  private async partColumns(ids: number[]): Promise<PartColumn[]> {
-    const unknown = ids.filter((id) => !this.columnsById.has(id));
+  /** The parts' evaluation data, loaded after `revision` was read. */
+  private async partColumns(ids: number[], revision: number): Promise<PartColumn[]> {
+    const columns = new Map<number, PartColumn>();
+    for (const id of ids) {
+      const cached = this.columns.get(id, revision);
+      if (cached) columns.set(id, cached);
+    }
+    const unknown = ids.filter((id) => !columns.has(id));
     if (unknown.length > 0) {
       const found = await this.partData.getPartData(unknown);
       const missing = unknown.filter((id) => !found.some((p) => p.id === id));
       if (missing.length > 0) throw new DomainError('PART_NOT_FOUND', `part ${missing.join(', ')} was not found`, 404, { field: 'parts', missing });
-      if (this.columnsById.size + found.length > COLUMN_CACHE_SIZE) this.columnsById.clear();
-      for (const part of found) this.columnsById.set(part.id, toEvaluationData(part));
+      for (const part of found) {
+        const column = toEvaluationData(part);
+        columns.set(part.id, column);
+        this.columns.set(part.id, revision, column);
+      }
     }
-    return ids.map((id) => this.columnsById.get(id)!);
+    return ids.map((id) => columns.get(id)!);
   }
 
   /**
@@ -147,7 +156,7 @@ export class CompatibilityService {
    * made through any other: the product, its radios and their bands, its assignments, the band ranges,
    * the regulatory limits and the catalogue revision (rules are keyed by their own signature).
    */
-  private async matrixFingerprint(productId: number): Promise<string> {
+  private async matrixFingerprint(productId: number): Promise<{ fingerprint: string; revision: number }> {
     const [row] = await this.dataSource.query(
       `SELECT
          (SELECT CONCAT(version, '/', updated_at) FROM products WHERE id = ? AND deleted_at IS NULL) AS product,
@@ -162,29 +171,25 @@ export class CompatibilityService {
       [productId, productId, productId, productId],
     );
     if (row.product === null) throw new NotFoundError('product', productId);
-    return Object.values(row).map(String).join('|');
+    return { fingerprint: Object.values(row).map(String).join('|'), revision: Number(row.catalogue) };
   }
 
-  /** The matrix of a product; answers are reused until the fingerprint or the rules change. */
+  /** The matrix of a product; answers are reused until the fingerprint, the catalogue revision or the rules change. */
   async matrix(productId: number, partIds?: number[], rules?: RuleDefinition[]): Promise<MatrixDto> {
-    if (rules) return this.computeMatrix(productId, partIds, { compiled: this.rules.compile(rules), signature: '' });
+    if (rules) return this.computeMatrix(productId, partIds, { compiled: this.rules.compile(rules), signature: '' }, await this.catalogueRevision.current());
     const ruleSet = await this.rules.currentRuleSet();
-    const key = `${productId}|${partIds?.join(',') ?? '*'}|${ruleSet.signature}|${await this.matrixFingerprint(productId)}`;
-    const cached = this.matrixCache.get(key);
-    if (cached) return cached;
-    const result = await this.computeMatrix(productId, partIds, ruleSet);
-    if (this.matrixCache.size >= MATRIX_CACHE_SIZE) this.matrixCache.delete(this.matrixCache.keys().next().value!);
-    this.matrixCache.set(key, result);
-    return result;
+    const { fingerprint, revision } = await this.matrixFingerprint(productId);
+    const key = `${productId}|${partIds?.join(',') ?? '*'}|${ruleSet.signature}|${fingerprint}`;
+    return this.matrices.getOrLoad(key, revision, () => this.computeMatrix(productId, partIds, ruleSet, revision));
   }
 
-  private async computeMatrix(productId: number, partIds: number[] | undefined, ruleSet: { compiled: CompiledRuleSet; signature: string }): Promise<MatrixDto> {
+  /** Everything read here is read after `revision` was, so the matrix is at least that new. */
+  private async computeMatrix(productId: number, partIds: number[] | undefined, ruleSet: { compiled: CompiledRuleSet; signature: string }, revision: number): Promise<MatrixDto> {
     const product = await this.products.getWithRadios(productId);
-    await this.catalogueRevision();
     const ids = partIds ?? (await this.assignedPartIds(productId));
-    const columns = await this.partColumns(ids);
+    const columns = await this.partColumns(ids, revision);
     const requirements = await this.requirements(product);
-    const matrix = evaluateMatrix(requirements, columns.map((c) => c.data), ruleSet.compiled, { cache: this.facts, partKey: this.partKey });
+    const matrix = evaluateMatrix(requirements, columns.map((c) => c.data), ruleSet.compiled, { cache: this.factsAt(revision), partKey: this.partKey });
     const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { productId } });
     return {
       productId,
@@ -199,18 +204,9 @@ export class CompatibilityService {
     };
   }
 
-  /** The approved catalogue, reloaded only when the catalogue revision moved. */
-  private async approvedCatalogue(): Promise<PartColumn[]> {
-    const revision = await this.catalogueRevision();
-    if (this.catalogue?.revision === revision) return this.catalogue.parts;
-    if (!this.catalogueLoading) {
-      this.catalogueLoading = this.partData
-        .loadCatalogueForEvaluation(['approved'])
-        .then((parts) => ({ revision, parts: parts.map(toEvaluationData) }))
-        .finally(() => (this.catalogueLoading = null));
-    }
-    this.catalogue = await this.catalogueLoading;
-    return this.catalogue.parts;
+  /** The approved catalogue at `revision`, reloaded only when the catalogue revision moved. */
+  private approvedCatalogue(revision: number): Promise<PartColumn[]> {
+    return this.catalogue.getOrLoad('approved', revision, async () => (await this.partData.loadCatalogueForEvaluation(['approved'])).map(toEvaluationData));
   }
 
   async candidates(productId: number, radioId: number, limit = 20): Promise<CandidatesDto> {
@@ -218,9 +214,10 @@ export class CompatibilityService {
     const radio = product.radios.find((r) => r.id === radioId);
     if (!radio) throw new NotFoundError('radio', radioId);
     const requirements = (await this.requirements(product)).filter((r) => r.radioId === radioId);
-    const catalogue = await this.approvedCatalogue();
+    const revision = await this.catalogueRevision.current();
+    const catalogue = await this.approvedCatalogue(revision);
     const { compiled } = await this.rules.currentRuleSet();
-    const ranked = rankCandidates(requirements, catalogue.map((c) => c.data), compiled, { cache: this.facts, partKey: this.partKey, limit });
+    const ranked = rankCandidates(requirements, catalogue.map((c) => c.data), compiled, { cache: this.factsAt(revision), partKey: this.partKey, limit });
     const manufacturers = new Map(catalogue.map((c) => [c.data.partId, c.manufacturer]));
     const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { radioId } });
     return {

@@ -4,6 +4,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import type { AuthUser } from '../common/auth.decorators';
+import { LruMap } from '../common/revision-cache';
 import { DomainError, NotFoundError, ValidationFailedError, VersionConflictError } from '../common/domain-error';
 import { CompiledRuleSet } from './engine/compiled-evaluator';
 import { type RuleDefinition, type RuleProblem, validateRuleDefinition } from './engine/rule-definition';
@@ -27,7 +28,8 @@ function invalid(problems: RuleProblem[]): ValidationFailedError {
 @Injectable()
 export class RulesService {
   private readonly fileRules: ReadonlyMap<string, RuleDefinition>;
-  private readonly compiled = new Map<string, CompiledRuleSet>();
+  /** Compiled rule sets by a hash of their content: never stale, only bounded. */
+  private readonly compiled = new LruMap<string, CompiledRuleSet>(20);
 
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
@@ -53,7 +55,6 @@ export class RulesService {
     const signature = createHash('sha256').update(JSON.stringify(rules)).digest('hex');
     let set = this.compiled.get(signature);
     if (!set) {
-      if (this.compiled.size > 20) this.compiled.clear();
       set = new CompiledRuleSet(rules);
       this.compiled.set(signature, set);
     }

@@ -1,4 +1,5 @@
-import type { EntityManager } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
+import { RevisionReader } from '../common/revision-cache';
 
 /**
  * Marks a part changed for every server's search index: bumps the one-row catalogue revision (its
@@ -9,4 +10,12 @@ export async function touchPart(manager: EntityManager, partId: number): Promise
   const [{ revision }] = await manager.query('SELECT LAST_INSERT_ID() AS revision');
   await manager.query('UPDATE parts SET revision = ? WHERE id = ?', [revision, partId]);
   return Number(revision);
+}
+
+/** The catalogue revision, read fresh for each caller (see RevisionReader); every cache of part data keys on it. */
+export function catalogueRevisionReader(dataSource: DataSource): RevisionReader {
+  return new RevisionReader(async () => {
+    const rows: { revision: string | number }[] = await dataSource.query('SELECT revision FROM catalogue_revision WHERE id = 1');
+    return Number(rows[0]?.revision ?? 0);
+  });
 }

@@ -4,10 +4,11 @@ import { DataSource, EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/auth.decorators';
 import { NotFoundError, ValidationFailedError, type FieldProblem } from '../common/domain-error';
 import { AuditService, diffFields } from '../audit/audit.service';
+import { RevisionCache, type RevisionReader } from '../common/revision-cache';
 import { transactionWithRetry } from '../common/transaction-retry';
 import type { FrequencyRange } from '../rf/curves';
 import { PartAlternate } from './alternate.entity';
-import { touchPart } from './catalogue-revision';
+import { catalogueRevisionReader, touchPart } from './catalogue-revision';
 import { PartDocument } from './document.entity';
 import { Manufacturer } from './manufacturer.entity';
 import { Measurement } from './measurement.entity';
@@ -61,13 +62,16 @@ const DETAIL_CACHE_SIZE = 500;
 
 @Injectable()
 export class PartsService {
-  /** Part pages by part and asked ranges, valid while the catalogue revision stands (every write bumps it). */
-  private readonly detailCache = new Map<string, { revision: number; owner: PartOwner; detail: Omit<PartDetailDto, 'permissions'> }>();
+  /** Part pages by part and asked ranges, at the catalogue revision read before building them (every part write bumps it). */
+  private readonly details = new RevisionCache<{ owner: PartOwner; detail: Omit<PartDetailDto, 'permissions'> }>(DETAIL_CACHE_SIZE);
+  private readonly catalogueRevision: RevisionReader;
 
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly audit: AuditService,
-  ) {}
+  ) {
+    this.catalogueRevision = catalogueRevisionReader(dataSource);
+  }
 
   /** Locks the part row for the rest of the transaction; 404 if it does not exist. */
   async lockPart(manager: EntityManager, id: number): Promise<Part> {
@@ -165,18 +169,11 @@ export class PartsService {
 
   /** The part with everything the part page shows; figures per spec band and per asked range. */
   async getDetail(id: number, actor: AuthUser, ranges: FrequencyRange[] = []): Promise<PartDetailDto> {
-    const [{ revision }] = await this.dataSource.query('SELECT revision FROM catalogue_revision WHERE id = 1');
+    const revision = await this.catalogueRevision.current();
     const key = `${id}|${ranges.map((r) => `${r.fromHz}-${r.toHz}`).join(',')}`;
-    let entry = this.detailCache.get(key);
-    if (!entry || entry.revision !== Number(revision)) {
-      const built = await this.buildDetail(id, ranges);
-      entry = { revision: Number(revision), ...built };
-      if (this.detailCache.size >= DETAIL_CACHE_SIZE) this.detailCache.delete(this.detailCache.keys().next().value!);
-      this.detailCache.set(key, entry);
-    }
-    const { owner } = entry;
+    const { owner, detail } = await this.details.getOrLoad(key, revision, () => this.buildDetail(id, ranges));
     return {
-      ...entry.detail,
+      ...detail,
       permissions: {
         edit: partAccess.canEdit(actor, owner), uploadData: partAccess.canUploadData(actor, owner), submit: partAccess.canSubmit(actor, owner),
         review: partAccess.canReview(actor), editSourcing: partAccess.canEditSourcing(actor),

@@ -4,6 +4,8 @@ import { DataSource } from 'typeorm';
 import type { AuthUser } from '../../common/auth.decorators';
 import { ValidationFailedError } from '../../common/domain-error';
 import type { FrequencyRange } from '../../rf/curves';
+import type { RevisionReader } from '../../common/revision-cache';
+import { catalogueRevisionReader } from '../catalogue-revision';
 import { loadCurrentCurves } from '../measurement-curves';
 import { specBandClaim } from '../part-mapping';
 import type { MeasurementKind } from '../part.types';
@@ -71,10 +73,12 @@ export class CatalogueSearchService {
   private readonly index = new CatalogueIndex();
   private loadedRevision = -1;
   private refreshing: Promise<void> | null = null;
-  private revisionRead: Promise<number> | null = null;
-  private queuedRevisionRead: Promise<number> | null = null;
+  /** A read that began after the caller's call, so a client sees its own writes. */
+  private readonly revision: RevisionReader;
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {
+    this.revision = catalogueRevisionReader(dataSource);
+  }
 
   async search(dto: PartSearchDto, actor: AuthUser): Promise<PartListDto> {
     const query = this.toQuery(dto, actor, dto.limit ?? 50);
@@ -104,32 +108,8 @@ export class CatalogueSearchService {
     };
   }
 
-  /**
-   * The catalogue revision from a read that began after this call, so a client sees its own writes;
-   * callers arriving while one read runs share the next one instead of each sending their own.
-   */
-  private currentRevision(): Promise<number> {
-    if (!this.revisionRead) return this.startRevisionRead();
-    const running = this.revisionRead;
-    this.queuedRevisionRead ??= running.then(() => undefined, () => undefined).then(() => {
-      this.queuedRevisionRead = null;
-      return this.startRevisionRead();
-    });
-    return this.queuedRevisionRead;
-  }
-
-  private startRevisionRead(): Promise<number> {
-    const read = (this.dataSource.query('SELECT revision FROM catalogue_revision WHERE id = 1') as Promise<{ revision: string | number }[]>).then(([row]) => Number(row.revision));
-    this.revisionRead = read;
-    const clear = () => {
-      if (this.revisionRead === read) this.revisionRead = null;
-    };
-    read.then(clear, clear);
-    return read;
-  }
-
   async ensureFresh(): Promise<void> {
-    const revision = await this.currentRevision();
+    const revision = await this.revision.current();
     if (revision === this.loadedRevision) return;
     // One reload at a time; requests arriving meanwhile wait for it.
     while (this.refreshing) await this.refreshing;
