@@ -20,7 +20,6 @@ const shared = {
 module.exports = {
   projects: [
     { ...shared, displayName: 'unit', testMatch: ['<rootDir>/src-server/**/*.spec.ts', '<rootDir>/test/reference/**/*.spec.ts'] },
-    // Sign-ins hash with bcrypt; on a busy 2-core machine a beforeAll can pass jest's 5 s default.
-    { ...shared, displayName: 'e2e', testMatch: ['<rootDir>/test/e2e/**/*.e2e-spec.ts'], testTimeout: 30_000 },
+    { ...shared, displayName: 'e2e', testMatch: ['<rootDir>/test/e2e/**/*.e2e-spec.ts'], setupFilesAfterEnv: ['<rootDir>/test/e2e-timeout.js'] },
   ],
 };
