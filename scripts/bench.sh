@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
 # npm run bench: every benchmark in src-server/bench/*-bench.ts, each printing its own figures.
+# They are built apart from the production build (tsconfig.bench.json, into dist/bench) with the server code they start.
 # They run against a separate database (bandwright_bench) and their own fake-service ports.
 source "$(dirname "$0")/common.sh"
 export NODE_ENV=test
@@ -15,6 +16,7 @@ DB_WAS_RUNNING=0; db_ping && DB_WAS_RUNNING=1
 db_start
 db_create bandwright_bench
 build_server
+log "building benchmarks"; npx tsc -p tsconfig.bench.json
 build_client
 fakes_start bench
 trap 'fakes_stop bench; [ $DB_WAS_RUNNING = 1 ] || db_stop' EXIT
@@ -22,7 +24,7 @@ node dist/server/database/migrate.js >/dev/null
 node dist/server/database/seed.js >/dev/null
 
 only="${1:-}"
-for bench in dist/server/bench/*-bench.js; do
+for bench in dist/bench/bench/*-bench.js; do
   name=$(basename "$bench" .js)
   [ -n "$only" ] && [[ "$name" != *"$only"* ]] && continue
   log "$name"

@@ -101,5 +101,6 @@ fakes_stop() {
   if [ -f "$pidfile" ]; then kill "$(cat "$pidfile")" 2>/dev/null || true; rm -f "$pidfile"; fi
 }
 
-build_server() { log "building server"; npx tsc -p tsconfig.server.build.json; }
+# Benchmarks left the production build (tsconfig.bench.json); an older build's copy is removed.
+build_server() { log "building server"; rm -rf dist/server/bench; npx tsc -p tsconfig.server.build.json; }
 build_client() { log "building client"; npx vite build --logLevel warn; }

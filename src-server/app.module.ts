@@ -1,4 +1,4 @@
-import { Module } from '@nestjs/common';
+import { type DynamicModule, Module } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
@@ -28,7 +28,6 @@ import { CompatibilityModule } from './compatibility/compatibility.module';
 
 @Module({
   imports: [
-    ConfigModule,
     TypeOrmModule.forRootAsync({
       inject: [APP_CONFIG],
       useFactory: (config: AppConfig) => ({ ...dataSourceOptions(config), retryAttempts: 20, retryDelay: 1000 }),
@@ -36,7 +35,7 @@ import { CompatibilityModule } from './compatibility/compatibility.module';
     // Only the routes that opt in with AuthThrottlerGuard are limited (sign-in, invitations, resets);
     // the counters are in the database so that several instances share one allowance.
     ThrottlerModule.forRootAsync({ inject: [DataSource], useFactory: (dataSource: DataSource) => ({ throttlers: AUTH_THROTTLERS, storage: new DatabaseThrottlerStorage(dataSource) }) }),
-    // Async, so the configuration is read once at boot (after .env) and a refusal reaches main's clean message.
+    // Async: the configuration reaches it through APP_CONFIG, as it reaches every other module.
     ServeStaticModule.forRootAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => [{ rootPath: resolve(config.clientDir), exclude: ['/api/{*path}'] }] }),
     AuditModule,
     MailModule,
@@ -57,4 +56,9 @@ import { CompatibilityModule } from './compatibility/compatibility.module';
     { provide: APP_GUARD, useClass: JwtAuthGuard },
   ],
 })
-export class AppModule {}
+export class AppModule {
+  /** The app with the configuration its entry point loaded and validated once (main.ts, or the test harness). */
+  static forRoot(config: AppConfig): DynamicModule {
+    return { module: AppModule, imports: [ConfigModule.forRoot(config)] };
+  }
+}

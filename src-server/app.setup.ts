@@ -4,14 +4,14 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import helmet from 'helmet';
 import { AppModule } from './app.module';
-import { loadConfig } from './config/app-config';
+import { APP_CONFIG, type AppConfig } from './config/app-config';
 import { JsonLogger } from './common/json-logger';
 import { requestIdMiddleware } from './common/request-context';
 import { verifyJsonBody } from './common/json-body';
 
 /** Everything main.ts does except listen, so the tests run the production app. */
 export function configureApp(app: INestApplication): INestApplication {
-  const config = loadConfig();
+  const config = app.get<AppConfig>(APP_CONFIG);
   // X-Forwarded-For is believed only when the direct peer is a proxy on this machine (README, "Behind a proxy").
   app.getHttpAdapter().getInstance().set('trust proxy', 'loopback');
   app.use(requestIdMiddleware);
@@ -53,8 +53,8 @@ export function configureApp(app: INestApplication): INestApplication {
   return app;
 }
 
-export async function createApp(): Promise<NestExpressApplication> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule, { logger: new JsonLogger() });
+export async function createApp(config: AppConfig): Promise<NestExpressApplication> {
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(config), { logger: new JsonLogger() });
   configureApp(app);
   return app;
 }

@@ -6,7 +6,7 @@ import { createApp } from './app.setup';
 async function main(): Promise<void> {
   if (existsSync('.env')) process.loadEnvFile('.env');
   const config = loadConfig();
-  const app = await createApp();
+  const app = await createApp(config);
   await app.listen(config.port, config.host);
 }
 

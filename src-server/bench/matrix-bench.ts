@@ -2,7 +2,7 @@
  * Matrix benchmark (issue 6): a product of 8 radios and 30 bands against a 10,000-part catalogue, the
  * candidates call for one radio over the whole catalogue, and the rule-evaluation path next to a plain
  * JavaScript predicate loop over the same facts in the same run. Figures are printed, not asserted.
- * Run: npx tsc -p tsconfig.server.build.json && node dist/server/bench/matrix-bench.js
+ * Run: npx tsc -p tsconfig.bench.json && node dist/bench/bench/matrix-bench.js
  */
 import { loadRuleFiles } from '../compatibility/rule-files';
 import { CompiledRuleSet } from '../compatibility/engine/compiled-evaluator';
@@ -10,7 +10,7 @@ import { computeFacts, computeRowFacts } from '../compatibility/engine/compute-f
 import { FactsCache, evaluateMatrix, rankCandidates, requirementKey } from '../compatibility/engine/matrix';
 import { ReferenceEvaluator } from '../compatibility/engine/reference-evaluator';
 import { completeFacts } from '../compatibility/engine/rule-binding';
-import { benchmarkProductRequirements } from '../compatibility/engine/synthetic';
+import { benchmarkProductRequirements } from './synthetic-product';
 import type { CellStatus, Facts, PartEvaluationData, Polarization, ReviewState } from '../compatibility/engine/types';
 import { reflectionCurveFromGamma } from '../rf/reflection';
 import { generateBenchParts } from './catalogue-seed-10k';

@@ -5,6 +5,7 @@
  */
 import 'reflect-metadata';
 import { createApp } from '../app.setup';
+import { loadConfig } from '../config/app-config';
 import { complex } from '../rf/complex';
 import { gammaFromImpedance } from '../rf/mismatch';
 import { writeTouchstone } from '../rf/touchstone-writer';
@@ -14,7 +15,6 @@ const ROUNDS = 5;
 const TARGET_MS = 1000;
 const PORT = Number(process.env.BENCH_PORT ?? 3200);
 const DEMO_EMAIL = 'engineer@bandwright.test';
-const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? 'bandwright-demo';
 
 /** An invented dual-resonance antenna on port 1 and a lossy thru, written as a measurement instrument would (9 digits, MA, GHz). */
 function synthesiseFile(): string {
@@ -37,8 +37,10 @@ function synthesiseFile(): string {
   return writeTouchstone({ version: 1, ports: 2, format: 'MA', frequencyUnit: 'GHz', frequenciesHz, data: columns, formatNumber, comments: ['invented benchmark data'] });
 }
 
+const config = loadConfig();
+
 async function signIn(base: string): Promise<string> {
-  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: DEMO_EMAIL, password: DEMO_PASSWORD }) });
+  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: DEMO_EMAIL, password: config.demoPassword }) });
   if (res.status !== 200) throw new Error(`sign-in as ${DEMO_EMAIL} failed: ${res.status} ${await res.text()}`);
   return ((await res.json()) as { accessToken: string }).accessToken;
 }
@@ -64,7 +66,7 @@ async function main(): Promise<void> {
   const text = synthesiseFile();
   const file = new Blob([text], { type: 'application/octet-stream' });
   const sizeMb = file.size / 1e6;
-  const app = await createApp();
+  const app = await createApp(config);
   app.useLogger(['error']);
   await app.listen(PORT, '127.0.0.1');
   const base = `http://127.0.0.1:${PORT}`;

@@ -1,7 +1,7 @@
 /**
  * Touchstone benchmark: writes a 100,000-point .s2p, parses it and computes its matched ranges,
  * then times Debian's scikit-rf reading the same file in the same run. Figures are printed, not asserted.
- * Run: npx tsc -p tsconfig.server.build.json && node dist/server/bench/rf-bench.js
+ * Run: npx tsc -p tsconfig.bench.json && node dist/bench/bench/rf-bench.js
  */
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';

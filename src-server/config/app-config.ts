@@ -9,7 +9,6 @@ export interface AppConfig {
   db: { host: string; port: number; user: string; password: string; name: string };
   jwt: { secret: string; expiresInSeconds: number };
   smtp: { host: string; port: number; from: string };
-  mailWebUrl: string;
   s3: { endpoint: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string };
   uploadMaxBytes: number;
   /** Test-only: pause after an upload's object is stored, so a test can kill the process there. 0 (off) by default, always 0 in production. */
@@ -59,7 +58,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const port = int('PORT', 3000, 1, 65535);
   const s3Port = int('S3_PORT', 4569, 1, 65535);
   const smtpPort = int('SMTP_PORT', 1025, 1, 65535);
-  const mailWebPort = int('MAIL_WEB_PORT', 1080, 1, 65535);
 
   const config: AppConfig = {
     nodeEnv,
@@ -75,7 +73,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     },
     jwt: { secret: jwtSecret, expiresInSeconds: int('JWT_EXPIRES_IN_SECONDS', 8 * 3600, 60, 30 * 24 * 3600) },
     smtp: { host: str('SMTP_HOST', '127.0.0.1'), port: smtpPort, from: str('MAIL_FROM', 'Bandwright <no-reply@bandwright.test>') },
-    mailWebUrl: str('MAIL_WEB_URL', `http://127.0.0.1:${mailWebPort}`),
     s3: {
       endpoint: str('S3_ENDPOINT', `http://127.0.0.1:${s3Port}`),
       region: str('S3_REGION', 'us-east-1'),

@@ -1,9 +1,10 @@
-import { Global, Module } from '@nestjs/common';
-import { APP_CONFIG, loadConfig } from './app-config';
+import { type DynamicModule, Module } from '@nestjs/common';
+import { APP_CONFIG, type AppConfig } from './app-config';
 
-@Global()
-@Module({
-  providers: [{ provide: APP_CONFIG, useFactory: () => loadConfig() }],
-  exports: [APP_CONFIG],
-})
-export class ConfigModule {}
+/** Provides the configuration the entry point loaded once, to every module that injects APP_CONFIG. */
+@Module({})
+export class ConfigModule {
+  static forRoot(config: AppConfig): DynamicModule {
+    return { module: ConfigModule, global: true, providers: [{ provide: APP_CONFIG, useValue: config }], exports: [APP_CONFIG] };
+  }
+}

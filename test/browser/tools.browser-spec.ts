@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { APP_URL, openBrowser, signIn, type BrowserSession } from '../support/browser';
 
-// rf-reference.md §4, Example A: VSWR 3.0 / 1.5 / 2.0 at 820 / 868 / 915 MHz, so with VSWR ≤ 2 the matched
+// Example A (invented 1-port data): VSWR 3.0 / 1.5 / 2.0 at 820 / 868 / 915 MHz, so with VSWR ≤ 2 the matched
 // range runs from the interpolated crossing at 846.667 MHz up to the last point, 915 MHz.
 const EXAMPLE_A = `! Example A - invented data
 # MHz S RI R 50

@@ -4,7 +4,7 @@ import { createApiApp, type DemoRole, demoTokens } from '../support/api-app';
 import { writeTouchstone } from '../../src-server/rf/touchstone-writer';
 import { TOUCHSTONE_MAX_BYTES } from '../../src-server/rf/touchstone';
 
-// rf-reference.md §4, Example A (1-port, v1, RI).
+// Example A: invented 1-port data, Touchstone v1, RI.
 const EXAMPLE_A = `! Example A - invented data
 # MHz S RI R 50
 820   0.5000   0.0000
@@ -12,14 +12,14 @@ const EXAMPLE_A = `! Example A - invented data
 915   0.0000  -0.3333
 `;
 
-// rf-reference.md §4, Example B (2-port, v1, MA; S21 before S12).
+// Example B: invented 2-port data, Touchstone v1, MA; S21 before S12 (Touchstone 2.0, [Two-Port Data Order]).
 const EXAMPLE_B = `! Example B - invented data; columns S11 S21 S12 S22
 # GHz S MA R 50
 2.40  0.333 -30  0.90 -60  0.05 10  0.20 45
 2.45  0.100  15  0.91 -75  0.05  5  0.18 40
 `;
 
-// rf-reference.md §4, Example C (2-port, v2, DB, 12_21).
+// Example C: invented 2-port data, Touchstone v2, DB, row-major order 12_21 (Touchstone 2.0, [Two-Port Data Order]).
 const EXAMPLE_C = `[Version] 2.0
 # MHz S DB R 50
 [Number of Ports] 2
@@ -114,7 +114,7 @@ describe('RF tools (API)', () => {
       expect(res.body).toMatchObject({ version: '1.0', ports: 1, parameter: 'S', format: 'RI', referenceOhms: [50], points: 3, port: 1, criterion: 'vswr', resampled: false });
       expect(res.body.minFrequencyHz).toBe(820e6);
       expect(res.body.maxFrequencyHz).toBe(915e6);
-      // rf-reference.md §4 Example A expected values (Pozar 4th ed. §2.3 formulas)
+      // Example A expected values (Pozar 4th ed. §2.3 formulas)
       const [a, b, c] = res.body.curve;
       expect(a.vswr).toBeCloseTo(3.0, 6);
       expect(a.returnLossDb).toBeCloseTo(6.02, 2);
@@ -125,7 +125,7 @@ describe('RF tools (API)', () => {
       expect(c.returnLossDb).toBeCloseTo(9.54, 2);
       expect(res.body.bestMatch).toMatchObject({ frequencyHz: 868e6 });
       expect(res.body.bestMatch.vswr).toBeCloseTo(1.5, 6);
-      // VSWR 2 ⇔ |Γ| 1/3 (rf-reference §3.2); 915 MHz holds |Γ| 0.3333 < 1/3, so the range reaches the last point.
+      // VSWR 2 ⇔ |Γ| 1/3 (Pozar 4th ed. §2.3); 915 MHz holds |Γ| 0.3333 < 1/3, so the range reaches the last point.
       // The lower edge: |Γ| falls linearly from 0.5 (820) to 0.2 (868) and crosses 1/3 at 820 + 48 × (1/6)/0.3 = 846.67 MHz.
       expect(res.body.matchedRanges).toHaveLength(1);
       expect(res.body.matchedRanges[0].fromHz / 1e6).toBeCloseTo(846.667, 2);
@@ -135,7 +135,7 @@ describe('RF tools (API)', () => {
     });
 
     it('narrows the ranges for the −10 dB criterion (VSWR 1.925) and widens them for VSWR 3', async () => {
-      // rf-reference.md §0 trap 4: −10 dB is |Γ| 0.3162, stricter than VSWR 2; 915 MHz (|Γ| 0.3333) drops out.
+      // Pozar 4th ed. §2.3: −10 dB is |Γ| 0.3162, stricter than VSWR 2; 915 MHz (|Γ| 0.3333) drops out.
       const strict = await analyze(EXAMPLE_A, 'a.s1p', { criterion: 'return-loss-10db' }).expect(200);
       expect(strict.body.thresholdVswr).toBeCloseTo(1.925, 3);
       expect(strict.body.matchedRanges).toHaveLength(1);
@@ -147,7 +147,7 @@ describe('RF tools (API)', () => {
     });
 
     it('analyses either port of a version 1 two-port file (Example B)', async () => {
-      // rf-reference.md §4 Example B: S11 0.333 ∠−30°, S22 0.20 ∠45° at 2.40 GHz.
+      // Example B: S11 0.333 ∠−30°, S22 0.20 ∠45° at 2.40 GHz.
       const port1 = await analyze(EXAMPLE_B, 'example-b.s2p').expect(200);
       expect(port1.body.ports).toBe(2);
       expect(port1.body.curve[0].gammaMagnitude).toBeCloseTo(0.333, 9);
@@ -160,7 +160,7 @@ describe('RF tools (API)', () => {
     it('reads a version 2 file (Example C) uploaded as .ts', async () => {
       const res = await analyze(EXAMPLE_C, 'example-c.ts').expect(200);
       expect(res.body).toMatchObject({ version: '2.0', ports: 2, format: 'DB' });
-      // S11 −9.54 dB ⇒ RL 9.54 dB, VSWR ≈ 2 (rf-reference §3.2).
+      // S11 −9.54 dB ⇒ RL 9.54 dB, VSWR ≈ 2 (Pozar 4th ed. §2.3).
       expect(res.body.curve[0].returnLossDb).toBeCloseTo(9.54, 9);
       expect(res.body.curve[0].vswr).toBeCloseTo(2.0, 2);
     });
@@ -231,7 +231,7 @@ describe('RF tools (API)', () => {
       expect(second.exact.elements[0].inductanceNh).toBeCloseTo(46.1, 1);
       expect(second.exact.elements[1]).toMatchObject({ connection: 'series', kind: 'capacitor' });
       expect(second.exact.elements[1].capacitancePf).toBeCloseTo(2.6, 2);
-      // IEC 60063 E24 (rf-reference §3.9): 0.923 pF → 0.91 pF, 38.98 nH → 39 nH.
+      // IEC 60063:2015 E24: 0.923 pF → 0.91 pF, 38.98 nH → 39 nH.
       expect(first.snapped.elements[0].capacitancePf).toBe(0.91);
       expect(first.snapped.elements[1].inductanceNh).toBe(39);
       expect(first.snappedReturnLossDb).toBeGreaterThan(20);
@@ -246,7 +246,7 @@ describe('RF tools (API)', () => {
 
     it('snaps to E12 when asked: 0.923 pF → 1.0 pF', async () => {
       const res = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, series: 'E12' }).expect(200);
-      // rf-reference §3.9: 0.923 pF → E12 1.0 pF
+      // IEC 60063:2015: 0.923 pF → E12 1.0 pF
       expect(res.body.solutions[0].snapped.elements[0].capacitancePf).toBe(1);
       expect(res.body.solutions[0].exact.sweep).toEqual([]);
     });
@@ -271,7 +271,7 @@ describe('RF tools (API)', () => {
     });
 
     it('matches the FSPL table: 2.4 GHz is 60.05 dB at 10 m and 100.05 dB at 1 km', async () => {
-      // rf-reference.md §3.5 (Friis, Proc. IRE 34 (1946)): with a −100.05 dBm receiver, 40 dB of margin at 10 m reaches 0 dB at 1 km.
+      // Friis, Proc. IRE 34 (1946): with a −100.05 dBm receiver, 40 dB of margin at 10 m reaches 0 dB at 1 km.
       const res = await http().post('/api/rf/link-budget').set(auth()).send(base).expect(200);
       expect(res.body.pathLossDb).toBeCloseTo(60.05, 2);
       expect(res.body.receivedDbm).toBeCloseTo(-60.05, 2);
@@ -283,7 +283,7 @@ describe('RF tools (API)', () => {
     });
 
     it('gives EIRP and ERP: 25 mW (13.98 dBm) into a λ/2 dipole is 16.13 dBm EIRP, 13.98 dBm ERP; 868 MHz at 1 km loses 91.22 dB', async () => {
-      // rf-reference.md §2.5 (EIRP = ERP + 2.15 dB, ITU RR Art. 1) and §3.5 (868 MHz, 1 km: 91.22 dB).
+      // EIRP = ERP + 2.15 dB (ITU RR Art. 1); free-space loss at 868 MHz over 1 km: 91.22 dB (Friis, Proc. IRE 34 (1946)).
       const res = await http()
         .post('/api/rf/link-budget')
         .set(auth())
@@ -316,7 +316,7 @@ describe('RF tools (API)', () => {
       expect(fieldsOf((await http().post('/api/rf/conversions').set(auth()).send({ vswr: 2, z0Ohms: 75 }).expect(400)).body)).toEqual(['z0Ohms']);
     });
 
-    // rf-reference.md §3.2 (Pozar 4th ed. §2.3): VSWR, |Γ|, RL, reflected %, transmitted %, ML.
+    // Pozar 4th ed. §2.3: VSWR, |Γ|, RL, reflected %, transmitted %, ML.
     it.each([
       [1.5, 0.2, 13.98, 4.0, 96.0, 0.177],
       [2, 0.3333, 9.54, 11.11, 88.89, 0.512],
@@ -333,7 +333,7 @@ describe('RF tools (API)', () => {
     });
 
     it('converts return loss 10 dB to |Γ| 0.3162, VSWR 1.925, ML 0.458 dB', async () => {
-      // rf-reference.md §3.2, "Inverse"
+      // Pozar 4th ed. §2.3, the inverse direction
       const res = await http().post('/api/rf/conversions').set(auth()).send({ returnLossDb: 10 }).expect(200);
       expect(res.body.reflection.gammaMagnitude).toBeCloseTo(0.3162, 4);
       expect(res.body.reflection.vswr).toBeCloseTo(1.925, 3);
@@ -346,7 +346,7 @@ describe('RF tools (API)', () => {
     });
 
     it('converts 50 + j50 Ω on 50 Ω to Γ 0.2 + j0.4, |Γ| 0.4472 ∠63.43°, VSWR 2.618', async () => {
-      // rf-reference.md §3.6 (Pozar 4th ed. §2.3)
+      // Γ = (Z − Z0)/(Z + Z0), Pozar 4th ed. §2.3
       const res = await http().post('/api/rf/conversions').set(auth()).send({ impedanceOhms: { re: 50, im: 50 } }).expect(200);
       expect(res.body.gamma.re).toBeCloseTo(0.2, 9);
       expect(res.body.gamma.im).toBeCloseTo(0.4, 9);
@@ -356,7 +356,7 @@ describe('RF tools (API)', () => {
     });
 
     it('converts 40 + j70 Ω on 100 Ω to |Γ| 0.589 ∠104.04°, SWR 3.87, RL 4.60 dB', async () => {
-      // Pozar 4th ed. Example 2.2, via rf-reference.md §3.6
+      // Pozar 4th ed. Example 2.2
       const res = await http().post('/api/rf/conversions').set(auth()).send({ impedanceOhms: { re: 40, im: 70 }, z0Ohms: 100 }).expect(200);
       expect(res.body.gamma.magnitude).toBeCloseTo(0.589, 3);
       expect(res.body.gamma.angleDeg).toBeCloseTo(104.04, 2);
@@ -369,14 +369,14 @@ describe('RF tools (API)', () => {
       [1575.42e6, 190.29, 95.15, 47.57],
       [2.45e9, 122.36, 61.18, 30.59],
     ])('gives λ, λ/2, λ/4 at %s Hz as %s / %s / %s mm', async (frequencyHz, full, half, quarter) => {
-      // rf-reference.md §3.1 (c exact, BIPM SI Brochure 9th ed.)
+      // λ = c/f with c exact (BIPM SI Brochure 9th ed.)
       const res = await http().post('/api/rf/conversions').set(auth()).send({ frequencyHz }).expect(200);
       expect(res.body.wavelength.wavelengthMm).toBeCloseTo(full, 1);
       expect(res.body.wavelength.halfWaveMm).toBeCloseTo(half, 1);
       expect(res.body.wavelength.quarterWaveMm).toBeCloseTo(quarter, 1);
     });
 
-    it('converts 25 mW to 13.979 dBm and back (rf-reference §0 trap 6)', async () => {
+    it('converts 25 mW to 13.979 dBm and back (regulators quote mW; kept unrounded)', async () => {
       const toDbm = await http().post('/api/rf/conversions').set(auth()).send({ mw: 25 }).expect(200);
       expect(toDbm.body.power.dbm).toBeCloseTo(13.979, 3);
       expect(toDbm.body.power.watts).toBeCloseTo(0.025, 9);
@@ -385,7 +385,7 @@ describe('RF tools (API)', () => {
     });
 
     it('converts efficiency 50 % to −3.01 dB and −6 dB to 25.1 %', async () => {
-      // rf-reference.md §3.3 (definition of the decibel)
+      // the definition of the decibel
       const pct = await http().post('/api/rf/conversions').set(auth()).send({ efficiencyPct: 50 }).expect(200);
       expect(pct.body.efficiency.db).toBeCloseTo(-3.01, 2);
       const db = await http().post('/api/rf/conversions').set(auth()).send({ efficiencyDb: -6 }).expect(200);

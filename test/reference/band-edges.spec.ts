@@ -3,7 +3,7 @@ import { resolve } from 'node:path';
 
 /**
  * The seeded band library (catalog-seed/bands.json) against values typed from the published tables,
- * as transcribed in /work/shared/reference/rf-reference.md §1 with their tags.
+ * as the 3GPP, IEEE, Bluetooth, LoRa Alliance and GNSS documents publish them.
  */
 interface SeedRange { role: string; fromMHz: number; toMHz: number }
 interface SeedBand { id: number; technology: string; designation: string; duplex: string; ranges: SeedRange[]; centreMHz?: number; bandwidthMHz?: number; source: { document: string; table: string; note?: string } }

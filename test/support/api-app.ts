@@ -3,6 +3,7 @@ import { Test } from '@nestjs/testing';
 import request from 'supertest';
 import { AppModule } from '../../src-server/app.module';
 import { configureApp } from '../../src-server/app.setup';
+import { loadConfig } from '../../src-server/config/app-config';
 
 export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? 'bandwright-demo';
 export const DEMO = {
@@ -12,9 +13,9 @@ export const DEMO = {
 } as const;
 export type DemoRole = keyof typeof DEMO;
 
-/** The production app module, in-process, against the test database the test command prepared. */
-export async function createApiApp(): Promise<INestApplication> {
-  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+/** The production app module, in-process, against the test database the test command prepared; configuration from the environment unless given. */
+export async function createApiApp(config = loadConfig()): Promise<INestApplication> {
+  const moduleRef = await Test.createTestingModule({ imports: [AppModule.forRoot(config)] }).compile();
   const app = moduleRef.createNestApplication({ logger: ['error'] });
   configureApp(app);
   await app.init();

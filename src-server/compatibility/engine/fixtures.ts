@@ -3,7 +3,7 @@ import { gammaMagnitudeFromVswr } from '../../rf/mismatch';
 import type { SampledCurve } from '../../rf/curves';
 import type { BandRange, PartEvaluationData, RadioBandRequirement } from './types';
 
-/** Constructed parts and bands for tests and the benchmark: curves built to put a fact exactly where wanted. */
+/** Constructed parts and bands for the engine tests: curves built to put a fact exactly where wanted. */
 
 export const MHZ = 1e6;
 

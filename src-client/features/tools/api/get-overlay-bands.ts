@@ -14,7 +14,7 @@ interface LibraryBand {
 /**
  * The short built-in list, used when the band library cannot be read.
  * Edges: 3GPP TS 36.101 Table 5.5-1 (B3, B8, B20); IS-GPS-200 (L1 ± 10.23 MHz); LoRa Alliance RP002 (EU868, US915);
- * 47 CFR 15.247 (2.4 GHz ISM); 5 GHz Wi-Fi channels 36–165 from IEEE 802.11-2020 (rf-reference.md §1).
+ * 47 CFR 15.247 (2.4 GHz ISM); 5 GHz Wi-Fi channels 36–165 from IEEE 802.11-2020.
  */
 export const BUILT_IN_BANDS: OverlayBand[] = [
   { key: 'b20', label: 'LTE B20', fromHz: 791e6, toHz: 862e6 },

@@ -1,7 +1,7 @@
-import { complex } from '../../rf/complex';
-import { gammaFromImpedance } from '../../rf/mismatch';
-import { reflectionCurveFromGamma } from '../../rf/reflection';
-import type { BandRange, PartEvaluationData, RadioBandRequirement, Technology } from './types';
+import { complex } from '../rf/complex';
+import { gammaFromImpedance } from '../rf/mismatch';
+import { reflectionCurveFromGamma } from '../rf/reflection';
+import type { BandRange, PartEvaluationData, RadioBandRequirement, Technology } from '../compatibility/engine/types';
 
 /**
  * Invented parts and a 30-band product for the benchmark: series-RLC resonances (Z = R + jQR(f/f0 − f0/f)),
