@@ -265,17 +265,17 @@ trailing text after [End] is ignored`;
       expect(errorOf(() => sParameter(readTouchstone(EXAMPLE_A), 2, 2)).code).toBe('TOUCHSTONE_NO_SUCH_PORT');
     });
 
-    it(`refuses files above TOUCHSTONE_MAX_BYTES (${TOUCHSTONE_MAX_BYTES} bytes, at least 20 MB) with status 413`, () => {
+    it(`refuses files above TOUCHSTONE_MAX_BYTES (${TOUCHSTONE_MAX_BYTES} bytes, at least 20 MB) as a matter of size`, () => {
       expect(TOUCHSTONE_MAX_BYTES).toBeGreaterThanOrEqual(20 * 1000 * 1000);
       const oversized = new Uint8Array(TOUCHSTONE_MAX_BYTES + 1).fill(0x20);
       const error = errorOf(() => readTouchstone(oversized));
       expect(error.code).toBe('TOUCHSTONE_TOO_LARGE');
-      expect(error.status).toBe(413);
+      expect(error.kind).toBe('too-large');
       expect(errorOf(() => readTouchstone(EXAMPLE_A, { maxBytes: 10 })).code).toBe('TOUCHSTONE_TOO_LARGE');
     });
 
-    it('a bad file maps to 422', () => {
-      expect(errorOf(() => readTouchstone('')).status).toBe(422);
+    it('a bad file is refused for its content (the API answers 422: common/touchstone-http-error.ts)', () => {
+      expect(errorOf(() => readTouchstone('')).kind).toBe('malformed');
     });
   });
 
