@@ -1,5 +1,5 @@
 import { type Complex, complex } from './complex';
-import { type BandResult, type FrequencyRange, bandOutsideData, coverageOfBand, interpolateAt, rangesAtMost, sliceBand } from './curves';
+import { type BandResult, type FrequencyRange, bandStatistics, coverageOfBand, interpolateAt, rangesAtMost } from './curves';
 import {
   gammaMagnitudeFromReturnLossDb,
   gammaMagnitudeFromVswr,
@@ -97,12 +97,9 @@ export function matchAt(curve: ReflectionCurve, frequencyHz: number): MatchPoint
 
 /** The worst (highest) VSWR over the band, band edges interpolated. */
 export function worstMatchInBand(curve: ReflectionCurve, band: FrequencyRange): BandResult<{ readonly worst: MatchPoint }> {
-  const outside = bandOutsideData(curve.frequenciesHz, band);
-  if (outside) return outside;
-  const slice = sliceBand(magnitudeCurve(curve), band);
-  let worst = 0;
-  for (let k = 1; k < slice.values.length; k++) if (slice.values[k] > slice.values[worst]) worst = k;
-  return { status: 'ok', worst: matchPoint(slice.frequenciesHz[worst], slice.values[worst]) };
+  const stats = bandStatistics(magnitudeCurve(curve), band);
+  if (stats.status === 'no-data') return stats;
+  return { status: 'ok', worst: matchPoint(stats.maxAtHz, stats.max) };
 }
 
 export interface BandMatch {
