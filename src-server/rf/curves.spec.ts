@@ -49,7 +49,7 @@ describe(bandStatistics.name, () => {
 });
 
 describe(efficiencyInBand.name, () => {
-  it('averages in linear power and shows dB: 50 % ↔ −3.01 dB (rf-reference §3.3)', () => {
+  it('averages in linear power and shows dB: 50 % ↔ −3.01 dB', () => {
     const flat = { frequenciesHz: [1e9, 2e9], values: [50, 50] };
     const result = efficiencyInBand(flat, { fromHz: 1.2e9, toHz: 1.8e9 });
     expect(result.status === 'ok' && result.averageDb).toBeCloseTo(-3.01, 2);

@@ -52,7 +52,7 @@ export function returnLossDbSeries(curve: ReflectionCurve): Float64Array {
   return curve.gammaMagnitude.map(returnLossDbFromGammaMagnitude);
 }
 
-/** VSWR 2:1 (RL 9.54 dB) and |S11| ≤ −10 dB (VSWR 1.925) differ; rf-reference §0 trap 4. */
+/** VSWR 2:1 (RL 9.54 dB) and |S11| ≤ −10 dB (VSWR 1.925) differ (Pozar 4th ed. §2.3). */
 export type MatchCriterion = { readonly kind: 'vswr'; readonly maxVswr: number } | { readonly kind: 'return-loss'; readonly minReturnLossDb: number };
 
 export const DEFAULT_MATCH_CRITERION: MatchCriterion = { kind: 'vswr', maxVswr: 2 };

@@ -9,7 +9,7 @@ const fdd = (ul: [number, number], dl: [number, number]): BandRange[] => [
 ];
 const single = (from: number, to: number, role: BandRange['role']): BandRange[] => [{ fromHz: from * MHZ, toHz: to * MHZ, role }];
 
-// Band edges from rf-reference §1 (3GPP TS 36.101 Table 5.5-1, TS 38.101-1 Table 5.2-1, IS-GPS-200/705, IEEE 802.11, LoRaWAN RP002, IEEE 802.15.4z).
+// Band edges from 3GPP TS 36.101 Table 5.5-1, TS 38.101-1 Table 5.2-1, IS-GPS-200/705, IEEE 802.11, LoRaWAN RP002 and IEEE 802.15.4z.
 const LTE: [string, BandRange[]][] = [
   ['B1', fdd([1920, 1980], [2110, 2170])], ['B2', fdd([1850, 1910], [1930, 1990])], ['B3', fdd([1710, 1785], [1805, 1880])],
   ['B4', fdd([1710, 1755], [2110, 2155])], ['B5', fdd([824, 849], [869, 894])], ['B7', fdd([2500, 2570], [2620, 2690])],

@@ -10,7 +10,7 @@ export const TOUCHSTONE_MAX_LINE_BYTES = 8192;
 export type FrequencyUnit = 'Hz' | 'kHz' | 'MHz' | 'GHz';
 export type NetworkParameter = 'S' | 'Y' | 'Z' | 'H' | 'G';
 export type DataFormat = 'DB' | 'MA' | 'RI';
-/** `21_12` is the version-1 order N11 N21 N12 N22; `12_21` is row-major N11 N12 N21 N22 (rf-reference §0 trap 2). */
+/** `21_12` is the version-1 order N11 N21 N12 N22; `12_21` is row-major N11 N12 N21 N22 (Touchstone 2.0, [Two-Port Data Order]). */
 export type TwoPortDataOrder = '12_21' | '21_12';
 export type MatrixFormat = 'Full' | 'Lower' | 'Upper';
 
