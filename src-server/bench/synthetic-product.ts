@@ -1,80 +1,6 @@
-import { complex } from '../rf/complex';
-import { gammaFromImpedance } from '../rf/mismatch';
-import { reflectionCurveFromGamma } from '../rf/reflection';
-import type { BandRange, PartEvaluationData, RadioBandRequirement, Technology } from '../compatibility/engine/types';
+import type { BandRange, RadioBandRequirement, Technology } from '../compatibility/engine/types';
 
-/**
- * Invented parts and a 30-band product for the benchmark: series-RLC resonances (Z = R + jQR(f/f0 − f0/f)),
- * efficiency and gain that fall away from resonance. Physically shaped, not copied from any part.
- */
-
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-const RESONANCE_CHOICES_MHZ = [[800, 1900], [750, 1800], [880, 2000], [1575], [1590], [2450], [2440, 5500], [868], [915], [3500], [6490], [700, 1750, 2600]];
-
-export function syntheticPart(id: number, points = 201): PartEvaluationData {
-  const random = mulberry32(id * 7919 + 17);
-  const resonances = RESONANCE_CHOICES_MHZ[Math.floor(random() * RESONANCE_CHOICES_MHZ.length)].map((f) => f * (0.94 + random() * 0.12) * 1e6);
-  const q = 2 + random() * 10;
-  const r = 50 * (0.7 + random() * 0.6);
-  const peakEfficiency = 35 + random() * 45;
-  const peakGain = -2 + random() * 6;
-  const fromHz = 500e6;
-  const toHz = 7000e6;
-  const frequenciesHz = new Float64Array(points);
-  const re = new Float64Array(points);
-  const im = new Float64Array(points);
-  const efficiency = new Float64Array(points);
-  const gain = new Float64Array(points);
-  for (let i = 0; i < points; i++) {
-    const f = fromHz + ((toHz - fromHz) * i) / (points - 1);
-    frequenciesHz[i] = f;
-    let best = { re: 1, im: 0 };
-    let bestMagnitude = Infinity;
-    let detune = Infinity;
-    for (const f0 of resonances) {
-      const gamma = gammaFromImpedance(complex(r, q * r * (f / f0 - f0 / f)), 50);
-      const magnitude = Math.hypot(gamma.re, gamma.im);
-      if (magnitude < bestMagnitude) {
-        bestMagnitude = magnitude;
-        best = gamma;
-      }
-      detune = Math.min(detune, Math.abs(f - f0) / f0);
-    }
-    re[i] = best.re;
-    im[i] = best.im;
-    efficiency[i] = peakEfficiency / (1 + (detune * q * 2) ** 2);
-    gain[i] = peakGain + 10 * Math.log10(efficiency[i] / peakEfficiency);
-  }
-  const reviewRoll = random();
-  return {
-    partId: id,
-    mpn: `SYN-${String(id).padStart(5, '0')}`,
-    title: `synthetic antenna ${id}`,
-    reflection: reflectionCurveFromGamma(frequenciesHz, re, im),
-    radiationEfficiencyPercent: { frequenciesHz, values: efficiency },
-    peakGainDbi: { frequenciesHz, values: gain },
-    averageGainDbi: null,
-    specBands: [],
-    evaluationGroundPlane: { lengthMm: 60 + Math.round(random() * 80), widthMm: 30 + Math.round(random() * 30) },
-    polarization: random() < 0.15 ? 'rhcp' : 'linear',
-    reviewState: reviewRoll < 0.8 ? 'approved' : reviewRoll < 0.9 ? 'draft' : 'restricted',
-    lifecycle: random() < 0.9 ? 'active' : random() < 0.5 ? 'nrnd' : 'eol',
-  };
-}
-
-export function syntheticCatalogue(count: number, points = 201): PartEvaluationData[] {
-  return Array.from({ length: count }, (_, i) => syntheticPart(i + 1, points));
-}
+/** An invented 30-band product for the matrix benchmark. */
 
 const MHZ = 1e6;
 const fdd = (ul: [number, number], dl: [number, number]): BandRange[] => [
@@ -83,7 +9,7 @@ const fdd = (ul: [number, number], dl: [number, number]): BandRange[] => [
 ];
 const single = (from: number, to: number, role: BandRange['role']): BandRange[] => [{ fromHz: from * MHZ, toHz: to * MHZ, role }];
 
-// Band edges from rf-reference §1 (3GPP TS 36.101 Table 5.5-1, TS 38.101-1 Table 5.2-1, IS-GPS-200/705, IEEE 802.11, LoRaWAN RP002, IEEE 802.15.4z).
+// Band edges from 3GPP TS 36.101 Table 5.5-1, TS 38.101-1 Table 5.2-1, IS-GPS-200/705, IEEE 802.11, LoRaWAN RP002 and IEEE 802.15.4z.
 const LTE: [string, BandRange[]][] = [
   ['B1', fdd([1920, 1980], [2110, 2170])], ['B2', fdd([1850, 1910], [1930, 1990])], ['B3', fdd([1710, 1785], [1805, 1880])],
   ['B4', fdd([1710, 1755], [2110, 2155])], ['B5', fdd([824, 849], [869, 894])], ['B7', fdd([2500, 2570], [2620, 2690])],

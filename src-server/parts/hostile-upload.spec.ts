@@ -1,3 +1,4 @@
+import { withTouchstoneStatus } from '../common/touchstone-http-error';
 import { readTouchstone } from '../rf/touchstone';
 import { sniffDocumentType } from './document-type';
 import { checkStorableCurve, parseCurveCsv, parseTouchstoneS11 } from './measurement-parsers';
@@ -96,11 +97,11 @@ describe('hostile uploads: each parser stays within a time and memory budget', (
 
   it('Touchstone (Tools): one 32 MiB line is refused by the line length limit', () => {
     const hostile = Buffer.alloc(32 * MIB - 1024, 0x31);
-    const outcome = measure(() => readTouchstone(hostile));
+    const outcome = measure(() => withTouchstoneStatus(() => readTouchstone(hostile)));
     expect(outcome.error).toMatchObject({ status: 422, details: { line: 1 } });
     expectWithin(outcome, { ms: 5000, mib: 16 });
     const longOptionLine = Buffer.from(`# ${'MHz '.repeat((8 * MIB) / 4)}\n1 0 0\n`);
-    const option = measure(() => readTouchstone(longOptionLine));
+    const option = measure(() => withTouchstoneStatus(() => readTouchstone(longOptionLine)));
     expect(option.error).toMatchObject({ code: 'TOUCHSTONE_LINE_TOO_LONG', status: 422, details: { line: 1 } });
     expectWithin(option, { ms: 5000, mib: 16 });
   });

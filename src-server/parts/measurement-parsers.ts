@@ -1,5 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import { DomainError } from '../common/domain-error';
+import { withTouchstoneStatus } from '../common/touchstone-http-error';
 import { reflectionCurveFromNetwork } from '../rf/reflection';
 import { FREQUENCY_UNIT_HZ, type FrequencyUnit, portsFromFileName, readTouchstone } from '../rf/touchstone';
 import { efficiencyDbToPercent } from '../rf/units';
@@ -48,7 +49,7 @@ export class CurveFileError extends DomainError {
 
 /** S11 of a .s1p, or port 1 of a .s2p, through the RF module's Touchstone reader. */
 export function parseTouchstoneS11(bytes: Uint8Array, fileName: string): ParsedCurve {
-  const network = readTouchstone(bytes, { expectedPorts: portsFromFileName(fileName), maxPoints: MEASUREMENT_MAX_POINTS });
+  const network = withTouchstoneStatus(() => readTouchstone(bytes, { expectedPorts: portsFromFileName(fileName), maxPoints: MEASUREMENT_MAX_POINTS }));
   const curve = reflectionCurveFromNetwork(network, 1);
   return {
     kind: 's11',

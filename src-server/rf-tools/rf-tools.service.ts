@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { ValidationFailedError } from '../common/domain-error';
+import { withTouchstoneStatus } from '../common/touchstone-http-error';
 import { angleDeg, magnitude } from '../rf/complex';
 import { evenlySpacedFrequencies, resample } from '../rf/curves';
 import { linkBudget, rangeRatioFromDbDifference } from '../rf/link-budget';
@@ -50,7 +51,7 @@ const finiteOrNull = (value: number): number | null => (Number.isFinite(value) ?
 export class RfToolsService {
   analyzeTouchstone(file: UploadedTouchstone | undefined, options: AnalyzeTouchstoneDto): TouchstoneAnalysisDto {
     if (!file) throw new ValidationFailedError([{ field: 'file', message: 'a Touchstone file (.s1p, .s2p or .ts) is required' }]);
-    const network = readTouchstone(file.buffer, { expectedPorts: portsFromFileName(file.originalname) });
+    const network = withTouchstoneStatus(() => readTouchstone(file.buffer, { expectedPorts: portsFromFileName(file.originalname) }));
     const port = options.port ?? 1;
     if (port > network.ports) throw new ValidationFailedError([{ field: 'port', message: `the file has ${network.ports} port; there is no port ${port}` }]);
     const criterionName = options.criterion ?? 'vswr';

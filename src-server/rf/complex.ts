@@ -8,11 +8,6 @@ export function complex(re: number, im = 0): Complex {
   return { re, im };
 }
 
-export function complexFromPolarDeg(magnitude: number, angleDeg: number): Complex {
-  const angleRad = (angleDeg * Math.PI) / 180;
-  return { re: magnitude * Math.cos(angleRad), im: magnitude * Math.sin(angleRad) };
-}
-
 export function add(a: Complex, b: Complex): Complex {
   return { re: a.re + b.re, im: a.im + b.im };
 }

@@ -1,4 +1,4 @@
-import { bandStatistics, coverageOfBand, efficiencyInBand, evenlySpacedFrequencies, gainInBand, interpolateAt, rangesAtMost, resample } from './curves';
+import { bandStatistics, combinedBandStatistics, coverageOfBand, efficiencyInBand, evenlySpacedFrequencies, firstIndexAbove, gainInBand, interpolateAt, mergeRanges, rangesAtMost, resample } from './curves';
 
 const MHZ = 1e6;
 // Invented efficiency curve in %, 600..1000 MHz.
@@ -49,7 +49,7 @@ describe(bandStatistics.name, () => {
 });
 
 describe(efficiencyInBand.name, () => {
-  it('averages in linear power and shows dB: 50 % ↔ −3.01 dB (rf-reference §3.3)', () => {
+  it('averages in linear power and shows dB: 50 % ↔ −3.01 dB', () => {
     const flat = { frequenciesHz: [1e9, 2e9], values: [50, 50] };
     const result = efficiencyInBand(flat, { fromHz: 1.2e9, toHz: 1.8e9 });
     expect(result.status === 'ok' && result.averageDb).toBeCloseTo(-3.01, 2);
@@ -80,5 +80,38 @@ describe(coverageOfBand.name, () => {
     const coverage = coverageOfBand([{ fromHz: 0, toHz: 2 }, { fromHz: 3, toHz: 4 }], { fromHz: 1, toHz: 5 });
     expect(coverage.coveredFraction).toBeCloseTo(0.5, 12);
     expect(coverage.uncoveredRanges).toEqual([{ fromHz: 2, toHz: 3 }, { fromHz: 4, toHz: 5 }]);
+  });
+});
+
+describe(combinedBandStatistics.name, () => {
+  // Invented |Γ| curve on another grid than the efficiency curve, sharing the sample at 800 MHz.
+  const gamma = { frequenciesHz: [650 * MHZ, 800 * MHZ, 900 * MHZ, 950 * MHZ], values: [0.5, 0.2, 0.3, 0.6] };
+  const total = (percent: number, g: number) => percent * (1 - g * g);
+
+  it('equals bandStatistics of the combined curve built on the edges and both grids, to the bit', () => {
+    const band = { fromHz: 660 * MHZ, toHz: 940 * MHZ };
+    const grid = [660, 700, 800, 900, 940].map((f) => f * MHZ);
+    const combined = { frequenciesHz: grid, values: grid.map((f) => total(interpolateAt(efficiency, f)!, interpolateAt(gamma, f)!)) };
+    for (const averaging of ['linear', 'power-of-db'] as const) {
+      expect(combinedBandStatistics(efficiency, gamma, band, total, averaging)).toEqual(bandStatistics(combined, band, averaging));
+    }
+  });
+
+  it('has no data where either curve stops', () => {
+    expect(combinedBandStatistics(efficiency, gamma, { fromHz: 640 * MHZ, toHz: 700 * MHZ }, total)).toMatchObject({ status: 'no-data', code: 'below-range' });
+  });
+});
+
+describe(mergeRanges.name, () => {
+  it('sorts, joins overlapping and touching ranges, and keeps apart the disjoint ones', () => {
+    expect(mergeRanges([{ fromHz: 5, toHz: 6 }, { fromHz: 1, toHz: 3 }, { fromHz: 3, toHz: 4 }, { fromHz: 2, toHz: 2.5 }])).toEqual([{ fromHz: 1, toHz: 4 }, { fromHz: 5, toHz: 6 }]);
+    expect(mergeRanges([])).toEqual([]);
+  });
+});
+
+describe(firstIndexAbove.name, () => {
+  it('finds the first sample strictly above a frequency', () => {
+    const f = [1, 2, 3, 4];
+    expect([0, 1, 1.5, 2, 4, 5].map((x) => firstIndexAbove(f, x))).toEqual([0, 1, 1, 2, 4, 4]);
   });
 });

@@ -114,24 +114,6 @@ export function evenlySpacedFrequencies(fromHz: number, toHz: number, count: num
   return out;
 }
 
-/** The samples inside the band, with interpolated values at both edges. */
-export function sliceBand(curve: SampledCurve, band: FrequencyRange): { frequenciesHz: number[]; values: number[] } {
-  const f = curve.frequenciesHz;
-  const frequenciesHz = [band.fromHz];
-  const values = [interpolateAt(curve, band.fromHz)!];
-  for (let i = 0; i < f.length; i++) {
-    if (f[i] > band.fromHz && f[i] < band.toHz) {
-      frequenciesHz.push(f[i]);
-      values.push(curve.values[i]);
-    }
-  }
-  if (band.toHz > band.fromHz) {
-    frequenciesHz.push(band.toHz);
-    values.push(interpolateAt(curve, band.toHz)!);
-  }
-  return { frequenciesHz, values };
-}
-
 export type Averaging = 'linear' | 'power-of-db';
 
 export interface BandStatistics {
@@ -144,42 +126,109 @@ export interface BandStatistics {
 }
 
 /**
- * Min, max and frequency-weighted average over [fromHz, toHz] with interpolated edges.
+ * Min, max and frequency-weighted average of points fed in frequency order: the one place these
+ * statistics are computed. 'power-of-db' compares dB values but averages them as linear power.
+ */
+export class BandStatisticsAccumulator {
+  min = Infinity;
+  max = -Infinity;
+  minAtHz: number;
+  maxAtHz: number;
+  private area = 0;
+  private count = 0;
+  private lastHz = NaN;
+  private lastAveraged = NaN;
+
+  constructor(
+    private readonly band: FrequencyRange,
+    private readonly averaging: Averaging = 'linear',
+  ) {
+    this.minAtHz = band.fromHz;
+    this.maxAtHz = band.fromHz;
+  }
+
+  add(frequencyHz: number, value: number): void {
+    if (value < this.min) {
+      this.min = value;
+      this.minAtHz = frequencyHz;
+    }
+    if (value > this.max) {
+      this.max = value;
+      this.maxAtHz = frequencyHz;
+    }
+    const averaged = this.averaging === 'linear' ? value : 10 ** (value / 10);
+    // Trapezoids, so uneven spacing is weighted fairly.
+    if (this.count > 0) this.area += ((this.lastAveraged + averaged) / 2) * (frequencyHz - this.lastHz);
+    this.count += 1;
+    this.lastHz = frequencyHz;
+    this.lastAveraged = averaged;
+  }
+
+  get average(): number {
+    const mean = this.count === 1 ? this.lastAveraged : this.area / (this.band.toHz - this.band.fromHz);
+    return this.averaging === 'linear' ? mean : 10 * Math.log10(mean);
+  }
+
+  result(): { readonly status: 'ok' } & BandStatistics {
+    return { status: 'ok', min: this.min, minAtHz: this.minAtHz, max: this.max, maxAtHz: this.maxAtHz, average: this.average };
+  }
+}
+
+/** First sample index strictly above frequencyHz (binary search). */
+export function firstIndexAbove(frequenciesHz: ArrayLike<number>, frequencyHz: number): number {
+  let i = segmentIndex(frequenciesHz, frequencyHz);
+  while (i < frequenciesHz.length && frequenciesHz[i] <= frequencyHz) i++;
+  return i;
+}
+
+/**
+ * Min, max and frequency-weighted average over [fromHz, toHz]: the values at both edges (interpolated)
+ * and the samples strictly inside, without copying them.
  * 'power-of-db' averages dB values as linear power and returns dB (for gains in dBi); values
  * already in linear power (efficiency in %) use 'linear', which is then the power average.
  */
 export function bandStatistics(curve: SampledCurve, band: FrequencyRange, averaging: Averaging = 'linear'): BandResult<BandStatistics> {
   const outside = bandOutsideData(curve.frequenciesHz, band);
   if (outside) return outside;
-  const slice = sliceBand(curve, band);
-  let min = Infinity;
-  let max = -Infinity;
-  let minAtHz = band.fromHz;
-  let maxAtHz = band.fromHz;
-  for (let k = 0; k < slice.values.length; k++) {
-    const value = slice.values[k];
-    if (value < min) {
-      min = value;
-      minAtHz = slice.frequenciesHz[k];
-    }
-    if (value > max) {
-      max = value;
-      maxAtHz = slice.frequenciesHz[k];
-    }
+  const f = curve.frequenciesHz;
+  const stats = new BandStatisticsAccumulator(band, averaging);
+  stats.add(band.fromHz, interpolateAt(curve, band.fromHz)!);
+  for (let i = firstIndexAbove(f, band.fromHz); i < f.length && f[i] < band.toHz; i++) stats.add(f[i], curve.values[i]);
+  if (band.toHz > band.fromHz) stats.add(band.toHz, interpolateAt(curve, band.toHz)!);
+  return stats.result();
+}
+
+/**
+ * bandStatistics of combine(a(f), b(f)) over the band: at the edges and at the union of both curves'
+ * samples inside, merged in order, without building the combined curve.
+ */
+export function combinedBandStatistics(
+  a: SampledCurve,
+  b: SampledCurve,
+  band: FrequencyRange,
+  combine: (valueA: number, valueB: number) => number,
+  averaging: Averaging = 'linear',
+): BandResult<BandStatistics> {
+  const outside = bandOutsideData(a.frequenciesHz, band) ?? bandOutsideData(b.frequenciesHz, band);
+  if (outside) return outside;
+  const stats = new BandStatisticsAccumulator(band, averaging);
+  const fa = a.frequenciesHz;
+  const fb = b.frequenciesHz;
+  const at = (frequencyHz: number) => combine(interpolateAt(a, frequencyHz)!, interpolateAt(b, frequencyHz)!);
+  stats.add(band.fromHz, at(band.fromHz));
+  let i = firstIndexAbove(fa, band.fromHz);
+  let j = firstIndexAbove(fb, band.fromHz);
+  for (;;) {
+    const nextA = i < fa.length && fa[i] < band.toHz ? fa[i] : Infinity;
+    const nextB = j < fb.length && fb[j] < band.toHz ? fb[j] : Infinity;
+    const next = Math.min(nextA, nextB);
+    if (next === Infinity) break;
+    stats.add(next, at(next));
+    if (nextA === next) i++;
+    if (nextB === next) j++;
   }
-  const toAveraged = averaging === 'linear' ? (v: number) => v : (v: number) => 10 ** (v / 10);
-  let average: number;
-  if (slice.values.length === 1) {
-    average = toAveraged(slice.values[0]);
-  } else {
-    let area = 0;
-    for (let k = 0; k + 1 < slice.values.length; k++) {
-      area += ((toAveraged(slice.values[k]) + toAveraged(slice.values[k + 1])) / 2) * (slice.frequenciesHz[k + 1] - slice.frequenciesHz[k]);
-    }
-    average = area / (band.toHz - band.fromHz);
-  }
-  if (averaging === 'power-of-db') average = 10 * Math.log10(average);
-  return { status: 'ok', min, minAtHz, max, maxAtHz, average };
+  if (band.toHz > band.fromHz) stats.add(band.toHz, at(band.toHz));
+  return stats.result();
 }
 
 export interface EfficiencyInBand {
@@ -253,6 +302,18 @@ export interface Coverage {
   readonly coveredFraction: number;
   readonly coveredRanges: readonly FrequencyRange[];
   readonly uncoveredRanges: readonly FrequencyRange[];
+}
+
+/** The union of ranges, sorted and disjoint (touching ranges join), as coverageOfBand takes them. */
+export function mergeRanges(ranges: readonly FrequencyRange[]): FrequencyRange[] {
+  const sorted = [...ranges].sort((a, b) => a.fromHz - b.fromHz);
+  const merged: FrequencyRange[] = [];
+  for (const r of sorted) {
+    const last = merged[merged.length - 1];
+    if (last && r.fromHz <= last.toHz) merged[merged.length - 1] = { fromHz: last.fromHz, toHz: Math.max(last.toHz, r.toHz) };
+    else merged.push({ fromHz: r.fromHz, toHz: r.toHz });
+  }
+  return merged;
 }
 
 /** How much of the band the (sorted, disjoint) ranges cover, and the gaps left. */

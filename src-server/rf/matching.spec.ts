@@ -28,7 +28,7 @@ describe(lSectionSolutions.name, () => {
     expect(series).toMatchObject({ connection: 'series', position: 'source-side', component: { kind: 'inductor' } });
     expect(shunt.component.kind === 'capacitor' && shunt.component.capacitancePf).toBeCloseTo(0.92, 2);
     expect(series.component.kind === 'inductor' && series.component.inductanceNh).toBeCloseTo(38.8, 0);
-    // rf-reference §3.9 quotes the unrounded 0.923 pF and 38.98 nH of this example.
+    // Unrounded, this example gives 0.923 pF and 38.98 nH.
     expect(shunt.component.kind === 'capacitor' && shunt.component.capacitancePf).toBeCloseTo(0.923, 3);
     expect(series.component.kind === 'inductor' && series.component.inductanceNh).toBeCloseTo(38.98, 1);
   });
@@ -78,7 +78,7 @@ describe(lSectionSolutions.name, () => {
 });
 
 describe(snapNetwork.name, () => {
-  it('snaps Example 5.1 solution 1 to E24 0.91 pF and 39 nH (rf-reference §3.9, IEC 60063)', () => {
+  it('snaps Example 5.1 solution 1 to E24 0.91 pF and 39 nH (IEC 60063)', () => {
     const snapped = snapNetwork(lSectionSolutions(complex(200, -100), 100, 500e6)[0], 'E24');
     expect(describeNetwork(snapped)).toEqual(['load-side shunt capacitor 0.91 pF', 'source-side series inductor 39.0 nH']);
     expect(describeNetwork(snapNetwork(lSectionSolutions(complex(200, -100), 100, 500e6)[0], 'E12'))[0]).toBe('load-side shunt capacitor 1.00 pF');

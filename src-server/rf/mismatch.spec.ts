@@ -15,7 +15,7 @@ import {
 } from './mismatch';
 
 describe(gammaMagnitudeFromVswr.name, () => {
-  // Pozar, Microwave Engineering 4th ed., §2.3, as tabulated in rf-reference §3.2 (|Γ| 4 decimals, dB 2, %: 2, ML 3).
+  // Pozar, Microwave Engineering 4th ed., §2.3 (|Γ| 4 decimals, dB 2, %: 2, ML 3).
   const table: [number, number, number, number, number, number][] = [
     [1.2, 0.0909, 20.83, 0.83, 99.17, 0.036],
     [1.5, 0.2, 13.98, 4.0, 96.0, 0.177],
@@ -41,7 +41,7 @@ describe(gammaMagnitudeFromVswr.name, () => {
 });
 
 describe(vswrFromReturnLossDb.name, () => {
-  // rf-reference §3.2 "Inverse" row and §0 trap 4: −10 dB is VSWR 1.925, not 2.
+  // The inverse direction: −10 dB is VSWR 1.925, not 2.
   it('RL 10 dB → |Γ| 0.3162, VSWR 1.925, ML 0.458 dB', () => {
     expect(gammaMagnitudeFromReturnLossDb(10)).toBeCloseTo(0.3162, 4);
     expect(vswrFromReturnLossDb(10)).toBeCloseTo(1.925, 3);
@@ -58,7 +58,7 @@ describe(vswrFromReturnLossDb.name, () => {
 });
 
 describe(gammaFromImpedance.name, () => {
-  // Pozar 4th ed. §2.3, rf-reference §3.6 (Z0 = 50 Ω).
+  // Pozar 4th ed. §2.3 (Z0 = 50 Ω).
   const table: [number, number, number, number, number, number, number][] = [
     // re, im, |Γ|, angle°, VSWR, RL dB, transmitted %
     [25, 0, 0.3333, 180, 2.0, 9.54, 88.89],
@@ -75,13 +75,13 @@ describe(gammaFromImpedance.name, () => {
     expect(summary.transmittedFraction * 100).toBeCloseTo(transmitted, 2);
   });
 
-  it('50 + j50 Ω gives Γ = 0.2 + j0.4 exactly (rf-reference §3.6)', () => {
+  it('50 + j50 Ω gives Γ = 0.2 + j0.4 exactly', () => {
     const gamma = gammaFromImpedance(complex(50, 50), 50);
     expect(gamma.re).toBeCloseTo(0.2, 14);
     expect(gamma.im).toBeCloseTo(0.4, 14);
   });
 
-  it('Z_L = 40 + j70 Ω on 100 Ω: |Γ| 0.589 ∠104.04°, SWR 3.87, RL 4.60 dB (Pozar 4th ed. Example 2.2, via rf-reference §3.6)', () => {
+  it('Z_L = 40 + j70 Ω on 100 Ω: |Γ| 0.589 ∠104.04°, SWR 3.87, RL 4.60 dB (Pozar 4th ed. Example 2.2)', () => {
     const summary = summarizeReflection(gammaFromImpedance(complex(40, 70), 100));
     expect(summary.gammaMagnitude).toBeCloseTo(0.589, 3);
     expect(summary.gammaAngleDeg).toBeCloseTo(104.04, 2);
@@ -99,7 +99,7 @@ describe(impedanceFromGamma.name, () => {
       expect(back.im).toBeCloseTo(z.im, 10);
     }
   });
-  it('Γ = −1/3 on 50 Ω is 25 Ω (rf-reference §3.6)', () => {
+  it('Γ = −1/3 on 50 Ω is 25 Ω', () => {
     const z = impedanceFromGamma(complex(-1 / 3), 50);
     expect(z.re).toBeCloseTo(25, 12);
     expect(z.im).toBeCloseTo(0, 12);

@@ -1,7 +1,7 @@
 import { preferredMantissas, snapToPreferredValue } from './preferred-values';
 
 describe(preferredMantissas.name, () => {
-  // IEC 60063:2015, as transcribed in rf-reference §3.9.
+  // IEC 60063:2015.
   it('E12 is the fixed table', () => {
     expect(preferredMantissas('E12')).toEqual([1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2]);
   });
@@ -10,7 +10,7 @@ describe(preferredMantissas.name, () => {
       1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1,
     ]);
   });
-  it('is not round(10^(n/24)): 2.61, 3.16 and 8.25 are not in E24 (rf-reference §0 trap 7)', () => {
+  it('is not round(10^(n/24)): 2.61, 3.16 and 8.25 are not in E24', () => {
     const e24 = preferredMantissas('E24');
     for (let n = 0; n < 24; n++) {
       const computed = Math.round(10 ** (n / 24) * 10) / 10;
@@ -20,7 +20,7 @@ describe(preferredMantissas.name, () => {
 });
 
 describe(snapToPreferredValue.name, () => {
-  it('38.98 nH → 39 nH in both series; 0.923 pF → E24 0.91 pF, E12 1.0 pF (rf-reference §3.9)', () => {
+  it('38.98 nH → 39 nH in both series; 0.923 pF → E24 0.91 pF, E12 1.0 pF', () => {
     expect(snapToPreferredValue(38.98, 'E12')).toBe(39);
     expect(snapToPreferredValue(38.98, 'E24')).toBe(39);
     expect(snapToPreferredValue(0.923, 'E24')).toBe(0.91);

@@ -1,5 +1,5 @@
 import { type Complex, complex } from './complex';
-import { type BandResult, type FrequencyRange, bandOutsideData, coverageOfBand, interpolateAt, rangesAtMost, sliceBand } from './curves';
+import { type BandResult, type FrequencyRange, bandStatistics, coverageOfBand, interpolateAt, rangesAtMost } from './curves';
 import {
   gammaMagnitudeFromReturnLossDb,
   gammaMagnitudeFromVswr,
@@ -52,7 +52,7 @@ export function returnLossDbSeries(curve: ReflectionCurve): Float64Array {
   return curve.gammaMagnitude.map(returnLossDbFromGammaMagnitude);
 }
 
-/** VSWR 2:1 (RL 9.54 dB) and |S11| ≤ −10 dB (VSWR 1.925) differ; rf-reference §0 trap 4. */
+/** VSWR 2:1 (RL 9.54 dB) and |S11| ≤ −10 dB (VSWR 1.925) differ (Pozar 4th ed. §2.3). */
 export type MatchCriterion = { readonly kind: 'vswr'; readonly maxVswr: number } | { readonly kind: 'return-loss'; readonly minReturnLossDb: number };
 
 export const DEFAULT_MATCH_CRITERION: MatchCriterion = { kind: 'vswr', maxVswr: 2 };
@@ -97,12 +97,9 @@ export function matchAt(curve: ReflectionCurve, frequencyHz: number): MatchPoint
 
 /** The worst (highest) VSWR over the band, band edges interpolated. */
 export function worstMatchInBand(curve: ReflectionCurve, band: FrequencyRange): BandResult<{ readonly worst: MatchPoint }> {
-  const outside = bandOutsideData(curve.frequenciesHz, band);
-  if (outside) return outside;
-  const slice = sliceBand(magnitudeCurve(curve), band);
-  let worst = 0;
-  for (let k = 1; k < slice.values.length; k++) if (slice.values[k] > slice.values[worst]) worst = k;
-  return { status: 'ok', worst: matchPoint(slice.frequenciesHz[worst], slice.values[worst]) };
+  const stats = bandStatistics(magnitudeCurve(curve), band);
+  if (stats.status === 'no-data') return stats;
+  return { status: 'ok', worst: matchPoint(stats.maxAtHz, stats.max) };
 }
 
 export interface BandMatch {

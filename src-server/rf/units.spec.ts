@@ -12,7 +12,7 @@ import {
 } from './units';
 
 describe(wavelengthFractionMm.name, () => {
-  // rf-reference §3.1, computed there with c = 299 792 458 m/s (BIPM SI Brochure, 9th ed.); 2-decimal rounding.
+  // Computed with c = 299 792 458 m/s (BIPM SI Brochure, 9th ed.); 2-decimal rounding.
   const table: [number, number, number, number][] = [
     [900e6, 333.1, 166.55, 83.28],
     [1575.42e6, 190.29, 95.15, 47.57],
@@ -33,7 +33,7 @@ describe(wavelengthFractionMm.name, () => {
     expect(frequencyHzFromWavelengthM(0.299792458)).toBeCloseTo(1e9, 3);
   });
 
-  it('gives the λ/4 ground-plane lengths of rf-reference §5 (common practice rule, λ from §3.1)', () => {
+  it('gives the λ/4 ground-plane lengths (common practice rule)', () => {
     expect(wavelengthFractionMm(617e6, 0.25)).toBeCloseTo(121.5, 1);
     expect(wavelengthFractionMm(699e6, 0.25)).toBeCloseTo(107.2, 1);
     expect(wavelengthFractionMm(2400e6, 0.25)).toBeCloseTo(31.2, 1);
@@ -41,7 +41,7 @@ describe(wavelengthFractionMm.name, () => {
 });
 
 describe(efficiencyPercentToDb.name, () => {
-  // rf-reference §3.3, definition of the decibel; 2-decimal rounding.
+  // Definition of the decibel; 2-decimal rounding.
   const table: [number, number][] = [
     [100, 0], [90, -0.46], [80, -0.97], [70, -1.55], [60, -2.22], [50, -3.01], [40, -3.98],
     [30, -5.23], [25, -6.02], [20, -6.99], [10, -10], [1, -20],
@@ -52,18 +52,18 @@ describe(efficiencyPercentToDb.name, () => {
 });
 
 describe(efficiencyDbToPercent.name, () => {
-  // rf-reference §3.3 reverse direction; 1-decimal rounding.
+  // The reverse direction; 1-decimal rounding.
   it.each([[-1, 79.4], [-2, 63.1], [-3, 50.1], [-6, 25.1]])('%d dB = %d %%', (db, percent) => {
     expect(efficiencyDbToPercent(db)).toBeCloseTo(percent, 1);
   });
 });
 
 describe(mwToDbm.name, () => {
-  it('keeps regulators’ mW unrounded: 25 mW = 13.979 dBm (rf-reference §0 trap 6, common practice)', () => {
+  it('keeps regulators’ mW unrounded: 25 mW = 13.979 dBm (common practice)', () => {
     expect(mwToDbm(25)).toBeCloseTo(13.979, 3);
     expect(mwToDbm(25)).not.toBe(14);
   });
-  it('1 W = 30 dBm and 500 mW = 26.99 dBm (rf-reference §2.1 and §2.5)', () => {
+  it('1 W = 30 dBm and 500 mW = 26.99 dBm', () => {
     expect(mwToDbm(1000)).toBeCloseTo(30, 12);
     expect(mwToDbm(500)).toBeCloseTo(26.99, 2);
   });
@@ -77,13 +77,13 @@ describe(dbmToMw.name, () => {
 });
 
 describe(dbToPowerRatio.name, () => {
-  it('gives 1.64 for the λ/2 dipole’s 2.15 dBi (rf-reference §2.5, Balanis 4th ed. §4.6)', () => {
+  it('gives 1.64 for the λ/2 dipole’s 2.15 dBi (Balanis 4th ed. §4.6)', () => {
     expect(dbToPowerRatio(2.15)).toBeCloseTo(1.64, 2);
   });
 });
 
 describe(dbToAmplitudeRatio.name, () => {
-  it('−10 dB of |S11| is |Γ| 0.3162 (rf-reference §3.2, Pozar 4th ed. §2.3)', () => {
+  it('−10 dB of |S11| is |Γ| 0.3162 (Pozar 4th ed. §2.3)', () => {
     expect(dbToAmplitudeRatio(-10)).toBeCloseTo(0.3162, 4);
   });
 });

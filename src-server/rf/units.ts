@@ -22,11 +22,6 @@ export function dbToPowerRatio(db: number): number {
   return 10 ** (db / 10);
 }
 
-/** For field quantities (voltage, |Γ|, |S|): 20 log10. */
-export function amplitudeRatioToDb(amplitudeRatio: number): number {
-  return 20 * Math.log10(amplitudeRatio);
-}
-
 export function dbToAmplitudeRatio(db: number): number {
   return 10 ** (db / 20);
 }
@@ -37,10 +32,6 @@ export function mwToDbm(powerMw: number): number {
 
 export function dbmToMw(powerDbm: number): number {
   return 10 ** (powerDbm / 10);
-}
-
-export function wattsToDbm(powerW: number): number {
-  return mwToDbm(powerW * 1000);
 }
 
 export function dbmToWatts(powerDbm: number): number {

@@ -51,11 +51,6 @@ export function compileCondition(node: EngineCondition): Predicate {
   };
 }
 
-export interface RuleMargin {
-  readonly bound: BoundRule;
-  readonly margin: Margin;
-}
-
 interface CompiledRule {
   /** Null for a sound rule; a faulty one carries the finding every cell of the row gets instead. */
   readonly broken: null;
@@ -139,14 +134,7 @@ export class CompiledRow {
     return noData ? 'no-data' : marginal ? 'marginal' : 'pass';
   }
 
-  /** Margins of the fail and marginal rules that apply and have their facts; info rules set no limit. */
-  margins(facts: Facts): RuleMargin[] {
-    const out: RuleMargin[] = [];
-    this.visitMargins(facts, (bound, margin) => out.push({ bound, margin }));
-    return out;
-  }
-
-  /** margins() without the array and the wrappers, for a ranking that keeps only the nearest. */
+  /** Visits the margin of each fail and marginal rule that applies and has its facts; info rules set no limit. */
   visitMargins(facts: Facts, visit: (bound: BoundRule, margin: Margin) => void): void {
     for (const r of this.rules) {
       // A faulty rule sets no limit: its cells are already "not checked".

@@ -1,9 +1,12 @@
-import { type FrequencyRange, type SampledCurve, bandStatistics, coverageOfBand, efficiencyInBand, gainInBand, inMeasuredRange, interpolateAt, segmentIndex } from '../../rf/curves';
+import {
+  type FrequencyRange, type SampledCurve, bandStatistics, combinedBandStatistics, coverageOfBand, efficiencyInBand, gainInBand, inMeasuredRange, interpolateAt, mergeRanges,
+  segmentIndex,
+} from '../../rf/curves';
 import { type ReflectionCurve, matchedRanges } from '../../rf/reflection';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, returnLossDbFromGammaMagnitude, vswrFromGammaMagnitude } from '../../rf/mismatch';
 import { eirpDbm, erpDbmFromEirpDbm, polarizationLossDb, realizedGainDbi, totalEfficiency } from '../../rf/link-budget';
 import { powerRatioToDb, wavelengthFractionMm } from '../../rf/units';
-import type { FactName } from './fact-catalog';
+import { FACT_CATALOG, FACT_NAMES, type FactName } from './fact-catalog';
 import type { BandRange, FactValue, Facts, PartEvaluationData, RadioBandRequirement, SpecBand } from './types';
 
 type Source = 'measured' | 'spec';
@@ -57,17 +60,6 @@ class MeasuredSampler implements RangeSampler {
 function measuredSampler(curve: SampledCurve | null, range: FrequencyRange): RangeSampler | null {
   if (!curve || !measuredCovers(curve, range)) return null;
   return new MeasuredSampler(curve, range);
-}
-
-function mergeRanges(ranges: FrequencyRange[]): FrequencyRange[] {
-  const sorted = [...ranges].sort((a, b) => a.fromHz - b.fromHz);
-  const merged: FrequencyRange[] = [];
-  for (const r of sorted) {
-    const last = merged[merged.length - 1];
-    if (last && r.fromHz <= last.toHz) merged[merged.length - 1] = { fromHz: last.fromHz, toHz: Math.max(last.toHz, r.toHz) };
-    else merged.push({ fromHz: r.fromHz, toHz: r.toHz });
-  }
-  return merged;
 }
 
 type SpecFigure = 'gamma' | 'efficiency' | 'gain';
@@ -184,103 +176,26 @@ function acrossRanges(perRange: (RangeStats | null)[]): RangeStats | null {
   return { min, max, average, widthHz: totalWidth };
 }
 
-/**
- * bandStatistics(…, 'linear') over a sequence of points fed in frequency order, without building the
- * sliced curve: the same comparisons and the same trapezoid sums in the same order, so the same numbers.
- */
-class LinearStatsAccumulator {
-  min = Infinity;
-  max = -Infinity;
-  minAtHz: number;
-  maxAtHz: number;
-  private area = 0;
-  private count = 0;
-  private lastHz = NaN;
-  private lastValue = NaN;
-
-  constructor(private readonly range: FrequencyRange) {
-    this.minAtHz = range.fromHz;
-    this.maxAtHz = range.fromHz;
-  }
-
-  add(frequencyHz: number, value: number): void {
-    if (value < this.min) {
-      this.min = value;
-      this.minAtHz = frequencyHz;
-    }
-    if (value > this.max) {
-      this.max = value;
-      this.maxAtHz = frequencyHz;
-    }
-    if (this.count > 0) this.area += ((this.lastValue + value) / 2) * (frequencyHz - this.lastHz);
-    this.count += 1;
-    this.lastHz = frequencyHz;
-    this.lastValue = value;
-  }
-
-  get average(): number {
-    return this.count === 1 ? this.lastValue : this.area / (this.range.toHz - this.range.fromHz);
-  }
-}
-
-/** First sample index strictly above frequencyHz. */
-function firstAbove(f: ArrayLike<number>, frequencyHz: number): number {
-  let i = segmentIndex(f, frequencyHz);
-  while (i < f.length && f[i] <= frequencyHz) i++;
-  return i;
-}
-
-/** sliceBand's points of a measured curve (edges interpolated, samples strictly inside), into the accumulator. */
-function accumulateMeasured(curve: SampledCurve, range: FrequencyRange, stats: LinearStatsAccumulator): LinearStatsAccumulator {
-  const f = curve.frequenciesHz;
-  stats.add(range.fromHz, interpolateAt(curve, range.fromHz)!);
-  for (let i = firstAbove(f, range.fromHz); i < f.length && f[i] < range.toHz; i++) stats.add(f[i], curve.values[i]);
-  if (range.toHz > range.fromHz) stats.add(range.toHz, interpolateAt(curve, range.toHz)!);
-  return stats;
-}
-
-/** linearStats of a measured curve that covers the range, without slicing it. */
-function measuredLinearStats(curve: SampledCurve, range: FrequencyRange, maxAtMin = false): RangeStats {
-  const s = accumulateMeasured(curve, range, new LinearStatsAccumulator(range));
-  // efficiencyInBand reports no frequency of its maximum; efficiencyStats has always put the minimum's there.
-  return { min: { value: s.min, atHz: s.minAtHz }, max: { value: s.max, atHz: maxAtMin ? s.minAtHz : s.maxAtHz }, average: s.average, widthHz: range.toHz - range.fromHz };
-}
-
-/**
- * efficiencyStats of combinedCurve(range, [efficiency, gamma], total efficiency) for two measured
- * curves: the edges and the union of both curves' samples inside, merged in order without a set.
- */
-function measuredTotalEfficiencyStats(efficiency: SampledCurve, gamma: SampledCurve, range: FrequencyRange): RangeStats {
-  const s = new LinearStatsAccumulator(range);
-  const fe = efficiency.frequenciesHz;
-  const fg = gamma.frequenciesHz;
-  const total = (frequencyHz: number) => totalEfficiency(interpolateAt(efficiency, frequencyHz)! / 100, interpolateAt(gamma, frequencyHz)!) * 100;
-  s.add(range.fromHz, total(range.fromHz));
-  let i = firstAbove(fe, range.fromHz);
-  let j = firstAbove(fg, range.fromHz);
-  for (;;) {
-    const nextE = i < fe.length && fe[i] < range.toHz ? fe[i] : Infinity;
-    const nextG = j < fg.length && fg[j] < range.toHz ? fg[j] : Infinity;
-    const next = Math.min(nextE, nextG);
-    if (next === Infinity) break;
-    s.add(next, total(next));
-    if (nextE === next) i++;
-    if (nextG === next) j++;
-  }
-  if (range.toHz > range.fromHz) s.add(range.toHz, total(range.toHz));
-  return { min: { value: s.min, atHz: s.minAtHz }, max: { value: s.max, atHz: s.minAtHz }, average: s.average, widthHz: range.toHz - range.fromHz };
-}
-
 function linearStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
   const stats = bandStatistics(curve, range, 'linear');
   if (stats.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${stats.reason})`);
   return { min: { value: stats.min, atHz: stats.minAtHz }, max: { value: stats.max, atHz: stats.maxAtHz }, average: stats.average, widthHz: range.toHz - range.fromHz };
 }
 
+/** efficiencyInBand reports no frequency of its maximum; the minimum's stands there. */
 function efficiencyStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
   const eff = efficiencyInBand(curve, range);
   if (eff.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${eff.reason})`);
   return { min: { value: eff.minPercent, atHz: eff.minAtHz }, max: { value: eff.maxPercent, atHz: eff.minAtHz }, average: eff.averagePercent, widthHz: range.toHz - range.fromHz };
+}
+
+const totalEfficiencyPercent = (efficiencyPercent: number, gammaMagnitude: number) => totalEfficiency(efficiencyPercent / 100, gammaMagnitude) * 100;
+
+/** Total efficiency of two measured curves, on the union of their samples, without building the combined curve. */
+function measuredTotalEfficiencyStats(efficiency: SampledCurve, gamma: SampledCurve, range: FrequencyRange): RangeStats {
+  const stats = combinedBandStatistics(efficiency, gamma, range, totalEfficiencyPercent);
+  if (stats.status === 'no-data') throw new Error(`internal: measured curves miss a range they cover (${stats.reason})`);
+  return { min: { value: stats.min, atHz: stats.minAtHz }, max: { value: stats.max, atHz: stats.minAtHz }, average: stats.average, widthHz: range.toHz - range.fromHz };
 }
 
 function gainStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
@@ -379,65 +294,16 @@ const MISSING_DATA_TEXT: readonly string[] = Array.from({ length: 8 }, (_, mask)
   return labels.length === 0 ? 'none' : labels.join(', ');
 });
 
-/** Every fact, unknown until set; one literal shape keeps property access fast over a whole catalogue. */
-export function blankFacts(): Record<FactName, FactValue> {
-  return {
-    technology: null,
-    designation: null,
-    bandLowestMHz: null,
-    bandHighestMHz: null,
-    radioTransmits: null,
-    txPowerDbm: null,
-    feedLossDb: null,
-    certifiedMaxGainDbi: null,
-    requiredPolarization: null,
-    productGroundPlaneLengthMm: null,
-    productGroundPlaneWidthMm: null,
-    quarterWaveMm: null,
-    regionalLimitCount: null,
-    reviewState: null,
-    lifecycle: null,
-    partPolarization: null,
-    dataSource: null,
-    dataCompletenessPct: null,
-    missingData: null,
-    coverageAtVswr2Pct: null,
-    uncoveredAtVswr2: null,
-    coverageAtVswr3Pct: null,
-    uncoveredAtVswr3: null,
-    worstVswr: null,
-    worstVswrAtMHz: null,
-    worstReturnLossDb: null,
-    minRadiationEfficiencyPct: null,
-    minRadiationEfficiencyAtMHz: null,
-    avgRadiationEfficiencyPct: null,
-    minTotalEfficiencyPct: null,
-    minTotalEfficiencyAtMHz: null,
-    avgTotalEfficiencyPct: null,
-    avgTotalEfficiencyDb: null,
-    peakGainDbi: null,
-    peakGainAtMHz: null,
-    realizedPeakGainDbi: null,
-    txPeakGainDbi: null,
-    gainOverCertifiedDb: null,
-    eirpDbm: null,
-    erpDbm: null,
-    regionalLimitDbm: null,
-    regionalLimitKind: null,
-    regionalLimitRegion: null,
-    regionalLimitSource: null,
-    regionalRadiatedDbm: null,
-    regionalLimitMarginDb: null,
-    evalGroundPlaneKnown: null,
-    evalGroundPlaneLengthMm: null,
-    evalGroundPlaneWidthMm: null,
-    groundPlaneVsEvalPct: null,
-    groundPlaneVsQuarterWavePct: null,
-    polarizationLossDb: null,
-  };
+/** Every catalogue fact, unknown: built once; each copy shares its shape, so property access stays fast over a whole catalogue. */
+const BLANK_FACTS: Readonly<Record<FactName, FactValue>> = Object.fromEntries(FACT_NAMES.map((name) => [name, null])) as Record<FactName, FactValue>;
+
+/** Every fact, unknown until set. */
+function blankFacts(): Record<FactName, FactValue> {
+  return { ...BLANK_FACTS };
 }
 
-const ROW_FACT_NAMES: readonly FactName[] = ['technology', 'designation', 'bandLowestMHz', 'bandHighestMHz', 'radioTransmits', 'txPowerDbm', 'feedLossDb', 'certifiedMaxGainDbi', 'requiredPolarization', 'productGroundPlaneLengthMm', 'productGroundPlaneWidthMm', 'quarterWaveMm', 'regionalLimitCount', 'groundPlaneVsQuarterWavePct'];
+/** The facts of the radio band alone (the catalogue's row scope). */
+const ROW_FACT_NAMES: readonly FactName[] = FACT_NAMES.filter((name) => FACT_CATALOG[name].scope === 'row');
 
 /** Row facts depend on the radio band only, so a matrix computes them once per row. */
 export function computeRowFacts(requirement: RadioBandRequirement): Record<string, FactValue> {
@@ -489,22 +355,16 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   note(efficiencies, 2);
   note(gains, 4);
 
-  // Measured curves take the allocation-free paths; spec step curves go through combinedCurve.
-  const gammaStats = acrossRanges(ranges.map((r, i) => {
-    const g = gammas[i];
-    return g ? (g.curve ? measuredLinearStats(g.curve, r) : linearStats(single(r, g), r)) : null;
-  }));
-  const radiation = acrossRanges(ranges.map((r, i) => {
-    const e = efficiencies[i];
-    return e ? (e.curve ? measuredLinearStats(e.curve, r, true) : efficiencyStats(single(r, e), r)) : null;
-  }));
+  // Measured curves go to the RF statistics as they are; spec step curves through combinedCurve.
+  const gammaStats = acrossRanges(ranges.map((r, i) => (gammas[i] ? linearStats(single(r, gammas[i]!), r) : null)));
+  const radiation = acrossRanges(ranges.map((r, i) => (efficiencies[i] ? efficiencyStats(single(r, efficiencies[i]!), r) : null)));
   const total = acrossRanges(
     ranges.map((r, i) => {
       const e = efficiencies[i];
       const g = gammas[i];
       if (!e || !g) return null;
       if (e.curve && g.curve) return measuredTotalEfficiencyStats(e.curve, g.curve, r);
-      return efficiencyStats(combinedCurve(r, [e, g], ([ev, gv]) => totalEfficiency(ev / 100, gv) * 100), r);
+      return efficiencyStats(combinedCurve(r, [e, g], ([ev, gv]) => totalEfficiencyPercent(ev, gv)), r);
     }),
   );
   const gain = acrossRanges(ranges.map((r, i) => (gains[i] ? gainStats(single(r, gains[i]!), r) : null)));

@@ -66,7 +66,7 @@ describe('a faulty rule during evaluation', () => {
       expect(poorCell.status).toBe('fail');
       const facts = completeFacts(computeFacts(requirement, poor));
       expect(set.forRow(facts).status(facts)).toBe('fail');
-      expect(() => set.forRow(facts).margins(facts)).not.toThrow();
+      expect(() => set.forRow(facts).visitMargins(facts, () => undefined)).not.toThrow();
       const ranked = rankCandidates([requirement], [poor, good], set);
       expect(ranked.map((c) => c.mpn)).toEqual(['GOOD', 'POOR']);
       expect(ranked[1].bands[0].findings).toContainEqual(expect.objectContaining({ code: RULE_BROKEN_CODE }));

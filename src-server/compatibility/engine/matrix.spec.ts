@@ -2,6 +2,7 @@ import { loadRuleFiles } from '../rule-files';
 import { CompiledRuleSet } from './compiled-evaluator';
 import { constructedPart, constructedRequirement } from './fixtures';
 import { FactsCache, evaluateMatrix, rankCandidates } from './matrix';
+import { statusRank } from './rule-binding';
 
 const RULES = new CompiledRuleSet(loadRuleFiles());
 
@@ -40,9 +41,17 @@ describe(`${rankCandidates.name} with a limit`, () => {
   );
   const summary = (list: ReturnType<typeof rankCandidates>) => list.map((c) => [c.partId, c.status, c.marginDb, c.deciding?.ruleId ?? null]);
 
-  it.each([3, 8, 40])('top %i equals the top of the full ranking, also when failures must fill the list', (limit) => {
-    const full = rankCandidates(requirements, catalogue, RULES, { limit: catalogue.length });
+  /** Each part ranked on its own (no limit, no early stop at a failure), then sorted here: best status, larger margin, catalogue order. */
+  const independentRanking = () =>
+    catalogue
+      .map((part, order) => ({ order, candidate: rankCandidates(requirements, [part], RULES)[0] }))
+      .sort((a, b) => statusRank(a.candidate.status) - statusRank(b.candidate.status) || (b.candidate.marginDb ?? -Infinity) - (a.candidate.marginDb ?? -Infinity) || a.order - b.order)
+      .map((entry) => entry.candidate);
+
+  it.each([3, 8, 39, 40])('top %i equals the top of an independent full ranking, also when failures must fill the list', (limit) => {
+    const full = independentRanking();
     const limited = rankCandidates(requirements, catalogue, RULES, { limit });
+    expect(limited).toHaveLength(limit);
     expect(summary(limited)).toEqual(summary(full).slice(0, limit));
     expect(limited.map((c) => c.bands)).toEqual(full.slice(0, limit).map((c) => c.bands));
   });

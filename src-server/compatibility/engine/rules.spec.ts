@@ -42,7 +42,7 @@ describe('rule files', () => {
 });
 
 describe('band-coverage', () => {
-  // Common practice (rf-reference §5): VSWR 3:1 is the loosest match accepted in small devices.
+  // Common practice: VSWR 3:1 is the loosest match accepted in small devices.
   it('passes a band matched at VSWR 2.9 everywhere (coverage 100 %, at the threshold)', async () => {
     const { facts, finding } = await check('band-coverage', lte(), constructedPart({ vswr: 2.9 }));
     expect(facts.coverageAtVswr3Pct).toBe(100);
@@ -86,7 +86,7 @@ describe('band-coverage', () => {
 });
 
 describe('vswr-in-band', () => {
-  // Common practice: VSWR ≤ 2:1 target (rf-reference §5); VSWR 2 = RL 9.54 dB (Pozar 4th ed. §2.3).
+  // Common practice: VSWR ≤ 2:1 target; VSWR 2 = RL 9.54 dB (Pozar 4th ed. §2.3).
   it('passes VSWR 2.00 (at), 1.99 (inside), and marks 2.01 (outside) marginal', async () => {
     const at = await check('vswr-in-band', lte(), constructedPart({ vswr: 2 }));
     expect(at.facts.worstVswr).toBe(2);
@@ -98,7 +98,7 @@ describe('vswr-in-band', () => {
     expect(outside.finding!.message).toBe('worst VSWR in B12 is 2.01:1 at 699 MHz (return loss 9.48 dB); the target is 2:1');
   });
 
-  it('takes the −10 dB return-loss criterion as VSWR 1.925 when set so (rf-reference §0 trap 4)', async () => {
+  it('takes the −10 dB return-loss criterion as VSWR 1.925 when set so', async () => {
     const part = constructedPart({ vswr: 1.95 });
     expect((await check('vswr-in-band', lte(), part)).finding).toBeUndefined();
     expect((await check('vswr-in-band', lte(), part, { maxVswr: 1.925 })).finding?.severity).toBe('marginal');
@@ -106,7 +106,7 @@ describe('vswr-in-band', () => {
 });
 
 describe('efficiency-floor', () => {
-  // Common practice (rf-reference §5): sub-GHz cellular in small trackers often 15–40 %; floor 15 % for lte.
+  // Common practice: sub-GHz cellular in small trackers often 15–40 %; floor 15 % for lte.
   const part = (efficiencyPercent: number) => constructedPart({ vswr: 1, efficiencyPercent });
 
   it('passes 15 % (at) and 15.1 % (inside) and fails 14.9 % (outside) on an LTE band', async () => {
@@ -123,7 +123,7 @@ describe('efficiency-floor', () => {
     expect((await check('efficiency-floor', gnss, part(29.9))).finding?.message).toContain('the floor for gnss is 30 %');
   });
 
-  it('counts the mismatch: 60 % radiation at VSWR 2 is 53.3 % total (rf-reference §3.4)', async () => {
+  it('counts the mismatch: 60 % radiation at VSWR 2 is 53.3 % total', async () => {
     const { facts } = await check('efficiency-floor', lte(), constructedPart({ vswr: 2, efficiencyPercent: 60 }));
     expect(facts.minTotalEfficiencyPct as number).toBeCloseTo(53.33, 2);
     expect(facts.avgTotalEfficiencyDb as number).toBeCloseTo(-2.73, 2);
@@ -138,7 +138,7 @@ describe('efficiency-floor', () => {
 });
 
 describe('efficiency-target', () => {
-  // Common practice (rf-reference §5): 40 % for cellular, 50 % ("good") for the others.
+  // Common practice: 40 % for cellular, 50 % ("good") for the others.
   it('passes 40 % (at) and 40.1 % (inside), marks 39.9 % (outside) marginal', async () => {
     const part = (e: number) => constructedPart({ vswr: 1, efficiencyPercent: e });
     expect((await check('efficiency-target', lte(), part(40))).finding).toBeUndefined();
@@ -176,14 +176,14 @@ describe('certified-gain-cap', () => {
 });
 
 describe('regional-power-limit', () => {
-  // ETSI EN 300 220-2 / ERC/REC 70-03 Annex 1: 868.0–868.6 MHz, 25 mW e.r.p. = 13.979 dBm (rf-reference §2.3, §0 trap 6).
+  // ETSI EN 300 220-2 / ERC/REC 70-03 Annex 1: 868.0–868.6 MHz, 25 mW e.r.p. = 13.979 dBm.
   const erp25mW = { region: 'EU', fromHz: 868.0 * MHZ, toHz: 868.6 * MHZ, kind: 'erp' as const, valueDbm: mwToDbm(25), source: 'ETSI EN 300 220-2' };
   const lora = (txPowerDbm: number) => lte({ technology: 'ism', designation: 'EU868', ranges: [rangeMhz(863, 870, 'tdd')], txPowerDbm, regulatoryLimits: [erp25mW] });
   const dipole = constructedPart({ gainDbi: 2.15 });
 
   it('passes ERP exactly 25 mW (at) and 13.9 dBm (inside); fails 14 dBm ERP (outside, 0.02 dB over)', async () => {
     const at = await check('regional-power-limit', lora(mwToDbm(25)), dipole);
-    // ERP 25 mW = 16.13 dBm e.i.r.p. (rf-reference §2.5).
+    // ERP 25 mW = 16.13 dBm e.i.r.p.
     expect(at.facts.eirpDbm as number).toBeCloseTo(16.13, 2);
     expect(at.finding).toBeUndefined();
     expect((await check('regional-power-limit', lora(13.9), dipole)).finding).toBeUndefined();
@@ -192,7 +192,7 @@ describe('regional-power-limit', () => {
     expect(over.finding!.message).toBe('ERP 14 dBm exceeds the EU limit of 13.98 dBm by -0.02 dB (ETSI EN 300 220-2)');
   });
 
-  // 47 CFR 15.247(b)(3)+(b)(4): 30 dBm conducted, minus (G − 6) above 6 dBi, so 36 dBm EIRP point-to-multipoint (rf-reference §2.1).
+  // 47 CFR 15.247(b)(3)+(b)(4): 30 dBm conducted, minus (G − 6) above 6 dBi, so 36 dBm EIRP point-to-multipoint.
   const fcc = { region: 'US', fromHz: 2400 * MHZ, toHz: 2483.5 * MHZ, kind: 'eirp' as const, valueDbm: 36, source: '47 CFR 15.247(b)(4)' };
   const wifi = (feedLossDb = 0) => lte({ technology: 'wifi', designation: '2.4 GHz', ranges: [rangeMhz(2400, 2483.5, 'tdd')], txPowerDbm: 30, feedLossDb, regulatoryLimits: [fcc] });
 
@@ -203,7 +203,7 @@ describe('regional-power-limit', () => {
     expect((await check('regional-power-limit', wifi(0.5), constructedPart({ gainDbi: 6.4 }))).finding).toBeUndefined();
   });
 
-  // 47 CFR 15.247(b)(4) as a conducted rule: 30 dBm minus (G − 6) above 6 dBi; at 9 dBi 27 dBm (rf-reference §2.1 worked table).
+  // 47 CFR 15.247(b)(4) as a conducted rule: 30 dBm minus (G − 6) above 6 dBi; at 9 dBi 27 dBm.
   const conducted = { region: 'US', fromHz: 2400 * MHZ, toHz: 2483.5 * MHZ, kind: 'conducted-gain-rule' as const, valueDbm: 30, gainThresholdDbi: 6, reductionDbPerDb: 1, source: '47 CFR 15.247(b)(4)' };
   const wifiConducted = (txPowerDbm: number) => lte({ technology: 'wifi', designation: '2.4 GHz', ranges: [rangeMhz(2400, 2483.5, 'tdd')], txPowerDbm, regulatoryLimits: [conducted] });
 
@@ -224,7 +224,7 @@ describe('regional-power-limit', () => {
 });
 
 describe('ground-plane-vs-eval-board', () => {
-  // Common practice (rf-reference §5): datasheet figures hold only on the evaluation board's size.
+  // Common practice: datasheet figures hold only on the evaluation board's size.
   const withBoard = (lengthMm: number, widthMm: number) => lte({ productGroundPlane: { lengthMm, widthMm } });
   const part = constructedPart({}, { evaluationGroundPlane: { lengthMm: 80, widthMm: 40 } });
 
@@ -251,7 +251,7 @@ describe('ground-plane-vs-eval-board', () => {
 });
 
 describe('ground-plane-quarter-wave', () => {
-  // λ/4 at 699 MHz = 107.2 mm (rf-reference §5, c = 299 792 458 m/s); the ≥ λ/4 rule is common practice.
+  // λ/4 at 699 MHz = 107.2 mm (c = 299 792 458 m/s); the ≥ λ/4 rule is common practice.
   const quarterWaveMm = 299_792_458 / 699e6 / 4 * 1000;
   const withLength = (lengthMm: number) => lte({ productGroundPlane: { lengthMm, widthMm: 50 } });
 
@@ -268,7 +268,7 @@ describe('ground-plane-quarter-wave', () => {
     expect(short.finding).toMatchObject({ severity: 'marginal', code: 'GROUND_PLANE_BELOW_QUARTER_WAVE' });
   });
 
-  it('uses λ/4 = 48.1 mm for GNSS upper L-band from 1559 MHz (rf-reference §5)', async () => {
+  it('uses λ/4 = 48.1 mm for GNSS upper L-band from 1559 MHz', async () => {
     const gnss = lte({ technology: 'gnss', ranges: [rangeMhz(1559, 1610, 'receive')], txPowerDbm: null, productGroundPlane: { lengthMm: 48, widthMm: 30 } });
     const { facts, finding } = await check('ground-plane-quarter-wave', gnss, constructedPart());
     expect(facts.quarterWaveMm as number).toBeCloseTo(48.1, 1);
