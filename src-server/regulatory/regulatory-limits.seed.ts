@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { RegulatoryLimit } from './regulatory-limit.entity';
 
-/** Regulatory limits from catalog-seed/regulatory-limits.json (rf-reference §2) with stable ids. */
+/** Regulatory limits from catalog-seed/regulatory-limits.json (47 CFR 15.247, ETSI EN 300 328 / 300 220-2 / 301 893, ERC/REC 70-03) with stable ids. */
 export async function seedRegulatoryLimits(dataSource: DataSource): Promise<string> {
   const seed: (Omit<RegulatoryLimit, 'createdAt' | 'updatedAt'>)[] = JSON.parse(readFileSync(resolve('catalog-seed/regulatory-limits.json'), 'utf8'));
   let created = 0;

@@ -71,7 +71,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
     });
 
     it('filters by overlap with a frequency window and by a single frequency', async () => {
-      // Upper L-band RNSS 1559–1610 MHz holds L1/E1/B1I/B1C/G1 but not L5 (rf-reference §1.3).
+      // Upper L-band RNSS 1559–1610 MHz holds L1/E1/B1I/B1C/G1 but not L5 (ITU RR Art. 5, RNSS allocation; from memory).
       const upper = (await call('get', '/api/bands?technology=gnss&fromMHz=1559&toMHz=1610', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
       expect(upper).toEqual(expect.arrayContaining(['GPS L1', 'Galileo E1', 'GLONASS G1', 'BeiDou B1I', 'BeiDou B1C']));
       expect(upper).not.toContain('GPS L5');
@@ -210,18 +210,18 @@ describe('band library, band sets and regulatory limits (API)', () => {
       const res = await call('get', '/api/regulatory-limits', role).expect(200);
       // 47 CFR 15.247(b)(3), (b)(4): 1 W conducted, reduced dB for dB above 6 dBi.
       expect(res.body.find((l: { id: number }) => l.id === 2)).toMatchObject({ region: 'US', fromMHz: 2400, toMHz: 2483.5, kind: 'conducted-gain-rule', valueDbm: 30, gainThresholdDbi: 6, reductionDbPerDb: 1 });
-      // ETSI EN 300 328 (from memory in rf-reference §2.2): 20 dBm e.i.r.p.
+      // ETSI EN 300 328 (from memory): 20 dBm e.i.r.p.
       expect(res.body.find((l: { id: number }) => l.id === 4)).toMatchObject({ region: 'EU', kind: 'eirp', valueDbm: 20, note: expect.stringMatching(/from memory/i) });
     });
 
     it('keeps 868 MHz limits as unrounded ERP in dBm', async () => {
       const res = await call('get', '/api/regulatory-limits?region=EU&fromMHz=869.4&toMHz=869.65', 'engineer').expect(200);
       const high = res.body.find((l: { id: number }) => l.id === 9);
-      // EU 2017/1483 via CNAF UN-39: 500 mW e.r.p. = 10·log10(500) = 26.99 dBm (rf-reference §2.5).
+      // EU 2017/1483 via CNAF UN-39: 500 mW e.r.p. = 10·log10(500) = 26.99 dBm (ERP vs EIRP: ITU RR Art. 1).
       expect(high).toMatchObject({ kind: 'erp', valueText: '500 mW e.r.p.' });
       expect(high.valueDbm).toBeCloseTo(26.9897, 4);
       const low = (await call('get', '/api/regulatory-limits/7', 'engineer').expect(200)).body;
-      // 25 mW = 13.979 dBm, not 14 (rf-reference trap 6).
+      // 25 mW = 13.979 dBm, not 14 (10·log10(25); keep unrounded values, common practice).
       expect(low.valueDbm).toBeCloseTo(13.9794, 4);
       expect(low.valueDbm).not.toBe(14);
     });
@@ -273,7 +273,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
   describe('exported services', () => {
     it('RegulatoryLimitsService.findApplicable returns the limits of a region that overlap a band', async () => {
       const limits = app.get(RegulatoryLimitsService);
-      // LoRa EU868 default channels 868.1–868.5 MHz sit in the 868.0–868.6 MHz sub-band (rf-reference §1.6, §2.3).
+      // LoRa EU868 default channels 868.1–868.5 MHz sit in the 868.0–868.6 MHz sub-band (LoRa Alliance RP002-1.0.x; ERC/REC 70-03 Annex 1).
       const eu868 = await limits.findApplicable('EU', 868.0, 868.6);
       expect(eu868.map((l) => l.id)).toContain(7);
       expect(eu868.map((l) => l.id)).not.toContain(9);

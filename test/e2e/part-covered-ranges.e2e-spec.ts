@@ -3,7 +3,7 @@ import request from 'supertest';
 import { createApiApp, demoTokens } from '../support/api-app';
 import { createDraft } from '../support/parts';
 
-// rf-reference Example A: 1-port, v1, RI; |Γ| = 0.5 / 0.2 / 0.3333 at 820 / 868 / 915 MHz.
+// Invented example: 1-port, v1, RI; |Γ| = 0.5 / 0.2 / 0.3333 at 820 / 868 / 915 MHz.
 const EXAMPLE_A = `! Example A - invented data
 # MHz S RI R 50
 820   0.5000   0.0000

@@ -29,7 +29,7 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
       ids[name] = part.id;
       return part.id;
     };
-    // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3; rf-reference §3.2): worst point at 850 MHz.
+    // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3): worst point at 850 MHz.
     await upload(await make('at', { formFactor: 'flex' }), 's11', 'at.s1p', s1pWithGamma([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6], [1700, 0.2], [1900, 0.2]]));
     await upload(ids.at, 'efficiency', 'at.csv', csvCurve('frequency (MHz),efficiency (%)', [[700, 50], [850, 40], [1000, 50], [1700, 60], [1900, 60]]));
     // |Γ| 0.32 → VSWR 1.941 (just inside 2); |Γ| 0.34 → VSWR 2.030 (just outside).
@@ -39,7 +39,7 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
     await upload(await make('edge'), 's11', 'edge.s1p', s1pWithGamma([[780, 0.5], [820, 0.2], [900, 0.2], [1000, 0.5]]));
     // Datasheet-only parts: the spec bands decide.
     await make('spec', { specBands: [{ fromMhz: 791, toMhz: 862, maxVswr: 2, efficiencyPct: 45 }, { fromMhz: 862, toMhz: 960, maxVswr: 2.5, efficiencyPct: 50 }] });
-    // RL ≥ 10 dB is VSWR ≤ 1.925 (rf-reference §0 trap 4, §3.2).
+    // RL ≥ 10 dB is VSWR ≤ 1.925 (Pozar 4th ed. §2.3; a common confusion with VSWR 2).
     await make('rl10', { specBands: [{ fromMhz: 791, toMhz: 862, minReturnLossDb: 10 }] });
   });
   afterAll(() => app.close());

@@ -59,9 +59,9 @@ describe('part measurements and documents (API)', () => {
       expect(await objectsOf(adminDraft.id)).toBe(0);
     });
 
-    it('stores a good .s1p: points in the database, the original in object storage; VSWR and return loss read back (rf-reference §4 Example A)', async () => {
+    it('stores a good .s1p: points in the database, the original in object storage; VSWR and return loss read back (invented 1-port example; VSWR and RL per Pozar 4th ed. §2.3)', async () => {
       const draft = await createDraft(app, tokens.engineer);
-      // rf-reference §4 Example A (invented data): 820 MHz |Γ| 0.5 → VSWR 3.0, RL 6.02 dB; 868 MHz 0.2 → 1.5, 13.98 dB; 915 MHz 0.3333 → 2.0, 9.54 dB.
+      // Invented 1-port example (Pozar 4th ed. §2.3 for the figures): 820 MHz |Γ| 0.5 → VSWR 3.0, RL 6.02 dB; 868 MHz 0.2 → 1.5, 13.98 dB; 915 MHz 0.3333 → 2.0, 9.54 dB.
       const file = '! Example A - invented data\n# MHz S RI R 50\n820   0.5000   0.0000\n868   0.2000   0.0000\n915   0.0000  -0.3333\n';
       const res = await upload(draft.id, 'engineer', 's11', 'example-a.s1p', file, { groundLengthMm: '80', groundWidthMm: '40', conditions: 'free space, 100 mm cable' }).expect(201);
       expect(res.body.measurement).toMatchObject({ kind: 's11', pointCount: 3, fromMhz: 820, toMhz: 915, groundLengthMm: 80, groundWidthMm: 40, referenceOhms: 50, current: true });
@@ -80,7 +80,7 @@ describe('part measurements and documents (API)', () => {
       expect(await objectsOf(draft.id)).toBe(1);
     });
 
-    it('reads port 1 of a version-1 .s2p (S21 before S12, rf-reference §4 Example B)', async () => {
+    it('reads port 1 of a version-1 .s2p (S21 before S12, Touchstone 1.1 spec)', async () => {
       const draft = await createDraft(app, tokens.engineer);
       const file = '! Example B - invented data; columns S11 S21 S12 S22\n# GHz S MA R 50\n2.40  0.333 -30  0.90 -60  0.05 10  0.20 45\n2.45  0.100  15  0.91 -75  0.05  5  0.18 40\n';
       const res = await upload(draft.id, 'engineer', 's11', 'example-b.s2p', file).expect(201);
@@ -113,7 +113,7 @@ describe('part measurements and documents (API)', () => {
       expect(await objectsOf(draft.id)).toBe(0);
     });
 
-    it('efficiency CSV: units from the header, or from the form (dB converted to %: rf-reference §3.3, −3.01 dB = 50 %)', async () => {
+    it('efficiency CSV: units from the header, or from the form (dB converted to %: 10·log10(η), −3.01 dB = 50 %)', async () => {
       const draft = await createDraft(app, tokens.engineer);
       const header = await upload(draft.id, 'engineer', 'efficiency', 'eff.csv', csvCurve('frequency (MHz),efficiency (%)', [[700, 35], [800, 48], [900, 52]])).expect(201);
       expect(header.body.measurement).toMatchObject({ kind: 'efficiency', pointCount: 3, sourceFormat: 'CSV, MHz, %' });
@@ -121,7 +121,7 @@ describe('part measurements and documents (API)', () => {
       const points = await http().get(`/api/parts/${draft.id}/measurements/${form.body.measurement.id}/points`).set(as('engineer')).expect(200);
       expect(points.body.frequenciesHz).toEqual([700e6, 900e6]);
       expect(points.body.values[0]).toBeCloseTo(50, 2); // −3.01 dB = 50 % (definition of the decibel)
-      expect(points.body.values[1]).toBeCloseTo(25.0, 2); // 25 % = −6.02 dB (rf-reference §3.3)
+      expect(points.body.values[1]).toBeCloseTo(25.0, 2); // 25 % = −6.02 dB (10·log10(0.25))
       const ratio = await upload(draft.id, 'engineer', 'efficiency', 'eff-ratio.csv', csvCurve('frequency_GHz,efficiency_ratio', [[0.7, 0.4], [0.9, 0.55]])).expect(201);
       expect(ratio.body.preview.values[0]).toBeCloseTo(40, 9);
       expect(ratio.body.preview.values[1]).toBeCloseTo(55, 9);
@@ -164,7 +164,7 @@ describe('part measurements and documents (API)', () => {
       const detail = await http().get(`/api/parts/${draft.id}`).set(as('engineer')).expect(200);
       const current = detail.body.measurements.filter((m: { current: boolean }) => m.current).map((m: { id: number }) => m.id);
       expect(current).toEqual([second.body.measurement.id]);
-      // Worst point 850 MHz, |Γ| = 1/3 → VSWR 2 (Pozar 4th ed. §2.3; rf-reference §3.2).
+      // Worst point 850 MHz, |Γ| = 1/3 → VSWR 2 (Pozar 4th ed. §2.3).
       expect(detail.body.figures[0]).toMatchObject({ matchSource: 'measured', worstVswrAtMhz: 850, coveredFractionVswr2: 1 });
       expect(detail.body.figures[0].worstVswr).toBeCloseTo(2, 9);
       await http().delete(`/api/parts/${draft.id}/measurements/${second.body.measurement.id}`).set(as('engineer')).expect(204);

@@ -71,7 +71,7 @@ describe('catalog-seed/bands.json', () => {
       expect(band(designation)).toMatchObject({ technology: 'lte', duplex: 'FDD', source: { document: '3GPP TS 36.101' } });
     });
 
-    it('stores the spec-release note for band 12 (rf-reference trap 3)', () => {
+    it('stores the spec-release note for band 12 (early releases 698–716 / 728–746 MHz, current 699–716 / 729–746 MHz)', () => {
       // 3GPP TS 36.101 T5.5-1 current vs early-release TS 36.106 T5.5-1: 698–716/728–746
       expect(band('B12').source.note).toMatch(/698–716 \/ 728–746/);
       expect(band('B12').source.note).toMatch(/release/i);
@@ -130,7 +130,7 @@ describe('catalog-seed/bands.json', () => {
       const [g1From, g1To] = range('GLONASS G1', 'receive');
       expect(g1From).toBeCloseTo(1602 + 0.5625 * -7 - 0.511, 6);
       expect(g1To).toBeCloseTo(1602 + 0.5625 * 6 + 0.511, 6);
-      expect(g1From).toBeCloseTo(1597.55, 2); // rf-reference §1.3 "≈1597.55–1605.89"
+      expect(g1From).toBeCloseTo(1597.55, 2); // GLONASS ICD: FDMA G1 channels k = −7…+6 span ≈1597.55–1605.89 MHz
       expect(g1To).toBeCloseTo(1605.89, 2);
       const [g2From, g2To] = range('GLONASS G2', 'receive');
       expect(g2From).toBeCloseTo(1242.43, 2);
@@ -158,7 +158,7 @@ describe('catalog-seed/bands.json', () => {
     const wifi6 = (n: number) => (n === 2 ? 5935 : 5950 + 5 * n); // IEEE 802.11ax-2021 §27.3.23.2
 
     it('the formulas reproduce the reference channel centres', () => {
-      expect([1, 6, 11, 13, 14].map(wifi24)).toEqual([2412, 2437, 2462, 2472, 2484]); // rf-reference §1.4 checks
+      expect([1, 6, 11, 13, 14].map(wifi24)).toEqual([2412, 2437, 2462, 2472, 2484]); // IEEE 802.11-2020 channel centres
       expect([36, 48, 52, 64, 100, 144, 149, 165, 177].map(wifi5)).toEqual([5180, 5240, 5260, 5320, 5500, 5720, 5745, 5825, 5885]);
       expect([1, 2, 5, 93, 233].map(wifi6)).toEqual([5955, 5935, 5975, 6415, 7115]);
     });
@@ -217,7 +217,7 @@ describe('catalog-seed/bands.json', () => {
     });
 
     it('the default and plan channels fall inside their plan', () => {
-      // RP002-1.0.x channel plans as in rf-reference §1.6
+      // RP002-1.0.x channel plans (LoRa Alliance)
       for (const f of [868.1, 868.3, 868.5, 869.525]) expect(inside('EU863-870', f, f)).toBe(true);
       for (let n = 0; n < 64; n++) expect(inside('US902-928', 902.3 + 0.2 * n - 0.0625, 902.3 + 0.2 * n + 0.0625)).toBe(true);
       for (let n = 0; n < 8; n++) expect(inside('US902-928', 923.3 + 0.6 * n - 0.25, 923.3 + 0.6 * n + 0.25)).toBe(true);

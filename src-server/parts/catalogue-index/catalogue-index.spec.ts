@@ -27,7 +27,7 @@ describe(extremeInRange.name, () => {
 });
 
 describe(meetsCoverage.name, () => {
-  // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3; rf-reference §3.2).
+  // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3).
   const atLimit = part(1, { gamma: curve([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6]]) });
   const range = { fromHz: 800 * MHZ, toHz: 900 * MHZ };
 
@@ -37,7 +37,7 @@ describe(meetsCoverage.name, () => {
     expect(meetsCoverage(atLimit, { ranges: [range, { fromHz: 950 * MHZ, toHz: 1000 * MHZ }], vswrMax: 2 })).toBe(false);
   });
 
-  it('falls back to spec bands where the curve does not reach, with return loss read as VSWR (RL 10 dB = VSWR 1.925, rf-reference §3.2)', () => {
+  it('falls back to spec bands where the curve does not reach, with return loss read as VSWR (RL 10 dB = VSWR 1.925, Pozar 4th ed. §2.3)', () => {
     const mixed = part(2, { gamma: curve([[800, 0.1], [900, 0.1]]), specBands: [band(1700, 1900, 2), band(600, 800, 3)] });
     expect(meetsCoverage(mixed, { ranges: [range, { fromHz: 1710 * MHZ, toHz: 1880 * MHZ }], vswrMax: 2 })).toBe(true);
     expect(meetsCoverage(mixed, { ranges: [{ fromHz: 650 * MHZ, toHz: 750 * MHZ }], vswrMax: 2 })).toBe(false);
@@ -127,7 +127,7 @@ describe(screenRejects.name, () => {
   });
 
   it('turns a part away on a sample over the limit, and leaves one on the limit to the exact check', () => {
-    // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3; rf-reference §3.2).
+    // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3).
     const p = part(1, { gamma: curve([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6]]) });
     const at = (vswrMax: number): CoverageQuery => ({ ranges: [{ fromHz: 800 * MHZ, toHz: 900 * MHZ }], vswrMax });
     expect(screenRejects(coverageScreen(p), screenLevels(at(2)), at(2))).toBe(false);

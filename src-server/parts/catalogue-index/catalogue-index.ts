@@ -99,7 +99,7 @@ export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean 
 
 /**
  * VSWR limits the screen is built for: common datasheet figures, with RL 10 dB (VSWR ≈ 1.925,
- * rf-reference §3.2) among them. A query uses the tightest one still at or above its own limit.
+ * Pozar 4th ed. §2.3) among them. A query uses the tightest one still at or above its own limit.
  */
 const SCREEN_GAMMA_LIMITS: readonly number[] = [...[1.5, 2, 2.5, 3, 4, 6].map(gammaMagnitudeFromVswr), gammaMagnitudeFromReturnLossDb(10)].sort((a, b) => a - b);
 /** The same levels as VSWR, for spec bands, which claimedMaxVswr states as VSWR. */

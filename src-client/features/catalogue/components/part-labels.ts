@@ -10,7 +10,7 @@ export const LIFECYCLE_INTENT: Record<Lifecycle, Intent> = { active: Intent.NONE
 
 export const LIFECYCLE_LABEL: Record<Lifecycle, string> = { active: 'active', nrnd: 'not for new designs', eol: 'end of life' };
 
-/** The span an antenna must cover for a band: lowest to highest edge of all its ranges (rf-reference §1.1 "Span"). */
+/** The span an antenna must cover for a band: lowest to highest edge of all its ranges (band edges: 3GPP TS 36.101 Table 5.5-1). */
 export function bandSpan(band: LibraryBand): { fromMhz: number; toMhz: number } {
   return { fromMhz: Math.min(...band.ranges.map((r) => r.fromMHz)), toMhz: Math.max(...band.ranges.map((r) => r.toMHz)) };
 }
