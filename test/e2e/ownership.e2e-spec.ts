@@ -2,7 +2,7 @@ import type { INestApplication } from '@nestjs/common';
 import { getDataSourceToken } from '@nestjs/typeorm';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
-import { createApiApp, DEMO, demoTokens, type DemoRole, unique } from '../support/api-app';
+import { createApiApp, demoTokens, type DemoRole, unique } from '../support/api-app';
 import { createDraft, csvCurve, s1pWithGamma } from '../support/parts';
 import { BACKFILL_PRODUCT_CREATORS } from '../../src-server/database/migrations/1765310000000-ownership-and-locking';
 

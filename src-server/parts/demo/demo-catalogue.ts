@@ -60,8 +60,6 @@ function offers(id: number, basePrice: number): DemoOffer[] {
   });
 }
 
-const LTE_LOW: [number, number] = [698, 960];
-const LTE_HIGH: [number, number] = [1710, 2690];
 
 function part(p: Omit<DemoPart, 'offers' | 'lifecycle' | 'reviewState'> & { lifecycle?: Lifecycle; reviewState?: ReviewState; price: number }): DemoPart {
   const { price, ...rest } = p;
