@@ -60,7 +60,6 @@ function offers(id: number, basePrice: number): DemoOffer[] {
   });
 }
 
-
 function part(p: Omit<DemoPart, 'offers' | 'lifecycle' | 'reviewState'> & { lifecycle?: Lifecycle; reviewState?: ReviewState; price: number }): DemoPart {
   const { price, ...rest } = p;
   return { lifecycle: 'active', reviewState: 'approved', ...rest, offers: offers(p.id, price) };
