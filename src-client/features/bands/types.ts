@@ -6,18 +6,18 @@ export interface Band {
   technology: Technology;
   designation: string;
   name: string;
-  ranges: { role: RangeRole; fromMHz: number; toMHz: number }[];
+  ranges: { role: RangeRole; fromMhz: number; toMhz: number }[];
   duplex: 'FDD' | 'TDD' | 'receive-only' | 'half-duplex';
   source: { document: string; table: string; note: string | null };
-  centreMHz: number | null;
-  bandwidthMHz: number | null;
+  centreMhz: number | null;
+  bandwidthMhz: number | null;
   regions: string[];
 }
 
 export interface BandFilter {
   technology?: Technology;
-  fromMHz?: number;
-  toMHz?: number;
+  fromMhz?: number;
+  toMhz?: number;
 }
 
 export interface BandSet {
@@ -42,8 +42,8 @@ export interface RegulatoryLimit {
   id: number;
   region: string;
   title: string;
-  fromMHz: number;
-  toMHz: number;
+  fromMhz: number;
+  toMhz: number;
   kind: LimitKind;
   valueDbm: number;
   valueText: string;

@@ -218,5 +218,5 @@ export interface LibraryBand {
   technology: string;
   designation: string;
   name: string;
-  ranges: { role: string; fromMHz: number; toMHz: number }[];
+  ranges: { role: string; fromMhz: number; toMhz: number }[];
 }

@@ -1,7 +1,7 @@
 export type Technology = 'lte' | 'nr' | 'gnss' | 'wifi' | 'ble' | 'ism' | 'uwb' | 'other';
 export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
 export type Polarization = 'linear' | 'RHCP' | 'LHCP' | 'any';
-export type Connector = 'solder-pad' | 'sma' | 'rp-sma' | 'mmcx' | 'mcx' | 'n' | 'micro-coax';
+export type Connector = 'solder-pad' | 'SMA' | 'RP-SMA' | 'MMCX' | 'MCX' | 'N' | 'micro-coax';
 
 /** The band as the products feature needs it (its own copy: features do not import each other). */
 export interface BandChoice {
@@ -9,7 +9,7 @@ export interface BandChoice {
   technology: Technology;
   designation: string;
   name: string;
-  ranges: { role: RangeRole; fromMHz: number; toMHz: number }[];
+  ranges: { role: RangeRole; fromMhz: number; toMhz: number }[];
   duplex: string;
 }
 
@@ -99,5 +99,5 @@ export const RECEIVE_ONLY: Technology[] = ['gnss'];
 export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
 export const POLARIZATIONS: Polarization[] = ['linear', 'RHCP', 'LHCP', 'any'];
 export const CONNECTOR_LABELS: Record<Connector, string> = {
-  'solder-pad': 'Solder pad', sma: 'SMA', 'rp-sma': 'RP-SMA', mmcx: 'MMCX', mcx: 'MCX', n: 'N', 'micro-coax': 'Micro-coax',
+  'solder-pad': 'Solder pad', SMA: 'SMA', 'RP-SMA': 'RP-SMA', MMCX: 'MMCX', MCX: 'MCX', N: 'N', 'micro-coax': 'Micro-coax',
 };

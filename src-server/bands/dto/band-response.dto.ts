@@ -3,8 +3,8 @@ import { DUPLEX_MODES, type DuplexMode, RANGE_ROLES, type RangeRole, TECHNOLOGIE
 
 export class BandRangeDto {
   @ApiProperty({ enum: RANGE_ROLES }) role: RangeRole;
-  @ApiProperty({ example: 699 }) fromMHz: number;
-  @ApiProperty({ example: 716 }) toMHz: number;
+  @ApiProperty({ example: 699 }) fromMhz: number;
+  @ApiProperty({ example: 716 }) toMhz: number;
 }
 
 export class BandSourceDto {
@@ -21,8 +21,8 @@ export class BandDto {
   @ApiProperty({ type: [BandRangeDto] }) ranges: BandRangeDto[];
   @ApiProperty({ enum: DUPLEX_MODES }) duplex: DuplexMode;
   @ApiProperty({ type: BandSourceDto }) source: BandSourceDto;
-  @ApiPropertyOptional({ nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMHz: number | null;
-  @ApiPropertyOptional({ nullable: true }) bandwidthMHz: number | null;
+  @ApiPropertyOptional({ nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMhz: number | null;
+  @ApiPropertyOptional({ nullable: true }) bandwidthMhz: number | null;
   @ApiProperty({ type: [String], description: 'Indicative regions; empty when not meaningful' }) regions: string[];
 }
 

@@ -9,10 +9,10 @@ export class BandRangeInputDto {
   role: RangeRole;
 
   @NumberField({ min: 0.001, max: 300000, example: 699 })
-  fromMHz: number;
+  fromMhz: number;
 
   @NumberField({ min: 0.001, max: 300000, example: 716 })
-  toMHz: number;
+  toMhz: number;
 }
 
 export class CreateBandDto {
@@ -37,10 +37,10 @@ export class CreateBandDto {
   ranges: BandRangeInputDto[];
 
   @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000 })
-  centreMHz?: number | null;
+  centreMhz?: number | null;
 
   @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000 })
-  bandwidthMHz?: number | null;
+  bandwidthMhz?: number | null;
 
   @ApiProperty({ enum: REGIONS, isArray: true })
   @IsArray()

@@ -11,10 +11,10 @@ export class CreateRegulatoryLimitDto {
   title: string;
 
   @NumberField({ min: 0.001, max: 300000 })
-  fromMHz: number;
+  fromMhz: number;
 
   @NumberField({ min: 0.001, max: 300000 })
-  toMHz: number;
+  toMhz: number;
 
   @EnumField(LIMIT_KINDS, { description: 'eirp, erp, or conducted power with an antenna-gain rule' })
   kind: LimitKind;
@@ -48,18 +48,18 @@ export class RegulatoryLimitQueryDto {
   region?: string;
 
   @NumberField({ optional: true, min: 0, max: 300000 })
-  fromMHz?: number;
+  fromMhz?: number;
 
   @NumberField({ optional: true, min: 0, max: 300000 })
-  toMHz?: number;
+  toMhz?: number;
 }
 
 export class RegulatoryLimitDto {
   @ApiProperty() id: number;
   @ApiProperty({ enum: REGIONS }) region: string;
   @ApiProperty() title: string;
-  @ApiProperty() fromMHz: number;
-  @ApiProperty() toMHz: number;
+  @ApiProperty() fromMhz: number;
+  @ApiProperty() toMhz: number;
   @ApiProperty({ enum: LIMIT_KINDS }) kind: LimitKind;
   @ApiProperty() valueDbm: number;
   @ApiProperty() valueText: string;
