@@ -2,7 +2,7 @@ import { EnumField, NumberField, StringField } from '../../common/dto-fields';
 import { TECHNOLOGIES, type Technology } from '../band-domain';
 
 export class BandQueryDto {
-  @EnumField(TECHNOLOGIES, { optional: true })
+  @EnumField(TECHNOLOGIES, { enumName: 'Technology', optional: true })
   technology?: Technology;
 
   @StringField({ optional: true, maxLength: 40, description: 'Exact designation, e.g. B12, n78, GPS L1 (case-insensitive)' })

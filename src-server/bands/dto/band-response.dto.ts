@@ -2,7 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { DUPLEX_MODES, type DuplexMode, RANGE_ROLES, type RangeRole, TECHNOLOGIES, type Technology } from '../band-domain';
 
 export class BandRangeDto {
-  @ApiProperty({ enum: RANGE_ROLES }) role: RangeRole;
+  @ApiProperty({ enum: RANGE_ROLES, enumName: 'RangeRole' }) role: RangeRole;
   @ApiProperty({ example: 699 }) fromMhz: number;
   @ApiProperty({ example: 716 }) toMhz: number;
 }
@@ -15,11 +15,11 @@ export class BandSourceDto {
 
 export class BandDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: TECHNOLOGIES }) technology: Technology;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
   @ApiProperty({ example: 'B12' }) designation: string;
   @ApiProperty() name: string;
   @ApiProperty({ type: [BandRangeDto] }) ranges: BandRangeDto[];
-  @ApiProperty({ enum: DUPLEX_MODES }) duplex: DuplexMode;
+  @ApiProperty({ enum: DUPLEX_MODES, enumName: 'DuplexMode' }) duplex: DuplexMode;
   @ApiProperty({ type: BandSourceDto }) source: BandSourceDto;
   @ApiPropertyOptional({ nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMhz: number | null;
   @ApiPropertyOptional({ nullable: true }) bandwidthMhz: number | null;
@@ -29,7 +29,7 @@ export class BandDto {
 /** The short form used inside band sets. */
 export class BandRefDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: TECHNOLOGIES }) technology: Technology;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
   @ApiProperty() designation: string;
   @ApiProperty() name: string;
 }

@@ -20,12 +20,12 @@ export class PartSummaryDto {
   @ApiProperty() manufacturer: string;
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
-  @ApiProperty({ enum: FORM_FACTORS }) formFactor: FormFactor;
-  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
-  @ApiProperty({ enum: POLARIZATIONS }) polarization: PartPolarization;
-  @ApiProperty({ enum: LIFECYCLES }) lifecycle: Lifecycle;
-  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
-  @ApiProperty({ enum: MEASUREMENT_KINDS, isArray: true }) measuredKinds: MeasurementKind[];
+  @ApiProperty({ enum: FORM_FACTORS, enumName: 'FormFactor' }) formFactor: FormFactor;
+  @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
+  @ApiProperty({ enum: POLARIZATIONS, enumName: 'PartPolarization' }) polarization: PartPolarization;
+  @ApiProperty({ enum: LIFECYCLES, enumName: 'Lifecycle' }) lifecycle: Lifecycle;
+  @ApiProperty({ enum: REVIEW_STATES, enumName: 'ReviewState' }) reviewState: ReviewState;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind', isArray: true }) measuredKinds: MeasurementKind[];
   @ApiProperty({ type: [PriceDto], description: 'Lowest unit price per currency over all offers' }) lowestPrices: PriceDto[];
   @ApiProperty() updatedAt: string;
 }
@@ -48,7 +48,7 @@ export class SpecBandDto {
 
 export class MeasurementDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: MEASUREMENT_KINDS }) kind: MeasurementKind;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind' }) kind: MeasurementKind;
   @ApiProperty({ nullable: true }) groundLengthMm: number | null;
   @ApiProperty({ nullable: true }) groundWidthMm: number | null;
   @ApiProperty({ nullable: true }) conditions: string | null;
@@ -67,7 +67,7 @@ export class MeasurementDto {
 
 export class MeasurementPointsDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: MEASUREMENT_KINDS }) kind: MeasurementKind;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind' }) kind: MeasurementKind;
   @ApiProperty({ type: [Number] }) frequenciesHz: number[];
   @ApiProperty({ type: [Number], description: 's11: |Γ|; efficiency: %; gains: dBi' }) values: number[];
   @ApiPropertyOptional({ type: [Number], description: 's11 only: VSWR' }) vswr?: number[];
@@ -100,7 +100,7 @@ export class RangeFiguresDto {
 
 export class DocumentDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: DOCUMENT_KINDS }) kind: DocumentKind;
+  @ApiProperty({ enum: DOCUMENT_KINDS, enumName: 'DocumentKind' }) kind: DocumentKind;
   @ApiProperty() title: string;
   @ApiProperty() fileName: string;
   @ApiProperty() contentType: string;
@@ -131,7 +131,7 @@ export class AlternateDto {
   @ApiProperty() partId: number;
   @ApiProperty() manufacturer: string;
   @ApiProperty() mpn: string;
-  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
+  @ApiProperty({ enum: REVIEW_STATES, enumName: 'ReviewState' }) reviewState: ReviewState;
   @ApiProperty({ enum: ['alternate', 'second-source'] }) kind: string;
   @ApiProperty({ nullable: true }) note: string | null;
 }
@@ -149,10 +149,10 @@ export class PartDetailDto {
   @ApiProperty() manufacturer: string;
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
-  @ApiProperty({ enum: FORM_FACTORS }) formFactor: FormFactor;
+  @ApiProperty({ enum: FORM_FACTORS, enumName: 'FormFactor' }) formFactor: FormFactor;
   @ApiProperty({ nullable: true }) mounting: string | null;
-  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
-  @ApiProperty({ enum: POLARIZATIONS }) polarization: PartPolarization;
+  @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
+  @ApiProperty({ enum: POLARIZATIONS, enumName: 'PartPolarization' }) polarization: PartPolarization;
   @ApiProperty() nominalImpedanceOhms: number;
   @ApiProperty({ nullable: true }) lengthMm: number | null;
   @ApiProperty({ nullable: true }) widthMm: number | null;
@@ -161,8 +161,8 @@ export class PartDetailDto {
   @ApiProperty({ nullable: true }) evalGroundWidthMm: number | null;
   @ApiProperty({ nullable: true }) tempMinC: number | null;
   @ApiProperty({ nullable: true }) tempMaxC: number | null;
-  @ApiProperty({ enum: LIFECYCLES }) lifecycle: Lifecycle;
-  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
+  @ApiProperty({ enum: LIFECYCLES, enumName: 'Lifecycle' }) lifecycle: Lifecycle;
+  @ApiProperty({ enum: REVIEW_STATES, enumName: 'ReviewState' }) reviewState: ReviewState;
   @ApiProperty({ nullable: true }) reviewComment: string | null;
   @ApiProperty({ nullable: true }) notes: string | null;
   @ApiProperty() version: number;
@@ -191,6 +191,6 @@ export class ReviewQueueItemDto {
   @ApiProperty() version: number;
   @ApiProperty({ type: UserRefDto, nullable: true }) submittedBy: UserRefDto | null;
   @ApiProperty({ nullable: true }) submittedAt: string | null;
-  @ApiProperty({ enum: MEASUREMENT_KINDS, isArray: true }) measuredKinds: MeasurementKind[];
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind', isArray: true }) measuredKinds: MeasurementKind[];
   @ApiProperty() documentCount: number;
 }

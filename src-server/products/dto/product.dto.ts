@@ -20,7 +20,7 @@ export class CreateProductDto {
   @NumberField({ min: 1, max: 2000, description: 'Ground-plane (board) width in mm' })
   groundPlaneWidthMm: number;
 
-  @ApiProperty({ enum: REGIONS, isArray: true, example: ['EU', 'US'] })
+  @ApiProperty({ enum: REGIONS, enumName: 'Region', isArray: true, example: ['EU', 'US'] })
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(REGIONS.length)

@@ -4,7 +4,7 @@ import { REGIONS } from '../../bands/band-domain';
 import { LIMIT_KINDS, type LimitKind } from '../regulatory-limit.entity';
 
 export class CreateRegulatoryLimitDto {
-  @EnumField(REGIONS, { example: 'EU' })
+  @EnumField(REGIONS, { enumName: 'Region', example: 'EU' })
   region: string;
 
   @StringField({ maxLength: 160, example: 'SRD 869.4–869.65 MHz' })
@@ -16,7 +16,7 @@ export class CreateRegulatoryLimitDto {
   @NumberField({ min: 0.001, max: 300000 })
   toMhz: number;
 
-  @EnumField(LIMIT_KINDS, { description: 'eirp, erp, or conducted power with an antenna-gain rule' })
+  @EnumField(LIMIT_KINDS, { enumName: 'LimitKind', description: 'eirp, erp, or conducted power with an antenna-gain rule' })
   kind: LimitKind;
 
   @NumberField({ min: -30, max: 60, description: 'The limit in dBm, unrounded (25 mW = 13.979 dBm)' })
@@ -44,7 +44,7 @@ export class CreateRegulatoryLimitDto {
 export class UpdateRegulatoryLimitDto extends PatchType(CreateRegulatoryLimitDto) {}
 
 export class RegulatoryLimitQueryDto {
-  @EnumField(REGIONS, { optional: true })
+  @EnumField(REGIONS, { enumName: 'Region', optional: true })
   region?: string;
 
   @NumberField({ optional: true, min: 0, max: 300000 })
@@ -56,11 +56,11 @@ export class RegulatoryLimitQueryDto {
 
 export class RegulatoryLimitDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: REGIONS }) region: string;
+  @ApiProperty({ enum: REGIONS, enumName: 'Region' }) region: string;
   @ApiProperty() title: string;
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;
-  @ApiProperty({ enum: LIMIT_KINDS }) kind: LimitKind;
+  @ApiProperty({ enum: LIMIT_KINDS, enumName: 'LimitKind' }) kind: LimitKind;
   @ApiProperty() valueDbm: number;
   @ApiProperty() valueText: string;
   @ApiPropertyOptional({ nullable: true }) gainThresholdDbi: number | null;

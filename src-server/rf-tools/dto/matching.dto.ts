@@ -44,7 +44,7 @@ export class MatchingRequestDto {
   @IsPositive()
   z0Ohms: number;
 
-  @EnumField(PREFERRED_SERIES, { description: 'IEC 60063 series the values snap to' })
+  @EnumField(PREFERRED_SERIES, { enumName: 'PreferredSeries', description: 'IEC 60063 series the values snap to' })
   series: (typeof PREFERRED_SERIES)[number];
 
   @ApiPropertyOptional({ type: SweepDto, description: 'Frequency range for the return-loss sweep; the load is taken as constant over it' })
@@ -83,7 +83,7 @@ export class MatchingSolutionDto {
 export class MatchingResponseDto {
   @ApiProperty() frequencyHz: number;
   @ApiProperty() z0Ohms: number;
-  @ApiProperty({ enum: PREFERRED_SERIES }) series: string;
+  @ApiProperty({ enum: PREFERRED_SERIES, enumName: 'PreferredSeries' }) series: string;
   @ApiProperty({ type: [MatchingSolutionDto], description: 'Usually two; one when both roots coincide, up to four when both topologies apply' })
   solutions: MatchingSolutionDto[];
 }
