@@ -1244,9 +1244,9 @@ export interface components {
             /** @description |Γ| */
             gammaMagnitude: number;
             /** @description null where |Γ| = 1 (infinite) */
-            vswr: Record<string, never> | null;
+            vswr: number | null;
             /** @description Positive dB; null where |Γ| = 0 (infinite) */
-            returnLossDb: Record<string, never> | null;
+            returnLossDb: number | null;
         };
         TouchstoneAnalysisDto: {
             /** @example 1.0 */
@@ -1342,14 +1342,14 @@ export interface components {
              * @enum {string}
              */
             kind: "inductor" | "capacitor" | "none";
-            inductanceNh: Record<string, never> | null;
-            capacitancePf: Record<string, never> | null;
+            inductanceNh: number | null;
+            capacitancePf: number | null;
         };
         SweepPointDto: {
             frequencyHz: number;
             /** @description Positive dB; null where the match is perfect */
-            returnLossDb: Record<string, never> | null;
-            vswr: Record<string, never> | null;
+            returnLossDb: number | null;
+            vswr: number | null;
         };
         NetworkDto: {
             /** @description Load-side element first */
@@ -1364,7 +1364,7 @@ export interface components {
             /** @description Every L and C replaced by its nearest preferred value */
             snapped: components["schemas"]["NetworkDto"];
             /** @description Return loss of the snapped network at the design frequency, dB */
-            snappedReturnLossDb: Record<string, never> | null;
+            snappedReturnLossDb: number | null;
         };
         MatchingResponseDto: {
             frequencyHz: number;
@@ -1462,11 +1462,11 @@ export interface components {
         ReflectionDto: {
             gammaMagnitude: number;
             /** @description null when infinite */
-            vswr: Record<string, never> | null;
+            vswr: number | null;
             /** @description Positive dB; null for a perfect match */
-            returnLossDb: Record<string, never> | null;
+            returnLossDb: number | null;
             /** @description Positive dB */
-            mismatchLossDb: Record<string, never> | null;
+            mismatchLossDb: number | null;
             transmittedPercent: number;
             reflectedPercent: number;
         };
@@ -1521,7 +1521,7 @@ export interface components {
             /** @example Table 5.5-1 E-UTRA operating bands */
             table: string;
             /** @description Spec release, corroboration and from-memory remarks */
-            note?: Record<string, never> | null;
+            note?: string | null;
         };
         BandDto: {
             id: number;
@@ -1533,8 +1533,8 @@ export interface components {
             duplex: components["schemas"]["DuplexMode"];
             source: components["schemas"]["BandSourceDto"];
             /** @description Carrier centre for GNSS signals and UWB channels */
-            centreMhz?: Record<string, never> | null;
-            bandwidthMhz?: Record<string, never> | null;
+            centreMhz?: number | null;
+            bandwidthMhz?: number | null;
             /** @description Indicative regions; empty when not meaningful */
             regions: string[];
         };
@@ -1635,11 +1635,11 @@ export interface components {
             kind: components["schemas"]["LimitKind"];
             valueDbm: number;
             valueText: string;
-            gainThresholdDbi?: Record<string, never> | null;
-            reductionDbPerDb?: Record<string, never> | null;
-            conditions?: Record<string, never> | null;
+            gainThresholdDbi?: number | null;
+            reductionDbPerDb?: number | null;
+            conditions?: string | null;
             source: string;
-            note?: Record<string, never> | null;
+            note?: string | null;
             updatedAt: string;
         };
         CreateRegulatoryLimitDto: {
@@ -1714,18 +1714,18 @@ export interface components {
              */
             targetRegions: components["schemas"]["Region"][];
             id: number;
-            notes?: Record<string, never> | null;
+            notes?: string | null;
             version: number;
             radioCount: number;
             /** @description Technologies of its radios */
-            technologies: string[];
+            technologies: components["schemas"]["Technology"][];
             createdAt: string;
             updatedAt: string;
             /** @description Who created it; null when unknown (seeded or older products). The creator and admins may delete it. */
-            createdBy?: components["schemas"]["PersonRefDto"] | null;
+            createdBy: components["schemas"]["PersonRefDto"] | null;
             /** @description Set when the product was deleted; an admin can restore it */
-            deletedAt?: Record<string, never> | null;
-            deletedBy?: components["schemas"]["PersonRefDto"] | null;
+            deletedAt: string | null;
+            deletedBy: components["schemas"]["PersonRefDto"] | null;
         };
         CreateProductDto: {
             /** @example Livestock tracker (collar unit) */
@@ -1756,7 +1756,7 @@ export interface components {
         Connector: "solder-pad" | "SMA" | "RP-SMA" | "MMCX" | "MCX" | "N" | "micro-coax";
         RadioBandDto: {
             band: components["schemas"]["BandDto"];
-            certifiedMaxGainDbi?: Record<string, never> | null;
+            certifiedMaxGainDbi?: number | null;
         };
         RadioDto: {
             id: number;
@@ -1765,11 +1765,11 @@ export interface components {
             technology: components["schemas"]["Technology"];
             module: string;
             receiveOnly: boolean;
-            transmitPowerDbm?: Record<string, never> | null;
+            transmitPowerDbm?: number | null;
             polarization: components["schemas"]["RadioPolarization"];
             connector: components["schemas"]["Connector"];
             feedLossDb: number;
-            notes?: Record<string, never> | null;
+            notes?: string | null;
             version: number;
             bands: components["schemas"]["RadioBandDto"][];
             updatedAt: string;
@@ -1796,18 +1796,18 @@ export interface components {
              */
             targetRegions: components["schemas"]["Region"][];
             id: number;
-            notes?: Record<string, never> | null;
+            notes?: string | null;
             version: number;
             radioCount: number;
             /** @description Technologies of its radios */
-            technologies: string[];
+            technologies: components["schemas"]["Technology"][];
             createdAt: string;
             updatedAt: string;
             /** @description Who created it; null when unknown (seeded or older products). The creator and admins may delete it. */
-            createdBy?: components["schemas"]["PersonRefDto"] | null;
+            createdBy: components["schemas"]["PersonRefDto"] | null;
             /** @description Set when the product was deleted; an admin can restore it */
-            deletedAt?: Record<string, never> | null;
-            deletedBy?: components["schemas"]["PersonRefDto"] | null;
+            deletedAt: string | null;
+            deletedBy: components["schemas"]["PersonRefDto"] | null;
             radios: components["schemas"]["RadioDto"][];
         };
         UpdateProductDto: {
@@ -1888,7 +1888,7 @@ export interface components {
             title: string;
             version: number;
             submittedBy: components["schemas"]["UserRefDto"] | null;
-            submittedAt: Record<string, never> | null;
+            submittedAt: string | null;
             measuredKinds: components["schemas"]["MeasurementKind"][];
             documentCount: number;
         };
@@ -1910,23 +1910,23 @@ export interface components {
             id: number;
             fromMhz: number;
             toMhz: number;
-            maxVswr: Record<string, never> | null;
-            minReturnLossDb: Record<string, never> | null;
-            efficiencyPct: Record<string, never> | null;
-            peakGainDbi: Record<string, never> | null;
-            averageGainDbi: Record<string, never> | null;
+            maxVswr: number | null;
+            minReturnLossDb: number | null;
+            efficiencyPct: number | null;
+            peakGainDbi: number | null;
+            averageGainDbi: number | null;
         };
         MeasurementDto: {
             id: number;
             kind: components["schemas"]["MeasurementKind"];
-            groundLengthMm: Record<string, never> | null;
-            groundWidthMm: Record<string, never> | null;
-            conditions: Record<string, never> | null;
+            groundLengthMm: number | null;
+            groundWidthMm: number | null;
+            conditions: string | null;
             fileName: string;
             sizeBytes: number;
             sha256: string;
             sourceFormat: string;
-            referenceOhms: Record<string, never> | null;
+            referenceOhms: number | null;
             pointCount: number;
             fromMhz: number;
             toMhz: number;
@@ -1941,17 +1941,17 @@ export interface components {
             /** @enum {string} */
             matchSource: "measured" | "spec" | "no-data";
             /** @description Share of the range with VSWR ≤ 2, 0..1 */
-            coveredFractionVswr2: Record<string, never> | null;
-            worstVswr: Record<string, never> | null;
-            worstVswrAtMhz: Record<string, never> | null;
-            minReturnLossDb: Record<string, never> | null;
+            coveredFractionVswr2: number | null;
+            worstVswr: number | null;
+            worstVswrAtMhz: number | null;
+            minReturnLossDb: number | null;
             /** @enum {string} */
             efficiencySource: "measured" | "spec" | "no-data";
-            minEfficiencyPct: Record<string, never> | null;
-            averageEfficiencyPct: Record<string, never> | null;
-            averageEfficiencyDb: Record<string, never> | null;
-            peakGainDbi: Record<string, never> | null;
-            averageGainDbi: Record<string, never> | null;
+            minEfficiencyPct: number | null;
+            averageEfficiencyPct: number | null;
+            averageEfficiencyDb: number | null;
+            peakGainDbi: number | null;
+            averageGainDbi: number | null;
             /** @description Why a figure is missing */
             notes: string[];
         };
@@ -1982,13 +1982,13 @@ export interface components {
         OfferDto: {
             id: number;
             supplier: string;
-            sku: Record<string, never> | null;
+            sku: string | null;
             currency: string;
             priceBreaks: components["schemas"]["PriceBreakDto"][];
-            moq: Record<string, never> | null;
-            leadTimeDays: Record<string, never> | null;
+            moq: number | null;
+            leadTimeDays: number | null;
             /** @example 2025-11-20 */
-            lastCheckedOn: Record<string, never> | null;
+            lastCheckedOn: string | null;
             version: number;
         };
         AlternateDto: {
@@ -1998,7 +1998,7 @@ export interface components {
             reviewState: components["schemas"]["ReviewState"];
             /** @enum {string} */
             kind: "alternate" | "second-source";
-            note: Record<string, never> | null;
+            note: string | null;
         };
         PartPermissionsDto: {
             edit: boolean;
@@ -2013,27 +2013,27 @@ export interface components {
             mpn: string;
             title: string;
             formFactor: components["schemas"]["FormFactor"];
-            mounting: Record<string, never> | null;
+            mounting: string | null;
             connector: components["schemas"]["Connector"];
             polarization: components["schemas"]["PartPolarization"];
             nominalImpedanceOhms: number;
-            lengthMm: Record<string, never> | null;
-            widthMm: Record<string, never> | null;
-            heightMm: Record<string, never> | null;
-            evalGroundLengthMm: Record<string, never> | null;
-            evalGroundWidthMm: Record<string, never> | null;
-            tempMinC: Record<string, never> | null;
-            tempMaxC: Record<string, never> | null;
+            lengthMm: number | null;
+            widthMm: number | null;
+            heightMm: number | null;
+            evalGroundLengthMm: number | null;
+            evalGroundWidthMm: number | null;
+            tempMinC: number | null;
+            tempMaxC: number | null;
             lifecycle: components["schemas"]["Lifecycle"];
             reviewState: components["schemas"]["ReviewState"];
-            reviewComment: Record<string, never> | null;
-            notes: Record<string, never> | null;
+            reviewComment: string | null;
+            notes: string | null;
             version: number;
             createdBy: components["schemas"]["UserRefDto"] | null;
             submittedBy: components["schemas"]["UserRefDto"] | null;
-            submittedAt: Record<string, never> | null;
+            submittedAt: string | null;
             reviewedBy: components["schemas"]["UserRefDto"] | null;
-            reviewedAt: Record<string, never> | null;
+            reviewedAt: string | null;
             createdAt: string;
             updatedAt: string;
             specBands: components["schemas"]["SpecBandDto"][];
@@ -2174,7 +2174,7 @@ export interface components {
             pointCount: number;
             fromMhz: number;
             toMhz: number;
-            referenceOhms: Record<string, never> | null;
+            referenceOhms: number | null;
             /** @description Return loss dB (s11), efficiency % or gain dBi */
             valueLabel: string;
             /** @description At most 400 points, evenly picked */
@@ -2259,7 +2259,7 @@ export interface components {
              * @enum {string}
              */
             origin: "file" | "file-edited" | "admin";
-            updatedAt?: Record<string, never> | null;
+            updatedAt?: string | null;
         };
         RuleDefinitionBodyDto: {
             /** @description The rule as JSON (see rules/*.json) */
@@ -2315,7 +2315,7 @@ export interface components {
              * @enum {string}
              */
             origin: "file" | "file-edited" | "admin";
-            updatedAt?: Record<string, never> | null;
+            updatedAt?: string | null;
             /** @description The whole rule as JSON: parameters, appliesWhen, conditions (json-rules-engine) and event */
             definition: Record<string, never>;
         };
@@ -2334,8 +2334,8 @@ export interface components {
             version: number;
             /** @enum {string} */
             action: "file" | "created" | "edited" | "enabled" | "disabled";
-            changedBy?: Record<string, never> | null;
-            at?: Record<string, never> | null;
+            changedBy?: string | null;
+            at?: string | null;
             definition: Record<string, never>;
         };
         MatrixRangeDto: {
@@ -2414,7 +2414,7 @@ export interface components {
             title: string;
             manufacturer: string;
             status: components["schemas"]["CellStatus"];
-            marginDb?: Record<string, never> | null;
+            marginDb?: number | null;
             deciding?: components["schemas"]["DecidingFigureDto"] | null;
             /** @enum {string|null} */
             assignment?: "shortlisted" | "chosen" | null;
@@ -2437,7 +2437,7 @@ export interface components {
             title: string;
             /** @enum {string} */
             state: "shortlisted" | "chosen";
-            note?: Record<string, never> | null;
+            note?: string | null;
             updatedAt: string;
         };
         ShortlistDto: {

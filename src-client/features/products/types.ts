@@ -1,7 +1,10 @@
-export type Technology = 'lte' | 'nr' | 'gnss' | 'wifi' | 'ble' | 'ism' | 'uwb' | 'other';
-export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
-export type Polarization = 'linear' | 'RHCP' | 'LHCP' | 'any';
-export type Connector = 'solder-pad' | 'SMA' | 'RP-SMA' | 'MMCX' | 'MCX' | 'N' | 'micro-coax';
+import type { components } from '../../lib/api-types';
+
+type Schemas = components['schemas'];
+export type Technology = Schemas['Technology'];
+export type RangeRole = Schemas['RangeRole'];
+export type Polarization = Schemas['RadioPolarization'];
+export type Connector = Schemas['Connector'];
 
 /** The band as the products feature needs it (its own copy: features do not import each other). */
 export interface BandChoice {
@@ -21,46 +24,11 @@ export interface BandSetChoice {
   bands: { id: number; technology: Technology; designation: string }[];
 }
 
-export interface ProductSummary {
-  id: number;
-  name: string;
-  code: string;
-  owner: string;
-  groundPlaneLengthMm: number;
-  groundPlaneWidthMm: number;
-  targetRegions: string[];
-  notes: string | null;
-  version: number;
-  radioCount: number;
-  technologies: Technology[];
-  createdAt: string;
-  updatedAt: string;
-  /** Null when unknown (seeded or older products). */
-  createdBy: { id: number; name: string } | null;
-  deletedAt: string | null;
-  deletedBy: { id: number; name: string } | null;
-}
+export type ProductSummary = Schemas['ProductSummaryDto'];
 
-export interface Radio {
-  id: number;
-  productId: number;
-  name: string;
-  technology: Technology;
-  module: string;
-  receiveOnly: boolean;
-  transmitPowerDbm: number | null;
-  polarization: Polarization;
-  connector: Connector;
-  feedLossDb: number;
-  notes: string | null;
-  version: number;
-  bands: { band: BandChoice; certifiedMaxGainDbi: number | null }[];
-  updatedAt: string;
-}
+export type Radio = Schemas['RadioDto'];
 
-export interface ProductDetail extends ProductSummary {
-  radios: Radio[];
-}
+export type ProductDetail = Schemas['ProductDetailDto'];
 
 export interface ProductInput {
   name: string;

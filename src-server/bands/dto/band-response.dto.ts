@@ -10,7 +10,7 @@ export class BandRangeDto {
 export class BandSourceDto {
   @ApiProperty({ example: '3GPP TS 36.101' }) document: string;
   @ApiProperty({ example: 'Table 5.5-1 E-UTRA operating bands' }) table: string;
-  @ApiPropertyOptional({ nullable: true, description: 'Spec release, corroboration and from-memory remarks' }) note: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true, description: 'Spec release, corroboration and from-memory remarks' }) note: string | null;
 }
 
 export class BandDto {
@@ -21,8 +21,8 @@ export class BandDto {
   @ApiProperty({ type: [BandRangeDto] }) ranges: BandRangeDto[];
   @ApiProperty({ enum: DUPLEX_MODES, enumName: 'DuplexMode' }) duplex: DuplexMode;
   @ApiProperty({ type: BandSourceDto }) source: BandSourceDto;
-  @ApiPropertyOptional({ nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMhz: number | null;
-  @ApiPropertyOptional({ nullable: true }) bandwidthMhz: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMhz: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) bandwidthMhz: number | null;
   @ApiProperty({ type: [String], description: 'Indicative regions; empty when not meaningful' }) regions: string[];
 }
 

@@ -94,9 +94,9 @@ export class CandidateDto {
   @ApiProperty() title: string;
   @ApiProperty() manufacturer: string;
   @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus' }) status: CellStatus;
-  @ApiPropertyOptional({ nullable: true }) marginDb: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) marginDb: number | null;
   @ApiPropertyOptional({ type: DecidingFigureDto, nullable: true }) deciding: DecidingFigureDto | null;
-  @ApiPropertyOptional({ enum: ['shortlisted', 'chosen'], nullable: true }) assignment: string | null;
+  @ApiPropertyOptional({ type: String, enum: ['shortlisted', 'chosen'], nullable: true }) assignment: string | null;
   @ApiProperty({ type: [CandidateBandDto] }) bands: CandidateBandDto[];
 }
 
@@ -116,7 +116,7 @@ export class AssignmentDto {
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
   @ApiProperty({ enum: ['shortlisted', 'chosen'] }) state: string;
-  @ApiPropertyOptional({ nullable: true }) note: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) note: string | null;
   @ApiProperty() updatedAt: string;
 }
 

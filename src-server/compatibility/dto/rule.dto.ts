@@ -15,7 +15,7 @@ export class RuleSummaryDto {
   @ApiProperty() version: number;
   @ApiProperty() source: string;
   @ApiProperty({ enum: ['file', 'file-edited', 'admin'], description: 'file: as in rules/; file-edited: a file rule an admin changed; admin: made by an admin' }) origin: RuleOrigin;
-  @ApiPropertyOptional({ nullable: true }) updatedAt: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) updatedAt: string | null;
 }
 
 export class RuleDetailDto extends RuleSummaryDto {
@@ -52,8 +52,8 @@ export class SetRuleEnabledDto {
 export class RuleVersionDto {
   @ApiProperty() version: number;
   @ApiProperty({ enum: ['file', 'created', 'edited', 'enabled', 'disabled'] }) action: string;
-  @ApiPropertyOptional({ nullable: true }) changedBy: string | null;
-  @ApiPropertyOptional({ nullable: true }) at: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) changedBy: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) at: string | null;
   @ApiProperty() definition: Record<string, unknown>;
 }
 

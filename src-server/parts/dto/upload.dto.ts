@@ -27,7 +27,7 @@ export class CurvePreviewDto {
   @ApiProperty() pointCount: number;
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;
-  @ApiProperty({ nullable: true }) referenceOhms: number | null;
+  @ApiProperty({ type: Number, nullable: true }) referenceOhms: number | null;
   @ApiProperty({ description: 'Return loss dB (s11), efficiency % or gain dBi' }) valueLabel: string;
   @ApiProperty({ type: [Number], description: 'At most 400 points, evenly picked' }) frequenciesMhz: number[];
   @ApiProperty({ type: [Number] }) values: number[];

@@ -55,7 +55,7 @@ export class UpdateRadioDto extends PatchType(CreateRadioDto) {
 
 export class RadioBandDto {
   @ApiProperty({ type: BandDto }) band: BandDto;
-  @ApiPropertyOptional({ nullable: true }) certifiedMaxGainDbi: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) certifiedMaxGainDbi: number | null;
 }
 
 export class RadioDto {
@@ -65,11 +65,11 @@ export class RadioDto {
   @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
   @ApiProperty() module: string;
   @ApiProperty() receiveOnly: boolean;
-  @ApiPropertyOptional({ nullable: true }) transmitPowerDbm: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) transmitPowerDbm: number | null;
   @ApiProperty({ enum: POLARIZATIONS, enumName: 'RadioPolarization' }) polarization: Polarization;
   @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
   @ApiProperty() feedLossDb: number;
-  @ApiPropertyOptional({ nullable: true }) notes: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty({ type: [RadioBandDto] }) bands: RadioBandDto[];
   @ApiProperty() updatedAt: string;

@@ -63,10 +63,10 @@ export class RegulatoryLimitDto {
   @ApiProperty({ enum: LIMIT_KINDS, enumName: 'LimitKind' }) kind: LimitKind;
   @ApiProperty() valueDbm: number;
   @ApiProperty() valueText: string;
-  @ApiPropertyOptional({ nullable: true }) gainThresholdDbi: number | null;
-  @ApiPropertyOptional({ nullable: true }) reductionDbPerDb: number | null;
-  @ApiPropertyOptional({ nullable: true }) conditions: string | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) gainThresholdDbi: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) reductionDbPerDb: number | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) conditions: string | null;
   @ApiProperty() source: string;
-  @ApiPropertyOptional({ nullable: true }) note: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) note: string | null;
   @ApiProperty() updatedAt: string;
 }

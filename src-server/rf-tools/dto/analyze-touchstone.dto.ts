@@ -37,8 +37,8 @@ export class MatchPointDto {
 export class CurvePointDto {
   @ApiProperty() frequencyHz: number;
   @ApiProperty({ description: '|Γ|' }) gammaMagnitude: number;
-  @ApiProperty({ nullable: true, description: 'null where |Γ| = 1 (infinite)' }) vswr: number | null;
-  @ApiProperty({ nullable: true, description: 'Positive dB; null where |Γ| = 0 (infinite)' }) returnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'null where |Γ| = 1 (infinite)' }) vswr: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Positive dB; null where |Γ| = 0 (infinite)' }) returnLossDb: number | null;
 }
 
 export class TouchstoneAnalysisDto {
