@@ -55,8 +55,9 @@ describe('one API vocabulary', () => {
       await runner.query('INSERT INTO compatibility_rules (rule_key, origin, definition, version, enabled) VALUES (?, ?, ?, 1, 0)', [ruleKey, 'admin', JSON.stringify(definition)]);
       await migration.up(runner);
       expect((await runner.query('SELECT connector FROM radios WHERE id = ?', [created.id]))[0].connector).toBe('SMA');
-      const stored = (await runner.query('SELECT definition FROM compatibility_rules WHERE rule_key = ?', [ruleKey]))[0].definition as string;
-      const migrated = JSON.parse(stored);
+      const stored = (await runner.query('SELECT definition FROM compatibility_rules WHERE rule_key = ?', [ruleKey]))[0].definition as unknown;
+      // mysql2 hands a JSON column back parsed or as text, depending on the server's column type.
+      const migrated = typeof stored === 'string' ? JSON.parse(stored) : stored;
       expect(migrated.conditions.all[0].fact).toBe('bandLowestMhz');
       expect(migrated.event.params.message).toBe('worst at {worstVswrAtMhz} MHz');
     } finally {
