@@ -20,6 +20,8 @@ log "type-checking server, tests and client"
 npx tsc -p tsconfig.test.json
 npx tsc -p tsconfig.client.json
 build_server
+log "checking that the client's API types match the server's OpenAPI document"
+API_TYPES_BUILT=1 bash scripts/api-types.sh --check
 build_client
 fakes_stop test
 fakes_start test

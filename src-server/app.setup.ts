@@ -1,9 +1,10 @@
 import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
 import helmet from 'helmet';
 import { AppModule } from './app.module';
+import { buildApiDocument } from './api-document';
 import { APP_CONFIG, type AppConfig } from './config/app-config';
 import { JsonLogger } from './common/json-logger';
 import { requestIdMiddleware } from './common/request-context';
@@ -40,16 +41,7 @@ export function configureApp(app: INestApplication): INestApplication {
   app.enableCors({ origin: [config.appUrl], credentials: false });
   app.setGlobalPrefix('api');
   app.enableShutdownHooks();
-  const document = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder()
-      .setTitle('Bandwright API')
-      .setDescription('Antenna catalogue, band library and compatibility checks. Each route lists the roles that may call it under x-roles.')
-      .setVersion('0.1')
-      .addBearerAuth()
-      .build(),
-  );
-  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs-json' });
+  SwaggerModule.setup('api/docs', app, buildApiDocument(app), { jsonDocumentUrl: 'api/docs-json' });
   return app;
 }
 

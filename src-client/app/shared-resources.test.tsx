@@ -19,7 +19,7 @@ import { useOverlayBands } from '../features/tools/api/get-overlay-bands';
 
 // Several features on one page read the same server resources; these tests hold them to one cache entry each.
 
-const band = { id: 1, technology: 'lte', designation: 'B20', name: 'E-UTRA 20', duplex: 'FDD', ranges: [{ role: 'uplink', fromMHz: 832, toMHz: 862 }] };
+const band = { id: 1, technology: 'lte', designation: 'B20', name: 'E-UTRA 20', duplex: 'FDD', ranges: [{ role: 'uplink', fromMhz: 832, toMhz: 862 }] };
 const part = { id: 5, manufacturer: 'Kestrel', mpn: 'KA-1', title: 'Chip', version: 1, coveredRanges: [], measurements: [] };
 const answers: Record<string, unknown> = {
   'GET /api/bands': [band],

@@ -1,7 +1,7 @@
 import { cleanup, render, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
 import { FrequencyStrip, type StripRow } from './FrequencyStrip';
-import { formatMHz, logAxis, mergeIntervals, piecewiseAxis } from './frequency-axis';
+import { formatMhz, logAxis, mergeIntervals, piecewiseAxis } from './frequency-axis';
 
 // 3GPP TS 36.101 Table 5.5-1 (B12, B20) and IS-GPS-200 (L1 1575.42 ± 10.23 MHz).
 const rows: StripRow[] = [
@@ -9,25 +9,25 @@ const rows: StripRow[] = [
     id: 'cell',
     label: 'Cellular',
     ranges: [
-      { role: 'uplink', fromMHz: 699, toMHz: 716, label: 'B12' },
-      { role: 'downlink', fromMHz: 729, toMHz: 746, label: 'B12' },
-      { role: 'uplink', fromMHz: 832, toMHz: 862, label: 'B20' },
-      { role: 'downlink', fromMHz: 791, toMHz: 821, label: 'B20' },
+      { role: 'uplink', fromMhz: 699, toMhz: 716, label: 'B12' },
+      { role: 'downlink', fromMhz: 729, toMhz: 746, label: 'B12' },
+      { role: 'uplink', fromMhz: 832, toMhz: 862, label: 'B20' },
+      { role: 'downlink', fromMhz: 791, toMhz: 821, label: 'B20' },
     ],
-    covered: [{ fromMHz: 690, toMHz: 800, label: 'Part X' }],
+    covered: [{ fromMhz: 690, toMhz: 800, label: 'Part X' }],
   },
-  { id: 'gnss', label: 'GNSS', ranges: [{ role: 'receive', fromMHz: 1565.19, toMHz: 1585.65, label: 'GPS L1' }] },
-  { id: 'nr', label: '5G', ranges: [{ role: 'tdd', fromMHz: 3300, toMHz: 3800, label: 'n78' }] },
+  { id: 'gnss', label: 'GNSS', ranges: [{ role: 'receive', fromMhz: 1565.19, toMhz: 1585.65, label: 'GPS L1' }] },
+  { id: 'nr', label: '5G', ranges: [{ role: 'tdd', fromMhz: 3300, toMhz: 3800, label: 'n78' }] },
 ];
 
-describe('formatMHz', () => {
+describe('formatMhz', () => {
   it('writes MHz below 1 GHz and GHz above, without trailing zeros', () => {
-    expect(formatMHz(700)).toBe('700 MHz');
-    expect(formatMHz(868.1)).toBe('868.1 MHz');
-    expect(formatMHz(1575.42)).toBe('1.58 GHz');
-    expect(formatMHz(2000)).toBe('2 GHz');
-    expect(formatMHz(5900)).toBe('5.9 GHz');
-    expect(formatMHz(999.5)).toBe('999.5 MHz');
+    expect(formatMhz(700)).toBe('700 MHz');
+    expect(formatMhz(868.1)).toBe('868.1 MHz');
+    expect(formatMhz(1575.42)).toBe('1.58 GHz');
+    expect(formatMhz(2000)).toBe('2 GHz');
+    expect(formatMhz(5900)).toBe('5.9 GHz');
+    expect(formatMhz(999.5)).toBe('999.5 MHz');
   });
 });
 
@@ -45,7 +45,7 @@ describe('logAxis', () => {
 
 describe('piecewiseAxis', () => {
   it('is monotonic, shortens the gap between clusters and marks the break', () => {
-    const axis = piecewiseAxis([{ fromMHz: 699, toMHz: 746 }, { fromMHz: 3300, toMHz: 3800 }], 800);
+    const axis = piecewiseAxis([{ fromMhz: 699, toMhz: 746 }, { fromMhz: 3300, toMhz: 3800 }], 800);
     expect(axis.breaks).toHaveLength(1);
     const fs = [672, 699, 716, 746, 3300, 3600, 3800];
     const xs = fs.map(axis.x);
@@ -55,8 +55,8 @@ describe('piecewiseAxis', () => {
   });
 
   it('merges overlapping intervals', () => {
-    expect(mergeIntervals([{ fromMHz: 1710, toMHz: 1785 }, { fromMHz: 1700, toMHz: 1720 }, { fromMHz: 1805, toMHz: 1880 }])).toEqual([
-      { fromMHz: 1700, toMHz: 1785 }, { fromMHz: 1805, toMHz: 1880 },
+    expect(mergeIntervals([{ fromMhz: 1710, toMhz: 1785 }, { fromMhz: 1700, toMhz: 1720 }, { fromMhz: 1805, toMhz: 1880 }])).toEqual([
+      { fromMhz: 1700, toMhz: 1785 }, { fromMhz: 1805, toMhz: 1880 },
     ]);
   });
 });
@@ -104,9 +104,9 @@ describe(FrequencyStrip.name, () => {
   it('stacks overlapping bands of one row in separate lanes instead of drawing them over each other', () => {
     // B5 UL 824–849 and B26 UL 814–849 overlap (3GPP TS 36.101 Table 5.5-1); B8 UL 880–915 does not.
     const { container } = render(<FrequencyStrip rows={[{ id: 1, label: 'Cell', ranges: [
-      { role: 'uplink', fromMHz: 824, toMHz: 849, label: 'B5' },
-      { role: 'uplink', fromMHz: 814, toMHz: 849, label: 'B26' },
-      { role: 'uplink', fromMHz: 880, toMHz: 915, label: 'B8' },
+      { role: 'uplink', fromMhz: 824, toMhz: 849, label: 'B5' },
+      { role: 'uplink', fromMhz: 814, toMhz: 849, label: 'B26' },
+      { role: 'uplink', fromMhz: 880, toMhz: 915, label: 'B8' },
     ] }]} />);
     const ys = [...container.querySelectorAll('[data-role] rect')].map((r) => Number(r.getAttribute('y')));
     expect(ys[0]).not.toBe(ys[1]);

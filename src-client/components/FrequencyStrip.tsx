@@ -1,14 +1,14 @@
 import { type RefObject, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { Classes } from '@blueprintjs/core';
-import { type FrequencyAxis, formatMHz, logAxis, mergeIntervals, piecewiseAxis } from './frequency-axis';
+import { type FrequencyAxis, formatMhz, logAxis, mergeIntervals, piecewiseAxis } from './frequency-axis';
 import './FrequencyStrip.css';
 
 /** The role of a required range; each role has its own fill pattern, not only its own shade. */
 export type StripRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
 
 export interface StripRange {
-  fromMHz: number;
-  toMHz: number;
+  fromMhz: number;
+  toMhz: number;
   role: StripRole;
   /** Short name drawn inside the bar when it fits, e.g. "B12". */
   label: string;
@@ -16,8 +16,8 @@ export interface StripRange {
 
 /** A second layer: what a part covers (drawn as a band under the required ranges of its row). */
 export interface StripCoveredRange {
-  fromMHz: number;
-  toMHz: number;
+  fromMhz: number;
+  toMhz: number;
   /** Who covers it, e.g. a part number; used in the hover title. */
   label: string;
 }
@@ -114,7 +114,7 @@ function packLanes(spans: { x0: number; x1: number }[]): { lanes: number[]; coun
   return { lanes, count: Math.max(ends.length, 1) };
 }
 
-const rangeTitle = (row: string, r: StripRange) => `${row}: ${r.label} ${ROLE_TEXT[r.role].toLowerCase()}, ${formatMHz(r.fromMHz)} – ${formatMHz(r.toMHz)}`;
+const rangeTitle = (row: string, r: StripRange) => `${row}: ${r.label} ${ROLE_TEXT[r.role].toLowerCase()}, ${formatMhz(r.fromMhz)} – ${formatMhz(r.toMhz)}`;
 
 /**
  * Bandwright's band-plan strip: one row per radio, its required ranges drawn on a shared
@@ -129,14 +129,14 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
     if (!all.length) return logAxis(100, 10000, plotWidth);
     if (scale === 'log') {
       const merged = mergeIntervals(all);
-      return logAxis(merged[0].fromMHz * 0.9, merged[merged.length - 1].toMHz * 1.1, plotWidth);
+      return logAxis(merged[0].fromMhz * 0.9, merged[merged.length - 1].toMhz * 1.1, plotWidth);
     }
     return piecewiseAxis(all, plotWidth);
   }, [all, scale, plotWidth]);
   const layout = useMemo(() => {
     let y = 0;
     return rows.map((row) => {
-      const spans = row.ranges.map((r) => ({ x0: axis.x(r.fromMHz), x1: Math.max(axis.x(r.toMHz), axis.x(r.fromMHz) + 2) }));
+      const spans = row.ranges.map((r) => ({ x0: axis.x(r.fromMhz), x1: Math.max(axis.x(r.toMhz), axis.x(r.fromMhz) + 2) }));
       const { lanes, count } = packLanes(spans);
       const height = Math.max(ROW_H, count * LANE_H + 14);
       const entry = { y, height, spans, lanes };
@@ -189,10 +189,10 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
                   );
                 })}
                 {(row.covered ?? []).map((c, j) => {
-                  const x0 = axis.x(c.fromMHz);
+                  const x0 = axis.x(c.fromMhz);
                   return (
-                    <rect key={`cover-${j}`} x={x0} y={rowHeight - COVER_H - 3} width={Math.max(axis.x(c.toMHz) - x0, 2)} height={COVER_H} className="bw-strip__covered" data-testid="covered-range">
-                      <title>{`${c.label} covers ${formatMHz(c.fromMHz)} – ${formatMHz(c.toMHz)}`}</title>
+                    <rect key={`cover-${j}`} x={x0} y={rowHeight - COVER_H - 3} width={Math.max(axis.x(c.toMhz) - x0, 2)} height={COVER_H} className="bw-strip__covered" data-testid="covered-range">
+                      <title>{`${c.label} covers ${formatMhz(c.fromMhz)} – ${formatMhz(c.toMhz)}`}</title>
                     </rect>
                   );
                 })}

@@ -1,8 +1,8 @@
 /** Pure frequency-axis maths for FrequencyStrip: log and piecewise-log scales, ticks and labels. */
 
 export interface FrequencyInterval {
-  fromMHz: number;
-  toMHz: number;
+  fromMhz: number;
+  toMhz: number;
 }
 
 export interface FrequencyAxis {
@@ -15,7 +15,7 @@ export interface FrequencyAxis {
 }
 
 /** "700 MHz", "868 MHz", "1.58 GHz", "5.9 GHz": three significant figures at most, MHz below 1 GHz. */
-export function formatMHz(mhz: number): string {
+export function formatMhz(mhz: number): string {
   if (mhz < 1000) return `${Number(mhz.toPrecision(4))} MHz`;
   return `${Number((mhz / 1000).toPrecision(3))} GHz`;
 }
@@ -23,12 +23,12 @@ export function formatMHz(mhz: number): string {
 const NICE_STEPS = [1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 7, 8];
 
 /** Candidate tick frequencies between from and to: 1-1.2-1.5-2… per decade. */
-function candidates(fromMHz: number, toMHz: number): number[] {
+function candidates(fromMhz: number, toMhz: number): number[] {
   const out: number[] = [];
-  for (let decade = 10 ** Math.floor(Math.log10(fromMHz)); decade <= toMHz; decade *= 10) {
+  for (let decade = 10 ** Math.floor(Math.log10(fromMhz)); decade <= toMhz; decade *= 10) {
     for (const step of NICE_STEPS) {
       const f = Number((step * decade).toPrecision(6));
-      if (f >= fromMHz && f <= toMHz) out.push(f);
+      if (f >= fromMhz && f <= toMhz) out.push(f);
     }
   }
   return out;
@@ -52,22 +52,22 @@ function thin(ticks: { mhz: number; x: number }[], minGapPx: number): { mhz: num
 
 /** Merges intervals that overlap or touch, sorted by start. */
 export function mergeIntervals(intervals: FrequencyInterval[]): FrequencyInterval[] {
-  const sorted = [...intervals].filter((i) => i.toMHz > 0 && i.fromMHz > 0).sort((a, b) => a.fromMHz - b.fromMHz);
+  const sorted = [...intervals].filter((i) => i.toMhz > 0 && i.fromMhz > 0).sort((a, b) => a.fromMhz - b.fromMhz);
   const merged: FrequencyInterval[] = [];
   for (const i of sorted) {
     const last = merged[merged.length - 1];
-    if (last && i.fromMHz <= last.toMHz) last.toMHz = Math.max(last.toMHz, i.toMHz);
+    if (last && i.fromMhz <= last.toMhz) last.toMhz = Math.max(last.toMhz, i.toMhz);
     else merged.push({ ...i });
   }
   return merged;
 }
 
-/** A log axis over [fromMHz, toMHz] drawn across width px. */
-export function logAxis(fromMHz: number, toMHz: number, width: number, minTickGapPx = 56): FrequencyAxis {
-  const lo = Math.log10(fromMHz);
-  const span = Math.max(Math.log10(toMHz) - lo, 1e-9);
+/** A log axis over [fromMhz, toMhz] drawn across width px. */
+export function logAxis(fromMhz: number, toMhz: number, width: number, minTickGapPx = 56): FrequencyAxis {
+  const lo = Math.log10(fromMhz);
+  const span = Math.max(Math.log10(toMhz) - lo, 1e-9);
   const x = (mhz: number) => ((Math.log10(Math.max(mhz, 1e-9)) - lo) / span) * width;
-  const ticks = thin(candidates(fromMHz, toMHz).map((mhz) => ({ mhz, x: x(mhz) })), minTickGapPx).map((t) => ({ ...t, label: formatMHz(t.mhz) }));
+  const ticks = thin(candidates(fromMhz, toMhz).map((mhz) => ({ mhz, x: x(mhz) })), minTickGapPx).map((t) => ({ ...t, label: formatMhz(t.mhz) }));
   return { x, ticks, breaks: [], width };
 }
 
@@ -77,10 +77,10 @@ export function logAxis(fromMHz: number, toMHz: number, width: number, minTickGa
  * shrink to `gapPx` with a break mark. Keeps 700 MHz and 5 GHz bands readable on one strip.
  */
 export function piecewiseAxis(intervals: FrequencyInterval[], width: number, { padding = 0.04, gapPx = 18, minClusterShare = 0.06, minTickGapPx = 56 } = {}): FrequencyAxis {
-  const clusters = mergeIntervals(intervals.map((i) => ({ fromMHz: i.fromMHz * (1 - padding), toMHz: i.toMHz * (1 + padding) })));
+  const clusters = mergeIntervals(intervals.map((i) => ({ fromMhz: i.fromMhz * (1 - padding), toMhz: i.toMhz * (1 + padding) })));
   if (!clusters.length) return logAxis(100, 10000, width, minTickGapPx);
   const usable = Math.max(width - gapPx * (clusters.length - 1), clusters.length);
-  const spans = clusters.map((c) => Math.log10(c.toMHz / c.fromMHz));
+  const spans = clusters.map((c) => Math.log10(c.toMhz / c.fromMhz));
   const total = spans.reduce((a, b) => a + b, 0);
   // Narrow clusters (a single GNSS signal) still get a readable minimum share.
   const shares = spans.map((s) => Math.max(s / total, minClusterShare));
@@ -95,19 +95,19 @@ export function piecewiseAxis(intervals: FrequencyInterval[], width: number, { p
   const x = (mhz: number) => {
     for (let i = 0; i < segments.length; i++) {
       const s = segments[i];
-      if (mhz < s.c.fromMHz) return i === 0 ? s.x0 : s.x0 - gapPx / 2;
-      if (mhz <= s.c.toMHz) return s.x0 + (Math.log10(mhz / s.c.fromMHz) / Math.log10(s.c.toMHz / s.c.fromMHz)) * s.w;
+      if (mhz < s.c.fromMhz) return i === 0 ? s.x0 : s.x0 - gapPx / 2;
+      if (mhz <= s.c.toMhz) return s.x0 + (Math.log10(mhz / s.c.fromMhz) / Math.log10(s.c.toMhz / s.c.fromMhz)) * s.w;
     }
     const last = segments[segments.length - 1];
     return last.x0 + last.w;
   };
   const raw = segments.flatMap((s) => {
-    const inner = candidates(s.c.fromMHz, s.c.toMHz);
+    const inner = candidates(s.c.fromMhz, s.c.toMhz);
     // A narrow cluster with no nice value inside gets its centre labelled.
-    const picks = inner.length ? inner : [Number(Math.sqrt(s.c.fromMHz * s.c.toMHz).toPrecision(3))];
+    const picks = inner.length ? inner : [Number(Math.sqrt(s.c.fromMhz * s.c.toMhz).toPrecision(3))];
     return picks.map((mhz) => ({ mhz, x: x(mhz) }));
   });
-  const ticks = thin(raw, minTickGapPx).map((t) => ({ ...t, label: formatMHz(t.mhz) }));
+  const ticks = thin(raw, minTickGapPx).map((t) => ({ ...t, label: formatMhz(t.mhz) }));
   const breaks = segments.slice(1).map((s) => s.x0 - gapPx / 2);
   return { x, ticks, breaks, width };
 }

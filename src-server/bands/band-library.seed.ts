@@ -11,9 +11,9 @@ export interface BandSeed {
   designation: string;
   name: string;
   duplex: DuplexMode;
-  ranges: { role: RangeRole; fromMHz: number; toMHz: number }[];
-  centreMHz?: number;
-  bandwidthMHz?: number;
+  ranges: { role: RangeRole; fromMhz: number; toMhz: number }[];
+  centreMhz?: number;
+  bandwidthMhz?: number;
   regions: string[];
   source: { document: string; table: string; note?: string | null };
 }
@@ -36,7 +36,7 @@ export async function seedBands(dataSource: DataSource): Promise<string> {
       if (await manager.existsBy(Band, { id: band.id })) continue;
       await manager.insert(Band, {
         id: band.id, technology: band.technology, designation: band.designation, name: band.name, duplex: band.duplex,
-        centreMHz: band.centreMHz ?? null, bandwidthMHz: band.bandwidthMHz ?? null, regions: band.regions,
+        centreMhz: band.centreMhz ?? null, bandwidthMhz: band.bandwidthMhz ?? null, regions: band.regions,
         sourceDocument: band.source.document, sourceTable: band.source.table, sourceNote: band.source.note ?? null,
       });
       await manager.insert(BandRange, band.ranges.map((r, position) => ({ ...r, bandId: band.id, position })));

@@ -20,10 +20,10 @@ export class Band {
   duplex: DuplexMode;
 
   @Column({ name: 'centre_mhz', type: 'double', nullable: true })
-  centreMHz: number | null;
+  centreMhz: number | null;
 
   @Column({ name: 'bandwidth_mhz', type: 'double', nullable: true })
-  bandwidthMHz: number | null;
+  bandwidthMhz: number | null;
 
   @Column({ type: 'json' })
   regions: string[];
@@ -64,10 +64,10 @@ export class BandRange {
   role: RangeRole;
 
   @Column({ name: 'from_mhz', type: 'double' })
-  fromMHz: number;
+  fromMhz: number;
 
   @Column({ name: 'to_mhz', type: 'double' })
-  toMHz: number;
+  toMhz: number;
 
   @Column({ type: 'smallint', unsigned: true, default: 0 })
   position: number;

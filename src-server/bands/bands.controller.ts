@@ -15,7 +15,7 @@ export class BandsController {
 
   @Get()
   @Roles(...ALL_ROLES)
-  @ApiOperation({ summary: 'The band library; filter by technology, designation, or overlap with [fromMHz, toMHz]' })
+  @ApiOperation({ summary: 'The band library; filter by technology, designation, or overlap with [fromMhz, toMhz]' })
   @ApiOkResponse({ type: [BandDto] })
   list(@Query() query: BandQueryDto): Promise<BandDto[]> {
     return this.bands.list(query);

@@ -10,31 +10,31 @@ import type { BandQueryDto } from './dto/band-query.dto';
 import type { CreateBandDto, UpdateBandDto } from './dto/write-band.dto';
 
 export function toBandDto(band: Band): BandDto {
-  const ranges = [...(band.ranges ?? [])].sort((a, b) => a.position - b.position || a.fromMHz - b.fromMHz);
+  const ranges = [...(band.ranges ?? [])].sort((a, b) => a.position - b.position || a.fromMhz - b.fromMhz);
   return {
     id: band.id,
     technology: band.technology,
     designation: band.designation,
     name: band.name,
-    ranges: ranges.map((r) => ({ role: r.role, fromMHz: r.fromMHz, toMHz: r.toMHz })),
+    ranges: ranges.map((r) => ({ role: r.role, fromMhz: r.fromMhz, toMhz: r.toMhz })),
     duplex: band.duplex,
     source: { document: band.sourceDocument, table: band.sourceTable, note: band.sourceNote },
-    centreMHz: band.centreMHz,
-    bandwidthMHz: band.bandwidthMHz,
+    centreMhz: band.centreMhz,
+    bandwidthMhz: band.bandwidthMhz,
     regions: band.regions ?? [],
   };
 }
 
 /** A range [from, to] given as query filters: both or neither, from ≤ to. */
-export function checkFrequencyWindow(fromMHz: number | undefined, toMHz: number | undefined): { fromMHz: number; toMHz: number } | null {
-  if (fromMHz === undefined && toMHz === undefined) return null;
-  if (fromMHz === undefined) throw new ValidationFailedError([{ field: 'fromMHz', message: 'is required together with toMHz' }]);
-  if (toMHz === undefined) throw new ValidationFailedError([{ field: 'toMHz', message: 'is required together with fromMHz' }]);
-  if (toMHz < fromMHz) throw new ValidationFailedError([{ field: 'toMHz', message: `must not be below fromMHz (${fromMHz})` }]);
-  return { fromMHz, toMHz };
+export function checkFrequencyWindow(fromMhz: number | undefined, toMhz: number | undefined): { fromMhz: number; toMhz: number } | null {
+  if (fromMhz === undefined && toMhz === undefined) return null;
+  if (fromMhz === undefined) throw new ValidationFailedError([{ field: 'fromMhz', message: 'is required together with toMhz' }]);
+  if (toMhz === undefined) throw new ValidationFailedError([{ field: 'toMhz', message: 'is required together with fromMhz' }]);
+  if (toMhz < fromMhz) throw new ValidationFailedError([{ field: 'toMhz', message: `must not be below fromMhz (${fromMhz})` }]);
+  return { fromMhz, toMhz };
 }
 
-const BAND_FIELDS: (keyof Band)[] = ['technology', 'designation', 'name', 'duplex', 'centreMHz', 'bandwidthMHz', 'regions', 'sourceDocument', 'sourceTable', 'sourceNote'];
+const BAND_FIELDS: (keyof Band)[] = ['technology', 'designation', 'name', 'duplex', 'centreMhz', 'bandwidthMhz', 'regions', 'sourceDocument', 'sourceTable', 'sourceNote'];
 
 @Injectable()
 export class BandsService {
@@ -44,18 +44,18 @@ export class BandsService {
   ) {}
 
   async list(query: BandQueryDto): Promise<BandDto[]> {
-    const window = checkFrequencyWindow(query.fromMHz, query.toMHz);
+    const window = checkFrequencyWindow(query.fromMhz, query.toMhz);
     const ids = this.dataSource.getRepository(Band).createQueryBuilder('b').select('b.id', 'id');
     if (query.technology) ids.andWhere('b.technology = :technology', { technology: query.technology });
     if (query.designation) ids.andWhere('b.designation = :designation', { designation: query.designation.trim() });
     if (window) {
       // A zero-width window asks "which bands contain this frequency"; otherwise the overlap must have width.
-      const touching = window.fromMHz === window.toMHz;
+      const touching = window.fromMhz === window.toMhz;
       ids.andWhere(
         new Brackets((w) =>
           w.where(
             `EXISTS (SELECT 1 FROM band_ranges r WHERE r.band_id = b.id AND ${touching ? 'r.from_mhz <= :to AND r.to_mhz >= :from' : 'r.from_mhz < :to AND r.to_mhz > :from'})`,
-            { from: window.fromMHz, to: window.toMHz },
+            { from: window.fromMhz, to: window.toMhz },
           ),
         ),
       );
@@ -83,7 +83,7 @@ export class BandsService {
       await this.assertDesignationFree(manager, input.designation);
       const inserted = await manager.insert(Band, {
         technology: input.technology, designation: input.designation, name: input.name, duplex: input.duplex,
-        centreMHz: input.centreMHz ?? null, bandwidthMHz: input.bandwidthMHz ?? null, regions: input.regions,
+        centreMhz: input.centreMhz ?? null, bandwidthMhz: input.bandwidthMhz ?? null, regions: input.regions,
         sourceDocument: input.sourceDocument, sourceTable: input.sourceTable, sourceNote: input.sourceNote ?? null,
       });
       const id = Number(inserted.identifiers[0].id);
@@ -105,7 +105,7 @@ export class BandsService {
       if (Object.keys(fields).length) await manager.update(Band, { id }, fields as Partial<Band>);
       if (ranges) {
         const before = toBandDto(band).ranges;
-        if (JSON.stringify(before) !== JSON.stringify(ranges.map((r) => ({ role: r.role, fromMHz: r.fromMHz, toMHz: r.toMHz })))) changes.ranges = [before, ranges];
+        if (JSON.stringify(before) !== JSON.stringify(ranges.map((r) => ({ role: r.role, fromMhz: r.fromMhz, toMhz: r.toMhz })))) changes.ranges = [before, ranges];
         await manager.delete(BandRange, { bandId: id });
         await manager.insert(BandRange, ranges.map((r, position) => ({ ...r, bandId: id, position })));
       }
@@ -137,7 +137,7 @@ export class BandsService {
   }
 }
 
-function checkRanges(ranges: { fromMHz: number; toMHz: number }[]): void {
-  const problems = ranges.flatMap((r, i) => (r.toMHz > r.fromMHz ? [] : [{ field: `ranges.${i}.toMHz`, message: `must be above fromMHz (${r.fromMHz})` }]));
+function checkRanges(ranges: { fromMhz: number; toMhz: number }[]): void {
+  const problems = ranges.flatMap((r, i) => (r.toMhz > r.fromMhz ? [] : [{ field: `ranges.${i}.toMhz`, message: `must be above fromMhz (${r.fromMhz})` }]));
   if (problems.length) throw new ValidationFailedError(problems);
 }

@@ -74,8 +74,8 @@ function plainStatus(f: Facts): CellStatus {
     check([f.polarizationLossDb], () => (f.polarizationLossDb as number) > 10, 'fail');
   }
   if (f.evalGroundPlaneKnown === true) check([f.groundPlaneVsEvalPct], () => (f.groundPlaneVsEvalPct as number) < 100, 'marginal');
-  if (f.reviewState !== 'approved' && f.reviewState !== 'retired' && f.reviewState !== 'rejected') marginal = true;
-  if (f.reviewState === 'retired' || f.reviewState === 'rejected') fail = true;
+  if (f.reviewState !== 'approved' && f.reviewState !== 'retired') marginal = true;
+  if (f.reviewState === 'retired') fail = true;
   if (f.lifecycle === 'eol') fail = true;
   if (f.lifecycle === 'nrnd') marginal = true;
   return fail ? 'fail' : noData ? 'no-data' : marginal ? 'marginal' : 'pass';

@@ -14,6 +14,8 @@ interface FieldOptions {
   nullable?: boolean;
   description?: string;
   example?: unknown;
+  /** Names a shared vocabulary in OpenAPI, so that generated client types get one named type for it. */
+  enumName?: string;
 }
 
 /**
@@ -87,7 +89,7 @@ export function NumberField(opts: FieldOptions & { min: number; max: number }) {
 
 export function EnumField<T extends string>(values: readonly T[], opts: FieldOptions = {}) {
   return applyDecorators(
-    ...doc(opts, { enum: values }),
+    ...doc(opts, { enum: values, ...(opts.enumName ? { enumName: opts.enumName } : {}) }),
     IsEnum(Object.fromEntries(values.map((v) => [v, v])), { message: `must be one of: ${values.join(', ')}` }),
   );
 }

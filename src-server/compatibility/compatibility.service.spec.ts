@@ -39,7 +39,7 @@ const product = {
   id: PRODUCT, name: 'probe', targetRegions: ['EU'], groundPlaneLengthMm: 60, groundPlaneWidthMm: 30,
   radios: [{
     id: RADIO, name: 'BLE', technology: 'ble', receiveOnly: false, transmitPowerDbm: 8, polarization: 'linear', feedLossDb: 0,
-    bands: [{ band: { id: 3, designation: 'BLE 2.4 GHz', ranges: [{ fromMHz: 2400, toMHz: 2483.5, role: 'tdd' }] }, certifiedMaxGainDbi: null }],
+    bands: [{ band: { id: 3, designation: 'BLE 2.4 GHz', ranges: [{ fromMhz: 2400, toMhz: 2483.5, role: 'tdd' }] }, certifiedMaxGainDbi: null }],
   }],
 };
 

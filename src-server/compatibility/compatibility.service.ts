@@ -60,7 +60,7 @@ function requirementsOf(product: ProductDetailDto, limits: readonly RegulatoryLi
       technology: radio.technology as Technology,
       bandId: rb.band.id,
       designation: rb.band.designation,
-      ranges: rb.band.ranges.map((r) => ({ fromHz: r.fromMHz * MHZ, toHz: r.toMHz * MHZ, role: r.role })),
+      ranges: rb.band.ranges.map((r) => ({ fromHz: r.fromMhz * MHZ, toHz: r.toMhz * MHZ, role: r.role })),
       txPowerDbm: radio.receiveOnly ? null : radio.transmitPowerDbm,
       certifiedMaxGainDbi: rb.certifiedMaxGainDbi,
       feedLossDb: radio.feedLossDb,
@@ -119,7 +119,7 @@ export class CompatibilityService {
     const limits = await this.limits.list();
     return requirementsOf(
       product,
-      limits.map((l) => ({ region: l.region, fromHz: l.fromMHz * MHZ, toHz: l.toMHz * MHZ, kind: l.kind, valueDbm: l.valueDbm, source: l.source, gainThresholdDbi: l.gainThresholdDbi, reductionDbPerDb: l.reductionDbPerDb })),
+      limits.map((l) => ({ region: l.region, fromHz: l.fromMhz * MHZ, toHz: l.toMhz * MHZ, kind: l.kind, valueDbm: l.valueDbm, source: l.source, gainThresholdDbi: l.gainThresholdDbi, reductionDbPerDb: l.reductionDbPerDb })),
       limits.map((l) => l.region),
     );
   }

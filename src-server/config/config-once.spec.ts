@@ -4,7 +4,7 @@ import { loadConfig } from './app-config';
 
 const SERVER = resolve(__dirname, '..');
 /** Entry points that load the configuration once for their process, and code that is not part of the app. */
-const MAY_READ_ENVIRONMENT = ['main.ts', 'database/migrate.ts', 'database/seed.ts', 'config/', 'bench/', 'dev-fakes/'];
+const MAY_READ_ENVIRONMENT = ['main.ts', 'write-api-document.ts', 'database/migrate.ts', 'database/seed.ts', 'config/', 'bench/', 'dev-fakes/'];
 
 function* sourceFiles(dir: string): Generator<string> {
   for (const name of readdirSync(dir)) {

@@ -2,8 +2,7 @@
 export const FORM_FACTORS = ['chip', 'pcb-trace', 'flex', 'stamped-metal', 'patch', 'external-whip', 'panel'] as const;
 export type FormFactor = (typeof FORM_FACTORS)[number];
 
-export const CONNECTORS = ['solder-pad', 'SMA', 'RP-SMA', 'MMCX', 'MCX', 'N', 'micro-coax'] as const;
-export type Connector = (typeof CONNECTORS)[number];
+export { CONNECTORS, type Connector } from '../common/connectors';
 
 export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP'] as const;
 export type PartPolarization = (typeof POLARIZATIONS)[number];

@@ -1,13 +1,13 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, OneToMany, PrimaryColumn, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import { TECHNOLOGIES, type Technology } from '../bands/band-domain';
 import { Band } from '../bands/band.entity';
+import { CONNECTORS, type Connector } from '../common/connectors';
 import { Product } from './product.entity';
 
 export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP', 'any'] as const;
 export type Polarization = (typeof POLARIZATIONS)[number];
 
-export const CONNECTORS = ['solder-pad', 'sma', 'rp-sma', 'mmcx', 'mcx', 'n', 'micro-coax'] as const;
-export type Connector = (typeof CONNECTORS)[number];
+export { CONNECTORS, type Connector } from '../common/connectors';
 
 /** One radio of a product (a cellular modem, a GNSS receiver …) and the bands it must cover. */
 @Entity({ name: 'radios' })

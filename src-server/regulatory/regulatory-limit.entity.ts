@@ -16,10 +16,10 @@ export class RegulatoryLimit {
   title: string;
 
   @Column({ name: 'from_mhz', type: 'double' })
-  fromMHz: number;
+  fromMhz: number;
 
   @Column({ name: 'to_mhz', type: 'double' })
-  toMHz: number;
+  toMhz: number;
 
   @Column({ type: 'enum', enum: LIMIT_KINDS })
   kind: LimitKind;

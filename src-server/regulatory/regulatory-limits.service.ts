@@ -8,20 +8,20 @@ import { checkFrequencyWindow } from '../bands/bands.service';
 import { RegulatoryLimit } from './regulatory-limit.entity';
 import type { CreateRegulatoryLimitDto, RegulatoryLimitDto, RegulatoryLimitQueryDto, UpdateRegulatoryLimitDto } from './dto/regulatory-limit.dto';
 
-const FIELDS: (keyof RegulatoryLimit)[] = ['region', 'title', 'fromMHz', 'toMHz', 'kind', 'valueDbm', 'valueText', 'gainThresholdDbi', 'reductionDbPerDb', 'conditions', 'source', 'note'];
+const FIELDS: (keyof RegulatoryLimit)[] = ['region', 'title', 'fromMhz', 'toMhz', 'kind', 'valueDbm', 'valueText', 'gainThresholdDbi', 'reductionDbPerDb', 'conditions', 'source', 'note'];
 
 function toDto(limit: RegulatoryLimit): RegulatoryLimitDto {
   return {
-    id: limit.id, region: limit.region, title: limit.title, fromMHz: limit.fromMHz, toMHz: limit.toMHz, kind: limit.kind,
+    id: limit.id, region: limit.region, title: limit.title, fromMhz: limit.fromMhz, toMhz: limit.toMhz, kind: limit.kind,
     valueDbm: limit.valueDbm, valueText: limit.valueText, gainThresholdDbi: limit.gainThresholdDbi, reductionDbPerDb: limit.reductionDbPerDb,
     conditions: limit.conditions, source: limit.source, note: limit.note, updatedAt: limit.updatedAt.toISOString(),
   };
 }
 
 /** Cross-field rules: a range with width, and the gain rule present exactly when the kind needs it. */
-function checkLimit(limit: Pick<RegulatoryLimit, 'fromMHz' | 'toMHz' | 'kind' | 'gainThresholdDbi' | 'reductionDbPerDb'>): void {
+function checkLimit(limit: Pick<RegulatoryLimit, 'fromMhz' | 'toMhz' | 'kind' | 'gainThresholdDbi' | 'reductionDbPerDb'>): void {
   const problems: FieldProblem[] = [];
-  if (!(limit.toMHz > limit.fromMHz)) problems.push({ field: 'toMHz', message: `must be above fromMHz (${limit.fromMHz})` });
+  if (!(limit.toMhz > limit.fromMhz)) problems.push({ field: 'toMhz', message: `must be above fromMhz (${limit.fromMhz})` });
   const gainRule = limit.kind === 'conducted-gain-rule';
   for (const field of ['gainThresholdDbi', 'reductionDbPerDb'] as const) {
     const present = limit[field] !== null && limit[field] !== undefined;
@@ -39,24 +39,24 @@ export class RegulatoryLimitsService {
   ) {}
 
   async list(query: RegulatoryLimitQueryDto = {}): Promise<RegulatoryLimitDto[]> {
-    const window = checkFrequencyWindow(query.fromMHz, query.toMHz);
+    const window = checkFrequencyWindow(query.fromMhz, query.toMhz);
     const q = this.dataSource.getRepository(RegulatoryLimit).createQueryBuilder('l').orderBy('l.region').addOrderBy('l.from_mhz').addOrderBy('l.id');
     if (query.region) q.andWhere('l.region = :region', { region: query.region });
-    if (window) q.andWhere('l.from_mhz <= :to AND l.to_mhz >= :from', { from: window.fromMHz, to: window.toMHz });
+    if (window) q.andWhere('l.from_mhz <= :to AND l.to_mhz >= :from', { from: window.fromMhz, to: window.toMhz });
     return (await q.getMany()).map(toDto);
   }
 
   /**
-   * Limits of one region (plus any marked global) whose range overlaps [fromMHz, toMHz] with some width,
-   * or contains the frequency when fromMHz = toMHz.
+   * Limits of one region (plus any marked global) whose range overlaps [fromMhz, toMhz] with some width,
+   * or contains the frequency when fromMhz = toMhz.
    */
-  async findApplicable(region: string, fromMHz: number, toMHz: number): Promise<RegulatoryLimitDto[]> {
-    const point = fromMHz === toMHz;
+  async findApplicable(region: string, fromMhz: number, toMhz: number): Promise<RegulatoryLimitDto[]> {
+    const point = fromMhz === toMhz;
     const rows = await this.dataSource
       .getRepository(RegulatoryLimit)
       .createQueryBuilder('l')
       .where('l.region IN (:...regions)', { regions: [region, 'global'] })
-      .andWhere(point ? 'l.from_mhz <= :to AND l.to_mhz >= :from' : 'l.from_mhz < :to AND l.to_mhz > :from', { from: fromMHz, to: toMHz })
+      .andWhere(point ? 'l.from_mhz <= :to AND l.to_mhz >= :from' : 'l.from_mhz < :to AND l.to_mhz > :from', { from: fromMhz, to: toMhz })
       .orderBy('l.from_mhz')
       .addOrderBy('l.id')
       .getMany();

@@ -21,9 +21,9 @@ describe('bad input answers 4xx with a code and the field, never 5xx (API)', () 
   });
   const bandBody = () => ({
     technology: 'ism', designation: unique('BI').slice(0, 40), name: 'Bad-input test band', duplex: 'half-duplex',
-    ranges: [{ role: 'transmit-receive', fromMHz: 433.05, toMHz: 434.79 }], regions: ['EU'], sourceDocument: 'test', sourceTable: 'test',
+    ranges: [{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.79 }], regions: ['EU'], sourceDocument: 'test', sourceTable: 'test',
   });
-  const limitBody = () => ({ region: 'EU', title: unique('Bad-input limit'), fromMHz: 433.05, toMHz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW e.r.p.', source: 'test' });
+  const limitBody = () => ({ region: 'EU', title: unique('Bad-input limit'), fromMhz: 433.05, toMhz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW e.r.p.', source: 'test' });
   const bandSetBody = () => ({ name: unique('Bad-input set'), description: 'test list, invented', bandIds: [103] });
   const createProduct = async () => (await http().post('/api/products').set(as('engineer')).send(productBody()).expect(201)).body as { id: number; version: number };
 
@@ -69,10 +69,10 @@ describe('bad input answers 4xx with a code and the field, never 5xx (API)', () 
     it('bands, regulatory limits and band sets', async () => {
       const band = (await http().post('/api/bands').set(as('admin')).send(bandBody()).expect(201)).body;
       await expectNullRefused(`/api/bands/${band.id}`, 'admin', ['technology', 'designation', 'name', 'duplex', 'ranges', 'regions', 'sourceDocument', 'sourceTable']);
-      await http().patch(`/api/bands/${band.id}`).set(as('admin')).send({ sourceNote: null, centreMHz: null }).expect(200);
+      await http().patch(`/api/bands/${band.id}`).set(as('admin')).send({ sourceNote: null, centreMhz: null }).expect(200);
 
       const limit = (await http().post('/api/regulatory-limits').set(as('admin')).send(limitBody()).expect(201)).body;
-      await expectNullRefused(`/api/regulatory-limits/${limit.id}`, 'admin', ['region', 'title', 'fromMHz', 'toMHz', 'kind', 'valueDbm', 'valueText', 'source']);
+      await expectNullRefused(`/api/regulatory-limits/${limit.id}`, 'admin', ['region', 'title', 'fromMhz', 'toMhz', 'kind', 'valueDbm', 'valueText', 'source']);
       await http().patch(`/api/regulatory-limits/${limit.id}`).set(as('admin')).send({ note: null }).expect(200);
 
       const set = (await http().post('/api/band-sets').set(as('admin')).send(bandSetBody()).expect(201)).body;

@@ -27,7 +27,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
 
   const newBand = () => ({
     technology: 'ism', designation: unique('T').slice(0, 38), name: 'Test sub-GHz band', duplex: 'half-duplex',
-    ranges: [{ role: 'transmit-receive', fromMHz: 433.05, toMHz: 434.79 }], regions: ['EU'],
+    ranges: [{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.79 }], regions: ['EU'],
     sourceDocument: 'ERC/REC 70-03', sourceTable: 'Annex 1', sourceNote: 'test data',
   });
 
@@ -41,14 +41,14 @@ describe('band library, band sets and regulatory limits (API)', () => {
     });
 
     it('answers 400 naming the field for bad filters', async () => {
-      const half = await call('get', '/api/bands?fromMHz=700', 'engineer').expect(400);
-      expect(half.body.fields[0].field).toBe('toMHz');
-      const reversed = await call('get', '/api/bands?fromMHz=900&toMHz=800', 'engineer').expect(400);
-      expect(reversed.body.fields[0].field).toBe('toMHz');
+      const half = await call('get', '/api/bands?fromMhz=700', 'engineer').expect(400);
+      expect(half.body.fields[0].field).toBe('toMhz');
+      const reversed = await call('get', '/api/bands?fromMhz=900&toMhz=800', 'engineer').expect(400);
+      expect(reversed.body.fields[0].field).toBe('toMhz');
       const tech = await call('get', '/api/bands?technology=radar', 'engineer').expect(400);
       expect(tech.body.fields[0].field).toBe('technology');
-      const notNumber = await call('get', '/api/bands?fromMHz=abc&toMHz=900', 'engineer').expect(400);
-      expect(notNumber.body.fields[0].field).toBe('fromMHz');
+      const notNumber = await call('get', '/api/bands?fromMhz=abc&toMhz=900', 'engineer').expect(400);
+      expect(notNumber.body.fields[0].field).toBe('fromMhz');
     });
 
     it('returns B12 in the documented shape with its source and release note', async () => {
@@ -57,7 +57,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
       expect(res.body[0]).toEqual(expect.objectContaining({
         id: 112, technology: 'lte', designation: 'B12', duplex: 'FDD',
         // 3GPP TS 36.101 Table 5.5-1 (current release): UL 699–716, DL 729–746 MHz
-        ranges: [{ role: 'uplink', fromMHz: 699, toMHz: 716 }, { role: 'downlink', fromMHz: 729, toMHz: 746 }],
+        ranges: [{ role: 'uplink', fromMhz: 699, toMhz: 716 }, { role: 'downlink', fromMhz: 729, toMhz: 746 }],
         source: { document: '3GPP TS 36.101', table: expect.stringContaining('5.5-1'), note: expect.stringContaining('698') },
       }));
     });
@@ -67,20 +67,20 @@ describe('band library, band sets and regulatory limits (API)', () => {
       expect(res.body.length).toBeGreaterThanOrEqual(12);
       expect(res.body.every((b: { technology: string }) => b.technology === 'nr')).toBe(true);
       // 3GPP TS 38.101-1 Table 5.2-1: n78 3300–3800 MHz TDD
-      expect(res.body.find((b: { designation: string }) => b.designation === 'n78')).toMatchObject({ duplex: 'TDD', ranges: [{ role: 'tdd', fromMHz: 3300, toMHz: 3800 }] });
+      expect(res.body.find((b: { designation: string }) => b.designation === 'n78')).toMatchObject({ duplex: 'TDD', ranges: [{ role: 'tdd', fromMhz: 3300, toMhz: 3800 }] });
     });
 
     it('filters by overlap with a frequency window and by a single frequency', async () => {
       // Upper L-band RNSS 1559–1610 MHz holds L1/E1/B1I/B1C/G1 but not L5 (ITU RR Art. 5, RNSS allocation; from memory).
-      const upper = (await call('get', '/api/bands?technology=gnss&fromMHz=1559&toMHz=1610', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
+      const upper = (await call('get', '/api/bands?technology=gnss&fromMhz=1559&toMhz=1610', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
       expect(upper).toEqual(expect.arrayContaining(['GPS L1', 'Galileo E1', 'GLONASS G1', 'BeiDou B1I', 'BeiDou B1C']));
       expect(upper).not.toContain('GPS L5');
       // 1575.42 MHz lies in GPS L1, Galileo E1 and BeiDou B1C, not in B1I (1559.052–1563.144).
-      const point = (await call('get', '/api/bands?fromMHz=1575.42&toMHz=1575.42', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
+      const point = (await call('get', '/api/bands?fromMhz=1575.42&toMhz=1575.42', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
       expect(point).toEqual(expect.arrayContaining(['GPS L1', 'Galileo E1', 'BeiDou B1C']));
       expect(point).not.toContain('BeiDou B1I');
       // 700 MHz: B12 uplink (699–716), B17 (704–716 uplink starts above 700) no, B28 uplink 703– no, B85 uplink 698–716 yes.
-      const at700 = (await call('get', '/api/bands?technology=lte&fromMHz=700&toMHz=700', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
+      const at700 = (await call('get', '/api/bands?technology=lte&fromMhz=700&toMhz=700', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
       expect(at700.sort()).toEqual(['B12', 'B85']);
     });
   });
@@ -94,7 +94,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
 
     it.each(['procurement', 'engineer', 'admin'] as const)('returns a band for %s', async (role) => {
       const res = await call('get', '/api/bands/501', role).expect(200);
-      expect(res.body).toMatchObject({ designation: 'GPS L1', duplex: 'receive-only', centreMHz: 1575.42 });
+      expect(res.body).toMatchObject({ designation: 'GPS L1', duplex: 'receive-only', centreMhz: 1575.42 });
     });
   });
 
@@ -110,9 +110,9 @@ describe('band library, band sets and regulatory limits (API)', () => {
     });
 
     it('answers 400 naming the field for a range that ends below its start and for an unknown region', async () => {
-      const bad = await call('post', '/api/bands', 'admin', { ...newBand(), ranges: [{ role: 'uplink', fromMHz: 900, toMHz: 800 }] }).expect(400);
-      expect(bad.body.fields[0].field).toBe('ranges.0.toMHz');
-      const role = await call('post', '/api/bands', 'admin', { ...newBand(), ranges: [{ role: 'sideways', fromMHz: 800, toMHz: 900 }] }).expect(400);
+      const bad = await call('post', '/api/bands', 'admin', { ...newBand(), ranges: [{ role: 'uplink', fromMhz: 900, toMhz: 800 }] }).expect(400);
+      expect(bad.body.fields[0].field).toBe('ranges.0.toMhz');
+      const role = await call('post', '/api/bands', 'admin', { ...newBand(), ranges: [{ role: 'sideways', fromMhz: 800, toMhz: 900 }] }).expect(400);
       expect(role.body.fields[0].field).toBe('ranges.0.role');
       const region = await call('post', '/api/bands', 'admin', { ...newBand(), regions: ['Atlantis'] }).expect(400);
       expect(region.body.fields[0].field).toBe('regions');
@@ -129,8 +129,8 @@ describe('band library, band sets and regulatory limits (API)', () => {
       const created = await call('post', '/api/bands', 'admin', input).expect(201);
       expect(created.body).toMatchObject({ designation: input.designation, ranges: input.ranges, source: { document: 'ERC/REC 70-03', table: 'Annex 1', note: 'test data' } });
       const id = created.body.id;
-      const patched = await call('patch', `/api/bands/${id}`, 'admin', { ranges: [{ role: 'transmit-receive', fromMHz: 433.05, toMHz: 434.8 }] }).expect(200);
-      expect(patched.body.ranges).toEqual([{ role: 'transmit-receive', fromMHz: 433.05, toMHz: 434.8 }]);
+      const patched = await call('patch', `/api/bands/${id}`, 'admin', { ranges: [{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.8 }] }).expect(200);
+      expect(patched.body.ranges).toEqual([{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.8 }]);
       await call('delete', `/api/bands/${id}`, 'admin').expect(204);
       await call('get', `/api/bands/${id}`, 'admin').expect(404);
       const actions = (await auditOf('band', id)).map((e) => e.action);
@@ -209,13 +209,13 @@ describe('band library, band sets and regulatory limits (API)', () => {
     it.each(['procurement', 'engineer', 'admin'] as const)('lists the seeded limits for %s', async (role) => {
       const res = await call('get', '/api/regulatory-limits', role).expect(200);
       // 47 CFR 15.247(b)(3), (b)(4): 1 W conducted, reduced dB for dB above 6 dBi.
-      expect(res.body.find((l: { id: number }) => l.id === 2)).toMatchObject({ region: 'US', fromMHz: 2400, toMHz: 2483.5, kind: 'conducted-gain-rule', valueDbm: 30, gainThresholdDbi: 6, reductionDbPerDb: 1 });
+      expect(res.body.find((l: { id: number }) => l.id === 2)).toMatchObject({ region: 'US', fromMhz: 2400, toMhz: 2483.5, kind: 'conducted-gain-rule', valueDbm: 30, gainThresholdDbi: 6, reductionDbPerDb: 1 });
       // ETSI EN 300 328 (from memory): 20 dBm e.i.r.p.
       expect(res.body.find((l: { id: number }) => l.id === 4)).toMatchObject({ region: 'EU', kind: 'eirp', valueDbm: 20, note: expect.stringMatching(/from memory/i) });
     });
 
     it('keeps 868 MHz limits as unrounded ERP in dBm', async () => {
-      const res = await call('get', '/api/regulatory-limits?region=EU&fromMHz=869.4&toMHz=869.65', 'engineer').expect(200);
+      const res = await call('get', '/api/regulatory-limits?region=EU&fromMhz=869.4&toMhz=869.65', 'engineer').expect(200);
       const high = res.body.find((l: { id: number }) => l.id === 9);
       // EU 2017/1483 via CNAF UN-39: 500 mW e.r.p. = 10·log10(500) = 26.99 dBm (ERP vs EIRP: ITU RR Art. 1).
       expect(high).toMatchObject({ kind: 'erp', valueText: '500 mW e.r.p.' });
@@ -233,7 +233,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
   });
 
   describe('POST, PATCH, DELETE /api/regulatory-limits', () => {
-    const body = () => ({ region: 'EU', title: unique('Test limit'), fromMHz: 433.05, toMHz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW e.r.p.', source: 'ERC/REC 70-03 Annex 1 (test)' });
+    const body = () => ({ region: 'EU', title: unique('Test limit'), fromMhz: 433.05, toMhz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW e.r.p.', source: 'ERC/REC 70-03 Annex 1 (test)' });
 
     it.each([
       ['post', '/api/regulatory-limits'],
@@ -250,8 +250,8 @@ describe('band library, band sets and regulatory limits (API)', () => {
       expect(noRule.body.fields.map((f: { field: string }) => f.field)).toEqual(['gainThresholdDbi', 'reductionDbPerDb']);
       const strayRule = await call('post', '/api/regulatory-limits', 'admin', { ...body(), gainThresholdDbi: 6 }).expect(400);
       expect(strayRule.body.fields[0].field).toBe('gainThresholdDbi');
-      const reversed = await call('post', '/api/regulatory-limits', 'admin', { ...body(), toMHz: 433 }).expect(400);
-      expect(reversed.body.fields[0].field).toBe('toMHz');
+      const reversed = await call('post', '/api/regulatory-limits', 'admin', { ...body(), toMhz: 433 }).expect(400);
+      expect(reversed.body.fields[0].field).toBe('toMhz');
       const kind = await call('post', '/api/regulatory-limits', 'admin', { ...body(), kind: 'loudness' }).expect(400);
       expect(kind.body.fields[0].field).toBe('kind');
     });
@@ -287,7 +287,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
       const bands = await app.get(BandsService).findByIds([120, 999999, 501]);
       expect(bands.map((b) => b.designation)).toEqual(['B20', 'GPS L1']);
       // 3GPP TS 36.101 Table 5.5-1: band 20 UL 832–862, DL 791–821 MHz (uplink above downlink).
-      expect(bands[0].ranges).toEqual([{ role: 'uplink', fromMHz: 832, toMHz: 862 }, { role: 'downlink', fromMHz: 791, toMHz: 821 }]);
+      expect(bands[0].ranges).toEqual([{ role: 'uplink', fromMhz: 832, toMhz: 862 }, { role: 'downlink', fromMhz: 791, toMhz: 821 }]);
     });
   });
 });

@@ -109,8 +109,8 @@ describe('hostile input to every write route (property-based)', () => {
     const auth = { Authorization: `Bearer ${adminToken}` };
     const product = (await http().post('/api/products').set(auth).send({ name: unique('Fuzz product'), code: unique('FZ').slice(0, 40), owner: 'Fuzz', groundPlaneLengthMm: 80, groundPlaneWidthMm: 40, targetRegions: ['EU'] }).expect(201)).body;
     const radio = (await http().post(`/api/products/${product.id}/radios`).set(auth).send({ name: 'Cellular', technology: 'lte', module: 'Fuzz modem (invented)', transmitPowerDbm: 23, polarization: 'linear', connector: 'solder-pad', feedLossDb: 0.5, bands: [{ bandId: 103 }] }).expect(201)).body;
-    const band = (await http().post('/api/bands').set(auth).send({ technology: 'ism', designation: unique('FZ').slice(0, 40), name: 'Fuzz band', duplex: 'half-duplex', ranges: [{ role: 'transmit-receive', fromMHz: 433.05, toMHz: 434.79 }], regions: ['EU'], sourceDocument: 'fuzz', sourceTable: 'fuzz' }).expect(201)).body;
-    const limit = (await http().post('/api/regulatory-limits').set(auth).send({ region: 'EU', title: unique('Fuzz limit'), fromMHz: 433.05, toMHz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW', source: 'fuzz' }).expect(201)).body;
+    const band = (await http().post('/api/bands').set(auth).send({ technology: 'ism', designation: unique('FZ').slice(0, 40), name: 'Fuzz band', duplex: 'half-duplex', ranges: [{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.79 }], regions: ['EU'], sourceDocument: 'fuzz', sourceTable: 'fuzz' }).expect(201)).body;
+    const limit = (await http().post('/api/regulatory-limits').set(auth).send({ region: 'EU', title: unique('Fuzz limit'), fromMhz: 433.05, toMhz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW', source: 'fuzz' }).expect(201)).body;
     const bandSet = (await http().post('/api/band-sets').set(auth).send({ name: unique('Fuzz set'), description: 'fuzz', bandIds: [103] }).expect(201)).body;
     const part = await createDraft(app, adminToken);
     const offer = (await http().post(`/api/parts/${part.id}/offers`).set(auth).send({ supplier: 'Fuzz Supply', currency: 'USD', priceBreaks: [{ quantity: 1, unitPrice: '1.00' }] }).expect(201)).body;
@@ -182,7 +182,7 @@ describe('hostile input to every write route (property-based)', () => {
     const duplicates: { path: string; body: () => object; oneWinner: boolean }[] = [
       { path: '/api/products', body: () => ({ name: 'Fuzz twin', code: unique('FZT').slice(0, 40), owner: 'Fuzz', groundPlaneLengthMm: 50, groundPlaneWidthMm: 50, targetRegions: ['EU'] }), oneWinner: true },
       { path: '/api/band-sets', body: () => ({ name: unique('Fuzz twin set'), description: 'fuzz', bandIds: [103] }), oneWinner: true },
-      { path: '/api/bands', body: () => ({ technology: 'ism', designation: unique('FT').slice(0, 40), name: 'Fuzz twin band', duplex: 'half-duplex', ranges: [{ role: 'transmit-receive', fromMHz: 868, toMHz: 869 }], regions: ['EU'], sourceDocument: 'fuzz', sourceTable: 'fuzz' }), oneWinner: true },
+      { path: '/api/bands', body: () => ({ technology: 'ism', designation: unique('FT').slice(0, 40), name: 'Fuzz twin band', duplex: 'half-duplex', ranges: [{ role: 'transmit-receive', fromMhz: 868, toMhz: 869 }], regions: ['EU'], sourceDocument: 'fuzz', sourceTable: 'fuzz' }), oneWinner: true },
       { path: '/api/parts', body: () => ({ manufacturer: 'Testbench Antennas', mpn: unique('FZT'), title: 'Fuzz twin', formFactor: 'chip', connector: 'solder-pad', polarization: 'linear' }), oneWinner: true },
       { path: '/api/users/invitations', body: () => ({ email: `${unique('fuzz-twin')}@bandwright.test`.toLowerCase(), name: 'Fuzz Twin', role: 'engineer' }), oneWinner: false },
     ];

@@ -129,7 +129,7 @@ describe('products and radios (API)', () => {
       expect(cell).toMatchObject({ technology: 'lte', transmitPowerDbm: 23, receiveOnly: false, feedLossDb: 0.3 });
       const b12 = cell.bands.find((b: { band: { designation: string } }) => b.band.designation === 'B12');
       // 3GPP TS 36.101 Table 5.5-1: band 12 UL 699–716, DL 729–746 MHz.
-      expect(b12).toEqual({ certifiedMaxGainDbi: 8.5, band: expect.objectContaining({ id: 112, ranges: [{ role: 'uplink', fromMHz: 699, toMHz: 716 }, { role: 'downlink', fromMHz: 729, toMHz: 746 }] }) });
+      expect(b12).toEqual({ certifiedMaxGainDbi: 8.5, band: expect.objectContaining({ id: 112, ranges: [{ role: 'uplink', fromMhz: 699, toMhz: 716 }, { role: 'downlink', fromMhz: 729, toMhz: 746 }] }) });
       expect(res.body.radios[1]).toMatchObject({ technology: 'gnss', transmitPowerDbm: null, receiveOnly: true, polarization: 'RHCP' });
     });
 
@@ -138,7 +138,7 @@ describe('products and radios (API)', () => {
       expect(detail).toMatchObject({ code: 'DEMO-CG2', groundPlaneLengthMm: 140, groundPlaneWidthMm: 90, targetRegions: ['EU', 'US'] });
       const lora = detail.radios.find((r) => r.id === 23)!;
       // LoRaWAN RP002-1.0.x: EU863-870 is 863–870 MHz, US902-928 is 902–928 MHz.
-      expect(lora.bands.map((b) => [b.band.designation, b.band.ranges[0].fromMHz, b.band.ranges[0].toMHz, b.certifiedMaxGainDbi])).toEqual([
+      expect(lora.bands.map((b) => [b.band.designation, b.band.ranges[0].fromMhz, b.band.ranges[0].toMhz, b.certifiedMaxGainDbi])).toEqual([
         ['EU863-870', 863, 870, 3], ['US902-928', 902, 928, 6],
       ]);
     });

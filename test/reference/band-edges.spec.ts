@@ -5,8 +5,8 @@ import { resolve } from 'node:path';
  * The seeded band library (catalog-seed/bands.json) against values typed from the published tables,
  * as the 3GPP, IEEE, Bluetooth, LoRa Alliance and GNSS documents publish them.
  */
-interface SeedRange { role: string; fromMHz: number; toMHz: number }
-interface SeedBand { id: number; technology: string; designation: string; duplex: string; ranges: SeedRange[]; centreMHz?: number; bandwidthMHz?: number; source: { document: string; table: string; note?: string } }
+interface SeedRange { role: string; fromMhz: number; toMhz: number }
+interface SeedBand { id: number; technology: string; designation: string; duplex: string; ranges: SeedRange[]; centreMhz?: number; bandwidthMhz?: number; source: { document: string; table: string; note?: string } }
 
 const bands: SeedBand[] = JSON.parse(readFileSync(resolve(__dirname, '../../catalog-seed/bands.json'), 'utf8'));
 const band = (designation: string): SeedBand => {
@@ -17,10 +17,10 @@ const band = (designation: string): SeedBand => {
 const range = (designation: string, role: string): [number, number] => {
   const r = band(designation).ranges.find((x) => x.role === role);
   if (!r) throw new Error(`${designation} has no ${role} range`);
-  return [r.fromMHz, r.toMHz];
+  return [r.fromMhz, r.toMhz];
 };
 /** Whether [from, to] lies inside some range of a band (a channel inside its band). */
-const inside = (designation: string, from: number, to: number) => band(designation).ranges.some((r) => r.fromMHz <= from && to <= r.toMHz);
+const inside = (designation: string, from: number, to: number) => band(designation).ranges.some((r) => r.fromMhz <= from && to <= r.toMhz);
 
 describe('catalog-seed/bands.json', () => {
   it('holds every band and signal the issue lists, once each', () => {
@@ -38,7 +38,7 @@ describe('catalog-seed/bands.json', () => {
     for (const b of bands) {
       expect(b.source.document.length).toBeGreaterThan(3);
       expect(b.source.table.length).toBeGreaterThan(1);
-      for (const r of b.ranges) expect(r.toMHz).toBeGreaterThan(r.fromMHz);
+      for (const r of b.ranges) expect(r.toMhz).toBeGreaterThan(r.fromMhz);
     }
   });
 
@@ -114,14 +114,14 @@ describe('catalog-seed/bands.json', () => {
       const [from, to] = range(designation, 'receive');
       expect((from + to) / 2).toBeCloseTo(centre, 6);
       expect(to - from).toBeCloseTo(bandwidth, 6);
-      expect(band(designation)).toMatchObject({ technology: 'gnss', duplex: 'receive-only', centreMHz: centre, bandwidthMHz: bandwidth });
+      expect(band(designation)).toMatchObject({ technology: 'gnss', duplex: 'receive-only', centreMhz: centre, bandwidthMhz: bandwidth });
     });
 
     it('GPS centres are integer multiples of f0 = 10.23 MHz', () => {
       // IS-GPS-200 §3.3.1.1: L1 = 154 f0, L2 = 120 f0; IS-GPS-705: L5 = 115 f0
-      expect(band('GPS L1').centreMHz).toBeCloseTo(154 * 10.23, 9);
-      expect(band('GPS L2C').centreMHz).toBeCloseTo(120 * 10.23, 9);
-      expect(band('GPS L5').centreMHz).toBeCloseTo(115 * 10.23, 9);
+      expect(band('GPS L1').centreMhz).toBeCloseTo(154 * 10.23, 9);
+      expect(band('GPS L2C').centreMhz).toBeCloseTo(120 * 10.23, 9);
+      expect(band('GPS L5').centreMhz).toBeCloseTo(115 * 10.23, 9);
       expect(range('GPS L5', 'receive')).toEqual([1164.45, 1188.45]); // IS-GPS-705 §3.3.1.1
     });
 
@@ -140,10 +140,10 @@ describe('catalog-seed/bands.json', () => {
     it('upper L-band signals sit in RNSS 1559–1610 MHz; lower-band carriers in 1164–1215 MHz', () => {
       // ITU Radio Regulations Art. 5 (from memory); 1164–1215 corroborated in the Galileo OS SIS ICD
       for (const d of ['GPS L1', 'Galileo E1', 'BeiDou B1I', 'BeiDou B1C', 'GLONASS G1']) {
-        expect(band(d).ranges.every((r) => r.fromMHz >= 1559 - 1e-9 && r.toMHz <= 1610)).toBe(true);
+        expect(band(d).ranges.every((r) => r.fromMhz >= 1559 - 1e-9 && r.toMhz <= 1610)).toBe(true);
       }
       for (const d of ['GPS L5', 'Galileo E5a', 'Galileo E5b', 'BeiDou B2a']) {
-        const c = band(d).centreMHz!;
+        const c = band(d).centreMhz!;
         expect(c > 1164 && c < 1215).toBe(true);
       }
       // E5b's 20.46 MHz reference band (1207.14 ± 10.23) reaches 1217.37 MHz, past the 1215 MHz edge:
@@ -236,7 +236,7 @@ describe('catalog-seed/bands.json', () => {
       const [f, t] = range(designation, 'transmit-receive');
       expect(f).toBeCloseTo(from, 6);
       expect(t).toBeCloseTo(to, 6);
-      expect(band(designation).centreMHz).toBeCloseTo(m * 499.2, 6);
+      expect(band(designation).centreMhz).toBeCloseTo(m * 499.2, 6);
     });
   });
 });

@@ -1,34 +1,18 @@
-export type Technology = 'lte' | 'nr' | 'gnss' | 'wifi' | 'ble' | 'ism' | 'uwb' | 'other';
-export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
+import type { components } from '../../lib/api-types';
 
-export interface Band {
-  id: number;
-  technology: Technology;
-  designation: string;
-  name: string;
-  ranges: { role: RangeRole; fromMHz: number; toMHz: number }[];
-  duplex: 'FDD' | 'TDD' | 'receive-only' | 'half-duplex';
-  source: { document: string; table: string; note: string | null };
-  centreMHz: number | null;
-  bandwidthMHz: number | null;
-  regions: string[];
-}
+type Schemas = components['schemas'];
+export type Technology = Schemas['Technology'];
+export type RangeRole = Schemas['RangeRole'];
+
+export type Band = Schemas['BandDto'];
 
 export interface BandFilter {
   technology?: Technology;
-  fromMHz?: number;
-  toMHz?: number;
+  fromMhz?: number;
+  toMhz?: number;
 }
 
-export interface BandSet {
-  id: number;
-  name: string;
-  description: string;
-  bandIds: number[];
-  bands: { id: number; technology: Technology; designation: string; name: string }[];
-  version: number;
-  updatedAt: string;
-}
+export type BandSet = Schemas['BandSetDto'];
 
 export interface BandSetInput {
   name: string;
@@ -36,24 +20,9 @@ export interface BandSetInput {
   bandIds: number[];
 }
 
-export type LimitKind = 'eirp' | 'erp' | 'conducted-gain-rule';
+export type LimitKind = Schemas['LimitKind'];
 
-export interface RegulatoryLimit {
-  id: number;
-  region: string;
-  title: string;
-  fromMHz: number;
-  toMHz: number;
-  kind: LimitKind;
-  valueDbm: number;
-  valueText: string;
-  gainThresholdDbi: number | null;
-  reductionDbPerDb: number | null;
-  conditions: string | null;
-  source: string;
-  note: string | null;
-  updatedAt: string;
-}
+export type RegulatoryLimit = Schemas['RegulatoryLimitDto'];
 
 export type RegulatoryLimitInput = Omit<RegulatoryLimit, 'id' | 'updatedAt'>;
 

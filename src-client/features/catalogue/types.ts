@@ -1,36 +1,26 @@
-export const FORM_FACTORS = ['chip', 'pcb-trace', 'flex', 'stamped-metal', 'patch', 'external-whip', 'panel'] as const;
-export const CONNECTORS = ['solder-pad', 'SMA', 'RP-SMA', 'MMCX', 'MCX', 'N', 'micro-coax'] as const;
-export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP'] as const;
-export const LIFECYCLES = ['active', 'nrnd', 'eol'] as const;
-export const REVIEW_STATES = ['draft', 'in-review', 'approved', 'restricted', 'retired'] as const;
-export const MEASUREMENT_KINDS = ['s11', 'efficiency', 'peak-gain', 'average-gain'] as const;
+import type { components } from '../../lib/api-types';
 
-export type FormFactor = (typeof FORM_FACTORS)[number];
-export type Connector = (typeof CONNECTORS)[number];
-export type Polarization = (typeof POLARIZATIONS)[number];
-export type Lifecycle = (typeof LIFECYCLES)[number];
-export type ReviewState = (typeof REVIEW_STATES)[number];
-export type MeasurementKind = (typeof MEASUREMENT_KINDS)[number];
+type Schemas = components['schemas'];
+export const FORM_FACTORS = ['chip', 'pcb-trace', 'flex', 'stamped-metal', 'patch', 'external-whip', 'panel'] as const satisfies readonly Schemas['FormFactor'][];
+export const CONNECTORS = ['solder-pad', 'SMA', 'RP-SMA', 'MMCX', 'MCX', 'N', 'micro-coax'] as const satisfies readonly Schemas['Connector'][];
+export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP'] as const satisfies readonly Schemas['PartPolarization'][];
+export const LIFECYCLES = ['active', 'nrnd', 'eol'] as const satisfies readonly Schemas['Lifecycle'][];
+export const REVIEW_STATES = ['draft', 'in-review', 'approved', 'restricted', 'retired'] as const satisfies readonly Schemas['ReviewState'][];
+export const MEASUREMENT_KINDS = ['s11', 'efficiency', 'peak-gain', 'average-gain'] as const satisfies readonly Schemas['MeasurementKind'][];
+
+export type FormFactor = Schemas['FormFactor'];
+export type Connector = Schemas['Connector'];
+export type Polarization = Schemas['PartPolarization'];
+export type Lifecycle = Schemas['Lifecycle'];
+export type ReviewState = Schemas['ReviewState'];
+export type MeasurementKind = Schemas['MeasurementKind'];
 
 export interface Price {
   currency: string;
   unitPrice: string;
 }
 
-export interface PartSummary {
-  id: number;
-  manufacturer: string;
-  mpn: string;
-  title: string;
-  formFactor: FormFactor;
-  connector: Connector;
-  polarization: Polarization;
-  lifecycle: Lifecycle;
-  reviewState: ReviewState;
-  measuredKinds: MeasurementKind[];
-  lowestPrices: Price[];
-  updatedAt: string;
-}
+export type PartSummary = Schemas['PartSummaryDto'];
 
 export interface PartList {
   items: PartSummary[];
@@ -63,52 +53,11 @@ export interface UserRef {
   name: string;
 }
 
-export interface SpecBand {
-  id?: number;
-  fromMhz: number;
-  toMhz: number;
-  maxVswr: number | null;
-  minReturnLossDb: number | null;
-  efficiencyPct: number | null;
-  peakGainDbi: number | null;
-  averageGainDbi: number | null;
-}
+export type SpecBand = Schemas['SpecBandDto'];
 
-export interface Measurement {
-  id: number;
-  kind: MeasurementKind;
-  groundLengthMm: number | null;
-  groundWidthMm: number | null;
-  conditions: string | null;
-  fileName: string;
-  sizeBytes: number;
-  sha256: string;
-  sourceFormat: string;
-  referenceOhms: number | null;
-  pointCount: number;
-  fromMhz: number;
-  toMhz: number;
-  current: boolean;
-  uploadedBy: UserRef | null;
-  createdAt: string;
-}
+export type Measurement = Schemas['MeasurementDto'];
 
-export interface RangeFigures {
-  fromMhz: number;
-  toMhz: number;
-  matchSource: 'measured' | 'spec' | 'no-data';
-  coveredFractionVswr2: number | null;
-  worstVswr: number | null;
-  worstVswrAtMhz: number | null;
-  minReturnLossDb: number | null;
-  efficiencySource: 'measured' | 'spec' | 'no-data';
-  minEfficiencyPct: number | null;
-  averageEfficiencyPct: number | null;
-  averageEfficiencyDb: number | null;
-  peakGainDbi: number | null;
-  averageGainDbi: number | null;
-  notes: string[];
-}
+export type RangeFigures = Schemas['RangeFiguresDto'];
 
 export interface PartDocument {
   id: number;
@@ -143,33 +92,7 @@ export interface Alternate {
   note: string | null;
 }
 
-export interface PartDetail extends Omit<PartSummary, 'measuredKinds' | 'lowestPrices'> {
-  mounting: string | null;
-  nominalImpedanceOhms: number;
-  lengthMm: number | null;
-  widthMm: number | null;
-  heightMm: number | null;
-  evalGroundLengthMm: number | null;
-  evalGroundWidthMm: number | null;
-  tempMinC: number | null;
-  tempMaxC: number | null;
-  reviewComment: string | null;
-  notes: string | null;
-  version: number;
-  createdBy: UserRef | null;
-  submittedBy: UserRef | null;
-  submittedAt: string | null;
-  reviewedBy: UserRef | null;
-  reviewedAt: string | null;
-  createdAt: string;
-  specBands: SpecBand[];
-  measurements: Measurement[];
-  figures: RangeFigures[];
-  documents: PartDocument[];
-  offers: Offer[];
-  alternates: Alternate[];
-  permissions: { edit: boolean; uploadData: boolean; submit: boolean; review: boolean; editSourcing: boolean };
-}
+export type PartDetail = Schemas['PartDetailDto'];
 
 export interface MeasurementPoints {
   id: number;
@@ -218,5 +141,5 @@ export interface LibraryBand {
   technology: string;
   designation: string;
   name: string;
-  ranges: { role: string; fromMHz: number; toMHz: number }[];
+  ranges: { role: string; fromMhz: number; toMhz: number }[];
 }

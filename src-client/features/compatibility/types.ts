@@ -1,46 +1,17 @@
-export type CellStatus = 'pass' | 'marginal' | 'fail' | 'no-data';
+import type { components } from '../../lib/api-types';
 
-export interface Finding {
-  ruleId: string;
-  severity: 'fail' | 'marginal' | 'info' | 'no-data';
-  code: string;
-  message: string;
-}
+type Schemas = components['schemas'];
+export type CellStatus = Schemas['CellStatus'];
 
-export interface MatrixRow {
-  radioId: number;
-  radioName: string;
-  technology: string;
-  bandId: number;
-  designation: string;
-  ranges: { fromMhz: number; toMhz: number; role: string }[];
-}
+export type Finding = Schemas['FindingDto'];
 
-export interface MatrixColumn {
-  partId: number;
-  mpn: string;
-  title: string;
-  manufacturer: string;
-  reviewState: string;
-  lifecycle: string;
-  assignments: { radioId: number; state: 'shortlisted' | 'chosen' }[];
-}
+export type MatrixRow = Schemas['MatrixRowDto'];
 
-export interface MatrixCell {
-  row: number;
-  column: number;
-  status: CellStatus;
-  findings: Finding[];
-}
+export type MatrixColumn = Schemas['MatrixColumnDto'];
 
-export interface Matrix {
-  productId: number;
-  productName: string;
-  rows: MatrixRow[];
-  columns: MatrixColumn[];
-  cells: MatrixCell[];
-  rules: string;
-}
+export type MatrixCell = Schemas['MatrixCellDto'];
+
+export type Matrix = Schemas['MatrixDto'];
 
 export interface DecidingFigure {
   ruleId: string;

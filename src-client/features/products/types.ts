@@ -1,7 +1,10 @@
-export type Technology = 'lte' | 'nr' | 'gnss' | 'wifi' | 'ble' | 'ism' | 'uwb' | 'other';
-export type RangeRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
-export type Polarization = 'linear' | 'RHCP' | 'LHCP' | 'any';
-export type Connector = 'solder-pad' | 'sma' | 'rp-sma' | 'mmcx' | 'mcx' | 'n' | 'micro-coax';
+import type { components } from '../../lib/api-types';
+
+type Schemas = components['schemas'];
+export type Technology = Schemas['Technology'];
+export type RangeRole = Schemas['RangeRole'];
+export type Polarization = Schemas['RadioPolarization'];
+export type Connector = Schemas['Connector'];
 
 /** The band as the products feature needs it (its own copy: features do not import each other). */
 export interface BandChoice {
@@ -9,7 +12,7 @@ export interface BandChoice {
   technology: Technology;
   designation: string;
   name: string;
-  ranges: { role: RangeRole; fromMHz: number; toMHz: number }[];
+  ranges: { role: RangeRole; fromMhz: number; toMhz: number }[];
   duplex: string;
 }
 
@@ -21,46 +24,11 @@ export interface BandSetChoice {
   bands: { id: number; technology: Technology; designation: string }[];
 }
 
-export interface ProductSummary {
-  id: number;
-  name: string;
-  code: string;
-  owner: string;
-  groundPlaneLengthMm: number;
-  groundPlaneWidthMm: number;
-  targetRegions: string[];
-  notes: string | null;
-  version: number;
-  radioCount: number;
-  technologies: Technology[];
-  createdAt: string;
-  updatedAt: string;
-  /** Null when unknown (seeded or older products). */
-  createdBy: { id: number; name: string } | null;
-  deletedAt: string | null;
-  deletedBy: { id: number; name: string } | null;
-}
+export type ProductSummary = Schemas['ProductSummaryDto'];
 
-export interface Radio {
-  id: number;
-  productId: number;
-  name: string;
-  technology: Technology;
-  module: string;
-  receiveOnly: boolean;
-  transmitPowerDbm: number | null;
-  polarization: Polarization;
-  connector: Connector;
-  feedLossDb: number;
-  notes: string | null;
-  version: number;
-  bands: { band: BandChoice; certifiedMaxGainDbi: number | null }[];
-  updatedAt: string;
-}
+export type Radio = Schemas['RadioDto'];
 
-export interface ProductDetail extends ProductSummary {
-  radios: Radio[];
-}
+export type ProductDetail = Schemas['ProductDetailDto'];
 
 export interface ProductInput {
   name: string;
@@ -103,5 +71,5 @@ export const RECEIVE_ONLY: Technology[] = ['gnss'];
 export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
 export const POLARIZATIONS: Polarization[] = ['linear', 'RHCP', 'LHCP', 'any'];
 export const CONNECTOR_LABELS: Record<Connector, string> = {
-  'solder-pad': 'Solder pad', sma: 'SMA', 'rp-sma': 'RP-SMA', mmcx: 'MMCX', mcx: 'MCX', n: 'N', 'micro-coax': 'Micro-coax',
+  'solder-pad': 'Solder pad', SMA: 'SMA', 'RP-SMA': 'RP-SMA', MMCX: 'MMCX', MCX: 'MCX', N: 'N', 'micro-coax': 'Micro-coax',
 };

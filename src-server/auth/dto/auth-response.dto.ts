@@ -5,7 +5,7 @@ export class MeDto {
   @ApiProperty() id: number;
   @ApiProperty() email: string;
   @ApiProperty() name: string;
-  @ApiProperty({ enum: ROLES }) role: Role;
+  @ApiProperty({ enum: ROLES, enumName: 'Role' }) role: Role;
 }
 
 export class LoginResponseDto {

@@ -2,34 +2,34 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { DUPLEX_MODES, type DuplexMode, RANGE_ROLES, type RangeRole, TECHNOLOGIES, type Technology } from '../band-domain';
 
 export class BandRangeDto {
-  @ApiProperty({ enum: RANGE_ROLES }) role: RangeRole;
-  @ApiProperty({ example: 699 }) fromMHz: number;
-  @ApiProperty({ example: 716 }) toMHz: number;
+  @ApiProperty({ enum: RANGE_ROLES, enumName: 'RangeRole' }) role: RangeRole;
+  @ApiProperty({ example: 699 }) fromMhz: number;
+  @ApiProperty({ example: 716 }) toMhz: number;
 }
 
 export class BandSourceDto {
   @ApiProperty({ example: '3GPP TS 36.101' }) document: string;
   @ApiProperty({ example: 'Table 5.5-1 E-UTRA operating bands' }) table: string;
-  @ApiPropertyOptional({ nullable: true, description: 'Spec release, corroboration and from-memory remarks' }) note: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true, description: 'Spec release, corroboration and from-memory remarks' }) note: string | null;
 }
 
 export class BandDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: TECHNOLOGIES }) technology: Technology;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
   @ApiProperty({ example: 'B12' }) designation: string;
   @ApiProperty() name: string;
   @ApiProperty({ type: [BandRangeDto] }) ranges: BandRangeDto[];
-  @ApiProperty({ enum: DUPLEX_MODES }) duplex: DuplexMode;
+  @ApiProperty({ enum: DUPLEX_MODES, enumName: 'DuplexMode' }) duplex: DuplexMode;
   @ApiProperty({ type: BandSourceDto }) source: BandSourceDto;
-  @ApiPropertyOptional({ nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMHz: number | null;
-  @ApiPropertyOptional({ nullable: true }) bandwidthMHz: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMhz: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) bandwidthMhz: number | null;
   @ApiProperty({ type: [String], description: 'Indicative regions; empty when not meaningful' }) regions: string[];
 }
 
 /** The short form used inside band sets. */
 export class BandRefDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: TECHNOLOGIES }) technology: Technology;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
   @ApiProperty() designation: string;
   @ApiProperty() name: string;
 }

@@ -5,18 +5,18 @@ import { EnumField, NumberField, PatchType, StringField } from '../../common/dto
 import { DUPLEX_MODES, type DuplexMode, RANGE_ROLES, type RangeRole, REGIONS, TECHNOLOGIES, type Technology } from '../band-domain';
 
 export class BandRangeInputDto {
-  @EnumField(RANGE_ROLES)
+  @EnumField(RANGE_ROLES, { enumName: 'RangeRole' })
   role: RangeRole;
 
   @NumberField({ min: 0.001, max: 300000, example: 699 })
-  fromMHz: number;
+  fromMhz: number;
 
   @NumberField({ min: 0.001, max: 300000, example: 716 })
-  toMHz: number;
+  toMhz: number;
 }
 
 export class CreateBandDto {
-  @EnumField(TECHNOLOGIES)
+  @EnumField(TECHNOLOGIES, { enumName: 'Technology' })
   technology: Technology;
 
   @StringField({ maxLength: 40, example: 'B12' })
@@ -25,7 +25,7 @@ export class CreateBandDto {
   @StringField({ maxLength: 160 })
   name: string;
 
-  @EnumField(DUPLEX_MODES)
+  @EnumField(DUPLEX_MODES, { enumName: 'DuplexMode' })
   duplex: DuplexMode;
 
   @ApiProperty({ type: [BandRangeInputDto] })
@@ -37,12 +37,12 @@ export class CreateBandDto {
   ranges: BandRangeInputDto[];
 
   @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000 })
-  centreMHz?: number | null;
+  centreMhz?: number | null;
 
   @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000 })
-  bandwidthMHz?: number | null;
+  bandwidthMhz?: number | null;
 
-  @ApiProperty({ enum: REGIONS, isArray: true })
+  @ApiProperty({ enum: REGIONS, enumName: 'Region', isArray: true })
   @IsArray()
   @ArrayMaxSize(REGIONS.length)
   @IsIn(REGIONS, { each: true, message: `each value must be one of: ${REGIONS.join(', ')}` })

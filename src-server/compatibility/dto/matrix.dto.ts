@@ -3,6 +3,7 @@ import { IsOptional, Matches } from 'class-validator';
 import { IntField, StringField } from '../../common/dto-fields';
 
 export const CELL_STATUSES = ['pass', 'marginal', 'fail', 'no-data'] as const;
+export type CellStatus = (typeof CELL_STATUSES)[number];
 
 export class MatrixQueryDto {
   @ApiPropertyOptional({ description: 'Comma-separated part ids; default: the parts assigned to or shortlisted for the product', example: '3,17,42' })
@@ -56,7 +57,7 @@ export class MatrixColumnDto {
 export class MatrixCellDto {
   @ApiProperty({ description: 'Index into rows' }) row: number;
   @ApiProperty({ description: 'Index into columns' }) column: number;
-  @ApiProperty({ enum: CELL_STATUSES }) status: string;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus' }) status: CellStatus;
   @ApiProperty({ type: [FindingDto] }) findings: FindingDto[];
 }
 
@@ -83,7 +84,7 @@ export class DecidingFigureDto {
 export class CandidateBandDto {
   @ApiProperty() bandId: number;
   @ApiProperty() designation: string;
-  @ApiProperty({ enum: CELL_STATUSES }) status: string;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus' }) status: CellStatus;
   @ApiProperty({ type: [FindingDto] }) findings: FindingDto[];
 }
 
@@ -92,10 +93,10 @@ export class CandidateDto {
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
   @ApiProperty() manufacturer: string;
-  @ApiProperty({ enum: CELL_STATUSES }) status: string;
-  @ApiPropertyOptional({ nullable: true }) marginDb: number | null;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus' }) status: CellStatus;
+  @ApiPropertyOptional({ type: Number, nullable: true }) marginDb: number | null;
   @ApiPropertyOptional({ type: DecidingFigureDto, nullable: true }) deciding: DecidingFigureDto | null;
-  @ApiPropertyOptional({ enum: ['shortlisted', 'chosen'], nullable: true }) assignment: string | null;
+  @ApiPropertyOptional({ type: String, enum: ['shortlisted', 'chosen'], nullable: true }) assignment: string | null;
   @ApiProperty({ type: [CandidateBandDto] }) bands: CandidateBandDto[];
 }
 
@@ -115,7 +116,7 @@ export class AssignmentDto {
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
   @ApiProperty({ enum: ['shortlisted', 'chosen'] }) state: string;
-  @ApiPropertyOptional({ nullable: true }) note: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) note: string | null;
   @ApiProperty() updatedAt: string;
 }
 

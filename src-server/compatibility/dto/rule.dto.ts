@@ -2,6 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsObject } from 'class-validator';
 import { BoolField, IntField } from '../../common/dto-fields';
 import { SEVERITIES, type Severity } from '../engine/types';
+import { CELL_STATUSES, type CellStatus } from './matrix.dto';
 
 export type RuleOrigin = 'file' | 'file-edited' | 'admin';
 
@@ -9,12 +10,12 @@ export class RuleSummaryDto {
   @ApiProperty({ example: 'vswr-in-band' }) id: string;
   @ApiProperty() title: string;
   @ApiProperty() description: string;
-  @ApiProperty({ enum: SEVERITIES }) severity: Severity;
+  @ApiProperty({ enum: SEVERITIES, enumName: 'Severity' }) severity: Severity;
   @ApiProperty() enabled: boolean;
   @ApiProperty() version: number;
   @ApiProperty() source: string;
   @ApiProperty({ enum: ['file', 'file-edited', 'admin'], description: 'file: as in rules/; file-edited: a file rule an admin changed; admin: made by an admin' }) origin: RuleOrigin;
-  @ApiPropertyOptional({ nullable: true }) updatedAt: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) updatedAt: string | null;
 }
 
 export class RuleDetailDto extends RuleSummaryDto {
@@ -51,8 +52,8 @@ export class SetRuleEnabledDto {
 export class RuleVersionDto {
   @ApiProperty() version: number;
   @ApiProperty({ enum: ['file', 'created', 'edited', 'enabled', 'disabled'] }) action: string;
-  @ApiPropertyOptional({ nullable: true }) changedBy: string | null;
-  @ApiPropertyOptional({ nullable: true }) at: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) changedBy: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) at: string | null;
   @ApiProperty() definition: Record<string, unknown>;
 }
 
@@ -71,8 +72,8 @@ export class CellChangeDto {
   @ApiProperty() designation: string;
   @ApiProperty() partId: number;
   @ApiProperty() mpn: string;
-  @ApiProperty({ enum: ['pass', 'marginal', 'fail', 'no-data'] }) before: string;
-  @ApiProperty({ enum: ['pass', 'marginal', 'fail', 'no-data'] }) after: string;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus' }) before: CellStatus;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus' }) after: CellStatus;
   @ApiProperty({ type: [String], description: 'Messages of the previewed rule on this cell after the change' }) findings: string[];
 }
 

@@ -316,8 +316,8 @@ export function computeRowFacts(requirement: RadioBandRequirement): Record<strin
   const facts: Partial<Record<FactName, FactValue>> = {
     technology: requirement.technology,
     designation: requirement.designation,
-    bandLowestMHz: mhz(lowestHz),
-    bandHighestMHz: mhz(highestHz),
+    bandLowestMhz: mhz(lowestHz),
+    bandHighestMhz: mhz(highestHz),
     radioTransmits: requirement.txPowerDbm !== null,
     txPowerDbm: requirement.txPowerDbm,
     feedLossDb: requirement.feedLossDb,
@@ -403,17 +403,17 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   facts.coverageAtVswr3Pct = rounded(at3 ? at3.fraction * 100 : null);
   facts.uncoveredAtVswr3 = at3 ? describeRanges(at3.uncovered) : null;
   facts.worstVswr = rounded(gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null);
-  facts.worstVswrAtMHz = rounded(gammaStats ? mhz(gammaStats.max.atHz) : null);
+  facts.worstVswrAtMhz = rounded(gammaStats ? mhz(gammaStats.max.atHz) : null);
   facts.worstReturnLossDb = rounded(gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null);
   facts.minRadiationEfficiencyPct = rounded(radiation ? radiation.min.value : null);
-  facts.minRadiationEfficiencyAtMHz = rounded(radiation ? mhz(radiation.min.atHz) : null);
+  facts.minRadiationEfficiencyAtMhz = rounded(radiation ? mhz(radiation.min.atHz) : null);
   facts.avgRadiationEfficiencyPct = rounded(radiation ? radiation.average : null);
   facts.minTotalEfficiencyPct = rounded(total ? total.min.value : null);
-  facts.minTotalEfficiencyAtMHz = rounded(total ? mhz(total.min.atHz) : null);
+  facts.minTotalEfficiencyAtMhz = rounded(total ? mhz(total.min.atHz) : null);
   facts.avgTotalEfficiencyPct = rounded(total ? total.average : null);
   facts.avgTotalEfficiencyDb = rounded(total ? powerRatioToDb(total.average / 100) : null);
   facts.peakGainDbi = rounded(gain ? gain.max.value : null);
-  facts.peakGainAtMHz = rounded(gain ? mhz(gain.max.atHz) : null);
+  facts.peakGainAtMhz = rounded(gain ? mhz(gain.max.atHz) : null);
   facts.realizedPeakGainDbi = rounded(realized ? realized.max.value : null);
   facts.txPeakGainDbi = rounded(txPeakGainDbi);
   facts.gainOverCertifiedDb = rounded(txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null);

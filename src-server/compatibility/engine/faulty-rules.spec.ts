@@ -136,7 +136,7 @@ describe(`${validateRuleDefinition.name}: operator and value types`, () => {
 
   it('accepts every starting rule and the valid forms of each operator', () => {
     for (const r of FILE_RULES) expect(validateRuleDefinition(r)).toEqual([]);
-    expect(validateRuleDefinition(leaf('reviewState', 'in', ['retired', 'rejected']))).toEqual([]);
+    expect(validateRuleDefinition(leaf('reviewState', 'in', ['retired', 'restricted']))).toEqual([]);
     expect(validateRuleDefinition(leaf('reviewState', 'in', { param: 'blockedStates' }))).toEqual([]);
     expect(validateRuleDefinition(leaf('worstVswr', 'greaterThan', { fact: 'worstReturnLossDb' }))).toEqual([]);
     expect(validateRuleDefinition(leaf('reviewState', 'equal', null))).toEqual([]);

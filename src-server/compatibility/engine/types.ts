@@ -7,7 +7,7 @@ export type { Polarization };
 export const TECHNOLOGIES = ['lte', 'nr', 'gnss', 'wifi', 'ble', 'ism', 'uwb', 'other'] as const;
 export type Technology = (typeof TECHNOLOGIES)[number];
 
-export const REVIEW_STATES = ['draft', 'in-review', 'approved', 'restricted', 'retired', 'rejected'] as const;
+export const REVIEW_STATES = ['draft', 'in-review', 'approved', 'restricted', 'retired'] as const;
 export type ReviewState = (typeof REVIEW_STATES)[number];
 
 export const LIFECYCLES = ['active', 'nrnd', 'eol'] as const;

@@ -27,7 +27,7 @@ class PartFieldsDto {
   @NumberField({ optional: true, nullable: true, min: 0, max: 5000, description: 'Evaluation ground plane width, mm' }) evalGroundWidthMm?: number | null;
   @NumberField({ optional: true, nullable: true, min: -273, max: 500 }) tempMinC?: number | null;
   @NumberField({ optional: true, nullable: true, min: -273, max: 500 }) tempMaxC?: number | null;
-  @EnumField(LIFECYCLES, { optional: true }) lifecycle?: Lifecycle;
+  @EnumField(LIFECYCLES, { enumName: 'Lifecycle', optional: true }) lifecycle?: Lifecycle;
   @StringField({ optional: true, nullable: true, maxLength: 4000 }) notes?: string | null;
 
   @ApiPropertyOptional({ type: [SpecBandInputDto], description: 'Replaces all spec bands when given' })
@@ -43,9 +43,9 @@ export class CreatePartDto extends PartFieldsDto {
   @StringField({ maxLength: 120, example: 'Korrel Antennas' }) manufacturer: string;
   @StringField({ maxLength: 80, example: 'KA-LTE-0921' }) mpn: string;
   @StringField({ maxLength: 200, example: 'Wideband LTE chip antenna 698–960 / 1710–2690 MHz' }) title: string;
-  @EnumField(FORM_FACTORS) formFactor: FormFactor;
-  @EnumField(CONNECTORS) connector: Connector;
-  @EnumField(POLARIZATIONS) polarization: PartPolarization;
+  @EnumField(FORM_FACTORS, { enumName: 'FormFactor' }) formFactor: FormFactor;
+  @EnumField(CONNECTORS, { enumName: 'Connector' }) connector: Connector;
+  @EnumField(POLARIZATIONS, { enumName: 'PartPolarization' }) polarization: PartPolarization;
 }
 
 export class UpdatePartDto extends PartFieldsDto {
@@ -53,9 +53,9 @@ export class UpdatePartDto extends PartFieldsDto {
   @StringField({ optional: true, maxLength: 120 }) manufacturer?: string;
   @StringField({ optional: true, maxLength: 80 }) mpn?: string;
   @StringField({ optional: true, maxLength: 200 }) title?: string;
-  @EnumField(FORM_FACTORS, { optional: true }) formFactor?: FormFactor;
-  @EnumField(CONNECTORS, { optional: true }) connector?: Connector;
-  @EnumField(POLARIZATIONS, { optional: true }) polarization?: PartPolarization;
+  @EnumField(FORM_FACTORS, { enumName: 'FormFactor', optional: true }) formFactor?: FormFactor;
+  @EnumField(CONNECTORS, { enumName: 'Connector', optional: true }) connector?: Connector;
+  @EnumField(POLARIZATIONS, { enumName: 'PartPolarization', optional: true }) polarization?: PartPolarization;
 }
 
 export class ReviewActionDto {

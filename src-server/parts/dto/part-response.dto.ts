@@ -20,12 +20,12 @@ export class PartSummaryDto {
   @ApiProperty() manufacturer: string;
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
-  @ApiProperty({ enum: FORM_FACTORS }) formFactor: FormFactor;
-  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
-  @ApiProperty({ enum: POLARIZATIONS }) polarization: PartPolarization;
-  @ApiProperty({ enum: LIFECYCLES }) lifecycle: Lifecycle;
-  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
-  @ApiProperty({ enum: MEASUREMENT_KINDS, isArray: true }) measuredKinds: MeasurementKind[];
+  @ApiProperty({ enum: FORM_FACTORS, enumName: 'FormFactor' }) formFactor: FormFactor;
+  @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
+  @ApiProperty({ enum: POLARIZATIONS, enumName: 'PartPolarization' }) polarization: PartPolarization;
+  @ApiProperty({ enum: LIFECYCLES, enumName: 'Lifecycle' }) lifecycle: Lifecycle;
+  @ApiProperty({ enum: REVIEW_STATES, enumName: 'ReviewState' }) reviewState: ReviewState;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind', isArray: true }) measuredKinds: MeasurementKind[];
   @ApiProperty({ type: [PriceDto], description: 'Lowest unit price per currency over all offers' }) lowestPrices: PriceDto[];
   @ApiProperty() updatedAt: string;
 }
@@ -39,24 +39,24 @@ export class SpecBandDto {
   @ApiProperty() id: number;
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;
-  @ApiProperty({ nullable: true }) maxVswr: number | null;
-  @ApiProperty({ nullable: true }) minReturnLossDb: number | null;
-  @ApiProperty({ nullable: true }) efficiencyPct: number | null;
-  @ApiProperty({ nullable: true }) peakGainDbi: number | null;
-  @ApiProperty({ nullable: true }) averageGainDbi: number | null;
+  @ApiProperty({ type: Number, nullable: true }) maxVswr: number | null;
+  @ApiProperty({ type: Number, nullable: true }) minReturnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true }) efficiencyPct: number | null;
+  @ApiProperty({ type: Number, nullable: true }) peakGainDbi: number | null;
+  @ApiProperty({ type: Number, nullable: true }) averageGainDbi: number | null;
 }
 
 export class MeasurementDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: MEASUREMENT_KINDS }) kind: MeasurementKind;
-  @ApiProperty({ nullable: true }) groundLengthMm: number | null;
-  @ApiProperty({ nullable: true }) groundWidthMm: number | null;
-  @ApiProperty({ nullable: true }) conditions: string | null;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind' }) kind: MeasurementKind;
+  @ApiProperty({ type: Number, nullable: true }) groundLengthMm: number | null;
+  @ApiProperty({ type: Number, nullable: true }) groundWidthMm: number | null;
+  @ApiProperty({ type: String, nullable: true }) conditions: string | null;
   @ApiProperty() fileName: string;
   @ApiProperty() sizeBytes: number;
   @ApiProperty() sha256: string;
   @ApiProperty() sourceFormat: string;
-  @ApiProperty({ nullable: true }) referenceOhms: number | null;
+  @ApiProperty({ type: Number, nullable: true }) referenceOhms: number | null;
   @ApiProperty() pointCount: number;
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;
@@ -67,7 +67,7 @@ export class MeasurementDto {
 
 export class MeasurementPointsDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: MEASUREMENT_KINDS }) kind: MeasurementKind;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind' }) kind: MeasurementKind;
   @ApiProperty({ type: [Number] }) frequenciesHz: number[];
   @ApiProperty({ type: [Number], description: 's11: |Γ|; efficiency: %; gains: dBi' }) values: number[];
   @ApiPropertyOptional({ type: [Number], description: 's11 only: VSWR' }) vswr?: number[];
@@ -85,22 +85,22 @@ export class RangeFiguresDto {
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;
   @ApiProperty({ enum: ['measured', 'spec', 'no-data'] }) matchSource: 'measured' | 'spec' | 'no-data';
-  @ApiProperty({ nullable: true, description: 'Share of the range with VSWR ≤ 2, 0..1' }) coveredFractionVswr2: number | null;
-  @ApiProperty({ nullable: true }) worstVswr: number | null;
-  @ApiProperty({ nullable: true }) worstVswrAtMhz: number | null;
-  @ApiProperty({ nullable: true }) minReturnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Share of the range with VSWR ≤ 2, 0..1' }) coveredFractionVswr2: number | null;
+  @ApiProperty({ type: Number, nullable: true }) worstVswr: number | null;
+  @ApiProperty({ type: Number, nullable: true }) worstVswrAtMhz: number | null;
+  @ApiProperty({ type: Number, nullable: true }) minReturnLossDb: number | null;
   @ApiProperty({ enum: ['measured', 'spec', 'no-data'] }) efficiencySource: 'measured' | 'spec' | 'no-data';
-  @ApiProperty({ nullable: true }) minEfficiencyPct: number | null;
-  @ApiProperty({ nullable: true }) averageEfficiencyPct: number | null;
-  @ApiProperty({ nullable: true }) averageEfficiencyDb: number | null;
-  @ApiProperty({ nullable: true }) peakGainDbi: number | null;
-  @ApiProperty({ nullable: true }) averageGainDbi: number | null;
+  @ApiProperty({ type: Number, nullable: true }) minEfficiencyPct: number | null;
+  @ApiProperty({ type: Number, nullable: true }) averageEfficiencyPct: number | null;
+  @ApiProperty({ type: Number, nullable: true }) averageEfficiencyDb: number | null;
+  @ApiProperty({ type: Number, nullable: true }) peakGainDbi: number | null;
+  @ApiProperty({ type: Number, nullable: true }) averageGainDbi: number | null;
   @ApiProperty({ type: [String], description: 'Why a figure is missing' }) notes: string[];
 }
 
 export class DocumentDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: DOCUMENT_KINDS }) kind: DocumentKind;
+  @ApiProperty({ enum: DOCUMENT_KINDS, enumName: 'DocumentKind' }) kind: DocumentKind;
   @ApiProperty() title: string;
   @ApiProperty() fileName: string;
   @ApiProperty() contentType: string;
@@ -118,12 +118,12 @@ export class PriceBreakDto {
 export class OfferDto {
   @ApiProperty() id: number;
   @ApiProperty() supplier: string;
-  @ApiProperty({ nullable: true }) sku: string | null;
+  @ApiProperty({ type: String, nullable: true }) sku: string | null;
   @ApiProperty() currency: string;
   @ApiProperty({ type: [PriceBreakDto] }) priceBreaks: PriceBreakDto[];
-  @ApiProperty({ nullable: true }) moq: number | null;
-  @ApiProperty({ nullable: true }) leadTimeDays: number | null;
-  @ApiProperty({ nullable: true, example: '2025-11-20' }) lastCheckedOn: string | null;
+  @ApiProperty({ type: Number, nullable: true }) moq: number | null;
+  @ApiProperty({ type: Number, nullable: true }) leadTimeDays: number | null;
+  @ApiProperty({ type: String, nullable: true, example: '2025-11-20' }) lastCheckedOn: string | null;
   @ApiProperty() version: number;
 }
 
@@ -131,9 +131,9 @@ export class AlternateDto {
   @ApiProperty() partId: number;
   @ApiProperty() manufacturer: string;
   @ApiProperty() mpn: string;
-  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
+  @ApiProperty({ enum: REVIEW_STATES, enumName: 'ReviewState' }) reviewState: ReviewState;
   @ApiProperty({ enum: ['alternate', 'second-source'] }) kind: string;
-  @ApiProperty({ nullable: true }) note: string | null;
+  @ApiProperty({ type: String, nullable: true }) note: string | null;
 }
 
 export class PartPermissionsDto {
@@ -149,28 +149,28 @@ export class PartDetailDto {
   @ApiProperty() manufacturer: string;
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
-  @ApiProperty({ enum: FORM_FACTORS }) formFactor: FormFactor;
-  @ApiProperty({ nullable: true }) mounting: string | null;
-  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
-  @ApiProperty({ enum: POLARIZATIONS }) polarization: PartPolarization;
+  @ApiProperty({ enum: FORM_FACTORS, enumName: 'FormFactor' }) formFactor: FormFactor;
+  @ApiProperty({ type: String, nullable: true }) mounting: string | null;
+  @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
+  @ApiProperty({ enum: POLARIZATIONS, enumName: 'PartPolarization' }) polarization: PartPolarization;
   @ApiProperty() nominalImpedanceOhms: number;
-  @ApiProperty({ nullable: true }) lengthMm: number | null;
-  @ApiProperty({ nullable: true }) widthMm: number | null;
-  @ApiProperty({ nullable: true }) heightMm: number | null;
-  @ApiProperty({ nullable: true }) evalGroundLengthMm: number | null;
-  @ApiProperty({ nullable: true }) evalGroundWidthMm: number | null;
-  @ApiProperty({ nullable: true }) tempMinC: number | null;
-  @ApiProperty({ nullable: true }) tempMaxC: number | null;
-  @ApiProperty({ enum: LIFECYCLES }) lifecycle: Lifecycle;
-  @ApiProperty({ enum: REVIEW_STATES }) reviewState: ReviewState;
-  @ApiProperty({ nullable: true }) reviewComment: string | null;
-  @ApiProperty({ nullable: true }) notes: string | null;
+  @ApiProperty({ type: Number, nullable: true }) lengthMm: number | null;
+  @ApiProperty({ type: Number, nullable: true }) widthMm: number | null;
+  @ApiProperty({ type: Number, nullable: true }) heightMm: number | null;
+  @ApiProperty({ type: Number, nullable: true }) evalGroundLengthMm: number | null;
+  @ApiProperty({ type: Number, nullable: true }) evalGroundWidthMm: number | null;
+  @ApiProperty({ type: Number, nullable: true }) tempMinC: number | null;
+  @ApiProperty({ type: Number, nullable: true }) tempMaxC: number | null;
+  @ApiProperty({ enum: LIFECYCLES, enumName: 'Lifecycle' }) lifecycle: Lifecycle;
+  @ApiProperty({ enum: REVIEW_STATES, enumName: 'ReviewState' }) reviewState: ReviewState;
+  @ApiProperty({ type: String, nullable: true }) reviewComment: string | null;
+  @ApiProperty({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty({ type: UserRefDto, nullable: true }) createdBy: UserRefDto | null;
   @ApiProperty({ type: UserRefDto, nullable: true }) submittedBy: UserRefDto | null;
-  @ApiProperty({ nullable: true }) submittedAt: string | null;
+  @ApiProperty({ type: String, nullable: true }) submittedAt: string | null;
   @ApiProperty({ type: UserRefDto, nullable: true }) reviewedBy: UserRefDto | null;
-  @ApiProperty({ nullable: true }) reviewedAt: string | null;
+  @ApiProperty({ type: String, nullable: true }) reviewedAt: string | null;
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
   @ApiProperty({ type: [SpecBandDto] }) specBands: SpecBandDto[];
@@ -190,7 +190,7 @@ export class ReviewQueueItemDto {
   @ApiProperty() title: string;
   @ApiProperty() version: number;
   @ApiProperty({ type: UserRefDto, nullable: true }) submittedBy: UserRefDto | null;
-  @ApiProperty({ nullable: true }) submittedAt: string | null;
-  @ApiProperty({ enum: MEASUREMENT_KINDS, isArray: true }) measuredKinds: MeasurementKind[];
+  @ApiProperty({ type: String, nullable: true }) submittedAt: string | null;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind', isArray: true }) measuredKinds: MeasurementKind[];
   @ApiProperty() documentCount: number;
 }

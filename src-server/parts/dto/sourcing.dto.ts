@@ -57,6 +57,6 @@ export class UpdateOfferDto extends OfferFieldsDto {
 }
 
 export class AlternateInputDto {
-  @EnumField(ALTERNATE_KINDS) kind: AlternateKind;
+  @EnumField(ALTERNATE_KINDS, { enumName: 'AlternateKind' }) kind: AlternateKind;
   @StringField({ optional: true, maxLength: 300 }) note?: string;
 }

@@ -7,7 +7,7 @@ import { MeasurementDto } from './part-response.dto';
 
 /** Multipart fields beside `file`. */
 export class UploadMeasurementDto {
-  @EnumField(MEASUREMENT_KINDS, { description: 's11 takes a Touchstone file; the others a CSV' }) kind: MeasurementKind;
+  @EnumField(MEASUREMENT_KINDS, { enumName: 'MeasurementKind', description: 's11 takes a Touchstone file; the others a CSV' }) kind: MeasurementKind;
   @NumberField({ optional: true, min: 0, max: 5000, description: 'Ground plane the curve was measured on: length, mm' }) groundLengthMm?: number;
   @NumberField({ optional: true, min: 0, max: 5000, description: 'Ground plane width, mm' }) groundWidthMm?: number;
   @StringField({ optional: true, maxLength: 500, description: 'Conditions: fixture, enclosure, cable, chamber' }) conditions?: string;
@@ -17,7 +17,7 @@ export class UploadMeasurementDto {
 }
 
 export class UploadDocumentDto {
-  @EnumField(DOCUMENT_KINDS) kind: DocumentKind;
+  @EnumField(DOCUMENT_KINDS, { enumName: 'DocumentKind' }) kind: DocumentKind;
   @StringField({ optional: true, maxLength: 200, description: 'Defaults to the file name' }) title?: string;
 }
 
@@ -27,7 +27,7 @@ export class CurvePreviewDto {
   @ApiProperty() pointCount: number;
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;
-  @ApiProperty({ nullable: true }) referenceOhms: number | null;
+  @ApiProperty({ type: Number, nullable: true }) referenceOhms: number | null;
   @ApiProperty({ description: 'Return loss dB (s11), efficiency % or gain dBi' }) valueLabel: string;
   @ApiProperty({ type: [Number], description: 'At most 400 points, evenly picked' }) frequenciesMhz: number[];
   @ApiProperty({ type: [Number] }) values: number[];

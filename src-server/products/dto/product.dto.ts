@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
 import { BoolField, IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
-import { REGIONS } from '../../bands/band-domain';
+import { REGIONS, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { RadioDto } from './radio.dto';
 
 export class CreateProductDto {
@@ -20,7 +20,7 @@ export class CreateProductDto {
   @NumberField({ min: 1, max: 2000, description: 'Ground-plane (board) width in mm' })
   groundPlaneWidthMm: number;
 
-  @ApiProperty({ enum: REGIONS, isArray: true, example: ['EU', 'US'] })
+  @ApiProperty({ enum: REGIONS, enumName: 'Region', isArray: true, example: ['EU', 'US'] })
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(REGIONS.length)
@@ -54,16 +54,16 @@ export class PersonRefDto {
 
 export class ProductSummaryDto extends OmitType(CreateProductDto, ['notes'] as const) {
   @ApiProperty() id: number;
-  @ApiPropertyOptional({ nullable: true }) notes: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty() radioCount: number;
-  @ApiProperty({ type: [String], description: 'Technologies of its radios' }) technologies: string[];
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology', isArray: true, description: 'Technologies of its radios' }) technologies: Technology[];
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
-  @ApiPropertyOptional({ type: PersonRefDto, nullable: true, description: 'Who created it; null when unknown (seeded or older products). The creator and admins may delete it.' })
+  @ApiProperty({ type: PersonRefDto, nullable: true, description: 'Who created it; null when unknown (seeded or older products). The creator and admins may delete it.' })
   createdBy: PersonRefDto | null;
-  @ApiPropertyOptional({ nullable: true, description: 'Set when the product was deleted; an admin can restore it' }) deletedAt: string | null;
-  @ApiPropertyOptional({ type: PersonRefDto, nullable: true }) deletedBy: PersonRefDto | null;
+  @ApiProperty({ type: String, nullable: true, description: 'Set when the product was deleted; an admin can restore it' }) deletedAt: string | null;
+  @ApiProperty({ type: PersonRefDto, nullable: true }) deletedBy: PersonRefDto | null;
 }
 
 export class ProductDetailDto extends ProductSummaryDto {

@@ -18,7 +18,7 @@ export class CreateRadioDto {
   @StringField({ maxLength: 120, example: 'Cellular LTE-M / NB-IoT' })
   name: string;
 
-  @EnumField(TECHNOLOGIES, { description: 'LTE-M, NB-IoT and Cat-1 radios are lte; 5G is nr' })
+  @EnumField(TECHNOLOGIES, { enumName: 'Technology', description: 'LTE-M, NB-IoT and Cat-1 radios are lte; 5G is nr' })
   technology: Technology;
 
   @StringField({ maxLength: 160, example: 'Halvorn HM-410 (invented)' })
@@ -27,10 +27,10 @@ export class CreateRadioDto {
   @NumberField({ optional: true, nullable: true, min: -40, max: 36, description: 'Conducted transmit power (dBm); must be empty for receive-only radios (GNSS)' })
   transmitPowerDbm?: number | null;
 
-  @EnumField(POLARIZATIONS)
+  @EnumField(POLARIZATIONS, { enumName: 'RadioPolarization' })
   polarization: Polarization;
 
-  @EnumField(CONNECTORS)
+  @EnumField(CONNECTORS, { enumName: 'Connector' })
   connector: Connector;
 
   @NumberField({ min: 0, max: 20, description: 'Cable or feed loss between module and antenna (dB)' })
@@ -55,21 +55,21 @@ export class UpdateRadioDto extends PatchType(CreateRadioDto) {
 
 export class RadioBandDto {
   @ApiProperty({ type: BandDto }) band: BandDto;
-  @ApiPropertyOptional({ nullable: true }) certifiedMaxGainDbi: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) certifiedMaxGainDbi: number | null;
 }
 
 export class RadioDto {
   @ApiProperty() id: number;
   @ApiProperty() productId: number;
   @ApiProperty() name: string;
-  @ApiProperty({ enum: TECHNOLOGIES }) technology: Technology;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
   @ApiProperty() module: string;
   @ApiProperty() receiveOnly: boolean;
-  @ApiPropertyOptional({ nullable: true }) transmitPowerDbm: number | null;
-  @ApiProperty({ enum: POLARIZATIONS }) polarization: Polarization;
-  @ApiProperty({ enum: CONNECTORS }) connector: Connector;
+  @ApiPropertyOptional({ type: Number, nullable: true }) transmitPowerDbm: number | null;
+  @ApiProperty({ enum: POLARIZATIONS, enumName: 'RadioPolarization' }) polarization: Polarization;
+  @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
   @ApiProperty() feedLossDb: number;
-  @ApiPropertyOptional({ nullable: true }) notes: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty({ type: [RadioBandDto] }) bands: RadioBandDto[];
   @ApiProperty() updatedAt: string;

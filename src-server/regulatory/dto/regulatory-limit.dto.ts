@@ -4,19 +4,19 @@ import { REGIONS } from '../../bands/band-domain';
 import { LIMIT_KINDS, type LimitKind } from '../regulatory-limit.entity';
 
 export class CreateRegulatoryLimitDto {
-  @EnumField(REGIONS, { example: 'EU' })
+  @EnumField(REGIONS, { enumName: 'Region', example: 'EU' })
   region: string;
 
   @StringField({ maxLength: 160, example: 'SRD 869.4–869.65 MHz' })
   title: string;
 
   @NumberField({ min: 0.001, max: 300000 })
-  fromMHz: number;
+  fromMhz: number;
 
   @NumberField({ min: 0.001, max: 300000 })
-  toMHz: number;
+  toMhz: number;
 
-  @EnumField(LIMIT_KINDS, { description: 'eirp, erp, or conducted power with an antenna-gain rule' })
+  @EnumField(LIMIT_KINDS, { enumName: 'LimitKind', description: 'eirp, erp, or conducted power with an antenna-gain rule' })
   kind: LimitKind;
 
   @NumberField({ min: -30, max: 60, description: 'The limit in dBm, unrounded (25 mW = 13.979 dBm)' })
@@ -44,29 +44,29 @@ export class CreateRegulatoryLimitDto {
 export class UpdateRegulatoryLimitDto extends PatchType(CreateRegulatoryLimitDto) {}
 
 export class RegulatoryLimitQueryDto {
-  @EnumField(REGIONS, { optional: true })
+  @EnumField(REGIONS, { enumName: 'Region', optional: true })
   region?: string;
 
   @NumberField({ optional: true, min: 0, max: 300000 })
-  fromMHz?: number;
+  fromMhz?: number;
 
   @NumberField({ optional: true, min: 0, max: 300000 })
-  toMHz?: number;
+  toMhz?: number;
 }
 
 export class RegulatoryLimitDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: REGIONS }) region: string;
+  @ApiProperty({ enum: REGIONS, enumName: 'Region' }) region: string;
   @ApiProperty() title: string;
-  @ApiProperty() fromMHz: number;
-  @ApiProperty() toMHz: number;
-  @ApiProperty({ enum: LIMIT_KINDS }) kind: LimitKind;
+  @ApiProperty() fromMhz: number;
+  @ApiProperty() toMhz: number;
+  @ApiProperty({ enum: LIMIT_KINDS, enumName: 'LimitKind' }) kind: LimitKind;
   @ApiProperty() valueDbm: number;
   @ApiProperty() valueText: string;
-  @ApiPropertyOptional({ nullable: true }) gainThresholdDbi: number | null;
-  @ApiPropertyOptional({ nullable: true }) reductionDbPerDb: number | null;
-  @ApiPropertyOptional({ nullable: true }) conditions: string | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) gainThresholdDbi: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true }) reductionDbPerDb: number | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) conditions: string | null;
   @ApiProperty() source: string;
-  @ApiPropertyOptional({ nullable: true }) note: string | null;
+  @ApiPropertyOptional({ type: String, nullable: true }) note: string | null;
   @ApiProperty() updatedAt: string;
 }

@@ -12,7 +12,7 @@ export class AnalyzeTouchstoneDto {
   @IntField({ optional: true, min: 1, max: 2, description: 'Port whose reflection (S11 or S22) is analysed', example: 1 })
   port?: number;
 
-  @EnumField(MATCH_CRITERIA, { optional: true, description: '"vswr" uses vswrMax; "return-loss-10db" is |S11| ≤ −10 dB (VSWR ≈ 1.92)' })
+  @EnumField(MATCH_CRITERIA, { enumName: 'MatchCriterion', optional: true, description: '"vswr" uses vswrMax; "return-loss-10db" is |S11| ≤ −10 dB (VSWR ≈ 1.92)' })
   criterion?: MatchCriterionName;
 }
 
@@ -37,8 +37,8 @@ export class MatchPointDto {
 export class CurvePointDto {
   @ApiProperty() frequencyHz: number;
   @ApiProperty({ description: '|Γ|' }) gammaMagnitude: number;
-  @ApiProperty({ nullable: true, description: 'null where |Γ| = 1 (infinite)' }) vswr: number | null;
-  @ApiProperty({ nullable: true, description: 'Positive dB; null where |Γ| = 0 (infinite)' }) returnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'null where |Γ| = 1 (infinite)' }) vswr: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Positive dB; null where |Γ| = 0 (infinite)' }) returnLossDb: number | null;
 }
 
 export class TouchstoneAnalysisDto {
@@ -51,7 +51,7 @@ export class TouchstoneAnalysisDto {
   @ApiProperty() minFrequencyHz: number;
   @ApiProperty() maxFrequencyHz: number;
   @ApiProperty({ enum: [1, 2] }) port: number;
-  @ApiProperty({ enum: MATCH_CRITERIA }) criterion: MatchCriterionName;
+  @ApiProperty({ enum: MATCH_CRITERIA, enumName: 'MatchCriterion' }) criterion: MatchCriterionName;
   @ApiProperty({ description: 'The criterion as a VSWR limit' }) thresholdVswr: number;
   @ApiProperty({ description: 'The criterion as a minimum return loss, dB' }) thresholdReturnLossDb: number;
   @ApiProperty({ type: [FrequencyRangeDto], description: 'Ranges meeting the criterion, computed on every file point with interpolated edges' })

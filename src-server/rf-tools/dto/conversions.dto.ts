@@ -41,9 +41,9 @@ export class ConversionRequestDto {
 
 export class ReflectionDto {
   @ApiProperty() gammaMagnitude: number;
-  @ApiProperty({ nullable: true, description: 'null when infinite' }) vswr: number | null;
-  @ApiProperty({ nullable: true, description: 'Positive dB; null for a perfect match' }) returnLossDb: number | null;
-  @ApiProperty({ nullable: true, description: 'Positive dB' }) mismatchLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when infinite' }) vswr: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Positive dB; null for a perfect match' }) returnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Positive dB' }) mismatchLossDb: number | null;
   @ApiProperty() transmittedPercent: number;
   @ApiProperty() reflectedPercent: number;
 }

@@ -44,7 +44,7 @@ export class MatchingRequestDto {
   @IsPositive()
   z0Ohms: number;
 
-  @EnumField(PREFERRED_SERIES, { description: 'IEC 60063 series the values snap to' })
+  @EnumField(PREFERRED_SERIES, { enumName: 'PreferredSeries', description: 'IEC 60063 series the values snap to' })
   series: (typeof PREFERRED_SERIES)[number];
 
   @ApiPropertyOptional({ type: SweepDto, description: 'Frequency range for the return-loss sweep; the load is taken as constant over it' })
@@ -58,14 +58,14 @@ export class MatchingElementDto {
   @ApiProperty({ enum: ['series', 'shunt'] }) connection: 'series' | 'shunt';
   @ApiProperty({ enum: ['load-side', 'source-side'], description: 'Next to the load, or next to the Z0 source' }) position: 'load-side' | 'source-side';
   @ApiProperty({ enum: ['inductor', 'capacitor', 'none'], description: '"none": a series short or an open shunt' }) kind: 'inductor' | 'capacitor' | 'none';
-  @ApiProperty({ nullable: true }) inductanceNh: number | null;
-  @ApiProperty({ nullable: true }) capacitancePf: number | null;
+  @ApiProperty({ type: Number, nullable: true }) inductanceNh: number | null;
+  @ApiProperty({ type: Number, nullable: true }) capacitancePf: number | null;
 }
 
 export class SweepPointDto {
   @ApiProperty() frequencyHz: number;
-  @ApiProperty({ nullable: true, description: 'Positive dB; null where the match is perfect' }) returnLossDb: number | null;
-  @ApiProperty({ nullable: true }) vswr: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Positive dB; null where the match is perfect' }) returnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true }) vswr: number | null;
 }
 
 export class NetworkDto {
@@ -77,13 +77,13 @@ export class MatchingSolutionDto {
   @ApiProperty({ enum: ['shunt-at-load', 'series-at-load'] }) topology: 'shunt-at-load' | 'series-at-load';
   @ApiProperty({ type: NetworkDto }) exact: NetworkDto;
   @ApiProperty({ type: NetworkDto, description: 'Every L and C replaced by its nearest preferred value' }) snapped: NetworkDto;
-  @ApiProperty({ nullable: true, description: 'Return loss of the snapped network at the design frequency, dB' }) snappedReturnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Return loss of the snapped network at the design frequency, dB' }) snappedReturnLossDb: number | null;
 }
 
 export class MatchingResponseDto {
   @ApiProperty() frequencyHz: number;
   @ApiProperty() z0Ohms: number;
-  @ApiProperty({ enum: PREFERRED_SERIES }) series: string;
+  @ApiProperty({ enum: PREFERRED_SERIES, enumName: 'PreferredSeries' }) series: string;
   @ApiProperty({ type: [MatchingSolutionDto], description: 'Usually two; one when both roots coincide, up to four when both topologies apply' })
   solutions: MatchingSolutionDto[];
 }

@@ -8,6 +8,6 @@ export class InviteUserDto {
   @StringField({ maxLength: 120, example: 'New Colleague' })
   name: string;
 
-  @EnumField(ROLES)
+  @EnumField(ROLES, { enumName: 'Role' })
   role: Role;
 }

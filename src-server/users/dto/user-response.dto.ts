@@ -5,7 +5,7 @@ export class UserResponseDto {
   @ApiProperty() id: number;
   @ApiProperty() email: string;
   @ApiProperty() name: string;
-  @ApiProperty({ enum: ROLES }) role: Role;
+  @ApiProperty({ enum: ROLES, enumName: 'Role' }) role: Role;
   @ApiProperty({ enum: ['invited', 'active', 'deactivated'] }) status: string;
   @ApiProperty() createdAt: string;
 }

@@ -40,11 +40,11 @@ function BandGroup({ technology, bands, part }: BandGroupProps) {
   const stripRows = useMemo(
     () =>
       bands.map((b) => {
-        const from = Math.min(...b.ranges.map((r) => r.fromMHz));
-        const to = Math.max(...b.ranges.map((r) => r.toMHz));
+        const from = Math.min(...b.ranges.map((r) => r.fromMhz));
+        const to = Math.max(...b.ranges.map((r) => r.toMhz));
         const covered = (part?.coveredRanges ?? [])
           .filter((c) => c.toMhz > from && c.fromMhz < to)
-          .map((c) => ({ fromMHz: Math.max(c.fromMhz, from), toMHz: Math.min(c.toMhz, to), label: `${part!.mpn} VSWR ≤ 2 (${c.source})` }));
+          .map((c) => ({ fromMhz: Math.max(c.fromMhz, from), toMhz: Math.min(c.toMhz, to), label: `${part!.mpn} VSWR ≤ 2 (${c.source})` }));
         return { id: b.id, label: b.designation, ranges: b.ranges.map((r) => ({ ...r, label: b.designation })), covered };
       }),
     [bands, part],
@@ -72,7 +72,7 @@ export function BandLibraryPage() {
   const [frequency, setFrequency] = useState('');
   const f = Number(frequency);
   const validFrequency = frequency.trim() !== '' && Number.isFinite(f) && f > 0;
-  const filter: BandFilter = { technology: technology || undefined, ...(validFrequency ? { fromMHz: f, toMHz: f } : {}) };
+  const filter: BandFilter = { technology: technology || undefined, ...(validFrequency ? { fromMhz: f, toMhz: f } : {}) };
   const bands = useBands(filter);
   const [partId, setPartId] = useState<number | null>(null);
   const part = usePartCoverage(partId);

@@ -14,7 +14,7 @@ export interface RegulatoryLimitDialogProps {
 type Draft = Record<keyof RegulatoryLimitInput, string>;
 
 const toDraft = (l: RegulatoryLimit | null): Draft => ({
-  region: l?.region ?? 'EU', title: l?.title ?? '', fromMHz: l ? String(l.fromMHz) : '', toMHz: l ? String(l.toMHz) : '', kind: l?.kind ?? 'eirp',
+  region: l?.region ?? 'EU', title: l?.title ?? '', fromMhz: l ? String(l.fromMhz) : '', toMhz: l ? String(l.toMhz) : '', kind: l?.kind ?? 'eirp',
   valueDbm: l ? String(l.valueDbm) : '', valueText: l?.valueText ?? '', gainThresholdDbi: l?.gainThresholdDbi?.toString() ?? '',
   reductionDbPerDb: l?.reductionDbPerDb?.toString() ?? '', conditions: l?.conditions ?? '', source: l?.source ?? '', note: l?.note ?? '',
 });
@@ -43,7 +43,7 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
     event.preventDefault();
     const body = {
       region: draft.region, title: draft.title, kind: draft.kind as LimitKind, valueText: draft.valueText, source: draft.source,
-      fromMHz: num(draft.fromMHz), toMHz: num(draft.toMHz), valueDbm: num(draft.valueDbm),
+      fromMhz: num(draft.fromMhz), toMhz: num(draft.toMhz), valueDbm: num(draft.valueDbm),
       gainThresholdDbi: gainRule ? num(draft.gainThresholdDbi) : null, reductionDbPerDb: gainRule ? num(draft.reductionDbPerDb) : null,
       conditions: draft.conditions || null, note: draft.note || null,
     } as unknown as RegulatoryLimitInput;
@@ -68,8 +68,8 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
           </div>
           {field('title', 'Title')}
           <div className="bw-form-grid">
-            {field('fromMHz', 'From (MHz)')}
-            {field('toMHz', 'To (MHz)')}
+            {field('fromMhz', 'From (MHz)')}
+            {field('toMhz', 'To (MHz)')}
             {field('valueDbm', 'Limit (dBm)', 'Unrounded: 25 mW is 13.979 dBm')}
             {field('valueText', "Regulator's wording", 'e.g. 25 mW e.r.p.')}
             {gainRule && field('gainThresholdDbi', 'Gain threshold (dBi)')}

@@ -16,7 +16,7 @@ const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 const COLUMNS: { id: string; name: string; width: number; value: (l: RegulatoryLimit) => string }[] = [
   { id: 'region', name: 'Region', width: 70, value: (l) => l.region },
   { id: 'title', name: 'Limit', width: 200, value: (l) => l.title },
-  { id: 'range', name: 'Range (MHz)', width: 120, value: (l) => `${l.fromMHz}–${l.toMHz}` },
+  { id: 'range', name: 'Range (MHz)', width: 120, value: (l) => `${l.fromMhz}–${l.toMhz}` },
   { id: 'kind', name: 'Kind', width: 150, value: (l) => LIMIT_KIND_LABELS[l.kind] },
   { id: 'value', name: 'Value', width: 220, value: (l) => `${l.valueText} (${Number(l.valueDbm.toFixed(2))} dBm)` },
   { id: 'rule', name: 'Gain rule', width: 170, value: (l) => (l.gainThresholdDbi === null ? '' : `−${l.reductionDbPerDb} dB per dB above ${l.gainThresholdDbi} dBi`) },

@@ -5,6 +5,6 @@ const ROLE_SHORT = { uplink: 'UL', downlink: 'DL', tdd: 'TDD', receive: 'Rx', 't
 const mhz = (v: number) => `${Number(v.toFixed(4))}`;
 
 /** "UL 699–716 · DL 729–746 MHz" */
-export const describeRanges = (band: Band) => `${band.ranges.map((r) => `${ROLE_SHORT[r.role]} ${mhz(r.fromMHz)}–${mhz(r.toMHz)}`).join(' · ')} MHz`;
+export const describeRanges = (band: Band) => `${band.ranges.map((r) => `${ROLE_SHORT[r.role]} ${mhz(r.fromMhz)}–${mhz(r.toMhz)}`).join(' · ')} MHz`;
 
 export const describeSource = (band: Band) => `${band.source.document}, ${band.source.table}`;

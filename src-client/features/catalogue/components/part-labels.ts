@@ -12,7 +12,7 @@ export const LIFECYCLE_LABEL: Record<Lifecycle, string> = { active: 'active', nr
 
 /** The span an antenna must cover for a band: lowest to highest edge of all its ranges (band edges: 3GPP TS 36.101 Table 5.5-1). */
 export function bandSpan(band: LibraryBand): { fromMhz: number; toMhz: number } {
-  return { fromMhz: Math.min(...band.ranges.map((r) => r.fromMHz)), toMhz: Math.max(...band.ranges.map((r) => r.toMHz)) };
+  return { fromMhz: Math.min(...band.ranges.map((r) => r.fromMhz)), toMhz: Math.max(...band.ranges.map((r) => r.toMhz)) };
 }
 
 export const rangesParam = (bands: LibraryBand[]) => bands.map((b) => { const s = bandSpan(b); return `${s.fromMhz}-${s.toMhz}`; }).join(',');

@@ -19,7 +19,7 @@ interface BandRow {
   gain: string;
 }
 
-const describe = (b: BandChoice) => b.ranges.map((r) => `${r.fromMHz}–${r.toMHz}`).join(', ') + ' MHz';
+const describe = (b: BandChoice) => b.ranges.map((r) => `${r.fromMhz}–${r.toMhz}`).join(', ') + ' MHz';
 
 /** Adds or edits one radio: what it is, how it feeds its antenna, and which bands it must cover. */
 export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDialogProps) {

@@ -24,7 +24,7 @@ const NEW_RULE = {
   source: 'Name the standard or book the threshold comes from, or say "common practice"',
   parameters: { maxVswr: 2.5 },
   conditions: { all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'maxVswr' } }] },
-  event: { type: 'finding', params: { code: 'MY_NEW_RULE', message: 'worst VSWR {worstVswr}:1 at {worstVswrAtMHz} MHz; the limit is {maxVswr}:1' } },
+  event: { type: 'finding', params: { code: 'MY_NEW_RULE', message: 'worst VSWR {worstVswr}:1 at {worstVswrAtMhz} MHz; the limit is {maxVswr}:1' } },
 };
 
 function parse(text: string): { value: unknown; problem: RuleProblem | null } {

@@ -8,7 +8,7 @@ interface LibraryBand {
   designation: string;
   name: string;
   technology: string;
-  ranges: { fromMHz: number; toMHz: number }[];
+  ranges: { fromMhz: number; toMhz: number }[];
 }
 
 /**
@@ -30,9 +30,9 @@ export const BUILT_IN_BANDS: OverlayBand[] = [
 /** A library band as one overlay spanning all its ranges (uplink to downlink). */
 export function overlayFromLibrary(band: LibraryBand): OverlayBand | null {
   if (band.ranges.length === 0) return null;
-  const fromMHz = Math.min(...band.ranges.map((r) => r.fromMHz));
-  const toMHz = Math.max(...band.ranges.map((r) => r.toMHz));
-  return { key: `band-${band.id}`, label: band.designation, fromHz: fromMHz * 1e6, toHz: toMHz * 1e6 };
+  const fromMhz = Math.min(...band.ranges.map((r) => r.fromMhz));
+  const toMhz = Math.max(...band.ranges.map((r) => r.toMhz));
+  return { key: `band-${band.id}`, label: band.designation, fromHz: fromMhz * 1e6, toHz: toMhz * 1e6 };
 }
 
 /** The library's bands as overlays, lowest first; an empty or unreadable library gives the built-in list. */

@@ -5,9 +5,9 @@ import type { LinkBudgetRequest } from '../types';
 import { fixed, metres, parseNumber, significant } from './format';
 import { ResultList } from './ResultList';
 
-type Field = 'frequencyMHz' | 'distanceM' | 'txPowerDbm' | 'txGainDbi' | 'rxGainDbi' | 'lossesDb' | 'rxSensitivityDbm';
+type Field = 'frequencyMhz' | 'distanceM' | 'txPowerDbm' | 'txGainDbi' | 'rxGainDbi' | 'lossesDb' | 'rxSensitivityDbm';
 const FIELDS: Array<{ key: Field; label: string }> = [
-  { key: 'frequencyMHz', label: 'Frequency (MHz)' },
+  { key: 'frequencyMhz', label: 'Frequency (MHz)' },
   { key: 'distanceM', label: 'Distance (m)' },
   { key: 'txPowerDbm', label: 'Transmit power (dBm)' },
   { key: 'txGainDbi', label: 'Transmit antenna gain (dBi)' },
@@ -15,13 +15,13 @@ const FIELDS: Array<{ key: Field; label: string }> = [
   { key: 'lossesDb', label: 'Other losses (dB)' },
   { key: 'rxSensitivityDbm', label: 'Receiver sensitivity (dBm)' },
 ];
-const START: Record<Field, string> = { frequencyMHz: '868', distanceM: '1000', txPowerDbm: '14', txGainDbi: '0', rxGainDbi: '2', lossesDb: '6', rxSensitivityDbm: '-120' };
+const START: Record<Field, string> = { frequencyMhz: '868', distanceM: '1000', txPowerDbm: '14', txGainDbi: '0', rxGainDbi: '2', lossesDb: '6', rxSensitivityDbm: '-120' };
 
 function toRequest(values: Record<Field, string>): LinkBudgetRequest | null {
   const n = Object.fromEntries(FIELDS.map(({ key }) => [key, parseNumber(values[key])])) as Record<Field, number | null>;
   if (Object.values(n).some((v) => v === null)) return null;
-  const { frequencyMHz, ...rest } = n as Record<Field, number>;
-  return { frequencyHz: frequencyMHz * 1e6, ...rest };
+  const { frequencyMhz, ...rest } = n as Record<Field, number>;
+  return { frequencyHz: frequencyMhz * 1e6, ...rest };
 }
 
 /** Free-space link budget; figures from POST /api/rf/link-budget. */

@@ -6,23 +6,23 @@ import type { MatchingRequest, MatchingSolution } from '../types';
 import { fixed, parseNumber, significant } from './format';
 import { LSectionSchematic } from './LSectionSchematic';
 
-type Field = 'frequencyMHz' | 'loadRe' | 'loadIm' | 'z0' | 'sweepFromMHz' | 'sweepToMHz';
+type Field = 'frequencyMhz' | 'loadRe' | 'loadIm' | 'z0' | 'sweepFromMhz' | 'sweepToMhz';
 // An invented antenna feed at 868 MHz, just to start from.
-const START: Record<Field, string> = { frequencyMHz: '868', loadRe: '22', loadIm: '31', z0: '50', sweepFromMHz: '800', sweepToMHz: '940' };
+const START: Record<Field, string> = { frequencyMhz: '868', loadRe: '22', loadIm: '31', z0: '50', sweepFromMhz: '800', sweepToMhz: '940' };
 const LABELS: Record<Field, string> = {
-  frequencyMHz: 'Design frequency (MHz)',
+  frequencyMhz: 'Design frequency (MHz)',
   loadRe: 'Load R (Ω)',
   loadIm: 'Load X (Ω)',
   z0: 'Z0 (Ω)',
-  sweepFromMHz: 'Sweep from (MHz)',
-  sweepToMHz: 'Sweep to (MHz)',
+  sweepFromMhz: 'Sweep from (MHz)',
+  sweepToMhz: 'Sweep to (MHz)',
 };
 
 function toRequest(values: Record<Field, string>, series: 'E12' | 'E24'): MatchingRequest | null {
   const n = Object.fromEntries(Object.entries(values).map(([k, v]) => [k, parseNumber(v)])) as Record<Field, number | null>;
-  if (n.frequencyMHz === null || n.loadRe === null || n.loadIm === null || n.z0 === null) return null;
-  const sweep = n.sweepFromMHz !== null && n.sweepToMHz !== null ? { fromHz: n.sweepFromMHz * 1e6, toHz: n.sweepToMHz * 1e6, points: 281 } : undefined;
-  return { frequencyHz: n.frequencyMHz * 1e6, loadOhms: { re: n.loadRe, im: n.loadIm }, z0Ohms: n.z0, series, ...(sweep ? { sweep } : {}) };
+  if (n.frequencyMhz === null || n.loadRe === null || n.loadIm === null || n.z0 === null) return null;
+  const sweep = n.sweepFromMhz !== null && n.sweepToMhz !== null ? { fromHz: n.sweepFromMhz * 1e6, toHz: n.sweepToMhz * 1e6, points: 281 } : undefined;
+  return { frequencyHz: n.frequencyMhz * 1e6, loadOhms: { re: n.loadRe, im: n.loadIm }, z0Ohms: n.z0, series, ...(sweep ? { sweep } : {}) };
 }
 
 // The exact match peaks at hundreds of dB; nothing above 50 dB matters on a board.
