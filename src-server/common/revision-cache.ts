@@ -13,13 +13,15 @@
  * bounded LruMap. Memos of pure functions over immutable in-memory objects (WeakMaps in the engine and
  * the search index) are not caches of database state and cannot go stale: a reload replaces the object.
  */
+import { LRUCache } from 'lru-cache';
 
-/** A Map of at most `capacity` entries; the least recently used leaves first. */
-export class LruMap<K, V> {
-  private readonly entries = new Map<K, V>();
+/** A Map of at most `capacity` entries; the least recently used leaves first (lru-cache does the bookkeeping). */
+export class LruMap<K extends {}, V extends {}> {
+  private readonly entries: LRUCache<K, V>;
 
   constructor(readonly capacity: number) {
     if (!Number.isInteger(capacity) || capacity < 1) throw new RangeError(`capacity must be a positive integer, not ${capacity}`);
+    this.entries = new LRUCache<K, V>({ max: capacity });
   }
 
   get size(): number {
@@ -32,18 +34,11 @@ export class LruMap<K, V> {
 
   /** The value, now the most recently used. */
   get(key: K): V | undefined {
-    if (!this.entries.has(key)) return undefined;
-    const value = this.entries.get(key)!;
-    // A Map iterates in insertion order: re-inserting moves the key to the young end.
-    this.entries.delete(key);
-    this.entries.set(key, value);
-    return value;
+    return this.entries.get(key);
   }
 
   set(key: K, value: V): this {
-    this.entries.delete(key);
     this.entries.set(key, value);
-    if (this.entries.size > this.capacity) this.entries.delete(this.entries.keys().next().value as K);
     return this;
   }
 
