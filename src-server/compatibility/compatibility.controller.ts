@@ -4,21 +4,27 @@ import type { Response } from 'express';
 import { ALL_ROLES } from '../common/roles';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ParseIdPipe } from '../common/parse-id.pipe';
-import { CompatibilityService } from './compatibility.service';
+import { AssignmentsService } from './assignments.service';
+import { CandidatesService } from './candidates.service';
+import { MatrixService } from './matrix.service';
 import { matrixCsvFileName, matrixToCsv } from './matrix-csv';
 import { AssignmentDto, CandidatesDto, CandidatesQueryDto, ChoosePartDto, MatrixDto, MatrixQueryDto, ShortlistDto } from './dto/matrix.dto';
 
 @ApiTags('compatibility')
 @Controller('products/:id')
 export class CompatibilityController {
-  constructor(private readonly compatibility: CompatibilityService) {}
+  constructor(
+    private readonly matrices: MatrixService,
+    private readonly ranking: CandidatesService,
+    private readonly partAssignments: AssignmentsService,
+  ) {}
 
   @Get('matrix')
   @Roles(...ALL_ROLES)
   @ApiOperation({ summary: "Every radio band of the product against parts (default: its chosen and shortlisted parts), with each cell's findings" })
   @ApiOkResponse({ type: MatrixDto })
   matrix(@Param('id', ParseIdPipe) id: number, @Query() query: MatrixQueryDto): Promise<MatrixDto> {
-    return this.compatibility.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
+    return this.matrices.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
   }
 
   @Get('matrix.csv')
@@ -26,7 +32,7 @@ export class CompatibilityController {
   @ApiProduces('text/csv')
   @ApiOperation({ summary: 'The same matrix as CSV: one line per radio band and part, with the screening caution first' })
   async matrixCsv(@Param('id', ParseIdPipe) id: number, @Query() query: MatrixQueryDto, @Res({ passthrough: true }) response: Response): Promise<string> {
-    const matrix = await this.compatibility.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
+    const matrix = await this.matrices.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
     const text = matrixToCsv(matrix);
     // Set only once the file exists: an error before it must still answer as JSON.
     response.setHeader('Content-Type', 'text/csv; charset=utf-8');
@@ -39,7 +45,7 @@ export class CompatibilityController {
   @ApiOperation({ summary: 'Approved parts for one radio, ranked by status and by the margin to their nearest limit' })
   @ApiOkResponse({ type: CandidatesDto })
   candidates(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Query() query: CandidatesQueryDto): Promise<CandidatesDto> {
-    return this.compatibility.candidates(id, radioId, query.limit);
+    return this.ranking.candidates(id, radioId, query.limit);
   }
 
   @Get('assignments')
@@ -47,14 +53,14 @@ export class CompatibilityController {
   @ApiOperation({ summary: 'The shortlisted and chosen parts of every radio of the product' })
   @ApiOkResponse({ type: [AssignmentDto] })
   assignments(@Param('id', ParseIdPipe) id: number): Promise<AssignmentDto[]> {
-    return this.compatibility.listAssignments(id);
+    return this.partAssignments.listAssignments(id);
   }
 
   @Get('assignments/history')
   @Roles(...ALL_ROLES)
   @ApiOperation({ summary: 'Who shortlisted, chose or removed which part, newest first' })
   history(@Param('id', ParseIdPipe) id: number) {
-    return this.compatibility.history(id);
+    return this.partAssignments.history(id);
   }
 
   @Post('radios/:radioId/shortlist')
@@ -62,7 +68,7 @@ export class CompatibilityController {
   @ApiOperation({ summary: 'Shortlist a part for a radio (engineer, admin)' })
   @ApiOkResponse({ type: [AssignmentDto] })
   shortlist(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Body() body: ShortlistDto, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
-    return this.compatibility.shortlist(id, radioId, body.partId, body.note, actor);
+    return this.partAssignments.shortlist(id, radioId, body.partId, body.note, actor);
   }
 
   @Delete('radios/:radioId/shortlist/:partId')
@@ -70,7 +76,7 @@ export class CompatibilityController {
   @ApiOperation({ summary: "Take a part off a radio's shortlist (and its choice, if it was chosen) (engineer, admin)" })
   @ApiOkResponse({ type: [AssignmentDto] })
   unshortlist(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Param('partId', ParseIdPipe) partId: number, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
-    return this.compatibility.removeFromShortlist(id, radioId, partId, actor);
+    return this.partAssignments.removeFromShortlist(id, radioId, partId, actor);
   }
 
   @Put('radios/:radioId/choice')
@@ -78,7 +84,7 @@ export class CompatibilityController {
   @ApiOperation({ summary: 'Choose the part for a radio; the previous choice returns to the shortlist (engineer, admin)' })
   @ApiOkResponse({ type: [AssignmentDto] })
   choose(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Body() body: ChoosePartDto, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
-    return this.compatibility.choose(id, radioId, body.partId, actor);
+    return this.partAssignments.choose(id, radioId, body.partId, actor);
   }
 
   @Delete('radios/:radioId/choice')
@@ -86,6 +92,6 @@ export class CompatibilityController {
   @ApiOperation({ summary: 'Clear the choice of a radio; the part stays shortlisted (engineer, admin)' })
   @ApiOkResponse({ type: [AssignmentDto] })
   clearChoice(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
-    return this.compatibility.clearChoice(id, radioId, actor);
+    return this.partAssignments.clearChoice(id, radioId, actor);
   }
 }

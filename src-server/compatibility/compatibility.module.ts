@@ -3,14 +3,18 @@ import { PartsModule } from '../parts/parts.module';
 import { ProductsModule } from '../products/products.module';
 import { RegulatoryModule } from '../regulatory/regulatory.module';
 import { CompatibilityController } from './compatibility.controller';
-import { CompatibilityService } from './compatibility.service';
+import { AssignmentsService } from './assignments.service';
+import { CandidatesService } from './candidates.service';
+import { EvaluationInputsService } from './evaluation-inputs.service';
+import { MatrixService } from './matrix.service';
+import { RulePreviewService } from './rule-preview.service';
 import { RulesController } from './rules.controller';
 import { RulesService } from './rules.service';
 
 @Module({
   imports: [PartsModule, ProductsModule, RegulatoryModule],
   controllers: [RulesController, CompatibilityController],
-  providers: [RulesService, CompatibilityService],
-  exports: [RulesService, CompatibilityService],
+  providers: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService],
+  exports: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService],
 })
 export class CompatibilityModule {}

@@ -1,9 +1,10 @@
 import type { DataSource } from 'typeorm';
-import type { AuditService } from '../audit/audit.service';
 import type { PartDataService, PartEvaluationData } from '../parts/part-data.service';
 import type { ProductsService } from '../products/products.service';
 import type { RegulatoryLimitsService } from '../regulatory/regulatory-limits.service';
-import { CompatibilityService } from './compatibility.service';
+import { CandidatesService } from './candidates.service';
+import { EvaluationInputsService } from './evaluation-inputs.service';
+import { MatrixService } from './matrix.service';
 import { CompiledRuleSet } from './engine/compiled-evaluator';
 import type { RuleDefinition } from './engine/rule-definition';
 import { loadRuleFiles } from './rule-files';
@@ -56,10 +57,10 @@ function harness() {
     },
     getRepository: () => ({ find: async () => [] }),
   } as unknown as DataSource;
-  const service = new CompatibilityService(
+  const rulesService = { compile: () => compiled, currentRuleSet: async () => ({ rules, compiled, signature: 'rules' }) } as unknown as RulesService;
+  const productsService = { getWithRadios: async () => product } as unknown as ProductsService;
+  const inputs = new EvaluationInputsService(
     dataSource,
-    { compile: () => compiled, currentRuleSet: async () => ({ rules, compiled, signature: 'rules' }) } as unknown as RulesService,
-    { getWithRadios: async () => product } as unknown as ProductsService,
     {
       getPartData: () => {
         const load = deferred<PartEvaluationData[]>();
@@ -73,12 +74,15 @@ function harness() {
       },
     } as unknown as PartDataService,
     { list: async () => [] } as unknown as RegulatoryLimitsService,
-    {} as AuditService,
   );
+  // The services share one EvaluationInputsService, as under Nest, so they share its caches.
+  const matrices = new MatrixService(dataSource, rulesService, productsService, inputs);
+  const ranking = new CandidatesService(dataSource, rulesService, productsService, inputs);
+  const service = { matrix: matrices.matrix.bind(matrices), candidates: ranking.candidates.bind(ranking) };
   return { service, state, partLoads, catalogueLoads, rules };
 }
 
-describe('CompatibilityService caches across a catalogue write', () => {
+describe('Compatibility caches across a catalogue write', () => {
   it('a matrix column loaded before the write is not served after it', async () => {
     const { service, state, partLoads, rules } = harness();
     const before = service.matrix(PRODUCT, [PART], rules as RuleDefinition[]);

@@ -1,7 +1,7 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Put } from '@nestjs/common';
 import { ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
-import { CompatibilityService } from './compatibility.service';
+import { RulePreviewService } from './rule-preview.service';
 import { PreviewRuleDto, RuleDefinitionBodyDto, RuleDetailDto, RulePreviewDto, RuleSummaryDto, RuleValidationDto, RuleVersionDto, SetRuleEnabledDto, UpdateRuleDto } from './dto/rule.dto';
 import { ParseRuleIdPipe } from './rule-id.pipe';
 import { RulesService } from './rules.service';
@@ -11,7 +11,7 @@ import { RulesService } from './rules.service';
 export class RulesController {
   constructor(
     private readonly rules: RulesService,
-    private readonly compatibility: CompatibilityService,
+    private readonly rulePreview: RulePreviewService,
   ) {}
 
   @Get()
@@ -37,7 +37,7 @@ export class RulesController {
   @ApiOperation({ summary: 'Which matrix cells of which products would change if this rule were saved (admin)' })
   @ApiOkResponse({ type: RulePreviewDto })
   preview(@Body() body: PreviewRuleDto): Promise<RulePreviewDto> {
-    return this.compatibility.previewRule(body.definition);
+    return this.rulePreview.previewRule(body.definition);
   }
 
   @Post()
