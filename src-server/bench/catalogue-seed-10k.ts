@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { evenlySpacedFrequencies } from '../rf/curves';
-import { packFloat64 } from '../parts/point-codec';
+import { packFloat64 } from '../parts/measurements/point-codec';
 import { efficiencyAt, s11Curve, type EfficiencyLobe, type Resonance } from '../parts/demo/resonator-model';
 import { CONNECTORS, FORM_FACTORS, LIFECYCLES, POLARIZATIONS, type ReviewState } from '../parts/part.types';
 

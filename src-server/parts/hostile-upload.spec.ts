@@ -1,8 +1,8 @@
 import { withTouchstoneStatus } from '../common/touchstone-http-error';
 import { readTouchstone } from '../rf/touchstone';
-import { sniffDocumentType } from './document-type';
-import { checkStorableCurve, parseCurveCsv, parseTouchstoneS11 } from './measurement-parsers';
-import { parsePartCsv } from './part-csv';
+import { sniffDocumentType } from './documents/document-type';
+import { checkStorableCurve, parseCurveCsv, parseTouchstoneS11 } from './measurements/measurement-parsers';
+import { parsePartCsv } from './import-export/part-csv';
 
 /**
  * Every parser of uploaded input gets a hostile input and a budget of time and of memory, measured

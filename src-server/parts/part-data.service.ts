@@ -3,7 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import type { SampledCurve } from '../rf/curves';
 import type { ReflectionCurve } from '../rf/reflection';
-import { type GroundPlane, loadCurrentCurves } from './measurement-curves';
+import { type GroundPlane, loadCurrentCurves } from './measurements/measurement-curves';
 import { specBandClaim } from './part-mapping';
 import type { Connector, FormFactor, Lifecycle, PartPolarization, ReviewState } from './part.types';
 import type { SpecBandClaim } from './spec-coverage';

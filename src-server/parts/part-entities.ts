@@ -1,9 +1,9 @@
-import { PartAlternate } from './alternate.entity';
+import { PartAlternate } from './sourcing/alternate.entity';
 import { CatalogueRevision } from './catalogue-revision.entity';
-import { PartDocument } from './document.entity';
+import { PartDocument } from './documents/document.entity';
 import { Manufacturer } from './manufacturer.entity';
-import { Measurement } from './measurement.entity';
-import { PartOffer } from './offer.entity';
+import { Measurement } from './measurements/measurement.entity';
+import { PartOffer } from './sourcing/offer.entity';
 import { Part } from './part.entity';
 import { SpecBand } from './spec-band.entity';
 

@@ -4,8 +4,8 @@ import { getDataSourceToken } from '@nestjs/typeorm';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { loadConfig } from '../../src-server/config/app-config';
-import { MEASUREMENT_MAX_BYTES } from '../../src-server/parts/measurements.service';
-import { PART_IMPORT_MAX_BYTES } from '../../src-server/parts/part-csv.service';
+import { MEASUREMENT_MAX_BYTES } from '../../src-server/parts/measurements/measurements.service';
+import { PART_IMPORT_MAX_BYTES } from '../../src-server/parts/import-export/part-csv.service';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
 import { createDraft, storedFilesOf, s1pWithGamma } from '../support/parts';
 

@@ -3,7 +3,7 @@ import { join, resolve } from 'node:path';
 import { evenlySpacedFrequencies } from '../../rf/curves';
 import { reflectionCurveFromGamma } from '../../rf/reflection';
 import { writeTouchstone } from '../../rf/touchstone-writer';
-import { figuresForRange } from '../part-figures';
+import { figuresForRange } from '../catalogue/part-figures';
 import { DEMO_PARTS, type DemoPart } from './demo-catalogue';
 import { efficiencyAt, gainsAt, s11Curve } from './resonator-model';
 

@@ -3,7 +3,7 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsIn, IsOptional, Matches } from 'class-validator';
 import { EnumField, IntField, NumberField, StringField } from '../../common/dto-fields';
-import { SORT_KEYS, type SortKey } from '../catalogue-index/catalogue-index';
+import { SORT_KEYS, type SortKey } from '../catalogue/catalogue-index/catalogue-index';
 import {
   CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, POLARIZATIONS, type PartPolarization,
   REVIEW_STATES, type ReviewState,

@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { BoolField, EnumField, NumberField, StringField } from '../../common/dto-fields';
 import { DOCUMENT_KINDS, type DocumentKind, MEASUREMENT_KINDS, type MeasurementKind } from '../part.types';
-import { FREQUENCY_UNITS, VALUE_UNITS, type ValueUnit } from '../measurement-parsers';
+import { FREQUENCY_UNITS, VALUE_UNITS, type ValueUnit } from '../measurements/measurement-parsers';
 import type { FrequencyUnit } from '../../rf/touchstone';
 import { MeasurementDto } from './part-response.dto';
 

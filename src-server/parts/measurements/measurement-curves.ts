@@ -1,7 +1,7 @@
 import type { EntityManager } from 'typeorm';
-import { type ReflectionCurve, reflectionCurveFromGamma } from '../rf/reflection';
-import type { SampledCurve } from '../rf/curves';
-import type { MeasurementKind } from './part.types';
+import { type ReflectionCurve, reflectionCurveFromGamma } from '../../rf/reflection';
+import type { SampledCurve } from '../../rf/curves';
+import type { MeasurementKind } from '../part.types';
 import { unpackFloat64 } from './point-codec';
 
 export interface GroundPlane {

@@ -1,10 +1,10 @@
 import { Body, Controller, Delete, HttpCode, Param, Patch, Post, Put } from '@nestjs/common';
 import { ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
-import { ParseIdPipe } from '../common/parse-id.pipe';
+import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
+import { ParseIdPipe } from '../../common/parse-id.pipe';
 import { SourcingService } from './sourcing.service';
-import { AlternateInputDto, CreateOfferDto, UpdateOfferDto } from './dto/sourcing.dto';
-import { OfferDto } from './dto/part-response.dto';
+import { AlternateInputDto, CreateOfferDto, UpdateOfferDto } from '../dto/sourcing.dto';
+import { OfferDto } from '../dto/part-response.dto';
 
 @ApiTags('part sourcing')
 @Controller('parts/:id')

@@ -1,9 +1,9 @@
 import { getMetadataStorage, validateSync } from 'class-validator';
 import { parse } from 'csv-parse/sync';
-import { DomainError } from '../common/domain-error';
-import { flattenValidationErrors } from '../common/validation';
-import { type CsvBounds, csvParseLimits, firstLineBeyond } from './csv-bounds';
-import { CreatePartDto, SpecBandInputDto } from './dto/part-input.dto';
+import { DomainError } from '../../common/domain-error';
+import { flattenValidationErrors } from '../../common/validation';
+import { type CsvBounds, csvParseLimits, firstLineBeyond } from '../csv-bounds';
+import { CreatePartDto, SpecBandInputDto } from '../dto/part-input.dto';
 
 /** The import/export columns; the export adds id, review state, measured kinds and prices. */
 export const PART_CSV_COLUMNS = [

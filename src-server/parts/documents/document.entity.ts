@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { User } from '../users/user.entity';
-import { Part } from './part.entity';
-import { DOCUMENT_KINDS, type DocumentKind } from './part.types';
+import { User } from '../../users/user.entity';
+import { Part } from '../part.entity';
+import { DOCUMENT_KINDS, type DocumentKind } from '../part.types';
 
 @Entity({ name: 'part_documents' })
 export class PartDocument {

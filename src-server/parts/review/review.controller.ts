@@ -1,10 +1,10 @@
 import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
-import { ParseIdPipe } from '../common/parse-id.pipe';
+import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
+import { ParseIdPipe } from '../../common/parse-id.pipe';
 import { ReviewService } from './review.service';
-import { ReviewActionDto } from './dto/part-input.dto';
-import { PartDetailDto, ReviewQueueItemDto } from './dto/part-response.dto';
+import { ReviewActionDto } from '../dto/part-input.dto';
+import { PartDetailDto, ReviewQueueItemDto } from '../dto/part-response.dto';
 
 @ApiTags('part review')
 @Controller('parts')

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { Part } from './part.entity';
+import { Part } from '../part.entity';
 
 export interface PriceBreak {
   quantity: number;

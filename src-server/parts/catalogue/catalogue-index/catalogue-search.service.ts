@@ -1,17 +1,17 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
-import type { AuthUser } from '../../common/auth.decorators';
-import { ValidationFailedError } from '../../common/domain-error';
-import type { FrequencyRange } from '../../rf/curves';
-import type { RevisionReader } from '../../common/revision-cache';
-import { catalogueRevisionReader } from '../catalogue-revision';
-import { loadCurrentCurves } from '../measurement-curves';
-import { specBandClaim } from '../part-mapping';
-import type { MeasurementKind } from '../part.types';
-import type { SpecBandClaim } from '../spec-coverage';
-import type { PartSearchDto } from '../dto/part-search.dto';
-import type { PartListDto, PartSummaryDto } from '../dto/part-response.dto';
+import type { AuthUser } from '../../../common/auth.decorators';
+import { ValidationFailedError } from '../../../common/domain-error';
+import type { FrequencyRange } from '../../../rf/curves';
+import type { RevisionReader } from '../../../common/revision-cache';
+import { catalogueRevisionReader } from '../../catalogue-revision';
+import { loadCurrentCurves } from '../../measurements/measurement-curves';
+import { specBandClaim } from '../../part-mapping';
+import type { MeasurementKind } from '../../part.types';
+import type { SpecBandClaim } from '../../spec-coverage';
+import type { PartSearchDto } from '../../dto/part-search.dto';
+import type { PartListDto, PartSummaryDto } from '../../dto/part-response.dto';
 import { CatalogueIndex, type CatalogueQuery, type IndexedPart } from './catalogue-index';
 
 /** The highest frequency any band or part field accepts, MHz. */

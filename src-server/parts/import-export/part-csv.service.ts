@@ -1,17 +1,17 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
-import type { AuthUser } from '../common/auth.decorators';
-import { DomainError } from '../common/domain-error';
-import { CatalogueSearchService } from './catalogue-index/catalogue-search.service';
-import { looksBinary } from '../storage/limited-file-upload';
-import { type UploadedFile, requireFile } from './measurements.service';
-import { Part } from './part.entity';
+import type { AuthUser } from '../../common/auth.decorators';
+import { DomainError } from '../../common/domain-error';
+import { CatalogueSearchService } from '../catalogue/catalogue-index/catalogue-search.service';
+import { looksBinary } from '../../storage/limited-file-upload';
+import { type UploadedFile, requireFile } from '../measurements/measurements.service';
+import { Part } from '../part.entity';
 import { type ImportProblem, PART_CSV_COLUMNS, formatSpecBands, parsePartCsv } from './part-csv';
-import { writeCsv } from '../common/csv-writer';
-import { PartsService } from './parts.service';
-import type { PartSearchDto } from './dto/part-search.dto';
-import type { ImportResultDto } from './dto/import.dto';
+import { writeCsv } from '../../common/csv-writer';
+import { PartsService } from '../catalogue/parts.service';
+import type { PartSearchDto } from '../dto/part-search.dto';
+import type { ImportResultDto } from '../dto/import.dto';
 
 const EXPORT_COLUMNS = ['id', ...PART_CSV_COLUMNS, 'reviewState', 'measuredKinds', 'lowestPrices'] as const;
 

@@ -1,15 +1,15 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource, EntityManager } from 'typeorm';
-import type { AuthUser } from '../common/auth.decorators';
-import { DomainError, NotFoundError, ValidationFailedError, VersionConflictError } from '../common/domain-error';
-import { AuditService, diffFields } from '../audit/audit.service';
+import type { AuthUser } from '../../common/auth.decorators';
+import { DomainError, NotFoundError, ValidationFailedError, VersionConflictError } from '../../common/domain-error';
+import { AuditService, diffFields } from '../../audit/audit.service';
 import { PartAlternate } from './alternate.entity';
-import { touchPart } from './catalogue-revision';
+import { touchPart } from '../catalogue-revision';
 import { type PriceBreak, PartOffer } from './offer.entity';
-import { offerDto, PartsService } from './parts.service';
-import type { AlternateInputDto, CreateOfferDto, PriceBreakInputDto, UpdateOfferDto } from './dto/sourcing.dto';
-import type { OfferDto } from './dto/part-response.dto';
+import { offerDto, PartsService } from '../catalogue/parts.service';
+import type { AlternateInputDto, CreateOfferDto, PriceBreakInputDto, UpdateOfferDto } from '../dto/sourcing.dto';
+import type { OfferDto } from '../dto/part-response.dto';
 
 /** Sorted by quantity, duplicates refused, the lowest price kept as a decimal string for the price filter. */
 export function normalisePriceBreaks(breaks: PriceBreakInputDto[]): { priceBreaks: PriceBreak[]; minUnitPrice: string } {

@@ -1,11 +1,11 @@
 import { parse } from 'csv-parse/sync';
-import { DomainError } from '../common/domain-error';
-import { withTouchstoneStatus } from '../common/touchstone-http-error';
-import { reflectionCurveFromNetwork } from '../rf/reflection';
-import { FREQUENCY_UNIT_HZ, type FrequencyUnit, portsFromFileName, readTouchstone } from '../rf/touchstone';
-import { efficiencyDbToPercent } from '../rf/units';
-import { type CsvBounds, csvParseLimits, firstLineBeyond } from './csv-bounds';
-import type { MeasurementKind } from './part.types';
+import { DomainError } from '../../common/domain-error';
+import { withTouchstoneStatus } from '../../common/touchstone-http-error';
+import { reflectionCurveFromNetwork } from '../../rf/reflection';
+import { FREQUENCY_UNIT_HZ, type FrequencyUnit, portsFromFileName, readTouchstone } from '../../rf/touchstone';
+import { efficiencyDbToPercent } from '../../rf/units';
+import { type CsvBounds, csvParseLimits, firstLineBeyond } from '../csv-bounds';
+import type { MeasurementKind } from '../part.types';
 
 /** A curve ready to store: s11 as Re/Im of Γ, efficiency in %, gains in dBi. */
 export interface ParsedCurve {

@@ -1,7 +1,7 @@
-import { type FrequencyRange, type SampledCurve, coverageOfBand, efficiencyInBand, gainInBand } from '../rf/curves';
-import { type ReflectionCurve, bandMatch, matchedRanges } from '../rf/reflection';
-import { returnLossDbFromVswr } from '../rf/mismatch';
-import { type SpecBandClaim, claimedMaxVswr, mergeRanges, overlappingBands, specBandsCover } from './spec-coverage';
+import { type FrequencyRange, type SampledCurve, coverageOfBand, efficiencyInBand, gainInBand } from '../../rf/curves';
+import { type ReflectionCurve, bandMatch, matchedRanges } from '../../rf/reflection';
+import { returnLossDbFromVswr } from '../../rf/mismatch';
+import { type SpecBandClaim, claimedMaxVswr, mergeRanges, overlappingBands, specBandsCover } from '../spec-coverage';
 
 export interface PartCurves {
   readonly s11: ReflectionCurve | null;

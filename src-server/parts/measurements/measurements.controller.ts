@@ -1,13 +1,13 @@
 import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
-import { ALL_ROLES } from '../common/roles';
-import { ParseIdPipe } from '../common/parse-id.pipe';
-import { LimitedFileUpload } from '../storage/limited-file-upload';
-import { downloadOf } from './file-response';
+import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
+import { ALL_ROLES } from '../../common/roles';
+import { ParseIdPipe } from '../../common/parse-id.pipe';
+import { LimitedFileUpload } from '../../storage/limited-file-upload';
+import { downloadOf } from '../file-response';
 import { MEASUREMENT_MAX_BYTES, MeasurementsService, type UploadedFile } from './measurements.service';
-import { UploadMeasurementDto, UploadMeasurementResultDto } from './dto/upload.dto';
-import { MeasurementPointsDto } from './dto/part-response.dto';
+import { UploadMeasurementDto, UploadMeasurementResultDto } from '../dto/upload.dto';
+import { MeasurementPointsDto } from '../dto/part-response.dto';
 
 @ApiTags('part measurements')
 @Controller('parts/:id/measurements')

@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { User } from '../users/user.entity';
-import { Part } from './part.entity';
-import { MEASUREMENT_KINDS, type MeasurementKind } from './part.types';
+import { User } from '../../users/user.entity';
+import { Part } from '../part.entity';
+import { MEASUREMENT_KINDS, type MeasurementKind } from '../part.types';
 
 /**
  * One measured curve. Points are packed float64 arrays (see point-codec.ts): for s11 values_a/values_b

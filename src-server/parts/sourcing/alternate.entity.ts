@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { Part } from './part.entity';
-import { ALTERNATE_KINDS, type AlternateKind } from './part.types';
+import { Part } from '../part.entity';
+import { ALTERNATE_KINDS, type AlternateKind } from '../part.types';
 
 /** A directed "can replace" link; the service writes both directions so either part shows the other. */
 @Entity({ name: 'part_alternates' })

@@ -1,9 +1,9 @@
 import type { DataSource } from 'typeorm';
-import type { AuditService } from '../audit/audit.service';
-import type { StorageService } from '../storage/storage.service';
-import type { UploadLedger } from '../storage/upload-ledger.service';
+import type { AuditService } from '../../audit/audit.service';
+import type { StorageService } from '../../storage/storage.service';
+import type { UploadLedger } from '../../storage/upload-ledger.service';
 import { MeasurementsService } from './measurements.service';
-import type { PartsService } from './parts.service';
+import type { PartsService } from '../catalogue/parts.service';
 
 /** A ledger that records what was put and abandoned. */
 function fakeStorage() {

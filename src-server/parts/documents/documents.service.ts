@@ -2,21 +2,21 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { randomUUID } from 'node:crypto';
-import type { AuthUser } from '../common/auth.decorators';
-import { DomainError, NotFoundError } from '../common/domain-error';
-import { AuditService } from '../audit/audit.service';
-import { StorageService, objectKey } from '../storage/storage.service';
-import { UploadLedger } from '../storage/upload-ledger.service';
-import { touchPart } from './catalogue-revision';
-import { storedFileName } from './file-response';
+import type { AuthUser } from '../../common/auth.decorators';
+import { DomainError, NotFoundError } from '../../common/domain-error';
+import { AuditService } from '../../audit/audit.service';
+import { StorageService, objectKey } from '../../storage/storage.service';
+import { UploadLedger } from '../../storage/upload-ledger.service';
+import { touchPart } from '../catalogue-revision';
+import { storedFileName } from '../file-response';
 import { PartDocument } from './document.entity';
 import { DOCUMENT_MAX_BYTES, sniffDocumentType } from './document-type';
-import { type UploadedFile, requireFile, safeFileName, sha256Hex } from './measurements.service';
-import { Part } from './part.entity';
-import { assertCanEdit } from './part-access';
-import { documentDto, PartsService } from './parts.service';
-import type { UploadDocumentDto } from './dto/upload.dto';
-import type { DocumentDto } from './dto/part-response.dto';
+import { type UploadedFile, requireFile, safeFileName, sha256Hex } from '../measurements/measurements.service';
+import { Part } from '../part.entity';
+import { assertCanEdit } from '../part-access';
+import { documentDto, PartsService } from '../catalogue/parts.service';
+import type { UploadDocumentDto } from '../dto/upload.dto';
+import type { DocumentDto } from '../dto/part-response.dto';
 
 @Injectable()
 export class DocumentsService {

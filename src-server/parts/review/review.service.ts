@@ -1,21 +1,21 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
-import { APP_CONFIG, type AppConfig } from '../config/app-config';
-import type { AuthUser } from '../common/auth.decorators';
-import { AuditService } from '../audit/audit.service';
-import { MailService, type OutgoingMail } from '../mail/mail.service';
-import { User } from '../users/user.entity';
-import { touchPart } from './catalogue-revision';
-import { Manufacturer } from './manufacturer.entity';
-import { Part } from './part.entity';
-import { assertCanEdit } from './part-access';
-import { iso, userRef } from './part-mapping';
-import type { ReviewState } from './part.types';
-import { partErrors } from './parts.exception';
-import { PartsService } from './parts.service';
-import type { ReviewActionDto } from './dto/part-input.dto';
-import type { PartDetailDto, ReviewQueueItemDto } from './dto/part-response.dto';
+import { APP_CONFIG, type AppConfig } from '../../config/app-config';
+import type { AuthUser } from '../../common/auth.decorators';
+import { AuditService } from '../../audit/audit.service';
+import { MailService, type OutgoingMail } from '../../mail/mail.service';
+import { User } from '../../users/user.entity';
+import { touchPart } from '../catalogue-revision';
+import { Manufacturer } from '../manufacturer.entity';
+import { Part } from '../part.entity';
+import { assertCanEdit } from '../part-access';
+import { iso, userRef } from '../part-mapping';
+import type { ReviewState } from '../part.types';
+import { partErrors } from '../parts.exception';
+import { PartsService } from '../catalogue/parts.service';
+import type { ReviewActionDto } from '../dto/part-input.dto';
+import type { PartDetailDto, ReviewQueueItemDto } from '../dto/part-response.dto';
 
 export type ReviewAction = 'submit' | 'approve' | 'reject' | 'restrict' | 'reinstate' | 'retire';
 

@@ -1,7 +1,7 @@
-import { type FrequencyRange, type SampledCurve, interpolateAt, segmentIndex } from '../../rf/curves';
-import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, vswrFromReturnLossDb } from '../../rf/mismatch';
-import type { Connector, FormFactor, Lifecycle, MeasurementKind, PartPolarization, ReviewState } from '../part.types';
-import { type SpecBandClaim, claimedMaxVswr, specBandsCover } from '../spec-coverage';
+import { type FrequencyRange, type SampledCurve, interpolateAt, segmentIndex } from '../../../rf/curves';
+import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, vswrFromReturnLossDb } from '../../../rf/mismatch';
+import type { Connector, FormFactor, Lifecycle, MeasurementKind, PartPolarization, ReviewState } from '../../part.types';
+import { type SpecBandClaim, claimedMaxVswr, specBandsCover } from '../../spec-coverage';
 
 /**
  * The in-memory search index of the catalogue: every part's filterable fields, its newest |Γ| and

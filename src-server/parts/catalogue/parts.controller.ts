@@ -1,19 +1,19 @@
 import { Body, Controller, Get, HttpCode, Param, Patch, Post, Query, Res, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
 import type { Response } from 'express';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
-import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
-import { ALL_ROLES } from '../common/roles';
-import { ParseIdPipe } from '../common/parse-id.pipe';
+import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
+import { ALL_ROLES } from '../../common/roles';
+import { ParseIdPipe } from '../../common/parse-id.pipe';
 import { CatalogueSearchService, parseCovers } from './catalogue-index/catalogue-search.service';
-import { LimitedFileUpload } from '../storage/limited-file-upload';
-import type { UploadedFile } from './measurements.service';
-import { PART_IMPORT_MAX_BYTES, PartCsvService } from './part-csv.service';
+import { LimitedFileUpload } from '../../storage/limited-file-upload';
+import type { UploadedFile } from '../measurements/measurements.service';
+import { PART_IMPORT_MAX_BYTES, PartCsvService } from '../import-export/part-csv.service';
 import { PartsService } from './parts.service';
-import { CreatePartDto, UpdatePartDto } from './dto/part-input.dto';
-import { PartDetailDto, PartListDto } from './dto/part-response.dto';
-import { PartSearchDto } from './dto/part-search.dto';
-import { HistoryQueryDto, PartDetailQueryDto } from './dto/part-detail-query.dto';
-import { ImportQueryDto, ImportResultDto } from './dto/import.dto';
+import { CreatePartDto, UpdatePartDto } from '../dto/part-input.dto';
+import { PartDetailDto, PartListDto } from '../dto/part-response.dto';
+import { PartSearchDto } from '../dto/part-search.dto';
+import { HistoryQueryDto, PartDetailQueryDto } from '../dto/part-detail-query.dto';
+import { ImportQueryDto, ImportResultDto } from '../dto/import.dto';
 
 @ApiTags('parts')
 @Controller('parts')

@@ -1,15 +1,15 @@
 import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
-import { ALL_ROLES } from '../common/roles';
-import { ParseIdPipe } from '../common/parse-id.pipe';
+import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
+import { ALL_ROLES } from '../../common/roles';
+import { ParseIdPipe } from '../../common/parse-id.pipe';
 import { DocumentsService } from './documents.service';
-import { LimitedFileUpload } from '../storage/limited-file-upload';
+import { LimitedFileUpload } from '../../storage/limited-file-upload';
 import { DOCUMENT_MAX_BYTES } from './document-type';
-import { downloadOf } from './file-response';
-import type { UploadedFile } from './measurements.service';
-import { UploadDocumentDto } from './dto/upload.dto';
-import { DocumentDto } from './dto/part-response.dto';
+import { downloadOf } from '../file-response';
+import type { UploadedFile } from '../measurements/measurements.service';
+import { UploadDocumentDto } from '../dto/upload.dto';
+import { DocumentDto } from '../dto/part-response.dto';
 
 @ApiTags('part documents')
 @Controller('parts/:id/documents')

@@ -1,5 +1,5 @@
 import fc from 'fast-check';
-import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../rf/mismatch';
+import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../../rf/mismatch';
 import { CatalogueIndex, type CoverageQuery, type IndexedPart, binsInside, coverageScreen, extremeInRange, meetsCoverage, screenLevels, screenRejects } from './catalogue-index';
 
 const MHZ = 1e6;
