@@ -8,14 +8,14 @@ import { ADDRESS_LIMIT } from '../../src-server/common/auth-throttler.guard';
 import { MailService, REMOVED_BODY } from '../../src-server/mail/mail.service';
 import { User } from '../../src-server/users/user.entity';
 import type { Role } from '../../src-server/common/roles';
-import { createApiApp, DEMO, demoTokens, unique } from '../support/api-app';
+import { createApiApp, DEMO, demoTokens, testClientAddress, unique } from '../support/api-app';
 import { linkIn, waitForMail } from '../support/mailbox';
 import { createDraft } from '../support/parts';
 
 const PASSWORD = 'hardening-password-1';
 
-/** A client address of its own per test (a /64 of the documentation range), so rate limits of other tests and runs never mix in. */
-const newAddress = () => `2001:db8:${Math.floor(Math.random() * 0xffff).toString(16)}:${Math.floor(Math.random() * 0xffff).toString(16)}::1`;
+/** A client address of its own per test, so rate limits of other tests and runs never mix in. */
+const newAddress = testClientAddress;
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 

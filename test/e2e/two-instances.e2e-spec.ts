@@ -1,7 +1,7 @@
 import { ChildProcess, spawn } from 'node:child_process';
 import { createServer } from 'node:net';
 import { resolve } from 'node:path';
-import { DEMO, DEMO_PASSWORD, unique } from '../support/api-app';
+import { DEMO, DEMO_PASSWORD, testClientAddress, unique } from '../support/api-app';
 
 const freePort = () =>
   new Promise<number>((done) => {
@@ -30,7 +30,7 @@ async function startInstance(): Promise<{ url: string; process: ChildProcess }> 
 }
 
 const json = (url: string, init: RequestInit & { token?: string; body?: string } = {}) =>
-  fetch(url, { ...init, headers: { 'Content-Type': 'application/json', ...(init.token ? { Authorization: `Bearer ${init.token}` } : {}) } });
+  fetch(url, { ...init, headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress(), ...(init.token ? { Authorization: `Bearer ${init.token}` } : {}) } });
 
 describe('two API instances against one database', () => {
   let a: Awaited<ReturnType<typeof startInstance>>;

@@ -5,7 +5,7 @@ import { resolve } from 'node:path';
 import { DataSource } from 'typeorm';
 import { loadConfig } from '../../src-server/config/app-config';
 import { dataSourceOptions } from '../../src-server/database/data-source-options';
-import { DEMO, DEMO_PASSWORD } from '../support/api-app';
+import { DEMO, DEMO_PASSWORD, testClientAddress } from '../support/api-app';
 import { draftBody, s1pWithGamma } from '../support/parts';
 
 const freePort = () =>
@@ -69,7 +69,7 @@ describe('an upload killed between storing the object and committing its row', (
     // Test-only pause (UPLOAD_TEST_PAUSE_MS) holds each upload after its object is stored, before its row commits.
     const doomed = await startInstance({ UPLOAD_TEST_PAUSE_MS: '60000' });
     instances.push(doomed.process);
-    const login = await fetch(`${doomed.url}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: DEMO.engineer, password: DEMO_PASSWORD }) });
+    const login = await fetch(`${doomed.url}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress() }, body: JSON.stringify({ email: DEMO.engineer, password: DEMO_PASSWORD }) });
     const { accessToken } = await login.json();
     const auth = { Authorization: `Bearer ${accessToken}` };
     const created = await fetch(`${doomed.url}/api/parts`, { method: 'POST', headers: { ...auth, 'Content-Type': 'application/json' }, body: JSON.stringify(draftBody()) });

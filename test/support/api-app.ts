@@ -22,8 +22,14 @@ export async function createApiApp(config = loadConfig()): Promise<INestApplicat
   return app;
 }
 
+/**
+ * A client address of its own (documentation range, RFC 3849), sent as X-Forwarded-For from loopback: the sign-in
+ * limits count per address in the database, so the suite's many sign-ins must not spend one shared allowance.
+ */
+export const testClientAddress = () => `2001:db8:${Math.floor(Math.random() * 0xffff).toString(16)}:${Math.floor(Math.random() * 0xffff).toString(16)}::1`;
+
 export async function tokenFor(app: INestApplication, email: string, password = DEMO_PASSWORD): Promise<string> {
-  const res = await request(app.getHttpServer()).post('/api/auth/login').send({ email, password });
+  const res = await request(app.getHttpServer()).post('/api/auth/login').set('X-Forwarded-For', testClientAddress()).send({ email, password });
   if (res.status !== 200) throw new Error(`login as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.accessToken;
 }
