@@ -1,4 +1,5 @@
 import { APP_URL, type BrowserSession, openBrowser, signIn } from '../support/browser';
+import { testClientAddress } from '../support/client-address';
 
 // Demo data (catalog-seed/assignments.json): the tracker's BLE radio has a low-efficiency 2.4 GHz chip chosen.
 const TRACKER = 1;
@@ -8,7 +9,7 @@ const GOOD_BLE_CHIP = 1025;
 
 /** Puts the demo back as seeded, so the test tells the same story on every run against the same database. */
 async function resetDemoChoice(): Promise<void> {
-  const login = await fetch(`${APP_URL}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: 'engineer@bandwright.test', password: process.env.DEMO_PASSWORD ?? 'bandwright-demo' }) });
+  const login = await fetch(`${APP_URL}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress() }, body: JSON.stringify({ email: 'engineer@bandwright.test', password: process.env.DEMO_PASSWORD ?? 'bandwright-demo' }) });
   const { accessToken } = (await login.json()) as { accessToken: string };
   const headers = { 'Content-Type': 'application/json', Authorization: `Bearer ${accessToken}` };
   const choice = await fetch(`${APP_URL}/api/products/${TRACKER}/radios/${TRACKER_BLE}/choice`, { method: 'PUT', headers, body: JSON.stringify({ partId: LOW_EFFICIENCY_CHIP }) });

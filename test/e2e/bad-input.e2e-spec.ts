@@ -95,6 +95,14 @@ describe('bad input answers 4xx with a code and the field, never 5xx (API)', () 
       await expectNullRefused(`/api/parts/${part.id}`, 'engineer', ['manufacturer', 'mpn', 'title', 'formFactor', 'connector', 'polarization', 'lifecycle', 'nominalImpedanceOhms', 'specBands'], { version: part.version });
       await http().patch(`/api/parts/${part.id}`).set(as('engineer')).send({ version: part.version, notes: null, lengthMm: null }).expect(200);
     });
+
+    it('nested optional objects of the calculators (found by the fuzz test: null reached the service)', async () => {
+      const conversion = await http().post('/api/rf/conversions').set(as('procurement')).send({ impedanceOhms: null }).expect(400);
+      expect(conversion.body.fields).toEqual(expect.arrayContaining([expect.objectContaining({ field: 'impedanceOhms' })]));
+      const matching = { frequencyHz: 500e6, loadOhms: { re: 200, im: -100 }, z0Ohms: 100, series: 'E24', sweep: null };
+      const match = await http().post('/api/rf/matching').set(as('procurement')).send(matching).expect(400);
+      expect(match.body.fields).toEqual(expect.arrayContaining([expect.objectContaining({ field: 'sweep' })]));
+    });
   });
 
   describe('numbers too large', () => {

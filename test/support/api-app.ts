@@ -4,6 +4,9 @@ import request from 'supertest';
 import { AppModule } from '../../src-server/app.module';
 import { configureApp } from '../../src-server/app.setup';
 import { loadConfig } from '../../src-server/config/app-config';
+import { testClientAddress } from './client-address';
+
+export { testClientAddress };
 
 export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? 'bandwright-demo';
 export const DEMO = {
@@ -21,12 +24,6 @@ export async function createApiApp(config = loadConfig()): Promise<INestApplicat
   await app.init();
   return app;
 }
-
-/**
- * A client address of its own (documentation range, RFC 3849), sent as X-Forwarded-For from loopback: the sign-in
- * limits count per address in the database, so the suite's many sign-ins must not spend one shared allowance.
- */
-export const testClientAddress = () => `2001:db8:${Math.floor(Math.random() * 0xffff).toString(16)}:${Math.floor(Math.random() * 0xffff).toString(16)}::1`;
 
 export async function tokenFor(app: INestApplication, email: string, password = DEMO_PASSWORD): Promise<string> {
   const res = await request(app.getHttpServer()).post('/api/auth/login').set('X-Forwarded-For', testClientAddress()).send({ email, password });

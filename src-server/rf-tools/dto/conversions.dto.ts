@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsOptional, IsPositive, ValidateNested } from 'class-validator';
-import { NumberField } from '../../common/dto-fields';
+import { IsPositive, ValidateNested } from 'class-validator';
+import { NumberField, OptionalField } from '../../common/dto-fields';
 import { MAX_FREQUENCY_HZ } from './matching.dto';
 
 export class ImpedanceDto {
@@ -18,7 +18,8 @@ export class ConversionRequestDto {
   @NumberField({ optional: true, min: 0, max: 0.999999, description: '|Γ|, 0 ≤ |Γ| < 1', example: 0.333 }) gammaMagnitude?: number;
 
   @ApiPropertyOptional({ type: ImpedanceDto })
-  @IsOptional()
+  // Optional, but null is refused like every other field (null would reach the service as a value).
+  @OptionalField()
   @ValidateNested()
   @Type(() => ImpedanceDto)
   impedanceOhms?: ImpedanceDto;

@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsDefined, IsOptional, IsPositive, ValidateNested } from 'class-validator';
-import { EnumField, IntField, NumberField } from '../../common/dto-fields';
+import { IsDefined, IsPositive, ValidateNested } from 'class-validator';
+import { EnumField, IntField, NumberField, OptionalField } from '../../common/dto-fields';
 import { IsGreaterThan } from './dto-checks';
 
 export const MAX_FREQUENCY_HZ = 300e9;
@@ -48,7 +48,8 @@ export class MatchingRequestDto {
   series: (typeof PREFERRED_SERIES)[number];
 
   @ApiPropertyOptional({ type: SweepDto, description: 'Frequency range for the return-loss sweep; the load is taken as constant over it' })
-  @IsOptional()
+  // Optional, but null is refused like every other field (null would reach the service as a value).
+  @OptionalField()
   @ValidateNested()
   @Type(() => SweepDto)
   sweep?: SweepDto;
