@@ -2,6 +2,10 @@ import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import { createApiApp, DEMO, DEMO_PASSWORD, demoTokens, tokenFor, unique } from '../support/api-app';
 import { linkIn, waitForMail } from '../support/mailbox';
+import { testClientAddress } from '../support/client-address';
+
+// Sign-ins of this file come from an address of their own: the per-address allowance is shared through the database.
+const clientAddress = testClientAddress();
 
 describe('auth and users (API)', () => {
   let app: INestApplication;
@@ -16,32 +20,32 @@ describe('auth and users (API)', () => {
 
   describe('POST /api/auth/login', () => {
     it.each(Object.entries(DEMO))('signs in the demo %s and returns the user with the role', async (role, email) => {
-      const res = await http().post('/api/auth/login').send({ email, password: DEMO_PASSWORD }).expect(200);
+      const res = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: DEMO_PASSWORD }).expect(200);
       expect(res.body.accessToken).toEqual(expect.any(String));
       expect(res.body.user).toEqual({ id: expect.any(Number), email, name: expect.any(String), role });
     });
 
     it('answers 401 with one message for a wrong password and for an unknown e-mail', async () => {
-      const wrong = await http().post('/api/auth/login').send({ email: DEMO.admin, password: 'not-the-password' }).expect(401);
-      const unknown = await http().post('/api/auth/login').send({ email: 'nobody@bandwright.test', password: 'not-the-password' }).expect(401);
+      const wrong = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin, password: 'not-the-password' }).expect(401);
+      const unknown = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: 'nobody@bandwright.test', password: 'not-the-password' }).expect(401);
       expect(wrong.body.code).toBe('AUTH_BAD_CREDENTIALS');
       expect(unknown.body).toEqual(wrong.body);
     });
 
     it('answers 400 naming the field for bad bodies', async () => {
-      const missing = await http().post('/api/auth/login').send({ email: DEMO.admin }).expect(400);
+      const missing = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin }).expect(400);
       expect(missing.body.code).toBe('VALIDATION_FAILED');
       expect(missing.body.fields.map((f: { field: string }) => f.field)).toContain('password');
-      const extra = await http().post('/api/auth/login').send({ email: DEMO.admin, password: 'x', isAdmin: true }).expect(400);
+      const extra = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin, password: 'x', isAdmin: true }).expect(400);
       expect(extra.body.fields[0].field).toBe('isAdmin');
-      const long = await http().post('/api/auth/login').send({ email: DEMO.admin, password: 'x'.repeat(201) }).expect(400);
+      const long = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin, password: 'x'.repeat(201) }).expect(400);
       expect(long.body.fields[0].field).toBe('password');
-      const wrongType = await http().post('/api/auth/login').send({ email: 42, password: 'x' }).expect(400);
+      const wrongType = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: 42, password: 'x' }).expect(400);
       expect(wrongType.body.fields[0].field).toBe('email');
     });
 
     it('answers 400 MALFORMED_JSON for a body that is not JSON', async () => {
-      const res = await http().post('/api/auth/login').set('Content-Type', 'application/json').send('{"email": ').expect(400);
+      const res = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).set('Content-Type', 'application/json').send('{"email": ').expect(400);
       expect(res.body.code).toBe('MALFORMED_JSON');
       expect(JSON.stringify(res.body)).not.toMatch(/at .*\.js|node_modules/);
     });
@@ -97,16 +101,16 @@ describe('auth and users (API)', () => {
       expect(invited.body).toMatchObject({ email, status: 'invited', role: 'engineer' });
 
       // Not yet able to sign in: no password is set.
-      await http().post('/api/auth/login').send({ email, password: 'whatever-password' }).expect(401);
+      await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: 'whatever-password' }).expect(401);
 
       const mail = await waitForMail(email, /invited/i);
       const link = new URL(linkIn(mail, '/accept-invitation'));
       const token = link.searchParams.get('token')!;
-      const accepted = await http().post('/api/auth/accept-invitation').send({ token, password: 'a-fresh-password-1' }).expect(200);
+      const accepted = await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token, password: 'a-fresh-password-1' }).expect(200);
       expect(accepted.body.user).toMatchObject({ email, role: 'engineer' });
 
       await tokenFor(app, email, 'a-fresh-password-1');
-      const again = await http().post('/api/auth/accept-invitation').send({ token, password: 'another-password-2' }).expect(400);
+      const again = await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token, password: 'another-password-2' }).expect(400);
       expect(again.body.code).toBe('LINK_TOKEN_USED');
     }, 30000);
 
@@ -123,23 +127,23 @@ describe('auth and users (API)', () => {
       await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Rae Reset', role: 'procurement' }).expect(201);
       const invite = await waitForMail(email, /invited/i);
       const inviteToken = new URL(linkIn(invite, '/accept-invitation')).searchParams.get('token')!;
-      await http().post('/api/auth/accept-invitation').send({ token: inviteToken, password: 'first-password-1' }).expect(200);
+      await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token: inviteToken, password: 'first-password-1' }).expect(200);
       const oldToken = await tokenFor(app, email, 'first-password-1');
 
-      await http().post('/api/auth/password-reset-requests').send({ email }).expect(202);
-      await http().post('/api/auth/password-reset-requests').send({ email: 'nobody-at-all@bandwright.test' }).expect(202);
+      await http().post('/api/auth/password-reset-requests').set('X-Forwarded-For', clientAddress).send({ email }).expect(202);
+      await http().post('/api/auth/password-reset-requests').set('X-Forwarded-For', clientAddress).send({ email: 'nobody-at-all@bandwright.test' }).expect(202);
       const mail = await waitForMail(email, /reset/i);
       const token = new URL(linkIn(mail, '/reset-password')).searchParams.get('token')!;
-      await http().post('/api/auth/password-reset').send({ token, password: 'second-password-2' }).expect(200);
+      await http().post('/api/auth/password-reset').set('X-Forwarded-For', clientAddress).send({ token, password: 'second-password-2' }).expect(200);
 
-      await http().post('/api/auth/login').send({ email, password: 'first-password-1' }).expect(401);
+      await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: 'first-password-1' }).expect(401);
       await tokenFor(app, email, 'second-password-2');
       const revoked = await http().get('/api/auth/me').set('Authorization', `Bearer ${oldToken}`).expect(401);
       expect(revoked.body.code).toBe('AUTH_TOKEN_REVOKED');
     }, 30000);
 
     it('rejects a made-up token', async () => {
-      const res = await http().post('/api/auth/password-reset').send({ token: 'x'.repeat(43), password: 'some-password-3' }).expect(400);
+      const res = await http().post('/api/auth/password-reset').set('X-Forwarded-For', clientAddress).send({ token: 'x'.repeat(43), password: 'some-password-3' }).expect(400);
       expect(res.body.code).toBe('LINK_TOKEN_INVALID');
     });
   });
@@ -150,12 +154,12 @@ describe('auth and users (API)', () => {
       const invited = await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Lee Leaver', role: 'engineer' }).expect(201);
       const mail = await waitForMail(email, /invited/i);
       const inviteToken = new URL(linkIn(mail, '/accept-invitation')).searchParams.get('token')!;
-      const { body } = await http().post('/api/auth/accept-invitation').send({ token: inviteToken, password: 'leaver-password-1' }).expect(200);
+      const { body } = await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token: inviteToken, password: 'leaver-password-1' }).expect(200);
       await http().get('/api/auth/me').set('Authorization', `Bearer ${body.accessToken}`).expect(200);
 
       await http().post(`/api/users/${invited.body.id}/deactivation`).set('Authorization', `Bearer ${tokens.admin}`).expect(200);
       await http().get('/api/auth/me').set('Authorization', `Bearer ${body.accessToken}`).expect(401);
-      await http().post('/api/auth/login').send({ email, password: 'leaver-password-1' }).expect(401);
+      await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: 'leaver-password-1' }).expect(401);
 
       const audit = await http().get('/api/audit').query({ entityType: 'user', entityId: invited.body.id }).set('Authorization', `Bearer ${tokens.admin}`).expect(200);
       expect(audit.body.items.map((e: { action: string }) => e.action)).toEqual(expect.arrayContaining(['invited', 'invitation-accepted', 'deactivated']));
@@ -180,9 +184,9 @@ describe('auth and users (API)', () => {
       await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Tia Target', role: 'engineer' }).expect(201);
       const mail = await waitForMail(email, /invited/i);
       const token = new URL(linkIn(mail, '/accept-invitation')).searchParams.get('token')!;
-      await http().post('/api/auth/accept-invitation').send({ token, password: 'target-password-1' }).expect(200);
-      for (let i = 0; i < 5; i += 1) await http().post('/api/auth/login').send({ email, password: `wrong-${i}` }).expect(401);
-      const locked = await http().post('/api/auth/login').send({ email, password: 'target-password-1' }).expect(429);
+      await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token, password: 'target-password-1' }).expect(200);
+      for (let i = 0; i < 5; i += 1) await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: `wrong-${i}` }).expect(401);
+      const locked = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: 'target-password-1' }).expect(429);
       expect(locked.body.code).toBe('AUTH_TEMPORARILY_LOCKED');
     }, 30000);
 

@@ -3,6 +3,10 @@ import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { createApiApp, demoTokens, type DemoRole, unique } from '../support/api-app';
 import { createDraft } from '../support/parts';
+import { testClientAddress } from '../support/client-address';
+
+// Sign-ins of this file come from an address of their own: the per-address allowance is shared through the database.
+const clientAddress = testClientAddress();
 
 // Demo parts (catalog-seed) that any radio may shortlist.
 const DEMO_PARTS = [1025, 1029, 1019];
@@ -37,7 +41,7 @@ describe('bad input answers 4xx with a code and the field, never 5xx (API)', () 
     it('refuses nesting deeper than 64 levels with 400 JSON_TOO_DEEP, even from an anonymous caller and at 40,000 levels', async () => {
       for (const depth of [65, 40_000]) {
         const body = `${'['.repeat(depth)}${']'.repeat(depth)}`;
-        const res = await http().post('/api/auth/login').set('Content-Type', 'application/json').send(body);
+        const res = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).set('Content-Type', 'application/json').send(body);
         expect([res.status, res.body.code]).toEqual([400, 'JSON_TOO_DEEP']);
       }
       const nested = `{"email":"a@b.test","password":"x","extra":${'{"a":'.repeat(200)}1${'}'.repeat(200)}}`;
