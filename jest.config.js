@@ -1,13 +1,16 @@
 // Nest 12 ships ESM only; swc rewrites it (and our TS) to CommonJS for jest.
-const swc = ['@swc/jest', {
-  jsc: {
-    parser: { syntax: 'typescript', decorators: true },
-    transform: { legacyDecorator: true, decoratorMetadata: true },
-    keepClassNames: true,
-    target: 'es2022',
+const swc = [
+  '@swc/jest',
+  {
+    jsc: {
+      parser: { syntax: 'typescript', decorators: true },
+      transform: { legacyDecorator: true, decoratorMetadata: true },
+      keepClassNames: true,
+      target: 'es2022',
+    },
+    module: { type: 'commonjs' },
   },
-  module: { type: 'commonjs' },
-}];
+];
 
 const shared = {
   rootDir: __dirname,

@@ -16,7 +16,10 @@ for (const name of expected) {
   const report = JSON.parse(fs.readFileSync(file, 'utf8'));
   passed += report.numPassedTests;
   failed += report.numFailedTests + (report.numRuntimeErrorTestSuites || 0);
-  if (report.numTotalTests === 0) { console.log(`${name}: no tests ran`); failed += 1; }
+  if (report.numTotalTests === 0) {
+    console.log(`${name}: no tests ran`);
+    failed += 1;
+  }
 }
 console.log(`${passed} passed, ${failed} failed`);
 process.exit(failed > 0 ? 1 : 0);

@@ -16,6 +16,9 @@ db_start
 for db in bandwright_test bandwright_browser; do db_drop "$db"; db_create "$db"; done
 rm -rf "$FAKES_DIR"
 
+log "linting (ESLint) and checking the format (Prettier); npm run format fixes most findings"
+npx eslint .
+npx prettier --check . >/dev/null || { npx prettier --list-different .; log "these files are not in Prettier's format: run npm run format"; exit 1; }
 log "type-checking server, tests and client"
 npx tsc -p tsconfig.test.json
 npx tsc -p tsconfig.client.json

@@ -34,9 +34,15 @@ import { CompatibilityModule } from './compatibility/compatibility.module';
     }),
     // Only the routes that opt in with AuthThrottlerGuard are limited (sign-in, invitations, resets);
     // the counters are in the database so that several instances share one allowance.
-    ThrottlerModule.forRootAsync({ inject: [DataSource], useFactory: (dataSource: DataSource) => ({ throttlers: AUTH_THROTTLERS, storage: new DatabaseThrottlerStorage(dataSource) }) }),
+    ThrottlerModule.forRootAsync({
+      inject: [DataSource],
+      useFactory: (dataSource: DataSource) => ({ throttlers: AUTH_THROTTLERS, storage: new DatabaseThrottlerStorage(dataSource) }),
+    }),
     // Async: the configuration reaches it through APP_CONFIG, as it reaches every other module.
-    ServeStaticModule.forRootAsync({ inject: [APP_CONFIG], useFactory: (config: AppConfig) => [{ rootPath: resolve(config.clientDir), exclude: ['/api/{*path}'] }] }),
+    ServeStaticModule.forRootAsync({
+      inject: [APP_CONFIG],
+      useFactory: (config: AppConfig) => [{ rootPath: resolve(config.clientDir), exclude: ['/api/{*path}'] }],
+    }),
     AuditModule,
     MailModule,
     StorageModule,

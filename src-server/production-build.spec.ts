@@ -19,7 +19,9 @@ describe('production build (tsconfig.server.build.json)', () => {
   const files = compiledFiles('tsconfig.server.build.json');
 
   it('compiles the app and its entry points', () => {
-    expect(files).toEqual(expect.arrayContaining(['src-server/main.ts', 'src-server/database/migrate.ts', 'src-server/database/seed.ts', 'src-server/dev-fakes/run-fakes.ts']));
+    expect(files).toEqual(
+      expect.arrayContaining(['src-server/main.ts', 'src-server/database/migrate.ts', 'src-server/database/seed.ts', 'src-server/dev-fakes/run-fakes.ts']),
+    );
   });
 
   it('leaves out benchmarks, specs and test fixtures', () => {
@@ -31,6 +33,8 @@ describe('production build (tsconfig.server.build.json)', () => {
 describe('benchmark build (tsconfig.bench.json)', () => {
   it('compiles every benchmark with the entry points they start', () => {
     const files = compiledFiles('tsconfig.bench.json');
-    expect(files).toEqual(expect.arrayContaining(['src-server/bench/matrix-bench.ts', 'src-server/bench/http-load.ts', 'src-server/main.ts', 'src-server/database/migrate.ts']));
+    expect(files).toEqual(
+      expect.arrayContaining(['src-server/bench/matrix-bench.ts', 'src-server/bench/http-load.ts', 'src-server/main.ts', 'src-server/database/migrate.ts']),
+    );
   });
 });

@@ -12,9 +12,7 @@ const invalidateAll = (queryClient: QueryClient, keys: readonly (readonly unknow
 
 /** A product's own fields (name, ground plane…), its deletion or restoration: lists, the product and its verdicts. */
 export const invalidateProduct = (queryClient: QueryClient, productId?: number) =>
-  invalidateAll(queryClient, productId === undefined
-    ? [productKeys.all]
-    : [productKeys.all, matrixKeys.product(productId), candidateKeys.product(productId)]);
+  invalidateAll(queryClient, productId === undefined ? [productKeys.all] : [productKeys.all, matrixKeys.product(productId), candidateKeys.product(productId)]);
 
 /** A radio added, edited or removed: its product (radios, history, list counts), the product's matrix and candidates. */
 export const invalidateRadio = (queryClient: QueryClient, productId: number) =>

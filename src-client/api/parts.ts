@@ -17,8 +17,7 @@ export const getPartQueryOptions = <TPart>(id: number, ranges?: string) =>
   queryOptions({ queryKey: partKeys.detail(id, ranges), queryFn: () => getPart<TPart>(id, ranges) });
 
 /** A stored measurement's points never change (a new upload is a new measurement), so they are cached for good. */
-export const getMeasurementPoints = <TPoints>(id: number, measurementId: number) =>
-  apiRequest<TPoints>(`/parts/${id}/measurements/${measurementId}/points`);
+export const getMeasurementPoints = <TPoints>(id: number, measurementId: number) => apiRequest<TPoints>(`/parts/${id}/measurements/${measurementId}/points`);
 
 export const getMeasurementPointsQueryOptions = <TPoints>(id: number, measurementId: number) =>
   queryOptions({ queryKey: partKeys.points(id, measurementId), queryFn: () => getMeasurementPoints<TPoints>(id, measurementId), staleTime: Infinity });

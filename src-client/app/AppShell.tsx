@@ -37,7 +37,9 @@ export function AppShell() {
         <div className="bw-rail__user">
           <div className="bw-rail__user-name">{user.name}</div>
           <div className="bw-rail__user-meta">
-            <Tag minimal round data-testid="current-role">{ROLE_LABELS[user.role]}</Tag>
+            <Tag minimal round data-testid="current-role">
+              {ROLE_LABELS[user.role]}
+            </Tag>
             <Button variant="minimal" size="small" icon="log-out" text="Sign out" onClick={() => signOut()} />
           </div>
         </div>

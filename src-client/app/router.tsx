@@ -16,11 +16,11 @@ export const router = createBrowserRouter([
   { path: paths.resetPassword, element: <ResetPasswordPage /> },
   { path: paths.forgotPassword, element: <ForgotPasswordPage /> },
   {
-    element: <RequireAuth><AppShell /></RequireAuth>,
-    children: [
-      { index: true, element: <HomePage /> },
-      ...protectedRoutes,
-      { path: '*', element: <NonIdealState icon="search" title="No such page" /> },
-    ],
+    element: (
+      <RequireAuth>
+        <AppShell />
+      </RequireAuth>
+    ),
+    children: [{ index: true, element: <HomePage /> }, ...protectedRoutes, { path: '*', element: <NonIdealState icon="search" title="No such page" /> }],
   },
 ]);

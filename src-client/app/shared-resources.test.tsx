@@ -45,12 +45,15 @@ function setup() {
 
 beforeEach(() => {
   requests = [];
-  vi.stubGlobal('fetch', vi.fn(async (url: string, init?: RequestInit) => {
-    const request = `${init?.method ?? 'GET'} ${new URL(url, 'http://localhost').pathname}`;
-    requests.push(request);
-    if (!(request in answers)) return new Response(JSON.stringify({ code: 'NOT_FOUND', message: request }), { status: 404 });
-    return new Response(JSON.stringify(answers[request]), { status: 200 });
-  }));
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (url: string, init?: RequestInit) => {
+      const request = `${init?.method ?? 'GET'} ${new URL(url, 'http://localhost').pathname}`;
+      requests.push(request);
+      if (!(request in answers)) return new Response(JSON.stringify({ code: 'NOT_FOUND', message: request }), { status: 404 });
+      return new Response(JSON.stringify(answers[request]), { status: 200 });
+    }),
+  );
 });
 
 afterEach(() => vi.unstubAllGlobals());
@@ -73,7 +76,9 @@ describe('shared resources', () => {
 
   it("refreshes the product's matrix and candidates on the same page when a radio is edited", async () => {
     const { queryClient, wrapper } = setup();
-    const { result } = renderHook(() => ({ product: useProduct(7), matrix: useMatrix(7), candidates: useCandidates(7, 70), updateRadio: useUpdateRadio() }), { wrapper });
+    const { result } = renderHook(() => ({ product: useProduct(7), matrix: useMatrix(7), candidates: useCandidates(7, 70), updateRadio: useUpdateRadio() }), {
+      wrapper,
+    });
     await waitFor(() => expect(result.current.matrix.data && result.current.candidates.data && result.current.product.data).toBeTruthy());
     const invalidate = vi.spyOn(queryClient, 'invalidateQueries');
     await result.current.updateRadio.mutateAsync({ productId: 7, radioId: 70, version: 1, name: 'LTE main' });
@@ -86,7 +91,10 @@ describe('shared resources', () => {
 
   it('refreshes the part, the search, the band strip and the matrix when a part is reviewed', async () => {
     const { wrapper } = setup();
-    const { result } = renderHook(() => ({ page: usePart(5), search: useParts({ q: 'KA' }), strip: usePartCoverage(5), matrix: useMatrix(7), review: useReviewPart() }), { wrapper });
+    const { result } = renderHook(
+      () => ({ page: usePart(5), search: useParts({ q: 'KA' }), strip: usePartCoverage(5), matrix: useMatrix(7), review: useReviewPart() }),
+      { wrapper },
+    );
     await waitFor(() => expect(result.current.page.data && result.current.search.data && result.current.strip.data && result.current.matrix.data).toBeTruthy());
     await result.current.review.mutateAsync({ id: 5, action: 'approval', version: 1 });
     await waitFor(() => expect(count('GET /api/products/7/matrix')).toBe(2));

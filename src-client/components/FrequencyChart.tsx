@@ -33,16 +33,7 @@ export interface FrequencyChartProps {
 }
 
 /** The product's one plot of quantities against frequency (uPlot, resizes with its container). */
-export function FrequencyChart({
-  title,
-  frequencyHz,
-  series,
-  ranges = [],
-  threshold,
-  xUnit = 'MHz',
-  height = 280,
-  description,
-}: FrequencyChartProps) {
+export function FrequencyChart({ title, frequencyHz, series, ranges = [], threshold, xUnit = 'MHz', height = 280, description }: FrequencyChartProps) {
   const containerRef = useRef<HTMLDivElement>(null);
   const plotRef = useRef<uPlot | null>(null);
   const [width, setWidth] = useState(0);
@@ -85,7 +76,9 @@ export function FrequencyChart({
 
   const divisor = FREQUENCY_UNIT_HZ[xUnit];
   const rangeSummary = ranges.length
-    ? ranges.map((r) => `${r.label ?? (r.kind === 'match' ? 'match' : 'range')}: ${formatNumber(r.fromHz / divisor)}–${formatNumber(r.toHz / divisor)} ${xUnit}`).join('; ')
+    ? ranges
+        .map((r) => `${r.label ?? (r.kind === 'match' ? 'match' : 'range')}: ${formatNumber(r.fromHz / divisor)}–${formatNumber(r.toHz / divisor)} ${xUnit}`)
+        .join('; ')
     : '';
 
   return (

@@ -45,7 +45,13 @@ describe('logAxis', () => {
 
 describe('piecewiseAxis', () => {
   it('is monotonic, shortens the gap between clusters and marks the break', () => {
-    const axis = piecewiseAxis([{ fromMhz: 699, toMhz: 746 }, { fromMhz: 3300, toMhz: 3800 }], 800);
+    const axis = piecewiseAxis(
+      [
+        { fromMhz: 699, toMhz: 746 },
+        { fromMhz: 3300, toMhz: 3800 },
+      ],
+      800,
+    );
     expect(axis.breaks).toHaveLength(1);
     const fs = [672, 699, 716, 746, 3300, 3600, 3800];
     const xs = fs.map(axis.x);
@@ -55,8 +61,15 @@ describe('piecewiseAxis', () => {
   });
 
   it('merges overlapping intervals', () => {
-    expect(mergeIntervals([{ fromMhz: 1710, toMhz: 1785 }, { fromMhz: 1700, toMhz: 1720 }, { fromMhz: 1805, toMhz: 1880 }])).toEqual([
-      { fromMhz: 1700, toMhz: 1785 }, { fromMhz: 1805, toMhz: 1880 },
+    expect(
+      mergeIntervals([
+        { fromMhz: 1710, toMhz: 1785 },
+        { fromMhz: 1700, toMhz: 1720 },
+        { fromMhz: 1805, toMhz: 1880 },
+      ]),
+    ).toEqual([
+      { fromMhz: 1700, toMhz: 1785 },
+      { fromMhz: 1805, toMhz: 1880 },
     ]);
   });
 });
@@ -85,7 +98,7 @@ describe(FrequencyStrip.name, () => {
     }
     // Uplink is hatched, receive is dotted, downlink solid: different pattern contents.
     const contents = ['uplink', 'receive', 'downlink'].map((r) => {
-      const id = fillOf(r).match(/#(.+)\)/)![1];
+      const id = fillOf(r).match(/#([^#)]+)\)/)![1];
       return [...container.querySelector(`pattern[id="${id}"]`)!.children].map((c) => c.tagName).join(',');
     });
     expect(new Set(contents).size).toBe(3);
@@ -103,11 +116,21 @@ describe(FrequencyStrip.name, () => {
 
   it('stacks overlapping bands of one row in separate lanes instead of drawing them over each other', () => {
     // B5 UL 824–849 and B26 UL 814–849 overlap (3GPP TS 36.101 Table 5.5-1); B8 UL 880–915 does not.
-    const { container } = render(<FrequencyStrip rows={[{ id: 1, label: 'Cell', ranges: [
-      { role: 'uplink', fromMhz: 824, toMhz: 849, label: 'B5' },
-      { role: 'uplink', fromMhz: 814, toMhz: 849, label: 'B26' },
-      { role: 'uplink', fromMhz: 880, toMhz: 915, label: 'B8' },
-    ] }]} />);
+    const { container } = render(
+      <FrequencyStrip
+        rows={[
+          {
+            id: 1,
+            label: 'Cell',
+            ranges: [
+              { role: 'uplink', fromMhz: 824, toMhz: 849, label: 'B5' },
+              { role: 'uplink', fromMhz: 814, toMhz: 849, label: 'B26' },
+              { role: 'uplink', fromMhz: 880, toMhz: 915, label: 'B8' },
+            ],
+          },
+        ]}
+      />,
+    );
     const ys = [...container.querySelectorAll('[data-role] rect')].map((r) => Number(r.getAttribute('y')));
     expect(ys[0]).not.toBe(ys[1]);
     expect(Math.min(...ys)).toBe(ys[2]);

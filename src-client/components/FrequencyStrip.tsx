@@ -107,7 +107,10 @@ function packLanes(spans: { x0: number; x1: number }[]): { lanes: number[]; coun
   const lanes = new Array<number>(spans.length).fill(0);
   for (const i of order) {
     let lane = ends.findIndex((end) => spans[i].x0 >= end + 1);
-    if (lane === -1) { lane = ends.length; ends.push(0); }
+    if (lane === -1) {
+      lane = ends.length;
+      ends.push(0);
+    }
     ends[lane] = spans[i].x1;
     lanes[i] = lane;
   }
@@ -121,7 +124,7 @@ const rangeTitle = (row: string, r: StripRange) => `${row}: ${r.label} ${ROLE_TE
  * frequency axis, uplink/downlink/TDD/receive told apart by pattern; an optional covered layer per row.
  */
 export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required frequency ranges', legend = true }: FrequencyStripProps) {
-  const prefix = `bw-strip-${useId().replace(/[^a-zA-Z0-9]/g, '')}`;
+  const prefix = `bw-strip-${useId().replace(/[^a-z0-9]/gi, '')}`;
   const [ref, width] = useWidth(900);
   const plotWidth = Math.max(width - LABEL_W - RIGHT_PAD, 120);
   const all = useMemo(() => rows.flatMap((r) => [...r.ranges, ...(r.covered ?? [])]), [rows]);
@@ -158,7 +161,9 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
           {axis.ticks.map((t) => (
             <g key={t.mhz} transform={`translate(${t.x}, 0)`} className="bw-strip__tick">
               <line y1={0} y2={plotHeight} className="bw-strip__grid" />
-              <text y={plotHeight + 16} textAnchor="middle" className="bw-strip__tick-label">{t.label}</text>
+              <text y={plotHeight + 16} textAnchor="middle" className="bw-strip__tick-label">
+                {t.label}
+              </text>
             </g>
           ))}
           {axis.breaks.map((x) => (
@@ -173,7 +178,9 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
           return (
             <g key={row.id} transform={`translate(0, ${y})`} data-testid="strip-row">
               {i > 0 && <line x1={0} x2={width} y1={0} y2={0} className="bw-strip__row-rule" />}
-              <text x={4} y={rowHeight / 2 + 4} className="bw-strip__row-label">{row.label}</text>
+              <text x={4} y={rowHeight / 2 + 4} className="bw-strip__row-label">
+                {row.label}
+              </text>
               <g transform={`translate(${LABEL_W}, 0)`}>
                 {row.ranges.map((r, j) => {
                   const { x0, x1 } = spans[j];
@@ -184,14 +191,26 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
                     <g key={`${r.label}-${r.role}-${j}`} data-role={r.role}>
                       <title>{rangeTitle(row.label, r)}</title>
                       <rect x={x0} y={top} width={w} height={BAR_H - 2} rx={2} fill={`url(#${prefix}-${r.role})`} className="bw-strip__bar" />
-                      {fits && <text x={x0 + w / 2} y={top + BAR_H / 2 + 2} textAnchor="middle" className="bw-strip__bar-label">{r.label}</text>}
+                      {fits && (
+                        <text x={x0 + w / 2} y={top + BAR_H / 2 + 2} textAnchor="middle" className="bw-strip__bar-label">
+                          {r.label}
+                        </text>
+                      )}
                     </g>
                   );
                 })}
                 {(row.covered ?? []).map((c, j) => {
                   const x0 = axis.x(c.fromMhz);
                   return (
-                    <rect key={`cover-${j}`} x={x0} y={rowHeight - COVER_H - 3} width={Math.max(axis.x(c.toMhz) - x0, 2)} height={COVER_H} className="bw-strip__covered" data-testid="covered-range">
+                    <rect
+                      key={`cover-${j}`}
+                      x={x0}
+                      y={rowHeight - COVER_H - 3}
+                      width={Math.max(axis.x(c.toMhz) - x0, 2)}
+                      height={COVER_H}
+                      className="bw-strip__covered"
+                      data-testid="covered-range"
+                    >
                       <title>{`${c.label} covers ${formatMhz(c.fromMhz)} – ${formatMhz(c.toMhz)}`}</title>
                     </rect>
                   );
@@ -205,17 +224,23 @@ export function FrequencyStrip({ rows, scale = 'piecewise', title = 'Required fr
         <figcaption className={`bw-strip__legend ${Classes.TEXT_SMALL}`}>
           {presentRoles.map((role) => (
             <span key={role} className="bw-strip__legend-item">
-              <svg width="22" height="12" aria-hidden="true"><rect width="22" height="12" rx="2" fill={`url(#${prefix}-${role})`} className="bw-strip__bar" /></svg>
+              <svg width="22" height="12" aria-hidden="true">
+                <rect width="22" height="12" rx="2" fill={`url(#${prefix}-${role})`} className="bw-strip__bar" />
+              </svg>
               {ROLE_TEXT[role]}
             </span>
           ))}
           {hasCovered && (
             <span className="bw-strip__legend-item">
-              <svg width="22" height="12" aria-hidden="true"><rect y="4" width="22" height="5" className="bw-strip__covered" /></svg>
+              <svg width="22" height="12" aria-hidden="true">
+                <rect y="4" width="22" height="5" className="bw-strip__covered" />
+              </svg>
               Covered by the part
             </span>
           )}
-          {scale === 'piecewise' && axis.breaks.length > 0 && <span className={`bw-strip__legend-item ${Classes.TEXT_MUTED}`}>Log axis; empty stretches between groups are shortened (≈).</span>}
+          {scale === 'piecewise' && axis.breaks.length > 0 && (
+            <span className={`bw-strip__legend-item ${Classes.TEXT_MUTED}`}>Log axis; empty stretches between groups are shortened (≈).</span>
+          )}
         </figcaption>
       )}
     </figure>

@@ -16,9 +16,9 @@ export function ScreeningCaution({ compact = false }: ScreeningCautionProps) {
   }
   return (
     <Callout intent={Intent.WARNING} icon="warning-sign" title="Screening estimates" className="bw-caution">
-      Results come from datasheet and measured data and are estimates. Regulatory approval (radio type approval, the antenna-gain
-      limits of a module&apos;s grant) and RF exposure (SAR/MPE) must be confirmed by an accredited lab and the local regulator;
-      performance in the final enclosure must be measured. Defer to local codes and licensed practice.
+      Results come from datasheet and measured data and are estimates. Regulatory approval (radio type approval, the antenna-gain limits of a module&apos;s
+      grant) and RF exposure (SAR/MPE) must be confirmed by an accredited lab and the local regulator; performance in the final enclosure must be measured.
+      Defer to local codes and licensed practice.
     </Callout>
   );
 }

@@ -67,7 +67,10 @@ export function logAxis(fromMhz: number, toMhz: number, width: number, minTickGa
   const lo = Math.log10(fromMhz);
   const span = Math.max(Math.log10(toMhz) - lo, 1e-9);
   const x = (mhz: number) => ((Math.log10(Math.max(mhz, 1e-9)) - lo) / span) * width;
-  const ticks = thin(candidates(fromMhz, toMhz).map((mhz) => ({ mhz, x: x(mhz) })), minTickGapPx).map((t) => ({ ...t, label: formatMhz(t.mhz) }));
+  const ticks = thin(
+    candidates(fromMhz, toMhz).map((mhz) => ({ mhz, x: x(mhz) })),
+    minTickGapPx,
+  ).map((t) => ({ ...t, label: formatMhz(t.mhz) }));
   return { x, ticks, breaks: [], width };
 }
 
@@ -76,7 +79,11 @@ export function logAxis(fromMhz: number, toMhz: number, width: number, minTickGa
  * frequency) share the width in proportion to their log span, and the empty gaps between them
  * shrink to `gapPx` with a break mark. Keeps 700 MHz and 5 GHz bands readable on one strip.
  */
-export function piecewiseAxis(intervals: FrequencyInterval[], width: number, { padding = 0.04, gapPx = 18, minClusterShare = 0.06, minTickGapPx = 56 } = {}): FrequencyAxis {
+export function piecewiseAxis(
+  intervals: FrequencyInterval[],
+  width: number,
+  { padding = 0.04, gapPx = 18, minClusterShare = 0.06, minTickGapPx = 56 } = {},
+): FrequencyAxis {
   const clusters = mergeIntervals(intervals.map((i) => ({ fromMhz: i.fromMhz * (1 - padding), toMhz: i.toMhz * (1 + padding) })));
   if (!clusters.length) return logAxis(100, 10000, width, minTickGapPx);
   const usable = Math.max(width - gapPx * (clusters.length - 1), clusters.length);

@@ -12,7 +12,16 @@ describe('apiRequest', () => {
   });
 
   it('throws a typed ApiError carrying the code and field errors', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify({ statusCode: 400, code: 'VALIDATION_FAILED', message: 'name: too long', fields: [{ field: 'name', message: 'too long' }] }), { status: 400 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(
+        async () =>
+          new Response(
+            JSON.stringify({ statusCode: 400, code: 'VALIDATION_FAILED', message: 'name: too long', fields: [{ field: 'name', message: 'too long' }] }),
+            { status: 400 },
+          ),
+      ),
+    );
     const error = await apiRequest('/x').catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiError);
     expect((error as ApiError).code).toBe('VALIDATION_FAILED');
@@ -23,7 +32,10 @@ describe('apiRequest', () => {
     tokenStore.set('stale');
     const ended = vi.fn();
     window.addEventListener(SESSION_ENDED_EVENT, ended);
-    vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify({ code: 'AUTH_TOKEN_EXPIRED', message: 'expired' }), { status: 401 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => new Response(JSON.stringify({ code: 'AUTH_TOKEN_EXPIRED', message: 'expired' }), { status: 401 })),
+    );
     await expect(apiRequest('/x')).rejects.toMatchObject({ status: 401, code: 'AUTH_TOKEN_EXPIRED' });
     expect(tokenStore.get()).toBeNull();
     expect(ended).toHaveBeenCalledTimes(1);
@@ -31,7 +43,12 @@ describe('apiRequest', () => {
   });
 
   it('reports an unreachable server as NETWORK_ERROR', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => { throw new TypeError('fetch failed'); }));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => {
+        throw new TypeError('fetch failed');
+      }),
+    );
     await expect(apiRequest('/x')).rejects.toMatchObject({ code: 'NETWORK_ERROR', status: 0 });
   });
 });

@@ -52,7 +52,7 @@ export function buildUrl(path: string, query?: Query): string {
 }
 
 async function toApiError(status: number, text: string): Promise<ApiError> {
-  let body: Record<string, unknown> = {};
+  let body: Record<string, unknown>;
   try {
     body = JSON.parse(text);
   } catch {

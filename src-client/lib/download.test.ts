@@ -37,14 +37,22 @@ describe(downloadFromApi.name, () => {
   });
 
   it('passes a refusal on as a typed error and saves nothing', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify({ code: 'DOCUMENT_NOT_FOUND', message: 'gone' }), { status: 404 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => new Response(JSON.stringify({ code: 'DOCUMENT_NOT_FOUND', message: 'gone' }), { status: 404 })),
+    );
     await expect(downloadFromApi('/parts/3/documents/4/file', 'x.pdf')).rejects.toMatchObject({ status: 404, code: 'DOCUMENT_NOT_FOUND' });
     expect(saved).toHaveLength(0);
     expect(click).not.toHaveBeenCalled();
   });
 
   it('reports an unreachable server as NETWORK_ERROR', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => { throw new TypeError('fetch failed'); }));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => {
+        throw new TypeError('fetch failed');
+      }),
+    );
     await expect(downloadFromApi('/parts/export', 'x.csv')).rejects.toMatchObject({ code: 'NETWORK_ERROR' });
   });
 });

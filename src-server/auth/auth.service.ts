@@ -56,7 +56,12 @@ export class AuthService implements OnModuleInit, OnModuleDestroy {
       const minutes = Math.ceil(attempt.retryAfterMs / 60_000);
       throw new DomainError('AUTH_TEMPORARILY_LOCKED', `Too many failed sign-ins; try again in ${minutes} minute${minutes === 1 ? '' : 's'}`, 429);
     }
-    const user = await this.dataSource.getRepository(User).createQueryBuilder('u').addSelect('u.passwordHash').where('u.email = :email', { email: normalised }).getOne();
+    const user = await this.dataSource
+      .getRepository(User)
+      .createQueryBuilder('u')
+      .addSelect('u.passwordHash')
+      .where('u.email = :email', { email: normalised })
+      .getOne();
     const ok = await verifyPassword(password, user?.passwordHash ?? (await getDummyHash()));
     if (!user || !ok || user.status !== 'active' || !user.passwordHash) {
       throw new DomainError('AUTH_BAD_CREDENTIALS', 'E-mail or password is not correct', 401);

@@ -23,7 +23,12 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
     @InjectRepository(User) private readonly users: Repository<User>,
   ) {
     // A KeyObject spares the verifier a failed public-key parse of the secret on every request (~0.4 ms).
-    super({ jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(), secretOrKey: createSecretKey(Buffer.from(config.jwt.secret)) as unknown as string, ignoreExpiration: false, algorithms: ['HS256'] });
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: createSecretKey(Buffer.from(config.jwt.secret)) as unknown as string,
+      ignoreExpiration: false,
+      algorithms: ['HS256'],
+    });
   }
 
   /** Looked up on every request so that deactivation and password changes revoke tokens at once. */

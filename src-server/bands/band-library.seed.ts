@@ -35,11 +35,22 @@ export async function seedBands(dataSource: DataSource): Promise<string> {
     for (const band of seed) {
       if (await manager.existsBy(Band, { id: band.id })) continue;
       await manager.insert(Band, {
-        id: band.id, technology: band.technology, designation: band.designation, name: band.name, duplex: band.duplex,
-        centreMhz: band.centreMhz ?? null, bandwidthMhz: band.bandwidthMhz ?? null, regions: band.regions,
-        sourceDocument: band.source.document, sourceTable: band.source.table, sourceNote: band.source.note ?? null,
+        id: band.id,
+        technology: band.technology,
+        designation: band.designation,
+        name: band.name,
+        duplex: band.duplex,
+        centreMhz: band.centreMhz ?? null,
+        bandwidthMhz: band.bandwidthMhz ?? null,
+        regions: band.regions,
+        sourceDocument: band.source.document,
+        sourceTable: band.source.table,
+        sourceNote: band.source.note ?? null,
       });
-      await manager.insert(BandRange, band.ranges.map((r, position) => ({ ...r, bandId: band.id, position })));
+      await manager.insert(
+        BandRange,
+        band.ranges.map((r, position) => ({ ...r, bandId: band.id, position })),
+      );
       created += 1;
     }
   });
@@ -60,7 +71,10 @@ export async function seedBandSets(dataSource: DataSource): Promise<string> {
         return id;
       });
       await manager.insert(BandSet, { id: set.id, name: set.name, description: set.description });
-      await manager.insert(BandSetMember, bandIds.map((bandId, position) => ({ bandSetId: set.id, bandId, position })));
+      await manager.insert(
+        BandSetMember,
+        bandIds.map((bandId, position) => ({ bandSetId: set.id, bandId, position })),
+      );
       created += 1;
     }
   });

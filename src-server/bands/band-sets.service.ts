@@ -60,8 +60,14 @@ export class BandSetsService {
       if (input.name !== undefined && input.name !== before.name) await this.assertNameFree(manager, input.name, id);
       const changes: Record<string, [unknown, unknown]> = {};
       const fields: Partial<BandSet> = {};
-      if (input.name !== undefined && input.name !== old.name) { fields.name = input.name; changes.name = [old.name, input.name]; }
-      if (input.description !== undefined && input.description !== old.description) { fields.description = input.description; changes.description = [old.description, input.description]; }
+      if (input.name !== undefined && input.name !== old.name) {
+        fields.name = input.name;
+        changes.name = [old.name, input.name];
+      }
+      if (input.description !== undefined && input.description !== old.description) {
+        fields.description = input.description;
+        changes.description = [old.description, input.description];
+      }
       if (input.bandIds && JSON.stringify(input.bandIds) !== JSON.stringify(old.bandIds)) {
         await this.assertBandsExist(manager, input.bandIds);
         await manager.delete(BandSetMember, { bandSetId: id });
@@ -81,7 +87,13 @@ export class BandSetsService {
       await this.lockBandSet(manager, id, version);
       const set = await this.get(id, manager);
       await manager.delete(BandSet, { id });
-      await this.audit.record(manager, { entityType: 'band-set', entityId: id, action: 'deleted', userId: actor.id, changes: { name: set.name, bandIds: set.bandIds } });
+      await this.audit.record(manager, {
+        entityType: 'band-set',
+        entityId: id,
+        action: 'deleted',
+        userId: actor.id,
+        changes: { name: set.name, bandIds: set.bandIds },
+      });
     });
   }
 
@@ -94,7 +106,10 @@ export class BandSetsService {
   }
 
   private async writeMembers(manager: EntityManager, bandSetId: number, bandIds: number[]): Promise<void> {
-    await manager.insert(BandSetMember, bandIds.map((bandId, position) => ({ bandSetId, bandId, position })));
+    await manager.insert(
+      BandSetMember,
+      bandIds.map((bandId, position) => ({ bandSetId, bandId, position })),
+    );
   }
 
   private async assertNameFree(manager: EntityManager, name: string, exceptId?: number): Promise<void> {

@@ -34,7 +34,18 @@ export function checkFrequencyWindow(fromMhz: number | undefined, toMhz: number 
   return { fromMhz, toMhz };
 }
 
-const BAND_FIELDS: (keyof Band)[] = ['technology', 'designation', 'name', 'duplex', 'centreMhz', 'bandwidthMhz', 'regions', 'sourceDocument', 'sourceTable', 'sourceNote'];
+const BAND_FIELDS: (keyof Band)[] = [
+  'technology',
+  'designation',
+  'name',
+  'duplex',
+  'centreMhz',
+  'bandwidthMhz',
+  'regions',
+  'sourceDocument',
+  'sourceTable',
+  'sourceNote',
+];
 
 @Injectable()
 export class BandsService {
@@ -82,12 +93,22 @@ export class BandsService {
     return this.dataSource.transaction(async (manager) => {
       await this.assertDesignationFree(manager, input.designation);
       const inserted = await manager.insert(Band, {
-        technology: input.technology, designation: input.designation, name: input.name, duplex: input.duplex,
-        centreMhz: input.centreMhz ?? null, bandwidthMhz: input.bandwidthMhz ?? null, regions: input.regions,
-        sourceDocument: input.sourceDocument, sourceTable: input.sourceTable, sourceNote: input.sourceNote ?? null,
+        technology: input.technology,
+        designation: input.designation,
+        name: input.name,
+        duplex: input.duplex,
+        centreMhz: input.centreMhz ?? null,
+        bandwidthMhz: input.bandwidthMhz ?? null,
+        regions: input.regions,
+        sourceDocument: input.sourceDocument,
+        sourceTable: input.sourceTable,
+        sourceNote: input.sourceNote ?? null,
       });
       const id = Number(inserted.identifiers[0].id);
-      await manager.insert(BandRange, input.ranges.map((r, position) => ({ ...r, bandId: id, position })));
+      await manager.insert(
+        BandRange,
+        input.ranges.map((r, position) => ({ ...r, bandId: id, position })),
+      );
       await this.audit.record(manager, { entityType: 'band', entityId: id, action: 'created', userId: actor.id, changes: { ...input } });
       return (await this.findByIds([id], manager))[0];
     });
@@ -105,9 +126,13 @@ export class BandsService {
       if (Object.keys(fields).length) await manager.update(Band, { id }, fields as Partial<Band>);
       if (ranges) {
         const before = toBandDto(band).ranges;
-        if (JSON.stringify(before) !== JSON.stringify(ranges.map((r) => ({ role: r.role, fromMhz: r.fromMhz, toMhz: r.toMhz })))) changes.ranges = [before, ranges];
+        if (JSON.stringify(before) !== JSON.stringify(ranges.map((r) => ({ role: r.role, fromMhz: r.fromMhz, toMhz: r.toMhz }))))
+          changes.ranges = [before, ranges];
         await manager.delete(BandRange, { bandId: id });
-        await manager.insert(BandRange, ranges.map((r, position) => ({ ...r, bandId: id, position })));
+        await manager.insert(
+          BandRange,
+          ranges.map((r, position) => ({ ...r, bandId: id, position })),
+        );
       }
       if (Object.keys(changes).length) await this.audit.record(manager, { entityType: 'band', entityId: id, action: 'updated', userId: actor.id, changes });
       return (await this.findByIds([id], manager))[0];

@@ -14,15 +14,40 @@ async function loadVaryingQueries(url: string, token: string, connections: numbe
   let n = 0;
   const base = new URL(url);
   const result = await new Promise<autocannon.Result>((done, fail) => {
-    const instance = autocannon({
-      url: base.origin, connections, duration: seconds, headers: { authorization: `Bearer ${token}` },
-      requests: [{ method: 'GET', setupRequest: (request) => ({ ...request, path: `/api/parts?covers=791-862,880-960&vswrMax=2&limit=50&minEfficiencyPct=${(20 + ((n++ * 0.37) % 50)).toFixed(2)}` }) }],
-    }, (error, finished) => (error ? fail(error) : done(finished)));
+    const instance = autocannon(
+      {
+        url: base.origin,
+        connections,
+        duration: seconds,
+        headers: { authorization: `Bearer ${token}` },
+        requests: [
+          {
+            method: 'GET',
+            setupRequest: (request) => ({
+              ...request,
+              path: `/api/parts?covers=791-862,880-960&vswrMax=2&limit=50&minEfficiencyPct=${(20 + ((n++ * 0.37) % 50)).toFixed(2)}`,
+            }),
+          },
+        ],
+      },
+      (error, finished) => (error ? fail(error) : done(finished)),
+    );
     instance.on('response', (_client, _status, _bytes, responseTime) => times.push(responseTime));
   });
   times.sort((a, b) => a - b);
   const at = (p: number) => times[Math.min(times.length - 1, Math.floor((p / 100) * times.length))];
-  return { label: 'GET /api/parts (B20 + B8, a new eff. floor each)', connections, seconds, requests: result.requests.total, throughputPerS: result.requests.average, p50Ms: at(50), p95Ms: at(95), p99Ms: at(99), errors: result.errors + result.timeouts, non2xx: result.non2xx };
+  return {
+    label: 'GET /api/parts (B20 + B8, a new eff. floor each)',
+    connections,
+    seconds,
+    requests: result.requests.total,
+    throughputPerS: result.requests.average,
+    p50Ms: at(50),
+    p95Ms: at(95),
+    p99Ms: at(99),
+    errors: result.errors + result.timeouts,
+    non2xx: result.non2xx,
+  };
 }
 
 /**
@@ -39,7 +64,8 @@ const PART_COUNT = 10_000;
 function createDatabase(): void {
   const socket = process.env.DB_SOCKET ?? resolve('.data/run/mariadb.sock');
   const user = process.env.DB_USER ?? 'bandwright';
-  const sql = `CREATE DATABASE IF NOT EXISTS \`${DB}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;` +
+  const sql =
+    `CREATE DATABASE IF NOT EXISTS \`${DB}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;` +
     ['127.0.0.1', 'localhost'].map((host) => `GRANT ALL ON \`${DB}\`.* TO '${user}'@'${host}';`).join('');
   execFileSync('mariadb', ['--no-defaults', '-S', socket, '-uroot', '-e', sql], { stdio: 'inherit' });
 }
@@ -53,7 +79,9 @@ async function main(): Promise<void> {
   await dataSource.initialize();
   try {
     const seeded = await seedBenchCatalogue(dataSource, PART_COUNT);
-    console.log(seeded.created ? `seeded ${seeded.created} generated parts in ${(seeded.ms / 1000).toFixed(1)} s` : `${PART_COUNT} generated parts already present`);
+    console.log(
+      seeded.created ? `seeded ${seeded.created} generated parts in ${(seeded.ms / 1000).toFixed(1)} s` : `${PART_COUNT} generated parts already present`,
+    );
   } finally {
     await dataSource.destroy();
   }
@@ -66,9 +94,14 @@ async function main(): Promise<void> {
     const warm = await fetch(`${server.url}${path}`, { headers: { authorization: `Bearer ${token}` } });
     const body = await warm.json();
     const all = await (await fetch(`${server.url}/api/parts?limit=1`, { headers: { authorization: `Bearer ${token}` } })).json();
-    console.log(`first search (loads the index): ${Date.now() - first} ms; ${all.total} parts in the catalogue, ${body.total} match B20 + B8 at VSWR ≤ 2 with efficiency ≥ 40 %`);
+    console.log(
+      `first search (loads the index): ${Date.now() - first} ms; ${all.total} parts in the catalogue, ${body.total} match B20 + B8 at VSWR ≤ 2 with efficiency ≥ 40 %`,
+    );
     for (const connections of [1, 32]) {
-      printLoad(await loadRoute({ label: 'GET /api/parts (B20 + B8, VSWR ≤ 2, eff ≥ 40 %)', url: `${server.url}${path}`, token, connections, seconds: SECONDS }), connections === 32 ? TARGET_P95_MS : undefined);
+      printLoad(
+        await loadRoute({ label: 'GET /api/parts (B20 + B8, VSWR ≤ 2, eff ≥ 40 %)', url: `${server.url}${path}`, token, connections, seconds: SECONDS }),
+        connections === 32 ? TARGET_P95_MS : undefined,
+      );
     }
     // The same filter repeated is served from the index's result list; this run makes every request new.
     for (const connections of [1, 32]) {

@@ -26,11 +26,32 @@ function random(seed: number): () => number {
 }
 
 const FAMILIES: { name: string; sweep: [number, number]; bands: [number, number][] }[] = [
-  { name: 'LTE', sweep: [600, 3000], bands: [[698, 960], [1710, 2690]] },
-  { name: 'LTE-EU', sweep: [600, 2800], bands: [[791, 960], [1710, 2200]] },
+  {
+    name: 'LTE',
+    sweep: [600, 3000],
+    bands: [
+      [698, 960],
+      [1710, 2690],
+    ],
+  },
+  {
+    name: 'LTE-EU',
+    sweep: [600, 2800],
+    bands: [
+      [791, 960],
+      [1710, 2200],
+    ],
+  },
   { name: 'GNSS', sweep: [1450, 1750], bands: [[1559, 1610]] },
   { name: 'ISM24', sweep: [2200, 2700], bands: [[2400, 2500]] },
-  { name: 'WIFI-DB', sweep: [2000, 6200], bands: [[2400, 2500], [5150, 5850]] },
+  {
+    name: 'WIFI-DB',
+    sweep: [2000, 6200],
+    bands: [
+      [2400, 2500],
+      [5150, 5850],
+    ],
+  },
   { name: 'SUBGHZ', sweep: [750, 1050], bands: [[860, 930]] },
 ];
 
@@ -79,12 +100,19 @@ export function generateBenchParts(count: number, firstId: number, manufacturerI
     }
     const id = firstId + k;
     parts.push({
-      id, manufacturerId: pick(manufacturerIds), mpn: `BG-${family.name}-${String(id).padStart(6, '0')}`,
+      id,
+      manufacturerId: pick(manufacturerIds),
+      mpn: `BG-${family.name}-${String(id).padStart(6, '0')}`,
       title: `Generated ${family.name} antenna ${id} (benchmark data, invented)`,
-      formFactor: pick(FORM_FACTORS), connector: pick(CONNECTORS), polarization: family.name === 'GNSS' ? pick(POLARIZATIONS) : 'linear',
-      lifecycle: rnd() < 0.9 ? 'active' : pick(LIFECYCLES), reviewState,
+      formFactor: pick(FORM_FACTORS),
+      connector: pick(CONNECTORS),
+      polarization: family.name === 'GNSS' ? pick(POLARIZATIONS) : 'linear',
+      lifecycle: rnd() < 0.9 ? 'active' : pick(LIFECYCLES),
+      reviewState,
       specBands: designs.map((d) => [Math.round(d.fromMhz), Math.round(d.toMhz), Math.round((d.edgeVswr + 0.2) * 10) / 10, Math.round(d.peakPct * 0.9)]),
-      s11, efficiency, price: (0.05 + rnd() * 8).toFixed(4),
+      s11,
+      efficiency,
+      price: (0.05 + rnd() * 8).toFixed(4),
     });
   }
   return parts;
@@ -109,17 +137,132 @@ export async function seedBenchCatalogue(dataSource: DataSource, count = 10_000)
   await dataSource.query(`INSERT IGNORE INTO manufacturers (name) VALUES ${makers.map(() => '(?)').join(',')}`, makers);
   const makerRows: { id: number; name: string }[] = await dataSource.query('SELECT id, name FROM manufacturers WHERE name IN (?)', [makers]);
   const nameOf = new Map(makerRows.map((m) => [m.id, m.name]));
-  const parts = generateBenchParts(count, firstId, makerRows.map((m) => m.id));
+  const parts = generateBenchParts(
+    count,
+    firstId,
+    makerRows.map((m) => m.id),
+  );
   const [{ revision }] = await dataSource.query('SELECT revision + 1 AS revision FROM catalogue_revision WHERE id = 1');
-  await insertRows(dataSource, 'parts', ['id', 'manufacturer_id', 'mpn', 'title', 'form_factor', 'connector', 'polarization', 'lifecycle', 'review_state', 'search_text', 'eval_ground_length_mm', 'eval_ground_width_mm', 'revision'],
-    parts.map((p) => [p.id, p.manufacturerId, p.mpn, p.title, p.formFactor, p.connector, p.polarization, p.lifecycle, p.reviewState, `${nameOf.get(p.manufacturerId)} ${p.mpn} ${p.title}`, 100, 50, revision]));
-  await insertRows(dataSource, 'part_spec_bands', ['part_id', 'from_mhz', 'to_mhz', 'max_vswr', 'efficiency_pct'], parts.flatMap((p) => p.specBands.map((b) => [p.id, ...b])));
-  await insertRows(dataSource, 'part_offers', ['part_id', 'supplier', 'currency', 'price_breaks', 'min_unit_price', 'moq', 'lead_time_days'],
-    parts.map((p) => [p.id, 'Northgate Parts Exchange', 'USD', JSON.stringify([{ quantity: 1, unitPrice: p.price }]), p.price, 1, 30]));
-  const measurementColumns = ['part_id', 'kind', 'file_name', 'content_type', 'object_key', 'size_bytes', 'sha256', 'source_format', 'reference_ohms', 'point_count', 'from_hz', 'to_hz', 'frequencies_hz', 'values_a', 'values_b'];
+  await insertRows(
+    dataSource,
+    'parts',
+    [
+      'id',
+      'manufacturer_id',
+      'mpn',
+      'title',
+      'form_factor',
+      'connector',
+      'polarization',
+      'lifecycle',
+      'review_state',
+      'search_text',
+      'eval_ground_length_mm',
+      'eval_ground_width_mm',
+      'revision',
+    ],
+    parts.map((p) => [
+      p.id,
+      p.manufacturerId,
+      p.mpn,
+      p.title,
+      p.formFactor,
+      p.connector,
+      p.polarization,
+      p.lifecycle,
+      p.reviewState,
+      `${nameOf.get(p.manufacturerId)} ${p.mpn} ${p.title}`,
+      100,
+      50,
+      revision,
+    ]),
+  );
+  await insertRows(
+    dataSource,
+    'part_spec_bands',
+    ['part_id', 'from_mhz', 'to_mhz', 'max_vswr', 'efficiency_pct'],
+    parts.flatMap((p) => p.specBands.map((b) => [p.id, ...b])),
+  );
+  await insertRows(
+    dataSource,
+    'part_offers',
+    ['part_id', 'supplier', 'currency', 'price_breaks', 'min_unit_price', 'moq', 'lead_time_days'],
+    parts.map((p) => [p.id, 'Northgate Parts Exchange', 'USD', JSON.stringify([{ quantity: 1, unitPrice: p.price }]), p.price, 1, 30]),
+  );
+  const measurementColumns = [
+    'part_id',
+    'kind',
+    'file_name',
+    'content_type',
+    'object_key',
+    'size_bytes',
+    'sha256',
+    'source_format',
+    'reference_ohms',
+    'point_count',
+    'from_hz',
+    'to_hz',
+    'frequencies_hz',
+    'values_a',
+    'values_b',
+  ];
   const none = '0'.repeat(64);
-  await insertRows(dataSource, 'part_measurements', measurementColumns, parts.flatMap((p) => (p.s11 ? [[p.id, 's11', `${p.mpn}.s1p`, 'text/plain', `bench/${p.id}.s1p`, 0, none, 'generated', 50, p.s11.f.length, p.s11.f[0], p.s11.f[p.s11.f.length - 1], packFloat64(p.s11.f), packFloat64(p.s11.re), packFloat64(p.s11.im)]] : [])));
-  await insertRows(dataSource, 'part_measurements', measurementColumns, parts.flatMap((p) => (p.efficiency ? [[p.id, 'efficiency', `${p.mpn}-efficiency.csv`, 'text/csv', `bench/${p.id}.csv`, 0, none, 'generated', null, p.efficiency.f.length, p.efficiency.f[0], p.efficiency.f[p.efficiency.f.length - 1], packFloat64(p.efficiency.f), packFloat64(p.efficiency.v), null]] : [])));
+  await insertRows(
+    dataSource,
+    'part_measurements',
+    measurementColumns,
+    parts.flatMap((p) =>
+      p.s11
+        ? [
+            [
+              p.id,
+              's11',
+              `${p.mpn}.s1p`,
+              'text/plain',
+              `bench/${p.id}.s1p`,
+              0,
+              none,
+              'generated',
+              50,
+              p.s11.f.length,
+              p.s11.f[0],
+              p.s11.f[p.s11.f.length - 1],
+              packFloat64(p.s11.f),
+              packFloat64(p.s11.re),
+              packFloat64(p.s11.im),
+            ],
+          ]
+        : [],
+    ),
+  );
+  await insertRows(
+    dataSource,
+    'part_measurements',
+    measurementColumns,
+    parts.flatMap((p) =>
+      p.efficiency
+        ? [
+            [
+              p.id,
+              'efficiency',
+              `${p.mpn}-efficiency.csv`,
+              'text/csv',
+              `bench/${p.id}.csv`,
+              0,
+              none,
+              'generated',
+              null,
+              p.efficiency.f.length,
+              p.efficiency.f[0],
+              p.efficiency.f[p.efficiency.f.length - 1],
+              packFloat64(p.efficiency.f),
+              packFloat64(p.efficiency.v),
+              null,
+            ],
+          ]
+        : [],
+    ),
+  );
   // Tell every server's search index that the catalogue changed.
   await dataSource.query('UPDATE catalogue_revision SET revision = ? WHERE id = 1', [revision]);
   return { created: parts.length, ms: Date.now() - started };

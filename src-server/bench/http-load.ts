@@ -43,7 +43,8 @@ export async function loadRoute(opts: { label: string; url: string; token?: stri
 }
 
 export function printLoad(r: LoadResult, targetP95Ms?: number): void {
-  const verdict = targetP95Ms === undefined ? '' : r.errors + r.non2xx === 0 && r.p95Ms <= targetP95Ms ? '  OK' : `  MISSES TARGET (p95 ≤ ${targetP95Ms} ms, 0 errors)`;
+  const verdict =
+    targetP95Ms === undefined ? '' : r.errors + r.non2xx === 0 && r.p95Ms <= targetP95Ms ? '  OK' : `  MISSES TARGET (p95 ≤ ${targetP95Ms} ms, 0 errors)`;
   console.log(
     `${r.label.padEnd(44)} c=${String(r.connections).padStart(2)} ${r.seconds}s  ${r.throughputPerS.toFixed(0).padStart(6)} req/s  ` +
       `p50 ${r.p50Ms.toFixed(1)} ms  p95 ${r.p95Ms.toFixed(1)} ms  p99 ${r.p99Ms.toFixed(1)} ms  errors ${r.errors}  non-2xx ${r.non2xx}${verdict}`,
@@ -56,7 +57,13 @@ export async function startServer(port: number, env: NodeJS.ProcessEnv = {}): Pr
   const url = `http://127.0.0.1:${port}`;
   const deadline = Date.now() + 60000;
   while (Date.now() < deadline) {
-    if (await fetch(`${url}/api/health`).then((r) => r.ok, () => false)) return { url, child, stop: () => child.kill() };
+    if (
+      await fetch(`${url}/api/health`).then(
+        (r) => r.ok,
+        () => false,
+      )
+    )
+      return { url, child, stop: () => child.kill() };
     await new Promise((r) => setTimeout(r, 200));
   }
   child.kill();
@@ -64,7 +71,11 @@ export async function startServer(port: number, env: NodeJS.ProcessEnv = {}): Pr
 }
 
 export async function signInForBench(url: string, email: string, password = process.env.DEMO_PASSWORD ?? 'bandwright-demo'): Promise<string> {
-  const res = await fetch(`${url}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password }) });
+  const res = await fetch(`${url}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
   if (!res.ok) throw new Error(`bench sign-in failed: ${res.status}`);
   return (await res.json()).accessToken;
 }

@@ -27,7 +27,15 @@ function benchmarkCatalogue(count: number): PartEvaluationData[] {
     radiationEfficiencyPercent: p.efficiency ? { frequenciesHz: Float64Array.from(p.efficiency.f), values: Float64Array.from(p.efficiency.v) } : null,
     peakGainDbi: null,
     averageGainDbi: null,
-    specBands: p.specBands.map(([fromMhz, toMhz, maxVswr, efficiencyPercent]) => ({ fromHz: fromMhz * 1e6, toHz: toMhz * 1e6, maxVswr, minReturnLossDb: null, efficiencyPercent, peakGainDbi: null, averageGainDbi: null })),
+    specBands: p.specBands.map(([fromMhz, toMhz, maxVswr, efficiencyPercent]) => ({
+      fromHz: fromMhz * 1e6,
+      toHz: toMhz * 1e6,
+      maxVswr,
+      minReturnLossDb: null,
+      efficiencyPercent,
+      peakGainDbi: null,
+      averageGainDbi: null,
+    })),
     evaluationGroundPlane: null,
     polarization: p.polarization.toLowerCase() as Polarization,
     reviewState: p.reviewState as ReviewState,
@@ -59,7 +67,8 @@ function plainStatus(f: Facts): CellStatus {
   let noData = false;
   const check = (needs: unknown[], fires: () => boolean, severity: 'fail' | 'marginal') => {
     if (!known(...needs)) noData = true;
-    else if (fires()) severity === 'fail' ? (fail = true) : (marginal = true);
+    else if (fires() && severity === 'fail') fail = true;
+    else if (fires()) marginal = true;
   };
   const technology = f.technology as string;
   check([f.coverageAtVswr3Pct], () => (f.coverageAtVswr3Pct as number) < 100, 'fail');
@@ -87,7 +96,9 @@ async function main(): Promise<void> {
   const generated = time(() => benchmarkCatalogue(PARTS));
   const parts = generated.result;
   const pairs = requirements.length * parts.length;
-  console.log(`catalogue: ${parts.length} generated parts (catalogue-seed-10k generator: 70 % with 201-point S11 and 41-point efficiency, the rest spec bands only) in ${generated.ms.toFixed(0)} ms; product: ${new Set(requirements.map((r) => r.radioId)).size} radios, ${requirements.length} bands; ${rules.length} rules`);
+  console.log(
+    `catalogue: ${parts.length} generated parts (catalogue-seed-10k generator: 70 % with 201-point S11 and 41-point efficiency, the rest spec bands only) in ${generated.ms.toFixed(0)} ms; product: ${new Set(requirements.map((r) => r.radioId)).size} radios, ${requirements.length} bands; ${rules.length} rules`,
+  );
 
   const compiled = new CompiledRuleSet(rules);
   const cache = new FactsCache(pairs + 1000);
@@ -100,30 +111,36 @@ async function main(): Promise<void> {
     return acc;
   };
   const approved = parts.filter((p) => p.reviewState === 'approved');
-  const biggestRadio = [...new Set(requirements.map((r) => r.radioId))].map((id) => requirements.filter((r) => r.radioId === id)).sort((a, b) => b.length - a.length)[0];
+  const biggestRadio = [...new Set(requirements.map((r) => r.radioId))]
+    .map((id) => requirements.filter((r) => r.radioId === id))
+    .sort((a, b) => b.length - a.length)[0];
   // First, as in a server just after a catalogue change: no facts cached yet, and no 300,000-cell matrix in the heap.
   const candidateCache = new FactsCache(pairs + 1000);
   const candidatesCold = time(() => rankCandidates(biggestRadio, approved, compiled, { cache: candidateCache, partKey, limit: 20 }));
   const candidatesWarm = time(() => rankCandidates(biggestRadio, approved, compiled, { cache: candidateCache, partKey, limit: 20 }));
   const best = candidatesCold.result[0];
-  console.log(`candidates for "${biggestRadio[0].radioName}" (${biggestRadio.length} bands) over ${approved.length} approved parts: cold ${candidatesCold.ms.toFixed(0)} ms, warm ${candidatesWarm.ms.toFixed(0)} ms (target < 1000 ms)`);
+  console.log(
+    `candidates for "${biggestRadio[0].radioName}" (${biggestRadio.length} bands) over ${approved.length} approved parts: cold ${candidatesCold.ms.toFixed(0)} ms, warm ${candidatesWarm.ms.toFixed(0)} ms (target < 1000 ms)`,
+  );
   console.log(`  best: ${best.mpn} ${best.status}, ${best.deciding?.text ?? 'no numeric limit'}`);
   const cold = time(() => countStatuses(evaluateMatrix(requirements, parts, compiled, { cache, partKey })));
   const warm = time(() => countStatuses(evaluateMatrix(requirements, parts, compiled, { cache, partKey })));
   const counts = cold.result;
-  console.log(`matrix ${requirements.length} bands x ${parts.length} parts = ${pairs} cells: cold (facts computed) ${cold.ms.toFixed(0)} ms (${(pairs / cold.ms * 1000).toFixed(0)} cells/s); warm (facts cached) ${warm.ms.toFixed(0)} ms (${(pairs / warm.ms * 1000).toFixed(0)} cells/s)`);
+  console.log(
+    `matrix ${requirements.length} bands x ${parts.length} parts = ${pairs} cells: cold (facts computed) ${cold.ms.toFixed(0)} ms (${((pairs / cold.ms) * 1000).toFixed(0)} cells/s); warm (facts cached) ${warm.ms.toFixed(0)} ms (${((pairs / warm.ms) * 1000).toFixed(0)} cells/s)`,
+  );
   console.log(`  statuses: ${JSON.stringify(counts)}`);
   // The same call again with the whole matrix's facts alive in the heap (garbage collection dominates then).
   const afterMatrix = time(() => rankCandidates(biggestRadio, approved, compiled, { cache: new FactsCache(pairs + 1000), partKey, limit: 20 }));
   console.log(`candidates again, cold, with the matrix's ${pairs} cached facts alive in the heap: ${afterMatrix.ms.toFixed(0)} ms`);
-
 
   // Evaluation only, same facts for both: the compiled rules against hand-written predicates.
   const facts: { row: number; facts: Facts }[] = [];
   requirements.forEach((requirement, row) => {
     const rowFacts = computeRowFacts(requirement);
     const cached = cache.forRow(requirementKey(requirement));
-    for (const part of parts) facts.push({ row, facts: cache.getOrCompute(cached, String(part.partId), () => completeFacts(computeFacts(requirement, part, rowFacts))) });
+    for (const part of parts)
+      facts.push({ row, facts: cache.getOrCompute(cached, String(part.partId), () => completeFacts(computeFacts(requirement, part, rowFacts))) });
   });
   const compiledRows = requirements.map((r) => compiled.forRow(computeRowFacts(r)));
   const rounds = 3;
@@ -139,8 +156,12 @@ async function main(): Promise<void> {
   }
   const findingSample = facts.filter((_, i) => i % 10 === 0);
   const withFindings = time(() => findingSample.reduce((n, f) => n + compiledRows[f.row].evaluate(f.facts).findings.length, 0));
-  console.log(`evaluation over ${facts.length} precomputed (part x band) facts, best of ${rounds}: compiled rules (state) ${(facts.length / evalMs * 1000).toFixed(0)} evals/s (${evalMs.toFixed(0)} ms), plain predicate loop ${(facts.length / plainMs * 1000).toFixed(0)} evals/s (${plainMs.toFixed(0)} ms); ratio ${(evalMs / plainMs).toFixed(1)}x (target <= 10x); status mismatches ${mismatches}`);
-  console.log(`  compiled rules with every finding object (messages written on first read): ${(findingSample.length / withFindings.ms * 1000).toFixed(0)} evals/s on every 10th pair`);
+  console.log(
+    `evaluation over ${facts.length} precomputed (part x band) facts, best of ${rounds}: compiled rules (state) ${((facts.length / evalMs) * 1000).toFixed(0)} evals/s (${evalMs.toFixed(0)} ms), plain predicate loop ${((facts.length / plainMs) * 1000).toFixed(0)} evals/s (${plainMs.toFixed(0)} ms); ratio ${(evalMs / plainMs).toFixed(1)}x (target <= 10x); status mismatches ${mismatches}`,
+  );
+  console.log(
+    `  compiled rules with every finding object (messages written on first read): ${((findingSample.length / withFindings.ms) * 1000).toFixed(0)} evals/s on every 10th pair`,
+  );
 
   const reference = new ReferenceEvaluator(rules);
   const sample = facts.filter((_, i) => i % Math.ceil(facts.length / REFERENCE_SAMPLE) === 0);
@@ -151,7 +172,9 @@ async function main(): Promise<void> {
       if (JSON.stringify(verdict) !== JSON.stringify(compiledRows[f.row].evaluate(f.facts))) differing += 1;
     }
   });
-  console.log(`json-rules-engine on ${sample.length} of the same pairs: ${(sample.length / referenceRun.ms * 1000).toFixed(0)} evals/s; verdicts differing from the compiled path: ${differing}`);
+  console.log(
+    `json-rules-engine on ${sample.length} of the same pairs: ${((sample.length / referenceRun.ms) * 1000).toFixed(0)} evals/s; verdicts differing from the compiled path: ${differing}`,
+  );
 }
 
 main().catch((error) => {

@@ -34,18 +34,35 @@ function synthesiseFile(): string {
     });
   }
   const formatNumber = (value: number) => Number(value.toPrecision(9)).toString();
-  return writeTouchstone({ version: 1, ports: 2, format: 'MA', frequencyUnit: 'GHz', frequenciesHz, data: columns, formatNumber, comments: ['invented benchmark data'] });
+  return writeTouchstone({
+    version: 1,
+    ports: 2,
+    format: 'MA',
+    frequencyUnit: 'GHz',
+    frequenciesHz,
+    data: columns,
+    formatNumber,
+    comments: ['invented benchmark data'],
+  });
 }
 
 const config = loadConfig();
 
 async function signIn(base: string): Promise<string> {
-  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: DEMO_EMAIL, password: config.demoPassword }) });
+  const res = await fetch(`${base}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email: DEMO_EMAIL, password: config.demoPassword }),
+  });
   if (res.status !== 200) throw new Error(`sign-in as ${DEMO_EMAIL} failed: ${res.status} ${await res.text()}`);
   return ((await res.json()) as { accessToken: string }).accessToken;
 }
 
-async function uploadOnce(base: string, token: string, file: Blob): Promise<{ ms: number; body: { points: number; matchedRanges: unknown[]; curve: unknown[] } }> {
+async function uploadOnce(
+  base: string,
+  token: string,
+  file: Blob,
+): Promise<{ ms: number; body: { points: number; matchedRanges: unknown[]; curve: unknown[] } }> {
   const form = new FormData();
   form.append('file', file, 'bench.s2p');
   const start = process.hrtime.bigint();
@@ -76,8 +93,12 @@ async function main(): Promise<void> {
     const times: number[] = [];
     for (let round = 0; round < ROUNDS; round++) times.push((await uploadOnce(base, token, file)).ms);
     const mid = median(times);
-    console.log(`file: ${POINTS} points, ${sizeMb.toFixed(2)} MB (2-port, MA, GHz); answer: ${warm.body.points} points, ${warm.body.matchedRanges.length} matched ranges, ${warm.body.curve.length} plot points`);
-    console.log(`POST /api/rf/touchstone/analyze wall time per upload (sign-in excluded): first (cold) ${warm.ms.toFixed(0)} ms; median of ${ROUNDS} ${mid.toFixed(0)} ms (min ${Math.min(...times).toFixed(0)}, max ${Math.max(...times).toFixed(0)})`);
+    console.log(
+      `file: ${POINTS} points, ${sizeMb.toFixed(2)} MB (2-port, MA, GHz); answer: ${warm.body.points} points, ${warm.body.matchedRanges.length} matched ranges, ${warm.body.curve.length} plot points`,
+    );
+    console.log(
+      `POST /api/rf/touchstone/analyze wall time per upload (sign-in excluded): first (cold) ${warm.ms.toFixed(0)} ms; median of ${ROUNDS} ${mid.toFixed(0)} ms (min ${Math.min(...times).toFixed(0)}, max ${Math.max(...times).toFixed(0)})`,
+    );
     console.log(`target < ${TARGET_MS} ms: ${mid < TARGET_MS ? 'MET' : 'NOT MET'} (${(sizeMb / (mid / 1000)).toFixed(1)} MB/s end to end)`);
   } finally {
     await app.close();

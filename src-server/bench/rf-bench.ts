@@ -52,7 +52,19 @@ function synthesiseFile(path: string): void {
   }
   // 9 significant digits, as a measurement instrument writes them.
   const formatNumber = (value: number) => Number(value.toPrecision(9)).toString();
-  writeFileSync(path, writeTouchstone({ version: 1, ports: 2, format: 'MA', frequencyUnit: 'GHz', frequenciesHz, data: columns, formatNumber, comments: ['invented benchmark data'] }));
+  writeFileSync(
+    path,
+    writeTouchstone({
+      version: 1,
+      ports: 2,
+      format: 'MA',
+      frequencyUnit: 'GHz',
+      frequenciesHz,
+      data: columns,
+      formatNumber,
+      comments: ['invented benchmark data'],
+    }),
+  );
 }
 
 function timeOursMs(bytes: Buffer): { bestMs: number; firstMs: number; ranges: number } {
@@ -80,7 +92,9 @@ function main(): void {
     const ours = timeOursMs(fileBytes);
     const oursSeconds = ours.bestMs / 1000;
     console.log(`file: ${POINTS} points, ${sizeMb.toFixed(2)} MB (2-port, MA, GHz)`);
-    console.log(`bandwright parse + matched ranges (best of ${ROUNDS}): ${ours.bestMs.toFixed(1)} ms, ${(sizeMb / oursSeconds).toFixed(1)} MB/s, ${Math.round(POINTS / oursSeconds).toLocaleString('en')} points/s, ${ours.ranges} matched ranges; first (cold) run ${ours.firstMs.toFixed(1)} ms`);
+    console.log(
+      `bandwright parse + matched ranges (best of ${ROUNDS}): ${ours.bestMs.toFixed(1)} ms, ${(sizeMb / oursSeconds).toFixed(1)} MB/s, ${Math.round(POINTS / oursSeconds).toLocaleString('en')} points/s, ${ours.ranges} matched ranges; first (cold) run ${ours.firstMs.toFixed(1)} ms`,
+    );
 
     let skrf: { best: number; points: number; version: string };
     const totalStart = process.hrtime.bigint();
@@ -95,7 +109,9 @@ function main(): void {
       return;
     }
     const totalSeconds = Number(process.hrtime.bigint() - totalStart) / 1e9;
-    console.log(`scikit-rf ${skrf.version} Network() read (best of ${ROUNDS}, inside python): ${(skrf.best * 1000).toFixed(1)} ms, ${(sizeMb / skrf.best).toFixed(1)} MB/s, ${Math.round(skrf.points / skrf.best).toLocaleString('en')} points/s`);
+    console.log(
+      `scikit-rf ${skrf.version} Network() read (best of ${ROUNDS}, inside python): ${(skrf.best * 1000).toFixed(1)} ms, ${(sizeMb / skrf.best).toFixed(1)} MB/s, ${Math.round(skrf.points / skrf.best).toLocaleString('en')} points/s`,
+    );
     console.log(`scikit-rf process total for ${ROUNDS} reads incl. interpreter start and imports: ${(totalSeconds * 1000).toFixed(0)} ms`);
     const ratio = skrf.best / oursSeconds;
     console.log(`ratio (scikit-rf read time / bandwright parse + ranges): ${ratio.toFixed(1)}x (target >= 3x) ${ratio >= 3 ? 'MET' : 'NOT MET'}`);

@@ -4,7 +4,7 @@ import { stringify } from 'csv-stringify/sync';
 const FORMULA_STARTS = new Set(['=', '+', '-', '@', '\t', '\r']);
 
 /** A whole cell that is one plain number, as a spreadsheet reads it: sign, digits, fraction, exponent. */
-const PLAIN_NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
 
 /** The text of one cell: a formula start gets a leading apostrophe, unless the cell is a plain number. */
 export function csvCellText(value: unknown): string {

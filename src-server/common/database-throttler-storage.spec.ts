@@ -20,7 +20,14 @@ describe(countHit.name, () => {
   });
 
   it('starts afresh when the window has ended or the block has run out', () => {
-    expect(countHit({ hits: 3, windowEndsAt: new Date(now - 1), blockedUntil: null }, now, 60_000, 3, 30_000).record).toMatchObject({ totalHits: 1, isBlocked: false, timeToExpire: 60 });
-    expect(countHit({ hits: 4, windowEndsAt: new Date(now + 5000), blockedUntil: new Date(now - 1) }, now, 60_000, 3, 30_000).record).toMatchObject({ totalHits: 1, isBlocked: false });
+    expect(countHit({ hits: 3, windowEndsAt: new Date(now - 1), blockedUntil: null }, now, 60_000, 3, 30_000).record).toMatchObject({
+      totalHits: 1,
+      isBlocked: false,
+      timeToExpire: 60,
+    });
+    expect(countHit({ hits: 4, windowEndsAt: new Date(now + 5000), blockedUntil: new Date(now - 1) }, now, 60_000, 3, 30_000).record).toMatchObject({
+      totalHits: 1,
+      isBlocked: false,
+    });
   });
 });

@@ -13,8 +13,7 @@ class Thing {
 }
 class ThingPatch extends PatchType(Thing) {}
 
-const refused = (cls: new () => object, plain: object) =>
-  validateSync(plainToInstance(cls, plain) as object).map((error) => error.property);
+const refused = (cls: new () => object, plain: object) => validateSync(plainToInstance(cls, plain) as object).map((error) => error.property);
 
 describe('dto-fields', () => {
   it('a PATCH leaves out anything, refuses null for required and optional fields, and keeps null for nullable ones', () => {
@@ -38,10 +37,11 @@ describe('dto-fields', () => {
 
   it('no server DTO uses PartialType directly (it lets null through to NOT NULL columns)', () => {
     const root = join(__dirname, '..');
-    const files = (dir: string): string[] => readdirSync(dir).flatMap((name) => {
-      const path = join(dir, name);
-      return statSync(path).isDirectory() ? files(path) : path.endsWith('.ts') && !path.endsWith('.spec.ts') ? [path] : [];
-    });
+    const files = (dir: string): string[] =>
+      readdirSync(dir).flatMap((name) => {
+        const path = join(dir, name);
+        return statSync(path).isDirectory() ? files(path) : path.endsWith('.ts') && !path.endsWith('.spec.ts') ? [path] : [];
+      });
     const offenders = files(root).filter((path) => !path.endsWith('dto-fields.ts') && /\bPartialType\(/.test(readFileSync(path, 'utf8')));
     expect(offenders).toEqual([]);
   });

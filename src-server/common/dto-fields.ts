@@ -2,8 +2,22 @@ import { applyDecorators, type Type } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Transform, Type as TransformType } from 'class-transformer';
 import {
-  IsBoolean, IsEmail, IsEnum, IsInt, IsISO8601, IsNumber, IsOptional, IsString, Matches, Max, MaxLength, Min, MinLength, NotEquals,
-  ValidateBy, ValidateIf,
+  IsBoolean,
+  IsEmail,
+  IsEnum,
+  IsInt,
+  IsISO8601,
+  IsNumber,
+  IsOptional,
+  IsString,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  MinLength,
+  NotEquals,
+  ValidateBy,
+  ValidateIf,
 } from 'class-validator';
 
 /** One-line DTO fields: validation, query-string coercion and OpenAPI documentation together. */
@@ -25,7 +39,10 @@ interface FieldOptions {
 export function OptionalField(opts: { nullable?: boolean } = {}) {
   return opts.nullable
     ? IsOptional()
-    : applyDecorators(ValidateIf((_, value) => value !== undefined), NotEquals(null, { message: 'must not be null' }));
+    : applyDecorators(
+        ValidateIf((_, value) => value !== undefined),
+        NotEquals(null, { message: 'must not be null' }),
+      );
 }
 
 function doc(opts: FieldOptions, extra: Record<string, unknown>) {

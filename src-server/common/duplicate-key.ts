@@ -10,7 +10,11 @@ const UNIQUE_KEYS: Record<string, { code: string; field?: string; message: strin
   uq_products_code: { code: 'PRODUCT_CODE_TAKEN', field: 'code', message: 'Another product already has this code' },
   uq_parts_manufacturer_mpn: { code: 'PART_MPN_TAKEN', field: 'mpn', message: 'This manufacturer already has a part with this MPN' },
   uq_assignment_radio_part: { code: 'ASSIGNMENT_EXISTS', field: 'partId', message: 'This part is already on the shortlist of this radio' },
-  uq_assignment_one_choice: { code: 'ASSIGNMENT_CHOICE_TAKEN', field: 'partId', message: 'Another part was chosen for this radio at the same time; reload and try again' },
+  uq_assignment_one_choice: {
+    code: 'ASSIGNMENT_CHOICE_TAKEN',
+    field: 'partId',
+    message: 'Another part was chosen for this radio at the same time; reload and try again',
+  },
 };
 
 /** The unique key a MariaDB ER_DUP_ENTRY names ("… for key 'uq_x'" or "'table.uq_x'"), or null for any other error. */

@@ -4,7 +4,13 @@ import { DomainError } from './domain-error';
 /** Deeper than any body the API accepts (a rule's conditions are the deepest); keeps every recursive walk far from the stack limit. */
 export const MAX_JSON_DEPTH = 64;
 
-const OPEN_OBJECT = 0x7b, OPEN_ARRAY = 0x5b, CLOSE_OBJECT = 0x7d, CLOSE_ARRAY = 0x5d, QUOTE = 0x22, BACKSLASH = 0x5c, LETTER_U = 0x75;
+const OPEN_OBJECT = 0x7b,
+  OPEN_ARRAY = 0x5b,
+  CLOSE_OBJECT = 0x7d,
+  CLOSE_ARRAY = 0x5d,
+  QUOTE = 0x22,
+  BACKSLASH = 0x5c,
+  LETTER_U = 0x75;
 
 const isHighSurrogate = (unit: number) => unit >= 0xd800 && unit <= 0xdbff;
 const isLowSurrogate = (unit: number) => unit >= 0xdc00 && unit <= 0xdfff;
@@ -13,7 +19,7 @@ const isLowSurrogate = (unit: number) => unit >= 0xdc00 && unit <= 0xdfff;
 function unicodeEscapeAt(text: string, at: number): number {
   if (text.charCodeAt(at) !== BACKSLASH || text.charCodeAt(at + 1) !== LETTER_U) return -1;
   const hex = text.slice(at + 2, at + 6);
-  return hex.length === 4 && /^[0-9a-fA-F]{4}$/.test(hex) ? Number.parseInt(hex, 16) : -1;
+  return hex.length === 4 && /^[0-9a-f]{4}$/i.test(hex) ? Number.parseInt(hex, 16) : -1;
 }
 
 /**
@@ -63,4 +69,3 @@ export function verifyJsonBody(_req: IncomingMessage, _res: ServerResponse, body
   }
   checkJsonText(text);
 }
-

@@ -18,10 +18,22 @@ export class JsonLogger implements LoggerService {
     (level === 'error' || level === 'fatal' ? process.stderr : process.stdout).write(`${JSON.stringify(line)}\n`);
   }
 
-  log(message: unknown, ...rest: unknown[]) { this.write('log', message, rest); }
-  warn(message: unknown, ...rest: unknown[]) { this.write('warn', message, rest); }
-  error(message: unknown, ...rest: unknown[]) { this.write('error', message, rest); }
-  fatal(message: unknown, ...rest: unknown[]) { this.write('fatal', message, rest); }
-  debug(message: unknown, ...rest: unknown[]) { this.write('debug', message, rest); }
-  verbose(message: unknown, ...rest: unknown[]) { this.write('verbose', message, rest); }
+  log(message: unknown, ...rest: unknown[]) {
+    this.write('log', message, rest);
+  }
+  warn(message: unknown, ...rest: unknown[]) {
+    this.write('warn', message, rest);
+  }
+  error(message: unknown, ...rest: unknown[]) {
+    this.write('error', message, rest);
+  }
+  fatal(message: unknown, ...rest: unknown[]) {
+    this.write('fatal', message, rest);
+  }
+  debug(message: unknown, ...rest: unknown[]) {
+    this.write('debug', message, rest);
+  }
+  verbose(message: unknown, ...rest: unknown[]) {
+    this.write('verbose', message, rest);
+  }
 }

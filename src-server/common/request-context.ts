@@ -8,7 +8,7 @@ export const requestContext = new AsyncLocalStorage<{ requestId: string }>();
 
 export const currentRequestId = (): string | undefined => requestContext.getStore()?.requestId;
 
-const INCOMING_ID = /^[A-Za-z0-9._-]{8,64}$/;
+const INCOMING_ID = /^[\w.-]{8,64}$/;
 const accessLog = new Logger('Http');
 
 /** Takes a well-formed X-Request-Id from a proxy or makes one, echoes it, and logs one line per request. */

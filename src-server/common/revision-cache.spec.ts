@@ -113,7 +113,11 @@ describe('RevisionCache', () => {
   it('does not keep a failed load: the next caller loads again', async () => {
     const cache = new RevisionCache<string>(10);
     await expect(cache.getOrLoad('part 1', 1, () => Promise.reject(new Error('database gone')))).rejects.toThrow('database gone');
-    await expect(cache.getOrLoad('part 1', 1, () => { throw new Error('thrown at once'); })).rejects.toThrow('thrown at once');
+    await expect(
+      cache.getOrLoad('part 1', 1, () => {
+        throw new Error('thrown at once');
+      }),
+    ).rejects.toThrow('thrown at once');
     expect(await cache.getOrLoad('part 1', 1, async () => 'loaded')).toBe('loaded');
   });
 });

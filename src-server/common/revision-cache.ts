@@ -16,7 +16,7 @@
 import { LRUCache } from 'lru-cache';
 
 /** A Map of at most `capacity` entries; the least recently used leaves first (lru-cache does the bookkeeping). */
-export class LruMap<K extends {}, V extends {}> {
+export class LruMap<K extends NonNullable<unknown>, V extends NonNullable<unknown>> {
   private readonly entries: LRUCache<K, V>;
 
   constructor(readonly capacity: number) {

@@ -22,7 +22,13 @@ describe(touchstoneHttpError.name, () => {
 
   it('lets any other error through unchanged', () => {
     const other = new RangeError('not a Touchstone problem');
-    expect(thrownBy(() => withTouchstoneStatus(() => { throw other; }))).toBe(other);
+    expect(
+      thrownBy(() =>
+        withTouchstoneStatus(() => {
+          throw other;
+        }),
+      ),
+    ).toBe(other);
     expect(withTouchstoneStatus(() => 7)).toBe(7);
   });
 });

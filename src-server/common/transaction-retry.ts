@@ -13,7 +13,10 @@ export const isRetryableLockError = (error: unknown): boolean => {
  * (or `retryOn` says so, e.g. an idempotent insert that lost a race and will find the winner's row next time).
  */
 export async function transactionWithRetry<T>(
-  dataSource: DataSource, work: (manager: EntityManager) => Promise<T>, attempts = 4, retryOn: (error: unknown) => boolean = isRetryableLockError,
+  dataSource: DataSource,
+  work: (manager: EntityManager) => Promise<T>,
+  attempts = 4,
+  retryOn: (error: unknown) => boolean = isRetryableLockError,
 ): Promise<T> {
   for (let attempt = 1; ; attempt += 1) {
     try {

@@ -12,7 +12,15 @@ import { PartAssignment } from './compatibility.entities';
 import type { AssignmentDto } from './dto/matrix.dto';
 
 const assignmentDto = (a: PartAssignment, part: { mpn: string; title: string } | undefined): AssignmentDto => ({
-  id: a.id, productId: a.productId, radioId: a.radioId, partId: a.partId, mpn: part?.mpn ?? '', title: part?.title ?? '', state: a.state, note: a.note, updatedAt: a.updatedAt.toISOString(),
+  id: a.id,
+  productId: a.productId,
+  radioId: a.radioId,
+  partId: a.partId,
+  mpn: part?.mpn ?? '',
+  title: part?.title ?? '',
+  state: a.state,
+  note: a.note,
+  updatedAt: a.updatedAt.toISOString(),
 });
 
 const ASSIGNMENT_ATTEMPTS = 6;
@@ -33,55 +41,104 @@ export class AssignmentsService {
     await this.products.getWithRadios(productId);
     const rows = await this.dataSource.getRepository(PartAssignment).find({ where: { productId }, order: { radioId: 'ASC', id: 'ASC' } });
     const parts = await this.partData.getPartData(rows.map((r) => r.partId));
-    return rows.map((r) => assignmentDto(r, parts.find((p) => p.id === r.partId)));
+    return rows.map((r) =>
+      assignmentDto(
+        r,
+        parts.find((p) => p.id === r.partId),
+      ),
+    );
   }
 
   async shortlist(productId: number, radioId: number, partId: number, note: string | undefined, actor: AuthUser): Promise<AssignmentDto[]> {
     await this.checkRadioAndPart(productId, radioId, partId);
-    await transactionWithRetry(this.dataSource, async (manager) => {
-      const existing = await manager.findOne(PartAssignment, { where: { radioId, partId }, lock: { mode: 'pessimistic_write' } });
-      if (existing) return;
-      await manager.insert(PartAssignment, { productId, radioId, partId, state: 'shortlisted', note: note ?? null, createdById: actor.id });
-      await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'shortlisted', userId: actor.id, changes: { radioId, partId } });
-    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
+    await transactionWithRetry(
+      this.dataSource,
+      async (manager) => {
+        const existing = await manager.findOne(PartAssignment, { where: { radioId, partId }, lock: { mode: 'pessimistic_write' } });
+        if (existing) return;
+        await manager.insert(PartAssignment, { productId, radioId, partId, state: 'shortlisted', note: note ?? null, createdById: actor.id });
+        await this.audit.record(manager, {
+          entityType: 'product-assignment',
+          entityId: productId,
+          action: 'shortlisted',
+          userId: actor.id,
+          changes: { radioId, partId },
+        });
+      },
+      ASSIGNMENT_ATTEMPTS,
+      retryAssignmentRace,
+    );
     return this.listAssignments(productId);
   }
 
   async removeFromShortlist(productId: number, radioId: number, partId: number, actor: AuthUser): Promise<AssignmentDto[]> {
     await this.products.assertExists(productId);
-    await transactionWithRetry(this.dataSource, async (manager) => {
-      const existing = await manager.findOne(PartAssignment, { where: { productId, radioId, partId }, lock: { mode: 'pessimistic_write' } });
-      if (!existing) throw new DomainError('ASSIGNMENT_NOT_FOUND', `part ${partId} is not on the shortlist of radio ${radioId}`, 404);
-      await manager.delete(PartAssignment, { id: existing.id });
-      await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'removed', userId: actor.id, changes: { radioId, partId, state: existing.state } });
-    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
+    await transactionWithRetry(
+      this.dataSource,
+      async (manager) => {
+        const existing = await manager.findOne(PartAssignment, { where: { productId, radioId, partId }, lock: { mode: 'pessimistic_write' } });
+        if (!existing) throw new DomainError('ASSIGNMENT_NOT_FOUND', `part ${partId} is not on the shortlist of radio ${radioId}`, 404);
+        await manager.delete(PartAssignment, { id: existing.id });
+        await this.audit.record(manager, {
+          entityType: 'product-assignment',
+          entityId: productId,
+          action: 'removed',
+          userId: actor.id,
+          changes: { radioId, partId, state: existing.state },
+        });
+      },
+      ASSIGNMENT_ATTEMPTS,
+      retryAssignmentRace,
+    );
     return this.listAssignments(productId);
   }
 
   /** One chosen part per radio: the previous choice goes back to the shortlist, in the same transaction. */
   async choose(productId: number, radioId: number, partId: number, actor: AuthUser): Promise<AssignmentDto[]> {
     await this.checkRadioAndPart(productId, radioId, partId);
-    await transactionWithRetry(this.dataSource, async (manager) => {
-      const rows = await manager.find(PartAssignment, { where: { radioId }, lock: { mode: 'pessimistic_write' } });
-      const previous = rows.find((r) => r.state === 'chosen');
-      if (previous?.partId === partId) return;
-      if (previous) await manager.update(PartAssignment, { id: previous.id }, { state: 'shortlisted' });
-      const existing = rows.find((r) => r.partId === partId);
-      if (existing) await manager.update(PartAssignment, { id: existing.id }, { state: 'chosen' });
-      else await manager.insert(PartAssignment, { productId, radioId, partId, state: 'chosen', createdById: actor.id });
-      await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'chosen', userId: actor.id, changes: { radioId, partId: [previous?.partId ?? null, partId] } });
-    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
+    await transactionWithRetry(
+      this.dataSource,
+      async (manager) => {
+        const rows = await manager.find(PartAssignment, { where: { radioId }, lock: { mode: 'pessimistic_write' } });
+        const previous = rows.find((r) => r.state === 'chosen');
+        if (previous?.partId === partId) return;
+        if (previous) await manager.update(PartAssignment, { id: previous.id }, { state: 'shortlisted' });
+        const existing = rows.find((r) => r.partId === partId);
+        if (existing) await manager.update(PartAssignment, { id: existing.id }, { state: 'chosen' });
+        else await manager.insert(PartAssignment, { productId, radioId, partId, state: 'chosen', createdById: actor.id });
+        await this.audit.record(manager, {
+          entityType: 'product-assignment',
+          entityId: productId,
+          action: 'chosen',
+          userId: actor.id,
+          changes: { radioId, partId: [previous?.partId ?? null, partId] },
+        });
+      },
+      ASSIGNMENT_ATTEMPTS,
+      retryAssignmentRace,
+    );
     return this.listAssignments(productId);
   }
 
   async clearChoice(productId: number, radioId: number, actor: AuthUser): Promise<AssignmentDto[]> {
     await this.products.assertExists(productId);
-    await transactionWithRetry(this.dataSource, async (manager) => {
-      const chosen = await manager.findOne(PartAssignment, { where: { productId, radioId, state: 'chosen' }, lock: { mode: 'pessimistic_write' } });
-      if (!chosen) throw new DomainError('ASSIGNMENT_NOT_FOUND', `radio ${radioId} has no chosen part`, 404);
-      await manager.update(PartAssignment, { id: chosen.id }, { state: 'shortlisted' });
-      await this.audit.record(manager, { entityType: 'product-assignment', entityId: productId, action: 'unchosen', userId: actor.id, changes: { radioId, partId: chosen.partId } });
-    }, ASSIGNMENT_ATTEMPTS, retryAssignmentRace);
+    await transactionWithRetry(
+      this.dataSource,
+      async (manager) => {
+        const chosen = await manager.findOne(PartAssignment, { where: { productId, radioId, state: 'chosen' }, lock: { mode: 'pessimistic_write' } });
+        if (!chosen) throw new DomainError('ASSIGNMENT_NOT_FOUND', `radio ${radioId} has no chosen part`, 404);
+        await manager.update(PartAssignment, { id: chosen.id }, { state: 'shortlisted' });
+        await this.audit.record(manager, {
+          entityType: 'product-assignment',
+          entityId: productId,
+          action: 'unchosen',
+          userId: actor.id,
+          changes: { radioId, partId: chosen.partId },
+        });
+      },
+      ASSIGNMENT_ATTEMPTS,
+      retryAssignmentRace,
+    );
     return this.listAssignments(productId);
   }
 

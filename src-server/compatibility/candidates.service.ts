@@ -27,7 +27,12 @@ export class CandidatesService {
     const revision = await this.inputs.currentRevision();
     const catalogue = await this.inputs.approvedCatalogue(revision);
     const { compiled } = await this.rules.currentRuleSet();
-    const ranked = rankCandidates(requirements, catalogue.map((c) => c.data), compiled, { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey, limit });
+    const ranked = rankCandidates(
+      requirements,
+      catalogue.map((c) => c.data),
+      compiled,
+      { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey, limit },
+    );
     const manufacturers = new Map(catalogue.map((c) => [c.data.partId, c.manufacturer]));
     const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { radioId } });
     return {
@@ -36,8 +41,14 @@ export class CandidatesService {
       radioName: radio.name,
       evaluated: catalogue.length,
       candidates: ranked.map((c) => ({
-        partId: c.partId, mpn: c.mpn, title: c.title, manufacturer: manufacturers.get(c.partId) ?? '', status: c.status, marginDb: c.marginDb,
-        deciding: c.deciding, assignment: assignments.find((a) => a.partId === c.partId)?.state ?? null,
+        partId: c.partId,
+        mpn: c.mpn,
+        title: c.title,
+        manufacturer: manufacturers.get(c.partId) ?? '',
+        status: c.status,
+        marginDb: c.marginDb,
+        deciding: c.deciding,
+        assignment: assignments.find((a) => a.partId === c.partId)?.state ?? null,
         bands: c.bands.map((b) => ({ ...b, findings: [...b.findings] })),
       })),
     };

@@ -67,7 +67,12 @@ export class CompatibilityController {
   @Roles('engineer', 'admin')
   @ApiOperation({ summary: 'Shortlist a part for a radio (engineer, admin)' })
   @ApiOkResponse({ type: [AssignmentDto] })
-  shortlist(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Body() body: ShortlistDto, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
+  shortlist(
+    @Param('id', ParseIdPipe) id: number,
+    @Param('radioId', ParseIdPipe) radioId: number,
+    @Body() body: ShortlistDto,
+    @CurrentUser() actor: AuthUser,
+  ): Promise<AssignmentDto[]> {
     return this.partAssignments.shortlist(id, radioId, body.partId, body.note, actor);
   }
 
@@ -75,7 +80,12 @@ export class CompatibilityController {
   @Roles('engineer', 'admin')
   @ApiOperation({ summary: "Take a part off a radio's shortlist (and its choice, if it was chosen) (engineer, admin)" })
   @ApiOkResponse({ type: [AssignmentDto] })
-  unshortlist(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Param('partId', ParseIdPipe) partId: number, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
+  unshortlist(
+    @Param('id', ParseIdPipe) id: number,
+    @Param('radioId', ParseIdPipe) radioId: number,
+    @Param('partId', ParseIdPipe) partId: number,
+    @CurrentUser() actor: AuthUser,
+  ): Promise<AssignmentDto[]> {
     return this.partAssignments.removeFromShortlist(id, radioId, partId, actor);
   }
 
@@ -83,7 +93,12 @@ export class CompatibilityController {
   @Roles('engineer', 'admin')
   @ApiOperation({ summary: 'Choose the part for a radio; the previous choice returns to the shortlist (engineer, admin)' })
   @ApiOkResponse({ type: [AssignmentDto] })
-  choose(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Body() body: ChoosePartDto, @CurrentUser() actor: AuthUser): Promise<AssignmentDto[]> {
+  choose(
+    @Param('id', ParseIdPipe) id: number,
+    @Param('radioId', ParseIdPipe) radioId: number,
+    @Body() body: ChoosePartDto,
+    @CurrentUser() actor: AuthUser,
+  ): Promise<AssignmentDto[]> {
     return this.partAssignments.choose(id, radioId, body.partId, actor);
   }
 

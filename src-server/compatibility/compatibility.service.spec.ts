@@ -29,19 +29,44 @@ const PART = 7;
 /** Before the write: a draft with no data. After: the same part, approved, with a datasheet band over BLE. */
 function part(version: 'old' | 'new'): PartEvaluationData {
   return {
-    id: PART, manufacturer: 'Testbench', mpn: `MPN-${version}`, title: 'chip', formFactor: 'chip', connector: 'solder-pad', polarization: 'linear',
-    lifecycle: 'active', reviewState: version === 'old' ? 'draft' : 'approved', nominalImpedanceOhms: 50, evalGroundPlane: null,
-    specBands: version === 'old' ? [] : [{ fromHz: 2.3e9, toHz: 2.6e9, maxVswr: 2, minReturnLossDb: null, efficiencyPct: 60, peakGainDbi: 1, averageGainDbi: null }],
-    s11: null, efficiency: null, peakGain: null, averageGain: null,
+    id: PART,
+    manufacturer: 'Testbench',
+    mpn: `MPN-${version}`,
+    title: 'chip',
+    formFactor: 'chip',
+    connector: 'solder-pad',
+    polarization: 'linear',
+    lifecycle: 'active',
+    reviewState: version === 'old' ? 'draft' : 'approved',
+    nominalImpedanceOhms: 50,
+    evalGroundPlane: null,
+    specBands:
+      version === 'old' ? [] : [{ fromHz: 2.3e9, toHz: 2.6e9, maxVswr: 2, minReturnLossDb: null, efficiencyPct: 60, peakGainDbi: 1, averageGainDbi: null }],
+    s11: null,
+    efficiency: null,
+    peakGain: null,
+    averageGain: null,
   } as PartEvaluationData;
 }
 
 const product = {
-  id: PRODUCT, name: 'probe', targetRegions: ['EU'], groundPlaneLengthMm: 60, groundPlaneWidthMm: 30,
-  radios: [{
-    id: RADIO, name: 'BLE', technology: 'ble', receiveOnly: false, transmitPowerDbm: 8, polarization: 'linear', feedLossDb: 0,
-    bands: [{ band: { id: 3, designation: 'BLE 2.4 GHz', ranges: [{ fromMhz: 2400, toMhz: 2483.5, role: 'tdd' }] }, certifiedMaxGainDbi: null }],
-  }],
+  id: PRODUCT,
+  name: 'probe',
+  targetRegions: ['EU'],
+  groundPlaneLengthMm: 60,
+  groundPlaneWidthMm: 30,
+  radios: [
+    {
+      id: RADIO,
+      name: 'BLE',
+      technology: 'ble',
+      receiveOnly: false,
+      transmitPowerDbm: 8,
+      polarization: 'linear',
+      feedLossDb: 0,
+      bands: [{ band: { id: 3, designation: 'BLE 2.4 GHz', ranges: [{ fromMhz: 2400, toMhz: 2483.5, role: 'tdd' }] }, certifiedMaxGainDbi: null }],
+    },
+  ],
 };
 
 function harness() {

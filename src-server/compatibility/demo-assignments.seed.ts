@@ -31,7 +31,15 @@ export async function seedDemoAssignments(dataSource: DataSource): Promise<strin
         skipped += 1;
         continue;
       }
-      await manager.insert(PartAssignment, { id: a.id, productId: a.productId, radioId: a.radioId, partId: a.partId, state: a.state, note: a.note, createdById: null });
+      await manager.insert(PartAssignment, {
+        id: a.id,
+        productId: a.productId,
+        radioId: a.radioId,
+        partId: a.partId,
+        state: a.state,
+        note: a.note,
+        createdById: null,
+      });
       created += 1;
     }
   });

@@ -30,7 +30,15 @@ function toEvaluationData(part: CataloguePart): PartColumn {
       radiationEfficiencyPercent: part.efficiency?.curve ?? null,
       peakGainDbi: part.peakGain?.curve ?? null,
       averageGainDbi: part.averageGain?.curve ?? null,
-      specBands: part.specBands.map((b) => ({ fromHz: b.fromHz, toHz: b.toHz, maxVswr: b.maxVswr, minReturnLossDb: b.minReturnLossDb, efficiencyPercent: b.efficiencyPct, peakGainDbi: b.peakGainDbi, averageGainDbi: b.averageGainDbi })),
+      specBands: part.specBands.map((b) => ({
+        fromHz: b.fromHz,
+        toHz: b.toHz,
+        maxVswr: b.maxVswr,
+        minReturnLossDb: b.minReturnLossDb,
+        efficiencyPercent: b.efficiencyPct,
+        peakGainDbi: b.peakGainDbi,
+        averageGainDbi: b.averageGainDbi,
+      })),
       evaluationGroundPlane: board && board.lengthMm !== null && board.widthMm !== null ? { lengthMm: board.lengthMm, widthMm: board.widthMm } : null,
       polarization: part.polarization.toLowerCase() as Polarization,
       reviewState: part.reviewState,
@@ -100,7 +108,16 @@ export class EvaluationInputsService {
     const limits = await this.limits.list();
     return requirementsOf(
       product,
-      limits.map((l) => ({ region: l.region, fromHz: l.fromMhz * MHZ, toHz: l.toMhz * MHZ, kind: l.kind, valueDbm: l.valueDbm, source: l.source, gainThresholdDbi: l.gainThresholdDbi, reductionDbPerDb: l.reductionDbPerDb })),
+      limits.map((l) => ({
+        region: l.region,
+        fromHz: l.fromMhz * MHZ,
+        toHz: l.toMhz * MHZ,
+        kind: l.kind,
+        valueDbm: l.valueDbm,
+        source: l.source,
+        gainThresholdDbi: l.gainThresholdDbi,
+        reductionDbPerDb: l.reductionDbPerDb,
+      })),
       limits.map((l) => l.region),
     );
   }

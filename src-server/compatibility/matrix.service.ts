@@ -60,19 +60,34 @@ export class MatrixService {
   }
 
   /** Everything read here is read after `revision` was, so the matrix is at least that new. */
-  private async computeMatrix(productId: number, partIds: number[] | undefined, ruleSet: { compiled: CompiledRuleSet; signature: string }, revision: number): Promise<MatrixDto> {
+  private async computeMatrix(
+    productId: number,
+    partIds: number[] | undefined,
+    ruleSet: { compiled: CompiledRuleSet; signature: string },
+    revision: number,
+  ): Promise<MatrixDto> {
     const product = await this.products.getWithRadios(productId);
     const ids = partIds ?? (await this.inputs.assignedPartIds(productId));
     const columns = await this.inputs.partColumns(ids, revision);
     const requirements = await this.inputs.requirements(product);
-    const matrix = evaluateMatrix(requirements, columns.map((c) => c.data), ruleSet.compiled, { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey });
+    const matrix = evaluateMatrix(
+      requirements,
+      columns.map((c) => c.data),
+      ruleSet.compiled,
+      { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey },
+    );
     const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { productId } });
     return {
       productId,
       productName: product.name,
       rows: matrix.rows.map((r) => ({ ...r, ranges: r.ranges.map((x) => ({ ...x })) })),
       columns: columns.map((c): MatrixColumnDto => ({
-        partId: c.data.partId, mpn: c.data.mpn, title: c.data.title, manufacturer: c.manufacturer, reviewState: c.data.reviewState, lifecycle: c.data.lifecycle,
+        partId: c.data.partId,
+        mpn: c.data.mpn,
+        title: c.data.title,
+        manufacturer: c.manufacturer,
+        reviewState: c.data.reviewState,
+        lifecycle: c.data.lifecycle,
         assignments: assignments.filter((a) => a.partId === c.data.partId).map((a) => ({ radioId: a.radioId, state: a.state })),
       })),
       cells: matrix.cells.map((c) => ({ ...c, findings: [...c.findings] })),

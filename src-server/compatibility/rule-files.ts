@@ -6,7 +6,10 @@ import { type RuleDefinition, validateRuleDefinition } from './engine/rule-defin
 export const RULES_DIR = resolve('rules');
 
 export class RuleFileError extends Error {
-  constructor(readonly file: string, readonly problems: { path: string; message: string }[]) {
+  constructor(
+    readonly file: string,
+    readonly problems: { path: string; message: string }[],
+  ) {
     super(`${file}: ${problems.map((p) => (p.path ? `${p.path}: ${p.message}` : p.message)).join('; ')}`);
     this.name = 'RuleFileError';
   }
@@ -15,7 +18,9 @@ export class RuleFileError extends Error {
 /** The file-based rules, sorted by id; a bad file stops the load, naming the file and the place in it. */
 export function loadRuleFiles(directory: string = RULES_DIR): RuleDefinition[] {
   const rules: RuleDefinition[] = [];
-  for (const name of readdirSync(directory).filter((n) => n.endsWith('.json')).sort()) {
+  for (const name of readdirSync(directory)
+    .filter((n) => n.endsWith('.json'))
+    .sort()) {
     const file = join(directory, name);
     let parsed: unknown;
     try {

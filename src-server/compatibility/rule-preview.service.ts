@@ -34,8 +34,16 @@ export class RulePreviewService {
         const row = old.rows[cell.row];
         const column = old.columns[cell.column];
         changes.push({
-          productId: summary.id, productName: summary.name, radioId: row.radioId, radioName: row.radioName, bandId: row.bandId, designation: row.designation,
-          partId: column.partId, mpn: column.mpn, before: cell.status, after: changed.status,
+          productId: summary.id,
+          productName: summary.name,
+          radioId: row.radioId,
+          radioName: row.radioName,
+          bandId: row.bandId,
+          designation: row.designation,
+          partId: column.partId,
+          mpn: column.mpn,
+          before: cell.status,
+          after: changed.status,
           findings: changed.findings.filter((f) => f.ruleId === rule.id).map((f) => f.message),
         });
       });

@@ -2,7 +2,17 @@ import { Body, Controller, Get, HttpCode, Param, Post, Put } from '@nestjs/commo
 import { ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { RulePreviewService } from './rule-preview.service';
-import { PreviewRuleDto, RuleDefinitionBodyDto, RuleDetailDto, RulePreviewDto, RuleSummaryDto, RuleValidationDto, RuleVersionDto, SetRuleEnabledDto, UpdateRuleDto } from './dto/rule.dto';
+import {
+  PreviewRuleDto,
+  RuleDefinitionBodyDto,
+  RuleDetailDto,
+  RulePreviewDto,
+  RuleSummaryDto,
+  RuleValidationDto,
+  RuleVersionDto,
+  SetRuleEnabledDto,
+  UpdateRuleDto,
+} from './dto/rule.dto';
 import { ParseRuleIdPipe } from './rule-id.pipe';
 import { RulesService } from './rules.service';
 

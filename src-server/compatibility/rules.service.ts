@@ -44,9 +44,15 @@ export class RulesService {
     const rules: EffectiveRule[] = [];
     for (const [id, rule] of this.fileRules) {
       const edit = byKey.get(id);
-      rules.push(edit ? { rule: { ...edit.definition, enabled: edit.enabled, version: edit.version }, origin: 'file-edited', updatedAt: edit.updatedAt } : { rule, origin: 'file', updatedAt: null });
+      rules.push(
+        edit
+          ? { rule: { ...edit.definition, enabled: edit.enabled, version: edit.version }, origin: 'file-edited', updatedAt: edit.updatedAt }
+          : { rule, origin: 'file', updatedAt: null },
+      );
     }
-    for (const s of stored) if (!this.fileRules.has(s.ruleKey)) rules.push({ rule: { ...s.definition, enabled: s.enabled, version: s.version }, origin: 'admin', updatedAt: s.updatedAt });
+    for (const s of stored)
+      if (!this.fileRules.has(s.ruleKey))
+        rules.push({ rule: { ...s.definition, enabled: s.enabled, version: s.version }, origin: 'admin', updatedAt: s.updatedAt });
     return rules.sort((a, b) => (a.rule.id < b.rule.id ? -1 : a.rule.id > b.rule.id ? 1 : 0));
   }
 
@@ -106,7 +112,8 @@ export class RulesService {
       const current = await this.lockCurrent(manager, id);
       if (current.version !== expectedVersion) throw new VersionConflictError('rule', id, expectedVersion, current.version);
       const draft = definition as Partial<RuleDefinition>;
-      if (draft.id !== undefined && draft.id !== id) throw new ValidationFailedError([{ field: 'definition.id', message: `a rule keeps its id; this one is "${id}"` }]);
+      if (draft.id !== undefined && draft.id !== id)
+        throw new ValidationFailedError([{ field: 'definition.id', message: `a rule keeps its id; this one is "${id}"` }]);
       const rule = this.checked({ ...(definition as object), id, version: current.version + 1 });
       await this.saveNewVersion(manager, current, rule, 'edited', actor);
     });
@@ -124,13 +131,21 @@ export class RulesService {
   }
 
   async versions(id: string): Promise<RuleVersionDto[]> {
-    const rows = await this.dataSource.getRepository(StoredRuleVersion).find({ where: { ruleKey: id }, relations: { changedBy: true }, order: { version: 'DESC' } });
+    const rows = await this.dataSource
+      .getRepository(StoredRuleVersion)
+      .find({ where: { ruleKey: id }, relations: { changedBy: true }, order: { version: 'DESC' } });
     if (rows.length === 0) {
       const file = this.fileRules.get(id);
       if (!file) throw new NotFoundError('rule', id);
       return [{ version: file.version, action: 'file', changedBy: null, at: null, definition: file as unknown as Record<string, unknown> }];
     }
-    return rows.map((r) => ({ version: r.version, action: r.action, changedBy: r.changedBy?.name ?? null, at: r.action === 'file' ? null : r.createdAt.toISOString(), definition: r.definition as unknown as Record<string, unknown> }));
+    return rows.map((r) => ({
+      version: r.version,
+      action: r.action,
+      changedBy: r.changedBy?.name ?? null,
+      at: r.action === 'file' ? null : r.createdAt.toISOString(),
+      definition: r.definition as unknown as Record<string, unknown>,
+    }));
   }
 
   private async lockCurrent(manager: EntityManager, id: string): Promise<{ rule: RuleDefinition; version: number; stored: StoredRule | null }> {
@@ -141,12 +156,25 @@ export class RulesService {
     return { rule: file, version: file.version, stored: null };
   }
 
-  private async saveNewVersion(manager: EntityManager, current: { rule: RuleDefinition; stored: StoredRule | null }, rule: RuleDefinition, action: RuleVersionAction, actor: AuthUser): Promise<void> {
+  private async saveNewVersion(
+    manager: EntityManager,
+    current: { rule: RuleDefinition; stored: StoredRule | null },
+    rule: RuleDefinition,
+    action: RuleVersionAction,
+    actor: AuthUser,
+  ): Promise<void> {
     if (current.stored) {
       await manager.update(StoredRule, { ruleKey: rule.id }, { definition: rule, version: rule.version, enabled: rule.enabled, updatedById: actor.id });
     } else {
       // First change to a file rule: keep the file's own version in the history, then the edit.
-      await manager.insert(StoredRule, { ruleKey: rule.id, origin: 'file', definition: rule, version: rule.version, enabled: rule.enabled, updatedById: actor.id });
+      await manager.insert(StoredRule, {
+        ruleKey: rule.id,
+        origin: 'file',
+        definition: rule,
+        version: rule.version,
+        enabled: rule.enabled,
+        updatedById: actor.id,
+      });
       await manager.insert(StoredRuleVersion, { ruleKey: rule.id, version: current.rule.version, action: 'file', definition: current.rule, changedById: null });
     }
     await this.recordVersion(manager, rule, action, actor);
@@ -154,7 +182,13 @@ export class RulesService {
 
   private async recordVersion(manager: EntityManager, rule: RuleDefinition, action: RuleVersionAction, actor: AuthUser): Promise<void> {
     await manager.insert(StoredRuleVersion, { ruleKey: rule.id, version: rule.version, action, definition: rule, changedById: actor.id });
-    await this.audit.record(manager, { entityType: 'rule', entityId: rule.id, action, userId: actor.id, changes: { version: rule.version, enabled: rule.enabled } });
+    await this.audit.record(manager, {
+      entityType: 'rule',
+      entityId: rule.id,
+      action,
+      userId: actor.id,
+      changes: { version: rule.version, enabled: rule.enabled },
+    });
   }
 }
 
@@ -164,5 +198,15 @@ export function rulesSignature(rules: readonly RuleDefinition[]): string {
 
 function toSummary(e: EffectiveRule): RuleSummaryDto {
   const r = e.rule;
-  return { id: r.id, title: r.title, description: r.description, severity: r.severity, enabled: r.enabled, version: r.version, source: r.source, origin: e.origin, updatedAt: e.updatedAt ? e.updatedAt.toISOString() : null };
+  return {
+    id: r.id,
+    title: r.title,
+    description: r.description,
+    severity: r.severity,
+    enabled: r.enabled,
+    version: r.version,
+    source: r.source,
+    origin: e.origin,
+    updatedAt: e.updatedAt ? e.updatedAt.toISOString() : null,
+  };
 }

@@ -70,7 +70,16 @@ describe(loadConfig.name, () => {
       expect(refusedKeys({ JWT_SECRET: published })).toEqual(['JWT_SECRET']);
       expect(refusedKeys({ NODE_ENV: 'development', HOST: '0.0.0.0', JWT_SECRET: published })).toEqual(['JWT_SECRET']);
       expect(refusedKeys({ NODE_ENV: 'test', HOST: '10.0.0.5', JWT_SECRET: published })).toEqual(['JWT_SECRET']);
-      expect(refusedKeys({ NODE_ENV: 'production', HOST: '127.0.0.1', JWT_SECRET: published, DB_PASSWORD: randomSecret(), S3_ACCESS_KEY_ID: 'own', S3_SECRET_ACCESS_KEY: randomSecret() })).toEqual(['JWT_SECRET']);
+      expect(
+        refusedKeys({
+          NODE_ENV: 'production',
+          HOST: '127.0.0.1',
+          JWT_SECRET: published,
+          DB_PASSWORD: randomSecret(),
+          S3_ACCESS_KEY_ID: 'own',
+          S3_SECRET_ACCESS_KEY: randomSecret(),
+        }),
+      ).toEqual(['JWT_SECRET']);
     });
 
     it.each(['127.0.0.1', '127.0.0.2', 'localhost', '::1'])('accepts a published value in development and tests on loopback %s', (host) => {
@@ -100,13 +109,19 @@ describe(loadConfig.name, () => {
     it('lists every secret printed in the repository as published', () => {
       // Any 32+ character word on a line that mentions JWT_SECRET (or the development default) in code, scripts and docs.
       const root = resolve(__dirname, '../..');
-      const files = [...walk(join(root, 'src-server')), ...walk(join(root, 'scripts')), ...walk(join(root, 'test')), join(root, '.env.example'), join(root, 'README.md'), join(root, 'DEVELOPERS.md')]
-        .filter((file) => file !== __filename);
+      const files = [
+        ...walk(join(root, 'src-server')),
+        ...walk(join(root, 'scripts')),
+        ...walk(join(root, 'test')),
+        join(root, '.env.example'),
+        join(root, 'README.md'),
+        join(root, 'DEVELOPERS.md'),
+      ].filter((file) => file !== __filename);
       const printed = new Set<string>();
       for (const file of files) {
         for (const line of readFileSync(file, 'utf8').split('\n')) {
           if (!line.includes('JWT_SECRET') && !line.includes('DEV_JWT_SECRET')) continue;
-          for (const word of line.match(/[A-Za-z0-9][A-Za-z0-9_-]{31,}/g) ?? []) if (!/^[A-Z0-9_]+$/.test(word)) printed.add(word);
+          for (const word of line.match(/[A-Z0-9][\w-]{31,}/gi) ?? []) if (!/^[A-Z0-9_]+$/.test(word)) printed.add(word);
         }
       }
       expect(printed.size).toBeGreaterThanOrEqual(3);
@@ -136,7 +151,10 @@ describe(loadConfig.name, () => {
     });
 
     it('keeps the local defaults working in development and tests', () => {
-      expect(loadConfig({ NODE_ENV: 'development', SEED_DEMO_ACCOUNTS: '1' })).toMatchObject({ db: { password: 'bandwright-local' }, demoPassword: 'bandwright-demo' });
+      expect(loadConfig({ NODE_ENV: 'development', SEED_DEMO_ACCOUNTS: '1' })).toMatchObject({
+        db: { password: 'bandwright-local' },
+        demoPassword: 'bandwright-demo',
+      });
       expect(refusedKeys({ NODE_ENV: 'test', JWT_SECRET: randomSecret(), SEED_DEMO_ACCOUNTS: '1' })).toEqual([]);
     });
 
@@ -161,6 +179,6 @@ function* walk(dir: string): Generator<string> {
   for (const name of readdirSync(dir)) {
     const path = join(dir, name);
     if (statSync(path).isDirectory()) yield* walk(path);
-    else if (/\.(ts|js|sh|md)$/.test(name)) yield path;
+    else if (/\.(?:ts|js|sh|md)$/.test(name)) yield path;
   }
 }

@@ -22,7 +22,9 @@ const entryPoint = { name: 'main.ts', text: readFileSync(join(SERVER, 'main.ts')
 
 /** Every leaf of the configuration as a dotted path, e.g. `db.host`. */
 function leafPaths(value: object, prefix = ''): string[] {
-  return Object.entries(value).flatMap(([key, inner]) => (inner !== null && typeof inner === 'object' ? leafPaths(inner, `${prefix}${key}.`) : [`${prefix}${key}`]));
+  return Object.entries(value).flatMap(([key, inner]) =>
+    inner !== null && typeof inner === 'object' ? leafPaths(inner, `${prefix}${key}.`) : [`${prefix}${key}`],
+  );
 }
 
 describe('configuration is loaded once and injected', () => {
@@ -33,7 +35,9 @@ describe('configuration is loaded once and injected', () => {
 
   it('every configuration key is read by the app', () => {
     // main.ts reads where to listen; the rest is read by the modules it configures.
-    const readPaths = new Set(appSources.concat(entryPoint).flatMap(({ text }) => [...text.matchAll(/config\.[\w.]+/g)].map(([read]) => read.slice('config.'.length))));
+    const readPaths = new Set(
+      appSources.concat(entryPoint).flatMap(({ text }) => [...text.matchAll(/config\.[\w.]+/g)].map(([read]) => read.slice('config.'.length))),
+    );
     expect(leafPaths(loadConfig({ NODE_ENV: 'development' })).filter((path) => !readPaths.has(path))).toEqual([]);
   });
 });

@@ -14,4 +14,22 @@ import { Radio, RadioBand } from '../products/radio.entity';
 import { COMPATIBILITY_ENTITIES } from '../compatibility/compatibility.entities';
 
 /** Every TypeORM entity; add new domains here. */
-export const ENTITIES = [User, UserToken, AuditEntry, OutboxMail, LoginAttempt, RateLimitCounter, PendingUpload, ...PART_ENTITIES, Band, BandRange, BandSet, BandSetMember, RegulatoryLimit, Product, Radio, RadioBand, ...COMPATIBILITY_ENTITIES];
+export const ENTITIES = [
+  User,
+  UserToken,
+  AuditEntry,
+  OutboxMail,
+  LoginAttempt,
+  RateLimitCounter,
+  PendingUpload,
+  ...PART_ENTITIES,
+  Band,
+  BandRange,
+  BandSet,
+  BandSetMember,
+  RegulatoryLimit,
+  Product,
+  Radio,
+  RadioBand,
+  ...COMPATIBILITY_ENTITIES,
+];

@@ -26,7 +26,10 @@ const withTimeout = <T>(promise: Promise<T>, ms: number): Promise<T> =>
 
 /** "down" when the check throws, times out or answers false. */
 const probe = (check: () => Promise<unknown>): Promise<ComponentState> =>
-  withTimeout(check(), PROBE_TIMEOUT_MS).then((result) => (result === false ? 'down' : 'up'), () => 'down');
+  withTimeout(check(), PROBE_TIMEOUT_MS).then(
+    (result) => (result === false ? 'down' : 'up'),
+    () => 'down',
+  );
 
 @ApiTags('health')
 @Controller('health')
@@ -52,7 +55,9 @@ export class HealthController {
       this.probeShared('mail', () => this.mail.isUp()),
     ]);
     const components = { db, storage, mail };
-    const down = Object.entries(components).filter(([, state]) => state === 'down').map(([name]) => name);
+    const down = Object.entries(components)
+      .filter(([, state]) => state === 'down')
+      .map(([name]) => name);
     // Without the database nothing works; without storage or mail the rest still serves, so a load balancer keeps it.
     if (db !== 'up') res.status(503);
     return { status: down.length === 0 ? 'ok' : 'degraded', ...components, down };

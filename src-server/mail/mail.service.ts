@@ -58,7 +58,10 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
 
   /** Whether the SMTP relay answers (connect and greeting); used by /api/health. */
   async isUp(): Promise<boolean> {
-    return this.transport.verify().then(() => true, () => false);
+    return this.transport.verify().then(
+      () => true,
+      () => false,
+    );
   }
 
   /** Queues the message; with a manager it commits or rolls back together with the caller's change. */
@@ -105,7 +108,14 @@ export class MailService implements OnApplicationBootstrap, OnModuleDestroy {
       await this.transport.sendMail({ from: this.config.smtp.from, to: row.toAddresses, subject: row.subject, text: row.body });
       await this.dataSource.getRepository(OutboxMail).update(
         { id },
-        { status: 'sent', sentAt: new Date(), attempts: row.attempts + 1, claimedUntil: null, lastError: null, ...(row.carriesLinkToken ? { body: REMOVED_BODY } : {}) },
+        {
+          status: 'sent',
+          sentAt: new Date(),
+          attempts: row.attempts + 1,
+          claimedUntil: null,
+          lastError: null,
+          ...(row.carriesLinkToken ? { body: REMOVED_BODY } : {}),
+        },
       );
     } catch (error) {
       const attempts = row.attempts + 1;

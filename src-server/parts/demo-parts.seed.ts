@@ -53,49 +53,98 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
   for (const p of demo) {
     if (existing.has(p.id)) continue;
     const input: CreatePartDto = {
-      manufacturer: p.manufacturer, mpn: p.mpn, title: p.title, formFactor: p.formFactor, connector: p.connector, polarization: p.polarization,
-      mounting: p.mounting, lengthMm: p.size[0], widthMm: p.size[1], heightMm: p.size[2], evalGroundLengthMm: p.evalGround?.[0] ?? null,
-      evalGroundWidthMm: p.evalGround?.[1] ?? null, tempMinC: -40, tempMaxC: 85, lifecycle: p.lifecycle, notes: p.notes,
+      manufacturer: p.manufacturer,
+      mpn: p.mpn,
+      title: p.title,
+      formFactor: p.formFactor,
+      connector: p.connector,
+      polarization: p.polarization,
+      mounting: p.mounting,
+      lengthMm: p.size[0],
+      widthMm: p.size[1],
+      heightMm: p.size[2],
+      evalGroundLengthMm: p.evalGround?.[0] ?? null,
+      evalGroundWidthMm: p.evalGround?.[1] ?? null,
+      tempMinC: -40,
+      tempMaxC: 85,
+      lifecycle: p.lifecycle,
+      notes: p.notes,
       specBands: p.specBands.map(([fromMhz, toMhz, maxVswr, efficiencyPct, peakGainDbi]) => ({ fromMhz, toMhz, maxVswr, efficiencyPct, peakGainDbi })),
     };
     await dataSource.transaction(async (manager) => {
       await parts.createIn(manager, input, engineerId, 'seeded', p.id);
       for (const offer of p.offers) {
-        await sourcing.createOfferIn(manager, p.id, {
-          supplier: offer.supplier, currency: offer.currency, sku: `${offer.supplier.slice(0, 3).toUpperCase()}-${p.mpn}`, moq: offer.moq,
-          leadTimeDays: offer.leadTimeDays, lastCheckedOn: '2025-11-03', priceBreaks: offer.breaks.map(([quantity, unitPrice]) => ({ quantity, unitPrice })),
-        }, null);
+        await sourcing.createOfferIn(
+          manager,
+          p.id,
+          {
+            supplier: offer.supplier,
+            currency: offer.currency,
+            sku: `${offer.supplier.slice(0, 3).toUpperCase()}-${p.mpn}`,
+            moq: offer.moq,
+            leadTimeDays: offer.leadTimeDays,
+            lastCheckedOn: '2025-11-03',
+            priceBreaks: offer.breaks.map(([quantity, unitPrice]) => ({ quantity, unitPrice })),
+          },
+          null,
+        );
       }
     });
     for (const curve of p.curves) {
       const buffer = readFileSync(join(root, curve.file));
       const file = { originalname: curve.file.split('/').pop()!, mimetype: curve.kind === 's11' ? 'text/plain' : 'text/csv', size: buffer.length, buffer };
       // Radiated data is taken on the evaluation board; flex and external parts in free space.
-      const input = { kind: curve.kind, groundLengthMm: p.evalGround?.[0], groundWidthMm: p.evalGround?.[1], conditions: p.evalGround ? 'Evaluation board, anechoic chamber (invented demo data)' : 'Free space, anechoic chamber (invented demo data)' };
+      const input = {
+        kind: curve.kind,
+        groundLengthMm: p.evalGround?.[0],
+        groundWidthMm: p.evalGround?.[1],
+        conditions: p.evalGround ? 'Evaluation board, anechoic chamber (invented demo data)' : 'Free space, anechoic chamber (invented demo data)',
+      };
       await measurements.store(p.id, file, input, measurements.parse(file, input), null);
     }
     for (const doc of p.documents) {
       const buffer = readFileSync(join(root, doc.file));
-      await documents.upload(p.id, { originalname: doc.file.split('/').pop()!, mimetype: 'application/pdf', size: buffer.length, buffer }, { kind: doc.kind, title: doc.title }, null);
+      await documents.upload(
+        p.id,
+        { originalname: doc.file.split('/').pop()!, mimetype: 'application/pdf', size: buffer.length, buffer },
+        { kind: doc.kind, title: doc.title },
+        null,
+      );
     }
     if (p.reviewState !== 'draft') {
       await dataSource.transaction(async (manager) => {
         const submittedAt = new Date('2025-10-20T09:00:00Z');
         const reviewed = p.reviewState !== 'in-review';
-        await manager.update(Part, { id: p.id }, {
-          reviewState: p.reviewState, submittedById: engineerId, submittedAt, version: reviewed ? 3 : 2,
-          reviewedById: reviewed ? adminId : null, reviewedAt: reviewed ? new Date('2025-10-27T14:00:00Z') : null,
-          reviewComment: p.reviewState === 'restricted' || p.reviewState === 'retired' ? p.notes : null,
-        });
+        await manager.update(
+          Part,
+          { id: p.id },
+          {
+            reviewState: p.reviewState,
+            submittedById: engineerId,
+            submittedAt,
+            version: reviewed ? 3 : 2,
+            reviewedById: reviewed ? adminId : null,
+            reviewedAt: reviewed ? new Date('2025-10-27T14:00:00Z') : null,
+            reviewComment: p.reviewState === 'restricted' || p.reviewState === 'retired' ? p.notes : null,
+          },
+        );
         await touchPart(manager, p.id);
-        await audit.record(manager, { entityType: 'part', entityId: p.id, action: 'seeded-state', userId: null, changes: { reviewState: ['draft', p.reviewState] } });
+        await audit.record(manager, {
+          entityType: 'part',
+          entityId: p.id,
+          action: 'seeded-state',
+          userId: null,
+          changes: { reviewState: ['draft', p.reviewState] },
+        });
       });
     }
     created.push(p);
   }
   for (const p of created) {
     for (const other of p.alternates ?? []) {
-      await dataSource.transaction((manager) => sourcing.linkIn(manager, p.id, other, { kind: 'second-source', note: 'Same footprint and cable exit (demo)' }, null));
+      await dataSource.transaction((manager) =>
+        sourcing.linkIn(manager, p.id, other, { kind: 'second-source', note: 'Same footprint and cable exit (demo)' }, null),
+      );
     }
   }
   await ledger.onModuleDestroy();

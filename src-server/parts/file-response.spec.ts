@@ -12,7 +12,7 @@ describe(storedFileName.name, () => {
 });
 
 describe(downloadOf.name, () => {
-  const dispositionOf = (fileName: string) => (downloadOf({ body: Buffer.from('x'), fileName, contentType: 'text/plain' }).getHeaders().disposition as string);
+  const dispositionOf = (fileName: string) => downloadOf({ body: Buffer.from('x'), fileName, contentType: 'text/plain' }).getHeaders().disposition as string;
 
   it('percent-encodes the RFC 5987 characters encodeURIComponent leaves alone', () => {
     expect(dispositionOf("l'été (2)*.s1p")).toBe(`attachment; filename="l'_t_ (2)*.s1p"; filename*=UTF-8''l%27%C3%A9t%C3%A9%20%282%29%2A.s1p`);

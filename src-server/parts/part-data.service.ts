@@ -72,13 +72,17 @@ export class PartDataService {
     const rows: Row[] = await manager.query(
       `SELECT p.id, m.name AS manufacturer, p.mpn, p.title, p.form_factor, p.connector, p.polarization, p.lifecycle, p.review_state,
               p.nominal_impedance_ohms, p.eval_ground_length_mm, p.eval_ground_width_mm
-         FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id WHERE ${where} ORDER BY p.id`, params);
+         FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id WHERE ${where} ORDER BY p.id`,
+      params,
+    );
     if (rows.length === 0) return [];
     const ids = rows.map((r) => r.id);
     const [bands, curves] = await Promise.all([
       manager.query(
         `SELECT part_id, from_mhz AS fromMhz, to_mhz AS toMhz, max_vswr AS maxVswr, min_return_loss_db AS minReturnLossDb, efficiency_pct AS efficiencyPct,
-                peak_gain_dbi AS peakGainDbi, average_gain_dbi AS averageGainDbi FROM part_spec_bands WHERE part_id IN (?) ORDER BY part_id, from_mhz`, [ids]),
+                peak_gain_dbi AS peakGainDbi, average_gain_dbi AS averageGainDbi FROM part_spec_bands WHERE part_id IN (?) ORDER BY part_id, from_mhz`,
+        [ids],
+      ),
       loadCurrentCurves(manager, { ids }),
     ]);
     const bandsBy = new Map<number, SpecBandClaim[]>();
@@ -88,9 +92,18 @@ export class PartDataService {
     return rows.map((r) => {
       const c = curves.get(r.id);
       return {
-        id: r.id, manufacturer: r.manufacturer, mpn: r.mpn, title: r.title, formFactor: r.form_factor, connector: r.connector, polarization: r.polarization,
-        lifecycle: r.lifecycle, reviewState: r.review_state, nominalImpedanceOhms: r.nominal_impedance_ohms,
-        evalGroundPlane: r.eval_ground_length_mm !== null || r.eval_ground_width_mm !== null ? { lengthMm: r.eval_ground_length_mm, widthMm: r.eval_ground_width_mm } : null,
+        id: r.id,
+        manufacturer: r.manufacturer,
+        mpn: r.mpn,
+        title: r.title,
+        formFactor: r.form_factor,
+        connector: r.connector,
+        polarization: r.polarization,
+        lifecycle: r.lifecycle,
+        reviewState: r.review_state,
+        nominalImpedanceOhms: r.nominal_impedance_ohms,
+        evalGroundPlane:
+          r.eval_ground_length_mm !== null || r.eval_ground_width_mm !== null ? { lengthMm: r.eval_ground_length_mm, widthMm: r.eval_ground_width_mm } : null,
         specBands: bandsBy.get(r.id) ?? [],
         s11: c?.s11 ? { measurementId: c.s11.measurementId, groundPlane: c.s11.groundPlane, curve: c.s11.curve } : null,
         efficiency: c?.efficiency ?? null,

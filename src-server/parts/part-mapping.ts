@@ -9,13 +9,26 @@ export const userRef = (user: User | null | undefined): UserRefDto | null => (us
 export const iso = (date: Date | null | undefined): string | null => (date ? date.toISOString() : null);
 
 export const specBandDto = (band: SpecBand): SpecBandDto => ({
-  id: band.id, fromMhz: band.fromMhz, toMhz: band.toMhz, maxVswr: band.maxVswr, minReturnLossDb: band.minReturnLossDb,
-  efficiencyPct: band.efficiencyPct, peakGainDbi: band.peakGainDbi, averageGainDbi: band.averageGainDbi,
+  id: band.id,
+  fromMhz: band.fromMhz,
+  toMhz: band.toMhz,
+  maxVswr: band.maxVswr,
+  minReturnLossDb: band.minReturnLossDb,
+  efficiencyPct: band.efficiencyPct,
+  peakGainDbi: band.peakGainDbi,
+  averageGainDbi: band.averageGainDbi,
 });
 
-export const specBandClaim = (band: Pick<SpecBand, 'fromMhz' | 'toMhz' | 'maxVswr' | 'minReturnLossDb' | 'efficiencyPct' | 'peakGainDbi' | 'averageGainDbi'>): SpecBandClaim => ({
-  fromHz: band.fromMhz * 1e6, toHz: band.toMhz * 1e6, maxVswr: band.maxVswr ?? null, minReturnLossDb: band.minReturnLossDb ?? null,
-  efficiencyPct: band.efficiencyPct ?? null, peakGainDbi: band.peakGainDbi ?? null, averageGainDbi: band.averageGainDbi ?? null,
+export const specBandClaim = (
+  band: Pick<SpecBand, 'fromMhz' | 'toMhz' | 'maxVswr' | 'minReturnLossDb' | 'efficiencyPct' | 'peakGainDbi' | 'averageGainDbi'>,
+): SpecBandClaim => ({
+  fromHz: band.fromMhz * 1e6,
+  toHz: band.toMhz * 1e6,
+  maxVswr: band.maxVswr ?? null,
+  minReturnLossDb: band.minReturnLossDb ?? null,
+  efficiencyPct: band.efficiencyPct ?? null,
+  peakGainDbi: band.peakGainDbi ?? null,
+  averageGainDbi: band.averageGainDbi ?? null,
 });
 
 /** The text the search matches: manufacturer, MPN, title and notes. */

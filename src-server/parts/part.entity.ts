@@ -3,8 +3,16 @@ import { User } from '../users/user.entity';
 import { Manufacturer } from './manufacturer.entity';
 import { SpecBand } from './spec-band.entity';
 import {
-  CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, POLARIZATIONS, type PartPolarization,
-  REVIEW_STATES, type ReviewState,
+  CONNECTORS,
+  type Connector,
+  FORM_FACTORS,
+  type FormFactor,
+  LIFECYCLES,
+  type Lifecycle,
+  POLARIZATIONS,
+  type PartPolarization,
+  REVIEW_STATES,
+  type ReviewState,
 } from './part.types';
 
 /** Doubles are read back as numbers; mysql2 returns DECIMAL/BIGINT as strings otherwise. */

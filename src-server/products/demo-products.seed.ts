@@ -31,11 +31,14 @@ export async function seedDemoProducts(dataSource: DataSource): Promise<string> 
       await manager.insert(Product, { ...product, createdById: creator?.id ?? null });
       for (const { bands, ...radio } of radios) {
         await manager.insert(Radio, { ...radio, productId: product.id });
-        await manager.insert(RadioBand, bands.map((b, position) => {
-          const bandId = byDesignation.get(b.band);
-          if (!bandId) throw new Error(`catalog-seed/products.json: radio "${radio.name}" names unknown band "${b.band}"`);
-          return { radioId: radio.id, bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi, position };
-        }));
+        await manager.insert(
+          RadioBand,
+          bands.map((b, position) => {
+            const bandId = byDesignation.get(b.band);
+            if (!bandId) throw new Error(`catalog-seed/products.json: radio "${radio.name}" names unknown band "${b.band}"`);
+            return { radioId: radio.id, bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi, position };
+          }),
+        );
       }
       created += 1;
     }

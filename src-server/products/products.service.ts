@@ -76,7 +76,9 @@ export class ProductsService {
   /** The live products, or (deleted: true) the deleted ones, most recently deleted first. */
   async list(options: { deleted?: boolean } = {}): Promise<ProductSummaryDto[]> {
     const products = options.deleted
-      ? await this.dataSource.getRepository(Product).find({ where: { deletedAt: Not(IsNull()) }, withDeleted: true, relations: PEOPLE, order: { deletedAt: 'DESC', id: 'DESC' } })
+      ? await this.dataSource
+          .getRepository(Product)
+          .find({ where: { deletedAt: Not(IsNull()) }, withDeleted: true, relations: PEOPLE, order: { deletedAt: 'DESC', id: 'DESC' } })
       : await this.dataSource.getRepository(Product).find({ relations: PEOPLE, order: { name: 'ASC', id: 'ASC' } });
     const radios = products.length
       ? await this.dataSource.getRepository(Radio).find({ select: { productId: true, technology: true }, where: { productId: In(products.map((p) => p.id)) } })
@@ -134,12 +136,20 @@ export class ProductsService {
     await this.dataSource.transaction(async (manager) => {
       const before = await this.lockProduct(manager, id, undefined);
       if (actor.role !== 'admin' && before.createdById !== actor.id) {
-        throw new DomainError('PRODUCT_DELETE_FORBIDDEN', 'Only the engineer who created this product, or an admin, may delete it', 403, { createdById: before.createdById });
+        throw new DomainError('PRODUCT_DELETE_FORBIDDEN', 'Only the engineer who created this product, or an admin, may delete it', 403, {
+          createdById: before.createdById,
+        });
       }
       if (version !== undefined && version !== before.version) throw new VersionConflictError('product', id, version, before.version);
       const radioCount = await manager.countBy(Radio, { productId: id });
       await manager.update(Product, { id }, { deletedAt: new Date(), deletedById: actor.id });
-      await this.audit.record(manager, { entityType: 'product', entityId: id, action: 'deleted', userId: actor.id, changes: { name: before.name, code: before.code, radioCount } });
+      await this.audit.record(manager, {
+        entityType: 'product',
+        entityId: id,
+        action: 'deleted',
+        userId: actor.id,
+        changes: { name: before.name, code: before.code, radioCount },
+      });
     });
   }
 
@@ -151,7 +161,10 @@ export class ProductsService {
       if (!product.deletedAt) throw new DomainError('PRODUCT_NOT_DELETED', `product ${id} is not deleted; there is nothing to restore`, 409);
       await manager.update(Product, { id }, { deletedAt: null, deletedById: null });
       await this.audit.record(manager, {
-        entityType: 'product', entityId: id, action: 'restored', userId: actor.id,
+        entityType: 'product',
+        entityId: id,
+        action: 'restored',
+        userId: actor.id,
         changes: { name: product.name, code: product.code, deletedAt: product.deletedAt.toISOString(), deletedById: product.deletedById },
       });
       return this.getWithRadios(id, manager);
@@ -194,8 +207,16 @@ export class ProductsService {
       const radioId = Number(inserted.identifiers[0].id);
       await this.writeRadioBands(manager, radioId, bands);
       await this.audit.record(manager, {
-        entityType: 'product', entityId: productId, action: 'radio-created', userId: actor.id,
-        changes: { radioId, ...fields, transmitPowerDbm, bands: bandsForAudit(bands.map((b) => ({ designation: library.get(b.bandId)!.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null }))) },
+        entityType: 'product',
+        entityId: productId,
+        action: 'radio-created',
+        userId: actor.id,
+        changes: {
+          radioId,
+          ...fields,
+          transmitPowerDbm,
+          bands: bandsForAudit(bands.map((b) => ({ designation: library.get(b.bandId)!.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null }))),
+        },
       });
       return this.getRadio(productId, radioId, manager);
     });
@@ -228,7 +249,13 @@ export class ProductsService {
           await manager.delete(RadioBand, { radioId });
           await this.writeRadioBands(manager, radioId, nextBands);
         }
-        await this.audit.record(manager, { entityType: 'product', entityId: productId, action: 'radio-updated', userId: actor.id, changes: { radioId, radio: before.name, ...changes } });
+        await this.audit.record(manager, {
+          entityType: 'product',
+          entityId: productId,
+          action: 'radio-updated',
+          userId: actor.id,
+          changes: { radioId, radio: before.name, ...changes },
+        });
       }
       return this.getRadio(productId, radioId, manager);
     });
@@ -238,7 +265,13 @@ export class ProductsService {
     await this.dataSource.transaction(async (manager) => {
       const before = await this.lockRadio(manager, productId, radioId, version);
       await manager.delete(Radio, { id: radioId });
-      await this.audit.record(manager, { entityType: 'product', entityId: productId, action: 'radio-deleted', userId: actor.id, changes: { radioId, radio: before.name, technology: before.technology } });
+      await this.audit.record(manager, {
+        entityType: 'product',
+        entityId: productId,
+        action: 'radio-deleted',
+        userId: actor.id,
+        changes: { radioId, radio: before.name, technology: before.technology },
+      });
     });
   }
 
@@ -268,14 +301,26 @@ export class ProductsService {
   }
 
   private async writeRadioBands(manager: EntityManager, radioId: number, bands: { bandId: number; certifiedMaxGainDbi?: number | null }[]): Promise<void> {
-    await manager.insert(RadioBand, bands.map((b, position) => ({ radioId, bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null, position })));
+    await manager.insert(
+      RadioBand,
+      bands.map((b, position) => ({ radioId, bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null, position })),
+    );
   }
 
   /** A deleted product keeps its code until it is restored, so a restore never meets a duplicate. */
   private async assertCodeFree(manager: EntityManager, code: string, exceptId?: number): Promise<void> {
-    const holder = await manager.findOne(Product, { select: { id: true, deletedAt: true }, where: { code, ...(exceptId ? { id: Not(exceptId) } : {}) }, withDeleted: true });
+    const holder = await manager.findOne(Product, {
+      select: { id: true, deletedAt: true },
+      where: { code, ...(exceptId ? { id: Not(exceptId) } : {}) },
+      withDeleted: true,
+    });
     if (holder?.deletedAt) {
-      throw new DomainError('PRODUCT_CODE_TAKEN_BY_DELETED', `The deleted product ${holder.id} still has the code ${code}; choose another code or ask an admin to restore it`, 409, { field: 'code', productId: holder.id });
+      throw new DomainError(
+        'PRODUCT_CODE_TAKEN_BY_DELETED',
+        `The deleted product ${holder.id} still has the code ${code}; choose another code or ask an admin to restore it`,
+        409,
+        { field: 'code', productId: holder.id },
+      );
     }
     if (holder) throw new DomainError('PRODUCT_CODE_TAKEN', `Another product already has the code ${code}`, 409, { field: 'code' });
   }

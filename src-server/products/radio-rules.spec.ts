@@ -16,10 +16,14 @@ describe(radioProblems.name, () => {
   });
 
   it('names every problem by its field path, in order', () => {
-    const problems = radioProblems({
-      technology: 'gnss', transmitPowerDbm: 10,
-      bands: [{ bandId: 501, certifiedMaxGainDbi: 2 }, { bandId: 601 }, { bandId: 999 }, { bandId: 501 }],
-    }, library);
+    const problems = radioProblems(
+      {
+        technology: 'gnss',
+        transmitPowerDbm: 10,
+        bands: [{ bandId: 501, certifiedMaxGainDbi: 2 }, { bandId: 601 }, { bandId: 999 }, { bandId: 501 }],
+      },
+      library,
+    );
     expect(problems.map((p) => p.field)).toEqual(['transmitPowerDbm', 'bands.0.certifiedMaxGainDbi', 'bands.1.bandId', 'bands.2.bandId', 'bands.3.bandId']);
     expect(problems[2].message).toMatch(/wifi band; a gnss radio takes only gnss bands/);
     expect(problems[3].message).toMatch(/999/);

@@ -41,7 +41,10 @@ export function radioProblems(draft: RadioDraft, library: ReadonlyMap<number, Kn
       return;
     }
     if (band.technology !== draft.technology) {
-      problems.push({ field: `bands.${i}.bandId`, message: `${band.designation} is a ${band.technology} band; a ${draft.technology} radio takes only ${draft.technology} bands` });
+      problems.push({
+        field: `bands.${i}.bandId`,
+        message: `${band.designation} is a ${band.technology} band; a ${draft.technology} radio takes only ${draft.technology} bands`,
+      });
     }
     if (seen.has(band.id)) problems.push({ field: `bands.${i}.bandId`, message: `${band.designation} is listed twice` });
     seen.add(band.id);

@@ -5,7 +5,7 @@ import { RegulatoryLimit } from './regulatory-limit.entity';
 
 /** Regulatory limits from catalog-seed/regulatory-limits.json (47 CFR 15.247, ETSI EN 300 328 / 300 220-2 / 301 893, ERC/REC 70-03) with stable ids. */
 export async function seedRegulatoryLimits(dataSource: DataSource): Promise<string> {
-  const seed: (Omit<RegulatoryLimit, 'createdAt' | 'updatedAt'>)[] = JSON.parse(readFileSync(resolve('catalog-seed/regulatory-limits.json'), 'utf8'));
+  const seed: Omit<RegulatoryLimit, 'createdAt' | 'updatedAt'>[] = JSON.parse(readFileSync(resolve('catalog-seed/regulatory-limits.json'), 'utf8'));
   let created = 0;
   await dataSource.transaction(async (manager) => {
     for (const limit of seed) {

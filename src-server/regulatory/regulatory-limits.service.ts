@@ -8,13 +8,37 @@ import { checkFrequencyWindow } from '../bands/bands.service';
 import { RegulatoryLimit } from './regulatory-limit.entity';
 import type { CreateRegulatoryLimitDto, RegulatoryLimitDto, RegulatoryLimitQueryDto, UpdateRegulatoryLimitDto } from './dto/regulatory-limit.dto';
 
-const FIELDS: (keyof RegulatoryLimit)[] = ['region', 'title', 'fromMhz', 'toMhz', 'kind', 'valueDbm', 'valueText', 'gainThresholdDbi', 'reductionDbPerDb', 'conditions', 'source', 'note'];
+const FIELDS: (keyof RegulatoryLimit)[] = [
+  'region',
+  'title',
+  'fromMhz',
+  'toMhz',
+  'kind',
+  'valueDbm',
+  'valueText',
+  'gainThresholdDbi',
+  'reductionDbPerDb',
+  'conditions',
+  'source',
+  'note',
+];
 
 function toDto(limit: RegulatoryLimit): RegulatoryLimitDto {
   return {
-    id: limit.id, region: limit.region, title: limit.title, fromMhz: limit.fromMhz, toMhz: limit.toMhz, kind: limit.kind,
-    valueDbm: limit.valueDbm, valueText: limit.valueText, gainThresholdDbi: limit.gainThresholdDbi, reductionDbPerDb: limit.reductionDbPerDb,
-    conditions: limit.conditions, source: limit.source, note: limit.note, updatedAt: limit.updatedAt.toISOString(),
+    id: limit.id,
+    region: limit.region,
+    title: limit.title,
+    fromMhz: limit.fromMhz,
+    toMhz: limit.toMhz,
+    kind: limit.kind,
+    valueDbm: limit.valueDbm,
+    valueText: limit.valueText,
+    gainThresholdDbi: limit.gainThresholdDbi,
+    reductionDbPerDb: limit.reductionDbPerDb,
+    conditions: limit.conditions,
+    source: limit.source,
+    note: limit.note,
+    updatedAt: limit.updatedAt.toISOString(),
   };
 }
 
@@ -70,7 +94,13 @@ export class RegulatoryLimitsService {
   }
 
   async create(input: CreateRegulatoryLimitDto, actor: AuthUser): Promise<RegulatoryLimitDto> {
-    const row = { ...input, gainThresholdDbi: input.gainThresholdDbi ?? null, reductionDbPerDb: input.reductionDbPerDb ?? null, conditions: input.conditions ?? null, note: input.note ?? null };
+    const row = {
+      ...input,
+      gainThresholdDbi: input.gainThresholdDbi ?? null,
+      reductionDbPerDb: input.reductionDbPerDb ?? null,
+      conditions: input.conditions ?? null,
+      note: input.note ?? null,
+    };
     checkLimit(row);
     return this.dataSource.transaction(async (manager) => {
       const inserted = await manager.insert(RegulatoryLimit, row);

@@ -60,7 +60,8 @@ export class RfToolsController {
   @HttpCode(200)
   @ApiOperation({
     summary: 'Convert one known RF quantity into its related ones',
-    description: 'Give exactly one of: vswr, returnLossDb, gammaMagnitude, impedanceOhms (+ optional z0Ohms, default 50 Ω), frequencyHz, dbm, mw, efficiencyPct, efficiencyDb.',
+    description:
+      'Give exactly one of: vswr, returnLossDb, gammaMagnitude, impedanceOhms (+ optional z0Ohms, default 50 Ω), frequencyHz, dbm, mw, efficiencyPct, efficiencyDb.',
   })
   @ApiOkResponse({ type: ConversionResponseDto })
   convert(@Body() body: ConversionRequestDto): ConversionResponseDto {

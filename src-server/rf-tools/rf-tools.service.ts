@@ -55,7 +55,12 @@ export class RfToolsService {
     const port = options.port ?? 1;
     if (port > network.ports) throw new ValidationFailedError([{ field: 'port', message: `the file has ${network.ports} port; there is no port ${port}` }]);
     const criterionName = options.criterion ?? 'vswr';
-    const criterion: MatchCriterion = criterionName === 'return-loss-10db' ? RETURN_LOSS_10_DB_CRITERION : options.vswrMax !== undefined ? { kind: 'vswr', maxVswr: options.vswrMax } : DEFAULT_MATCH_CRITERION;
+    const criterion: MatchCriterion =
+      criterionName === 'return-loss-10db'
+        ? RETURN_LOSS_10_DB_CRITERION
+        : options.vswrMax !== undefined
+          ? { kind: 'vswr', maxVswr: options.vswrMax }
+          : DEFAULT_MATCH_CRITERION;
     const curve = reflectionCurveFromNetwork(network, port as 1 | 2);
     const gammaLimit = gammaLimitOf(criterion);
     const best = bestMatch(curve);
@@ -113,18 +118,28 @@ export class RfToolsService {
     );
     if (given.length !== 1) {
       throw new ValidationFailedError([
-        { field: given.length ? given.join(', ') : 'body', message: `give exactly one known quantity (vswr, returnLossDb, gammaMagnitude, impedanceOhms, frequencyHz, dbm, mw, efficiencyPct or efficiencyDb); got ${given.length}` },
+        {
+          field: given.length ? given.join(', ') : 'body',
+          message: `give exactly one known quantity (vswr, returnLossDb, gammaMagnitude, impedanceOhms, frequencyHz, dbm, mw, efficiencyPct or efficiencyDb); got ${given.length}`,
+        },
       ]);
     }
-    if (request.z0Ohms !== undefined && given[0] !== 'impedanceOhms') throw new ValidationFailedError([{ field: 'z0Ohms', message: 'only goes with impedanceOhms' }]);
+    if (request.z0Ohms !== undefined && given[0] !== 'impedanceOhms')
+      throw new ValidationFailedError([{ field: 'z0Ohms', message: 'only goes with impedanceOhms' }]);
     const input = given[0];
     switch (input) {
       case 'vswr':
-        return { input, reflection: reflectionOf(gammaMagnitudeFromVswr(request.vswr!), { vswr: request.vswr!, returnLossDb: returnLossDbFromVswr(request.vswr!) }) };
+        return {
+          input,
+          reflection: reflectionOf(gammaMagnitudeFromVswr(request.vswr!), { vswr: request.vswr!, returnLossDb: returnLossDbFromVswr(request.vswr!) }),
+        };
       case 'returnLossDb':
         return {
           input,
-          reflection: reflectionOf(gammaMagnitudeFromReturnLossDb(request.returnLossDb!), { vswr: vswrFromReturnLossDb(request.returnLossDb!), returnLossDb: request.returnLossDb! }),
+          reflection: reflectionOf(gammaMagnitudeFromReturnLossDb(request.returnLossDb!), {
+            vswr: vswrFromReturnLossDb(request.returnLossDb!),
+            returnLossDb: request.returnLossDb!,
+          }),
         };
       case 'gammaMagnitude':
         return { input, reflection: reflectionOf(request.gammaMagnitude!) };
@@ -135,7 +150,15 @@ export class RfToolsService {
       }
       case 'frequencyHz': {
         const f = request.frequencyHz!;
-        return { input, wavelength: { frequencyHz: f, wavelengthMm: wavelengthFractionMm(f), halfWaveMm: wavelengthFractionMm(f, 0.5), quarterWaveMm: wavelengthFractionMm(f, 0.25) } };
+        return {
+          input,
+          wavelength: {
+            frequencyHz: f,
+            wavelengthMm: wavelengthFractionMm(f),
+            halfWaveMm: wavelengthFractionMm(f, 0.5),
+            quarterWaveMm: wavelengthFractionMm(f, 0.25),
+          },
+        };
       }
       case 'dbm':
         return { input, power: { dbm: request.dbm!, mw: dbmToMw(request.dbm!), watts: dbmToWatts(request.dbm!) } };
@@ -189,6 +212,10 @@ function toNetworkDto(network: LSectionNetwork, sweep: { status: string; points?
     inductanceNh: element.component.kind === 'inductor' ? element.component.inductanceNh : null,
     capacitancePf: element.component.kind === 'capacitor' ? element.component.capacitancePf : null,
   }));
-  const points: SweepPointDto[] = (sweep?.points ?? []).map((p) => ({ frequencyHz: p.frequencyHz, returnLossDb: finiteOrNull(p.returnLossDb), vswr: finiteOrNull(p.vswr) }));
+  const points: SweepPointDto[] = (sweep?.points ?? []).map((p) => ({
+    frequencyHz: p.frequencyHz,
+    returnLossDb: finiteOrNull(p.returnLossDb),
+    vswr: finiteOrNull(p.vswr),
+  }));
   return { elements, sweep: points };
 }

@@ -1,4 +1,16 @@
-import { bandStatistics, combinedBandStatistics, coverageOfBand, efficiencyInBand, evenlySpacedFrequencies, firstIndexAbove, gainInBand, interpolateAt, mergeRanges, rangesAtMost, resample } from './curves';
+import {
+  bandStatistics,
+  combinedBandStatistics,
+  coverageOfBand,
+  efficiencyInBand,
+  evenlySpacedFrequencies,
+  firstIndexAbove,
+  gainInBand,
+  interpolateAt,
+  mergeRanges,
+  rangesAtMost,
+  resample,
+} from './curves';
 
 const MHZ = 1e6;
 // Invented efficiency curve in %, 600..1000 MHz.
@@ -32,7 +44,10 @@ describe(bandStatistics.name, () => {
     expect(stats.status === 'ok' && stats.average).toBeCloseTo(49, 12);
   });
   it('reports no data, never a pass, for a band partly or wholly outside the measured range', () => {
-    expect(bandStatistics(efficiency, { fromHz: 550 * MHZ, toHz: 700 * MHZ })).toMatchObject({ status: 'no-data', reason: expect.stringContaining('below the measured range') });
+    expect(bandStatistics(efficiency, { fromHz: 550 * MHZ, toHz: 700 * MHZ })).toMatchObject({
+      status: 'no-data',
+      reason: expect.stringContaining('below the measured range'),
+    });
     expect(bandStatistics(efficiency, { fromHz: 900 * MHZ, toHz: 1100 * MHZ })).toMatchObject({ status: 'no-data', reason: expect.stringContaining('above') });
     expect(bandStatistics(efficiency, { fromHz: 2e9, toHz: 3e9 }).status).toBe('no-data');
   });
@@ -71,15 +86,27 @@ describe(gainInBand.name, () => {
 describe(rangesAtMost.name, () => {
   it('interpolates both edges of each range', () => {
     const ranges = rangesAtMost([1, 2, 3, 4, 5], [3, 1, 1, 3, 1], 2);
-    expect(ranges).toEqual([{ fromHz: 1.5, toHz: 3.5 }, { fromHz: 4.5, toHz: 5 }]);
+    expect(ranges).toEqual([
+      { fromHz: 1.5, toHz: 3.5 },
+      { fromHz: 4.5, toHz: 5 },
+    ]);
   });
 });
 
 describe(coverageOfBand.name, () => {
   it('reports the covered fraction and the gaps', () => {
-    const coverage = coverageOfBand([{ fromHz: 0, toHz: 2 }, { fromHz: 3, toHz: 4 }], { fromHz: 1, toHz: 5 });
+    const coverage = coverageOfBand(
+      [
+        { fromHz: 0, toHz: 2 },
+        { fromHz: 3, toHz: 4 },
+      ],
+      { fromHz: 1, toHz: 5 },
+    );
     expect(coverage.coveredFraction).toBeCloseTo(0.5, 12);
-    expect(coverage.uncoveredRanges).toEqual([{ fromHz: 2, toHz: 3 }, { fromHz: 4, toHz: 5 }]);
+    expect(coverage.uncoveredRanges).toEqual([
+      { fromHz: 2, toHz: 3 },
+      { fromHz: 4, toHz: 5 },
+    ]);
   });
 });
 
@@ -104,7 +131,17 @@ describe(combinedBandStatistics.name, () => {
 
 describe(mergeRanges.name, () => {
   it('sorts, joins overlapping and touching ranges, and keeps apart the disjoint ones', () => {
-    expect(mergeRanges([{ fromHz: 5, toHz: 6 }, { fromHz: 1, toHz: 3 }, { fromHz: 3, toHz: 4 }, { fromHz: 2, toHz: 2.5 }])).toEqual([{ fromHz: 1, toHz: 4 }, { fromHz: 5, toHz: 6 }]);
+    expect(
+      mergeRanges([
+        { fromHz: 5, toHz: 6 },
+        { fromHz: 1, toHz: 3 },
+        { fromHz: 3, toHz: 4 },
+        { fromHz: 2, toHz: 2.5 },
+      ]),
+    ).toEqual([
+      { fromHz: 1, toHz: 4 },
+      { fromHz: 5, toHz: 6 },
+    ]);
     expect(mergeRanges([])).toEqual([]);
   });
 });

@@ -80,9 +80,15 @@ describe(eirpDbm.name, () => {
 describe(freeSpacePathLossDb.name, () => {
   // Friis, Proc. IRE 34 (1946); 2 decimals.
   it.each([
-    [868e6, 1, 31.22], [868e6, 10, 51.22], [868e6, 1000, 91.22],
-    [2.4e9, 1, 40.05], [2.4e9, 10, 60.05], [2.4e9, 1000, 100.05],
-    [5.8e9, 1, 47.72], [5.8e9, 10, 67.72], [5.8e9, 1000, 107.72],
+    [868e6, 1, 31.22],
+    [868e6, 10, 51.22],
+    [868e6, 1000, 91.22],
+    [2.4e9, 1, 40.05],
+    [2.4e9, 10, 60.05],
+    [2.4e9, 1000, 100.05],
+    [5.8e9, 1, 47.72],
+    [5.8e9, 10, 67.72],
+    [5.8e9, 1000, 107.72],
   ])('%d Hz at %d m: %d dB', (frequencyHz, distanceM, db) => {
     expect(freeSpacePathLossDb(frequencyHz, distanceM)).toBeCloseTo(db, 2);
   });

@@ -102,7 +102,11 @@ describe(returnLossSweep.name, () => {
     // A series RC load (Example 5.1's 200 Ω with −100 Ω at 500 MHz): X = −1/(ωC), so C = 3.183 pF.
     const capacitanceF = 1 / (2 * Math.PI * 500e6 * 100);
     const frequenciesHz = [300e6, 400e6, 500e6, 600e6, 700e6];
-    const curve = { frequenciesHz, resistanceOhms: frequenciesHz.map(() => 200), reactanceOhms: frequenciesHz.map((f) => -1 / (2 * Math.PI * f * capacitanceF)) };
+    const curve = {
+      frequenciesHz,
+      resistanceOhms: frequenciesHz.map(() => 200),
+      reactanceOhms: frequenciesHz.map((f) => -1 / (2 * Math.PI * f * capacitanceF)),
+    };
     const measured = returnLossSweep(exact, curve, 100, [400e6, 500e6, 600e6]);
     const constant = returnLossSweep(exact, load, 100, [400e6, 500e6, 600e6]);
     if (measured.status !== 'ok' || constant.status !== 'ok') throw new Error('expected data');
@@ -114,7 +118,13 @@ describe(returnLossSweep.name, () => {
 
 describe(designLSectionMatch.name, () => {
   it('returns exact and snapped solutions with sweeps; the snapped match is still good at the design frequency', () => {
-    const result = designLSectionMatch({ frequencyHz: 500e6, loadOhms: complex(200, -100), z0Ohms: 100, series: 'E24', sweep: { fromHz: 450e6, toHz: 550e6, points: 11 } });
+    const result = designLSectionMatch({
+      frequencyHz: 500e6,
+      loadOhms: complex(200, -100),
+      z0Ohms: 100,
+      series: 'E24',
+      sweep: { fromHz: 450e6, toHz: 550e6, points: 11 },
+    });
     expect(result).toHaveLength(2);
     for (const solution of result) {
       expect(solution.snappedReturnLossDb).toBeGreaterThan(15);

@@ -43,13 +43,17 @@ function angular(frequencyHz: number): number {
 function seriesComponent(reactanceOhms: number, frequencyHz: number, scaleOhms: number): Component {
   if (Math.abs(reactanceOhms) <= NEGLIGIBLE * scaleOhms) return { kind: 'none' };
   const omega = angular(frequencyHz);
-  return reactanceOhms > 0 ? { kind: 'inductor', inductanceNh: (reactanceOhms / omega) * 1e9 } : { kind: 'capacitor', capacitancePf: (-1 / (omega * reactanceOhms)) * 1e12 };
+  return reactanceOhms > 0
+    ? { kind: 'inductor', inductanceNh: (reactanceOhms / omega) * 1e9 }
+    : { kind: 'capacitor', capacitancePf: (-1 / (omega * reactanceOhms)) * 1e12 };
 }
 
 function shuntComponent(susceptanceSiemens: number, frequencyHz: number, scaleOhms: number): Component {
   if (Math.abs(susceptanceSiemens) * scaleOhms <= NEGLIGIBLE) return { kind: 'none' };
   const omega = angular(frequencyHz);
-  return susceptanceSiemens > 0 ? { kind: 'capacitor', capacitancePf: (susceptanceSiemens / omega) * 1e12 } : { kind: 'inductor', inductanceNh: (-1 / (omega * susceptanceSiemens)) * 1e9 };
+  return susceptanceSiemens > 0
+    ? { kind: 'capacitor', capacitancePf: (susceptanceSiemens / omega) * 1e12 }
+    : { kind: 'inductor', inductanceNh: (-1 / (omega * susceptanceSiemens)) * 1e9 };
 }
 
 /** Impedance of a series element (or admittance of a shunt one) at a frequency. */
@@ -166,7 +170,12 @@ function isImpedanceCurve(load: Complex | ImpedanceCurve): load is ImpedanceCurv
  * over the sweep (a first estimate only); a measured curve is interpolated, and a sweep leaving
  * its range is "no data".
  */
-export function returnLossSweep(network: LSectionNetwork, load: Complex | ImpedanceCurve, z0Ohms: number, frequenciesHz: ArrayLike<number>): BandResult<{ readonly points: readonly SweepPoint[] }> {
+export function returnLossSweep(
+  network: LSectionNetwork,
+  load: Complex | ImpedanceCurve,
+  z0Ohms: number,
+  frequenciesHz: ArrayLike<number>,
+): BandResult<{ readonly points: readonly SweepPoint[] }> {
   if (isImpedanceCurve(load) && frequenciesHz.length > 0) {
     const outside = bandOutsideData(load.frequenciesHz, { fromHz: frequenciesHz[0], toHz: frequenciesHz[frequenciesHz.length - 1] });
     if (outside) return outside;
@@ -218,9 +227,11 @@ export function designLSectionMatch(request: MatchingRequest): readonly Matching
       snapped,
       snappedReturnLossDb: returnLossDbFromGammaMagnitude(snappedGamma),
       ...(frequencies
-        ? { exactSweep: returnLossSweep(exact, sweepLoad, request.z0Ohms, frequencies), snappedSweep: returnLossSweep(snapped, sweepLoad, request.z0Ohms, frequencies) }
+        ? {
+            exactSweep: returnLossSweep(exact, sweepLoad, request.z0Ohms, frequencies),
+            snappedSweep: returnLossSweep(snapped, sweepLoad, request.z0Ohms, frequencies),
+          }
         : {}),
     };
   });
 }
-

@@ -3,9 +3,7 @@ export type PreferredSeries = 'E12' | 'E24';
 
 // Mantissas × 10 so the tables hold integers and scaling stays exact.
 const E12_TIMES_TEN: readonly number[] = [10, 12, 15, 18, 22, 27, 33, 39, 47, 56, 68, 82];
-const E24_TIMES_TEN: readonly number[] = [
-  10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39, 43, 47, 51, 56, 62, 68, 75, 82, 91,
-];
+const E24_TIMES_TEN: readonly number[] = [10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39, 43, 47, 51, 56, 62, 68, 75, 82, 91];
 
 export function preferredMantissas(series: PreferredSeries): readonly number[] {
   return (series === 'E12' ? E12_TIMES_TEN : E24_TIMES_TEN).map((m) => m / 10);

@@ -1,4 +1,13 @@
-import { bandMatch, bestMatch, matchAt, matchedRanges, reflectionCurveFromGamma, reflectionCurveFromNetwork, RETURN_LOSS_10_DB_CRITERION, worstMatchInBand } from './reflection';
+import {
+  bandMatch,
+  bestMatch,
+  matchAt,
+  matchedRanges,
+  reflectionCurveFromGamma,
+  reflectionCurveFromNetwork,
+  RETURN_LOSS_10_DB_CRITERION,
+  worstMatchInBand,
+} from './reflection';
 import { readTouchstone } from './touchstone';
 
 const MHZ = 1e6;
@@ -11,7 +20,7 @@ describe(matchedRanges.name, () => {
     const [vswr2] = matchedRanges(ramp);
     const [rl10] = matchedRanges(ramp, RETURN_LOSS_10_DB_CRITERION);
     expect(vswr2.toHz).toBeCloseTo(800 * MHZ + (400 * MHZ) / 3, 3);
-    expect(rl10.toHz).toBeCloseTo(800 * MHZ + 400 * MHZ * 10 ** (-0.5), 3);
+    expect(rl10.toHz).toBeCloseTo(800 * MHZ + 400 * MHZ * 10 ** -0.5, 3);
     expect(vswr2.toHz - rl10.toHz).toBeGreaterThan(6 * MHZ);
   });
 });

@@ -1,12 +1,6 @@
 import { type Complex, complex } from './complex';
 import { type BandResult, type FrequencyRange, bandStatistics, coverageOfBand, interpolateAt, rangesAtMost } from './curves';
-import {
-  gammaMagnitudeFromReturnLossDb,
-  gammaMagnitudeFromVswr,
-  impedanceFromGamma,
-  returnLossDbFromGammaMagnitude,
-  vswrFromGammaMagnitude,
-} from './mismatch';
+import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, impedanceFromGamma, returnLossDbFromGammaMagnitude, vswrFromGammaMagnitude } from './mismatch';
 import { type TouchstoneNetwork, sParameter } from './touchstone';
 
 /**
@@ -22,7 +16,13 @@ export interface ReflectionCurve {
   readonly gammaMagnitude: Float64Array;
 }
 
-export function reflectionCurveFromGamma(frequenciesHz: Float64Array, gammaRe: Float64Array, gammaIm: Float64Array, referenceOhms = 50, port: 1 | 2 = 1): ReflectionCurve {
+export function reflectionCurveFromGamma(
+  frequenciesHz: Float64Array,
+  gammaRe: Float64Array,
+  gammaIm: Float64Array,
+  referenceOhms = 50,
+  port: 1 | 2 = 1,
+): ReflectionCurve {
   const gammaMagnitude = new Float64Array(frequenciesHz.length);
   // sqrt of the sum of squares: Math.hypot is several times slower and |Γ| ≤ 1 cannot overflow.
   for (let i = 0; i < gammaMagnitude.length; i++) gammaMagnitude[i] = Math.sqrt(gammaRe[i] * gammaRe[i] + gammaIm[i] * gammaIm[i]);

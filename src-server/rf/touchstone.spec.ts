@@ -58,7 +58,11 @@ describe(readTouchstone.name, () => {
     it('Example A: 820 MHz |Γ| 0.5 VSWR 3 RL 6.02 dB; 868 MHz 0.2, 1.5, 13.98 dB; 915 MHz 0.3333, 2.0, 9.54 dB', () => {
       const network = readTouchstone(EXAMPLE_A, { expectedPorts: 1 });
       expect(Array.from(network.frequenciesHz)).toEqual([820e6, 868e6, 915e6]);
-      const expected = [[0.5, 3.0, 6.02], [0.2, 1.5, 13.98], [0.3333, 2.0, 9.54]];
+      const expected = [
+        [0.5, 3.0, 6.02],
+        [0.2, 1.5, 13.98],
+        [0.3333, 2.0, 9.54],
+      ];
       expected.forEach(([gamma, vswr, rl], i) => {
         const g = magnitudeAt(network, 1, 1, i);
         expect(g).toBeCloseTo(gamma, 4);
@@ -102,7 +106,12 @@ describe(readTouchstone.name, () => {
       expect(at(network, 1, 1, 0).im).toBeCloseTo(0.5, 15);
     });
     it('accepts any order and case, every unit, and R with a value', () => {
-      for (const [unit, scale] of [['hz', 1], ['KHZ', 1e3], ['Mhz', 1e6], ['gHz', 1e9]] as const) {
+      for (const [unit, scale] of [
+        ['hz', 1],
+        ['KHZ', 1e3],
+        ['Mhz', 1e6],
+        ['gHz', 1e9],
+      ] as const) {
         const network = readTouchstone(`# ri R 75 s ${unit}\n2 0.1 0.2\n`);
         expect(network.frequenciesHz[0]).toBe(2 * scale);
         expect(network.referenceOhms).toEqual([75]);
@@ -140,9 +149,14 @@ describe(readTouchstone.name, () => {
       expect(network.noisePointCount).toBe(2);
     });
     it('skips a version-2 [Noise Data] block and checks [Number of Noise Frequencies]', () => {
-      const withNoise = EXAMPLE_C.replace('[Network Data]', '[Number of Noise Frequencies] 1\n[Network Data]').replace('[End]', '[Noise Data]\n800 1.2 0.4 30 20\n[End]');
+      const withNoise = EXAMPLE_C.replace('[Network Data]', '[Number of Noise Frequencies] 1\n[Network Data]').replace(
+        '[End]',
+        '[Noise Data]\n800 1.2 0.4 30 20\n[End]',
+      );
       expect(readTouchstone(withNoise).noisePointCount).toBe(1);
-      expect(errorOf(() => readTouchstone(withNoise.replace('[Number of Noise Frequencies] 1', '[Number of Noise Frequencies] 2'))).code).toBe('TOUCHSTONE_NOISE_COUNT_MISMATCH');
+      expect(errorOf(() => readTouchstone(withNoise.replace('[Number of Noise Frequencies] 1', '[Number of Noise Frequencies] 2'))).code).toBe(
+        'TOUCHSTONE_NOISE_COUNT_MISMATCH',
+      );
     });
   });
 
@@ -210,9 +224,18 @@ trailing text after [End] is ignored`;
       const s11 = gammaFromImpedance(zin, 50);
       expect(at(fromZ, 1, 1, 0).re).toBeCloseTo(s11.re, 13);
       expect(at(fromZ, 1, 1, 0).im).toBeCloseTo(s11.im, 13);
-      for (const [parameter, m] of [['Y', yMatrix], ['H', hMatrix], ['G', gMatrix]] as const) {
+      for (const [parameter, m] of [
+        ['Y', yMatrix],
+        ['H', hMatrix],
+        ['G', gMatrix],
+      ] as const) {
         const other = readTouchstone(file(parameter, m));
-        for (const [row, column] of [[1, 1], [1, 2], [2, 1], [2, 2]]) {
+        for (const [row, column] of [
+          [1, 1],
+          [1, 2],
+          [2, 1],
+          [2, 2],
+        ]) {
           expect(at(other, row, column, 0).re).toBeCloseTo(at(fromZ, row, column, 0).re, 12);
           expect(at(other, row, column, 0).im).toBeCloseTo(at(fromZ, row, column, 0).im, 12);
         }
@@ -260,7 +283,9 @@ trailing text after [End] is ignored`;
       expect(portsFromFileName('antenna.ts')).toBeUndefined();
       expect(errorOf(() => readTouchstone(EXAMPLE_B, { expectedPorts: 1 })).code).toBe('TOUCHSTONE_WRONG_PORT_COUNT');
       expect(errorOf(() => readTouchstone(EXAMPLE_A, { expectedPorts: 2 })).code).toBe('TOUCHSTONE_WRONG_PORT_COUNT');
-      expect(errorOf(() => readTouchstone('# MHz S RI\n1 2 3 4 5\n', { expectedPorts: 2 })).message).toBe('line 2: a 2-port data line needs 9 numbers (or 5 in a noise block), found 5');
+      expect(errorOf(() => readTouchstone('# MHz S RI\n1 2 3 4 5\n', { expectedPorts: 2 })).message).toBe(
+        'line 2: a 2-port data line needs 9 numbers (or 5 in a noise block), found 5',
+      );
       expect(errorOf(() => readTouchstone(EXAMPLE_C, { expectedPorts: 1 })).code).toBe('TOUCHSTONE_WRONG_PORT_COUNT');
       expect(errorOf(() => sParameter(readTouchstone(EXAMPLE_A), 2, 2)).code).toBe('TOUCHSTONE_NO_SUCH_PORT');
     });
@@ -334,7 +359,31 @@ describe(writeTouchstone.name, () => {
   });
 
   it('random corruptions give a TouchstoneError or a valid network, never another exception (property)', () => {
-    const alphabet = ['!', '#', '[', ']', ' ', '\n', '\r', '\t', '-', '+', '.', 'e', 'E', 'x', '0', '9', 'R', 'MHz', '[End]', '[Network Data]', '1e999', ',', 'NaN'];
+    const alphabet = [
+      '!',
+      '#',
+      '[',
+      ']',
+      ' ',
+      '\n',
+      '\r',
+      '\t',
+      '-',
+      '+',
+      '.',
+      'e',
+      'E',
+      'x',
+      '0',
+      '9',
+      'R',
+      'MHz',
+      '[End]',
+      '[Network Data]',
+      '1e999',
+      ',',
+      'NaN',
+    ];
     fc.assert(
       fc.property(
         fc.constantFrom(EXAMPLE_A, EXAMPLE_B, EXAMPLE_C),

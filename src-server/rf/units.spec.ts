@@ -43,8 +43,18 @@ describe(wavelengthFractionMm.name, () => {
 describe(efficiencyPercentToDb.name, () => {
   // Definition of the decibel; 2-decimal rounding.
   const table: [number, number][] = [
-    [100, 0], [90, -0.46], [80, -0.97], [70, -1.55], [60, -2.22], [50, -3.01], [40, -3.98],
-    [30, -5.23], [25, -6.02], [20, -6.99], [10, -10], [1, -20],
+    [100, 0],
+    [90, -0.46],
+    [80, -0.97],
+    [70, -1.55],
+    [60, -2.22],
+    [50, -3.01],
+    [40, -3.98],
+    [30, -5.23],
+    [25, -6.02],
+    [20, -6.99],
+    [10, -10],
+    [1, -20],
   ];
   it.each(table)('%d %% = %d dB', (percent, db) => {
     expect(efficiencyPercentToDb(percent)).toBeCloseTo(db, 2);
@@ -53,7 +63,12 @@ describe(efficiencyPercentToDb.name, () => {
 
 describe(efficiencyDbToPercent.name, () => {
   // The reverse direction; 1-decimal rounding.
-  it.each([[-1, 79.4], [-2, 63.1], [-3, 50.1], [-6, 25.1]])('%d dB = %d %%', (db, percent) => {
+  it.each([
+    [-1, 79.4],
+    [-2, 63.1],
+    [-3, 50.1],
+    [-6, 25.1],
+  ])('%d dB = %d %%', (db, percent) => {
     expect(efficiencyDbToPercent(db)).toBeCloseTo(percent, 1);
   });
 });

@@ -29,7 +29,9 @@ export function LimitedFileUpload(formatMaxBytes: number, code: string, what: st
       this.maxBytes = uploadLimitBytes(formatMaxBytes, config);
       // Browsers send a file name's UTF-8 bytes as they are; multer would read them as latin1 ("BÃ¤nder.s1p").
       const Multipart = FileInterceptor('file', {
-        storage: memoryStorage(), defParamCharset: 'utf8', limits: { fileSize: this.maxBytes, files: 1 },
+        storage: memoryStorage(),
+        defParamCharset: 'utf8',
+        limits: { fileSize: this.maxBytes, files: 1 },
       });
       this.multipart = new Multipart();
     }

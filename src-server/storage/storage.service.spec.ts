@@ -8,7 +8,19 @@ describe(objectKey.name, () => {
   });
 
   it.each([
-    ['..'], ['../etc'], ['a/b'], ['a\\b'], ['.hidden'], [''], ['-leading-dash'], ['x'.repeat(122)], ['nul\u0000byte'], ['ünïcode'], ['a..b'], ['%2e%2e'], ['sp ace'],
+    ['..'],
+    ['../etc'],
+    ['a/b'],
+    ['a\\b'],
+    ['.hidden'],
+    [''],
+    ['-leading-dash'],
+    ['x'.repeat(122)],
+    ['nul\u0000byte'],
+    ['ünïcode'],
+    ['a..b'],
+    ['%2e%2e'],
+    ['sp ace'],
   ])('refuses %j as a segment with 400 STORAGE_BAD_KEY', (segment) => {
     expect(() => objectKey('parts', 1, segment)).toThrow(expect.objectContaining({ code: 'STORAGE_BAD_KEY', status: 400 }));
   });

@@ -1,12 +1,10 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
-import {
-  CreateBucketCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client,
-} from '@aws-sdk/client-s3';
+import { CreateBucketCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { APP_CONFIG, type AppConfig } from '../config/app-config';
 import { DomainError } from '../common/domain-error';
 
 /** Object keys are built only from these safe segments so no key can escape its prefix. */
-const SAFE_SEGMENT = /^[A-Za-z0-9][A-Za-z0-9._-]{0,120}$/;
+const SAFE_SEGMENT = /^[A-Z0-9][\w.-]{0,120}$/i;
 
 export function objectKey(...segments: (string | number)[]): string {
   for (const segment of segments) {

@@ -9,8 +9,12 @@ import { User } from './user.entity';
 
 /** Active demo accounts that still open with a published demo password. */
 export async function demoAccountsWithPublishedPassword(dataSource: DataSource): Promise<string[]> {
-  const accounts = await dataSource.getRepository(User).createQueryBuilder('user').addSelect('user.passwordHash')
-    .where({ email: In(readDemoUsers().map((user) => user.email)), status: 'active' }).getMany();
+  const accounts = await dataSource
+    .getRepository(User)
+    .createQueryBuilder('user')
+    .addSelect('user.passwordHash')
+    .where({ email: In(readDemoUsers().map((user) => user.email)), status: 'active' })
+    .getMany();
   const open: string[] = [];
   for (const account of accounts) {
     for (const password of PUBLISHED_DEFAULTS.DEMO_PASSWORD) {

@@ -42,7 +42,13 @@ export class UsersService {
       } else {
         await manager.update(User, { id: user.id }, { name: input.name, role: input.role });
       }
-      await this.audit.record(manager, { entityType: 'user', entityId: user.id, action: 'invited', userId: actor.id, changes: { email: input.email, role: input.role } });
+      await this.audit.record(manager, {
+        entityType: 'user',
+        entityId: user.id,
+        action: 'invited',
+        userId: actor.id,
+        changes: { email: input.email, role: input.role },
+      });
       const token = await this.tokens.issue(manager, user.id, 'invitation');
       const saved = await manager.findOneByOrFail(User, { id: user.id });
       // Queued in the same transaction: no invitation row without its e-mail, and no e-mail without the row;

@@ -33,7 +33,9 @@ describe('catalogue in the browser', () => {
     expect(await table.getByText('TW-SM824').count()).toBe(0);
 
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('export-csv').click()]);
-    const csv = readFileSync((await download.path())!, 'utf8').trim().split(/\r\n/);
+    const csv = readFileSync((await download.path())!, 'utf8')
+      .trim()
+      .split(/\r\n/);
     const header = csv[0].split(',');
     expect(header).toEqual(expect.arrayContaining(['mpn', 'reviewState', 'specBands']));
     expect(csv).toHaveLength(total + 1);
@@ -57,10 +59,18 @@ describe('catalogue in the browser', () => {
 
     await page.getByRole('button', { name: 'Upload data' }).click();
     // A bad file first: the dialog names the offending line and stores nothing.
-    await page.getByLabel('Measurement file').setInputFiles({ name: 'bad.s1p', mimeType: 'text/plain', buffer: Buffer.from('# MHz S RI R 50\n800 0.2 0\n850 0.3 oops\n') });
+    await page
+      .getByLabel('Measurement file')
+      .setInputFiles({ name: 'bad.s1p', mimeType: 'text/plain', buffer: Buffer.from('# MHz S RI R 50\n800 0.2 0\n850 0.3 oops\n') });
     await page.getByRole('button', { name: 'Check file' }).click();
     await page.getByTestId('upload-error').getByText('line 3').first().waitFor();
-    const good = s1pWithGamma([[700, 0.7], [800, 0.3], [850, 0.1], [900, 0.3], [1000, 0.7]]);
+    const good = s1pWithGamma([
+      [700, 0.7],
+      [800, 0.3],
+      [850, 0.1],
+      [900, 0.3],
+      [1000, 0.7],
+    ]);
     await page.getByLabel('Measurement file').setInputFiles({ name: 'good.s1p', mimeType: 'text/plain', buffer: Buffer.from(good) });
     await page.getByRole('button', { name: 'Check file' }).click();
     await page.getByTestId('upload-preview').getByText('5 points, 700–1000 MHz').waitFor();

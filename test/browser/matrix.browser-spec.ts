@@ -9,10 +9,18 @@ const GOOD_BLE_CHIP = 1025;
 
 /** Puts the demo back as seeded, so the test tells the same story on every run against the same database. */
 async function resetDemoChoice(): Promise<void> {
-  const login = await fetch(`${APP_URL}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress() }, body: JSON.stringify({ email: 'engineer@bandwright.test', password: process.env.DEMO_PASSWORD ?? 'bandwright-demo' }) });
+  const login = await fetch(`${APP_URL}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress() },
+    body: JSON.stringify({ email: 'engineer@bandwright.test', password: process.env.DEMO_PASSWORD ?? 'bandwright-demo' }),
+  });
   const { accessToken } = (await login.json()) as { accessToken: string };
   const headers = { 'Content-Type': 'application/json', Authorization: `Bearer ${accessToken}` };
-  const choice = await fetch(`${APP_URL}/api/products/${TRACKER}/radios/${TRACKER_BLE}/choice`, { method: 'PUT', headers, body: JSON.stringify({ partId: LOW_EFFICIENCY_CHIP }) });
+  const choice = await fetch(`${APP_URL}/api/products/${TRACKER}/radios/${TRACKER_BLE}/choice`, {
+    method: 'PUT',
+    headers,
+    body: JSON.stringify({ partId: LOW_EFFICIENCY_CHIP }),
+  });
   if (!choice.ok) throw new Error(`could not reset the demo choice: ${choice.status}`);
   await fetch(`${APP_URL}/api/products/${TRACKER}/radios/${TRACKER_BLE}/shortlist/${GOOD_BLE_CHIP}`, { method: 'DELETE', headers });
 }
@@ -33,7 +41,10 @@ describe('compatibility matrix in the browser', () => {
     const { page } = browser;
     await signIn(page, 'engineer@bandwright.test');
     await page.goto(`${APP_URL}/products`);
-    await page.getByRole('link', { name: /Livestock tracker/ }).first().click();
+    await page
+      .getByRole('link', { name: /Livestock tracker/ })
+      .first()
+      .click();
     await page.getByRole('heading', { name: 'Compatibility matrix' }).waitFor();
 
     const failing = page.locator(`[data-testid^="cell-${TRACKER_BLE}-"][data-testid$="-${LOW_EFFICIENCY_CHIP}"]`);

@@ -12,10 +12,30 @@ describe('one API vocabulary', () => {
   let dataSource: DataSource;
   const as = (role: DemoRole) => ({ Authorization: `Bearer ${tokens[role]}` });
   const radio = (connector: string) => ({
-    name: 'Cellular', technology: 'lte', module: 'Test modem (invented)', transmitPowerDbm: 23, polarization: 'linear', connector, feedLossDb: 0.5, bands: [{ bandId: 103 }],
+    name: 'Cellular',
+    technology: 'lte',
+    module: 'Test modem (invented)',
+    transmitPowerDbm: 23,
+    polarization: 'linear',
+    connector,
+    feedLossDb: 0.5,
+    bands: [{ bandId: 103 }],
   });
-  const createProduct = async () => (await request(app.getHttpServer()).post('/api/products').set(as('engineer'))
-    .send({ name: unique('Vocabulary product'), code: unique('VOC').slice(0, 40), owner: 'Test Owner', groundPlaneLengthMm: 80, groundPlaneWidthMm: 40, targetRegions: ['EU'] }).expect(201)).body as { id: number };
+  const createProduct = async () =>
+    (
+      await request(app.getHttpServer())
+        .post('/api/products')
+        .set(as('engineer'))
+        .send({
+          name: unique('Vocabulary product'),
+          code: unique('VOC').slice(0, 40),
+          owner: 'Test Owner',
+          groundPlaneLengthMm: 80,
+          groundPlaneWidthMm: 40,
+          targetRegions: ['EU'],
+        })
+        .expect(201)
+    ).body as { id: number };
 
   beforeAll(async () => {
     app = await createApiApp();
@@ -43,7 +63,9 @@ describe('one API vocabulary', () => {
 
   it('the migration converts stored connectors and fact names down and up again', async () => {
     const product = await createProduct();
-    const created = (await request(app.getHttpServer()).post(`/api/products/${product.id}/radios`).set(as('engineer')).send(radio('SMA')).expect(201)).body as { id: number };
+    const created = (await request(app.getHttpServer()).post(`/api/products/${product.id}/radios`).set(as('engineer')).send(radio('SMA')).expect(201)).body as {
+      id: number;
+    };
     const ruleKey = unique('vocabulary-rule').toLowerCase();
     const migration = new OneApiVocabulary1765400000000();
     const runner = dataSource.createQueryRunner();
@@ -51,8 +73,16 @@ describe('one API vocabulary', () => {
       await migration.down(runner);
       expect((await runner.query('SELECT connector FROM radios WHERE id = ?', [created.id]))[0].connector).toBe('sma');
       // A disabled admin rule as the old spelling stored it, so no other test's matrix sees it.
-      const definition = { id: ruleKey, conditions: { all: [{ fact: 'bandLowestMHz', operator: 'lessThan', value: 700 }] }, event: { type: 'finding', params: { message: 'worst at {worstVswrAtMHz} MHz' } } };
-      await runner.query('INSERT INTO compatibility_rules (rule_key, origin, definition, version, enabled) VALUES (?, ?, ?, 1, 0)', [ruleKey, 'admin', JSON.stringify(definition)]);
+      const definition = {
+        id: ruleKey,
+        conditions: { all: [{ fact: 'bandLowestMHz', operator: 'lessThan', value: 700 }] },
+        event: { type: 'finding', params: { message: 'worst at {worstVswrAtMHz} MHz' } },
+      };
+      await runner.query('INSERT INTO compatibility_rules (rule_key, origin, definition, version, enabled) VALUES (?, ?, ?, 1, 0)', [
+        ruleKey,
+        'admin',
+        JSON.stringify(definition),
+      ]);
       await migration.up(runner);
       expect((await runner.query('SELECT connector FROM radios WHERE id = ?', [created.id]))[0].connector).toBe('SMA');
       const stored = (await runner.query('SELECT definition FROM compatibility_rules WHERE rule_key = ?', [ruleKey]))[0].definition as unknown;

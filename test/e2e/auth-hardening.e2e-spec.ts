@@ -49,8 +49,10 @@ describe('sign-in and account hardening (API)', () => {
   function slowRelay(ms: number): jest.SpyInstance {
     const transport = (app.get(MailService) as unknown as { transport: Transporter }).transport;
     const send = transport.sendMail.bind(transport);
-    return jest.spyOn(transport, 'sendMail').mockImplementation(((mail: Parameters<Transporter['sendMail']>[0]) =>
-      new Promise((r) => setTimeout(r, ms)).then(() => send(mail))) as unknown as Transporter['sendMail']);
+    return jest
+      .spyOn(transport, 'sendMail')
+      .mockImplementation(((mail: Parameters<Transporter['sendMail']>[0]) =>
+        new Promise((r) => setTimeout(r, ms)).then(() => send(mail))) as unknown as Transporter['sendMail']);
   }
 
   beforeAll(async () => {
@@ -69,27 +71,39 @@ describe('sign-in and account hardening (API)', () => {
     it.each([
       ['a real account', true],
       ['an unknown e-mail', false],
-    ])('25 parallel wrong passwords for %s check at most 5 passwords; the rest get 429', async (_label, real) => {
-      const email = real ? await activeUser() : `${unique('nobody')}@bandwright.test`;
-      const address = newAddress();
-      const checks = jest.spyOn(bcrypt, 'compare');
-      const results = await Promise.all(
-        Array.from({ length: 25 }, (_, i) => http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: `wrong-${i}` })),
-      );
-      const statuses = results.map((r) => r.status);
-      expect(statuses.filter((s) => s === 401)).toHaveLength(5);
-      expect(statuses.filter((s) => s === 429)).toHaveLength(20);
-      expect(new Set(results.filter((r) => r.status === 429).map((r) => r.body.code))).toEqual(new Set(['AUTH_TEMPORARILY_LOCKED']));
-      expect(checks.mock.calls.length).toBeLessThanOrEqual(5);
-      if (real) await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: PASSWORD }).expect(429);
-    }, 30000);
+    ])(
+      '25 parallel wrong passwords for %s check at most 5 passwords; the rest get 429',
+      async (_label, real) => {
+        const email = real ? await activeUser() : `${unique('nobody')}@bandwright.test`;
+        const address = newAddress();
+        const checks = jest.spyOn(bcrypt, 'compare');
+        const results = await Promise.all(
+          Array.from({ length: 25 }, (_, i) =>
+            http()
+              .post('/api/auth/login')
+              .set('X-Forwarded-For', address)
+              .send({ email, password: `wrong-${i}` }),
+          ),
+        );
+        const statuses = results.map((r) => r.status);
+        expect(statuses.filter((s) => s === 401)).toHaveLength(5);
+        expect(statuses.filter((s) => s === 429)).toHaveLength(20);
+        expect(new Set(results.filter((r) => r.status === 429).map((r) => r.body.code))).toEqual(new Set(['AUTH_TEMPORARILY_LOCKED']));
+        expect(checks.mock.calls.length).toBeLessThanOrEqual(5);
+        if (real) await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: PASSWORD }).expect(429);
+      },
+      30000,
+    );
 
     it('locks an unknown e-mail exactly like a real one: same answers in the same order', async () => {
       const address = newAddress();
       const run = async (email: string) => {
         const answers: { status: number; body: unknown }[] = [];
         for (let i = 0; i < 6; i += 1) {
-          const res = await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: `wrong-${i}` });
+          const res = await http()
+            .post('/api/auth/login')
+            .set('X-Forwarded-For', address)
+            .send({ email, password: `wrong-${i}` });
           answers.push({ status: res.status, body: res.body });
         }
         return answers;
@@ -103,9 +117,19 @@ describe('sign-in and account hardening (API)', () => {
     it('a correct password ends the run of failures', async () => {
       const email = await activeUser();
       const address = newAddress();
-      for (let i = 0; i < 4; i += 1) await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: `wrong-${i}` }).expect(401);
+      for (let i = 0; i < 4; i += 1)
+        await http()
+          .post('/api/auth/login')
+          .set('X-Forwarded-For', address)
+          .send({ email, password: `wrong-${i}` })
+          .expect(401);
       await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: PASSWORD }).expect(200);
-      for (let i = 0; i < 4; i += 1) await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: `wrong-${i}` }).expect(401);
+      for (let i = 0; i < 4; i += 1)
+        await http()
+          .post('/api/auth/login')
+          .set('X-Forwarded-For', address)
+          .send({ email, password: `wrong-${i}` })
+          .expect(401);
       await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: PASSWORD }).expect(200);
     }, 30000);
   });
@@ -127,8 +151,14 @@ describe('sign-in and account hardening (API)', () => {
       expect(statuses.filter((s) => s === 429)).toHaveLength(10);
       expect(new Set(results.filter((r) => r.status === 429).map((r) => r.body.code))).toEqual(new Set(['TOO_MANY_REQUESTS']));
       // Other routes from the same address are refused too; another address is not.
-      expect((await request(second.getHttpServer()).post('/api/auth/login').set('X-Forwarded-For', address).send({ email: DEMO.engineer, password: 'x' })).status).toBe(429);
-      await request(second.getHttpServer()).post('/api/auth/password-reset-requests').set('X-Forwarded-For', newAddress()).send({ email: 'someone@bandwright.test' }).expect(202);
+      expect(
+        (await request(second.getHttpServer()).post('/api/auth/login').set('X-Forwarded-For', address).send({ email: DEMO.engineer, password: 'x' })).status,
+      ).toBe(429);
+      await request(second.getHttpServer())
+        .post('/api/auth/password-reset-requests')
+        .set('X-Forwarded-For', newAddress())
+        .send({ email: 'someone@bandwright.test' })
+        .expect(202);
     }, 60000);
 
     it('believes X-Forwarded-For only from a proxy on loopback', () => {
@@ -150,7 +180,9 @@ describe('sign-in and account hardening (API)', () => {
       for (let i = 0; i < 6; i += 1) {
         for (const kind of ['real', 'unknown'] as const) {
           const started = performance.now();
-          const res = await http().post('/api/auth/password-reset-requests').set('X-Forwarded-For', address)
+          const res = await http()
+            .post('/api/auth/password-reset-requests')
+            .set('X-Forwarded-For', address)
             .send({ email: kind === 'real' ? real : `${unique('unknown')}@bandwright.test` });
           timings[kind].push(performance.now() - started);
           expect(res.status).toBe(202);
@@ -174,10 +206,18 @@ describe('sign-in and account hardening (API)', () => {
       slowRelay(3000);
       const email = `${unique('queued')}@bandwright.test`;
       const started = performance.now();
-      await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Quinn Queued', role: 'engineer' }).expect(201);
+      await http()
+        .post('/api/users/invitations')
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .send({ email, name: 'Quinn Queued', role: 'engineer' })
+        .expect(201);
       expect(performance.now() - started).toBeLessThan(1500);
 
-      const row = async () => (await db.query('SELECT status, body FROM mail_outbox WHERE JSON_CONTAINS(to_addresses, JSON_QUOTE(?))', [email]))[0] as { status: string; body: string };
+      const row = async () =>
+        (await db.query('SELECT status, body FROM mail_outbox WHERE JSON_CONTAINS(to_addresses, JSON_QUOTE(?))', [email]))[0] as {
+          status: string;
+          body: string;
+        };
       const mail = await waitForMail(email, /invited/i, 15000);
       const token = new URL(linkIn(mail, '/accept-invitation')).searchParams.get('token')!;
       const sent = await waitFor(async () => {
@@ -196,7 +236,10 @@ describe('sign-in and account hardening (API)', () => {
       const mail = await waitForMail(email, /reset/i, 15000);
       const token = new URL(linkIn(mail, '/reset-password')).searchParams.get('token')!;
       const bodies = await waitFor(async () => {
-        const rows: { status: string; body: string }[] = await db.query('SELECT status, body FROM mail_outbox WHERE JSON_CONTAINS(to_addresses, JSON_QUOTE(?))', [email]);
+        const rows: { status: string; body: string }[] = await db.query(
+          'SELECT status, body FROM mail_outbox WHERE JSON_CONTAINS(to_addresses, JSON_QUOTE(?))',
+          [email],
+        );
         return rows.length > 0 && rows.every((r) => r.status === 'sent') ? rows.map((r) => r.body) : undefined;
       }, 5000);
       expect(bodies.join('\n')).not.toContain(token);
@@ -211,31 +254,52 @@ describe('sign-in and account hardening (API)', () => {
     it('answers 204 and ends the token; signing in again gives a working one', async () => {
       const email = await activeUser('procurement');
       const address = newAddress();
-      const signIn = async () => (await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: PASSWORD }).expect(200)).body.accessToken as string;
+      const signIn = async () =>
+        (await http().post('/api/auth/login').set('X-Forwarded-For', address).send({ email, password: PASSWORD }).expect(200)).body.accessToken as string;
       const token = await signIn();
       await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(200);
       await http().post('/api/auth/logout').set('Authorization', `Bearer ${token}`).expect(204);
       const after = await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(401);
       expect(after.body.code).toBe('AUTH_TOKEN_REVOKED');
       await http().post('/api/auth/logout').set('Authorization', `Bearer ${token}`).expect(401);
-      await http().get('/api/auth/me').set('Authorization', `Bearer ${await signIn()}`).expect(200);
+      await http()
+        .get('/api/auth/me')
+        .set('Authorization', `Bearer ${await signIn()}`)
+        .expect(200);
     }, 30000);
   });
 
   describe('history shown to every role names people without their e-mail addresses', () => {
-    it('product and part history carry names only; the admins\' audit log keeps e-mails', async () => {
-      const product = await http().post('/api/products').set('Authorization', `Bearer ${tokens.engineer}`)
-        .send({ name: unique('History probe'), code: unique('HP').slice(0, 40), owner: 'Test Owner', groundPlaneLengthMm: 80, groundPlaneWidthMm: 40, targetRegions: ['EU'] })
+    it("product and part history carry names only; the admins' audit log keeps e-mails", async () => {
+      const product = await http()
+        .post('/api/products')
+        .set('Authorization', `Bearer ${tokens.engineer}`)
+        .send({
+          name: unique('History probe'),
+          code: unique('HP').slice(0, 40),
+          owner: 'Test Owner',
+          groundPlaneLengthMm: 80,
+          groundPlaneWidthMm: 40,
+          targetRegions: ['EU'],
+        })
         .expect(201);
       const part = await createDraft(app, tokens.engineer);
-      for (const path of [`/api/products/${product.body.id}/history`, `/api/parts/${part.id}/history`, `/api/products/${product.body.id}/assignments/history`]) {
+      for (const path of [
+        `/api/products/${product.body.id}/history`,
+        `/api/parts/${part.id}/history`,
+        `/api/products/${product.body.id}/assignments/history`,
+      ]) {
         const history = await http().get(path).set('Authorization', `Bearer ${tokens.procurement}`).expect(200);
         expect(JSON.stringify(history.body)).not.toMatch(/@bandwright\.test/);
       }
       const productHistory = await http().get(`/api/products/${product.body.id}/history`).set('Authorization', `Bearer ${tokens.procurement}`).expect(200);
       expect(productHistory.body.items[0].user).toEqual({ id: expect.any(Number), name: expect.any(String) });
 
-      const audit = await http().get('/api/audit').query({ entityType: 'product', entityId: product.body.id }).set('Authorization', `Bearer ${tokens.admin}`).expect(200);
+      const audit = await http()
+        .get('/api/audit')
+        .query({ entityType: 'product', entityId: product.body.id })
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .expect(200);
       expect(audit.body.items[0].user).toEqual({ id: expect.any(Number), name: expect.any(String), email: DEMO.engineer });
     }, 30000);
   });

@@ -26,8 +26,16 @@ describe('auth and users (API)', () => {
     });
 
     it('answers 401 with one message for a wrong password and for an unknown e-mail', async () => {
-      const wrong = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin, password: 'not-the-password' }).expect(401);
-      const unknown = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: 'nobody@bandwright.test', password: 'not-the-password' }).expect(401);
+      const wrong = await http()
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ email: DEMO.admin, password: 'not-the-password' })
+        .expect(401);
+      const unknown = await http()
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ email: 'nobody@bandwright.test', password: 'not-the-password' })
+        .expect(401);
       expect(wrong.body.code).toBe('AUTH_BAD_CREDENTIALS');
       expect(unknown.body).toEqual(wrong.body);
     });
@@ -36,16 +44,29 @@ describe('auth and users (API)', () => {
       const missing = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin }).expect(400);
       expect(missing.body.code).toBe('VALIDATION_FAILED');
       expect(missing.body.fields.map((f: { field: string }) => f.field)).toContain('password');
-      const extra = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin, password: 'x', isAdmin: true }).expect(400);
+      const extra = await http()
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ email: DEMO.admin, password: 'x', isAdmin: true })
+        .expect(400);
       expect(extra.body.fields[0].field).toBe('isAdmin');
-      const long = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: DEMO.admin, password: 'x'.repeat(201) }).expect(400);
+      const long = await http()
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ email: DEMO.admin, password: 'x'.repeat(201) })
+        .expect(400);
       expect(long.body.fields[0].field).toBe('password');
       const wrongType = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email: 42, password: 'x' }).expect(400);
       expect(wrongType.body.fields[0].field).toBe('email');
     });
 
     it('answers 400 MALFORMED_JSON for a body that is not JSON', async () => {
-      const res = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).set('Content-Type', 'application/json').send('{"email": ').expect(400);
+      const res = await http()
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', clientAddress)
+        .set('Content-Type', 'application/json')
+        .send('{"email": ')
+        .expect(400);
       expect(res.body.code).toBe('MALFORMED_JSON');
       expect(JSON.stringify(res.body)).not.toMatch(/at .*\.js|node_modules/);
     });
@@ -106,17 +127,28 @@ describe('auth and users (API)', () => {
       const mail = await waitForMail(email, /invited/i);
       const link = new URL(linkIn(mail, '/accept-invitation'));
       const token = link.searchParams.get('token')!;
-      const accepted = await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token, password: 'a-fresh-password-1' }).expect(200);
+      const accepted = await http()
+        .post('/api/auth/accept-invitation')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ token, password: 'a-fresh-password-1' })
+        .expect(200);
       expect(accepted.body.user).toMatchObject({ email, role: 'engineer' });
 
       await tokenFor(app, email, 'a-fresh-password-1');
-      const again = await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token, password: 'another-password-2' }).expect(400);
+      const again = await http()
+        .post('/api/auth/accept-invitation')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ token, password: 'another-password-2' })
+        .expect(400);
       expect(again.body.code).toBe('LINK_TOKEN_USED');
     }, 30000);
 
     it('rejects an invitation to an e-mail that already has an account with 409', async () => {
-      const res = await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`)
-        .send({ email: DEMO.engineer, name: 'Dup', role: 'engineer' }).expect(409);
+      const res = await http()
+        .post('/api/users/invitations')
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .send({ email: DEMO.engineer, name: 'Dup', role: 'engineer' })
+        .expect(409);
       expect(res.body.code).toBe('USER_EMAIL_TAKEN');
     });
   });
@@ -124,10 +156,18 @@ describe('auth and users (API)', () => {
   describe('password reset round trip', () => {
     it('request → e-mail → new password; old tokens stop working; unknown e-mails get the same 202', async () => {
       const email = `${unique('resetter')}@bandwright.test`;
-      await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Rae Reset', role: 'procurement' }).expect(201);
+      await http()
+        .post('/api/users/invitations')
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .send({ email, name: 'Rae Reset', role: 'procurement' })
+        .expect(201);
       const invite = await waitForMail(email, /invited/i);
       const inviteToken = new URL(linkIn(invite, '/accept-invitation')).searchParams.get('token')!;
-      await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token: inviteToken, password: 'first-password-1' }).expect(200);
+      await http()
+        .post('/api/auth/accept-invitation')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ token: inviteToken, password: 'first-password-1' })
+        .expect(200);
       const oldToken = await tokenFor(app, email, 'first-password-1');
 
       await http().post('/api/auth/password-reset-requests').set('X-Forwarded-For', clientAddress).send({ email }).expect(202);
@@ -143,7 +183,11 @@ describe('auth and users (API)', () => {
     }, 30000);
 
     it('rejects a made-up token', async () => {
-      const res = await http().post('/api/auth/password-reset').set('X-Forwarded-For', clientAddress).send({ token: 'x'.repeat(43), password: 'some-password-3' }).expect(400);
+      const res = await http()
+        .post('/api/auth/password-reset')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ token: 'x'.repeat(43), password: 'some-password-3' })
+        .expect(400);
       expect(res.body.code).toBe('LINK_TOKEN_INVALID');
     });
   });
@@ -151,24 +195,44 @@ describe('auth and users (API)', () => {
   describe('role change and deactivation', () => {
     it('deactivating a user stops their token at once and records an audit entry', async () => {
       const email = `${unique('leaver')}@bandwright.test`;
-      const invited = await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Lee Leaver', role: 'engineer' }).expect(201);
+      const invited = await http()
+        .post('/api/users/invitations')
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .send({ email, name: 'Lee Leaver', role: 'engineer' })
+        .expect(201);
       const mail = await waitForMail(email, /invited/i);
       const inviteToken = new URL(linkIn(mail, '/accept-invitation')).searchParams.get('token')!;
-      const { body } = await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token: inviteToken, password: 'leaver-password-1' }).expect(200);
+      const { body } = await http()
+        .post('/api/auth/accept-invitation')
+        .set('X-Forwarded-For', clientAddress)
+        .send({ token: inviteToken, password: 'leaver-password-1' })
+        .expect(200);
       await http().get('/api/auth/me').set('Authorization', `Bearer ${body.accessToken}`).expect(200);
 
       await http().post(`/api/users/${invited.body.id}/deactivation`).set('Authorization', `Bearer ${tokens.admin}`).expect(200);
       await http().get('/api/auth/me').set('Authorization', `Bearer ${body.accessToken}`).expect(401);
       await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: 'leaver-password-1' }).expect(401);
 
-      const audit = await http().get('/api/audit').query({ entityType: 'user', entityId: invited.body.id }).set('Authorization', `Bearer ${tokens.admin}`).expect(200);
+      const audit = await http()
+        .get('/api/audit')
+        .query({ entityType: 'user', entityId: invited.body.id })
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .expect(200);
       expect(audit.body.items.map((e: { action: string }) => e.action)).toEqual(expect.arrayContaining(['invited', 'invitation-accepted', 'deactivated']));
     }, 30000);
 
     it('changes a role, and answers 400 naming the field for an unknown role and for a bad id', async () => {
       const email = `${unique('mover')}@bandwright.test`;
-      const invited = await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Mo Mover', role: 'procurement' }).expect(201);
-      const res = await http().patch(`/api/users/${invited.body.id}/role`).set('Authorization', `Bearer ${tokens.admin}`).send({ role: 'engineer' }).expect(200);
+      const invited = await http()
+        .post('/api/users/invitations')
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .send({ email, name: 'Mo Mover', role: 'procurement' })
+        .expect(201);
+      const res = await http()
+        .patch(`/api/users/${invited.body.id}/role`)
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .send({ role: 'engineer' })
+        .expect(200);
       expect(res.body.role).toBe('engineer');
       const bad = await http().patch(`/api/users/${invited.body.id}/role`).set('Authorization', `Bearer ${tokens.admin}`).send({ role: 'wizard' }).expect(400);
       expect(bad.body.fields[0].field).toBe('role');
@@ -181,11 +245,20 @@ describe('auth and users (API)', () => {
   describe('hardening of sign-in', () => {
     it('locks an account for a while after 5 wrong passwords in a row, even for the right password', async () => {
       const email = `${unique('target')}@bandwright.test`;
-      await http().post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`).send({ email, name: 'Tia Target', role: 'engineer' }).expect(201);
+      await http()
+        .post('/api/users/invitations')
+        .set('Authorization', `Bearer ${tokens.admin}`)
+        .send({ email, name: 'Tia Target', role: 'engineer' })
+        .expect(201);
       const mail = await waitForMail(email, /invited/i);
       const token = new URL(linkIn(mail, '/accept-invitation')).searchParams.get('token')!;
       await http().post('/api/auth/accept-invitation').set('X-Forwarded-For', clientAddress).send({ token, password: 'target-password-1' }).expect(200);
-      for (let i = 0; i < 5; i += 1) await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: `wrong-${i}` }).expect(401);
+      for (let i = 0; i < 5; i += 1)
+        await http()
+          .post('/api/auth/login')
+          .set('X-Forwarded-For', clientAddress)
+          .send({ email, password: `wrong-${i}` })
+          .expect(401);
       const locked = await http().post('/api/auth/login').set('X-Forwarded-For', clientAddress).send({ email, password: 'target-password-1' }).expect(429);
       expect(locked.body.code).toBe('AUTH_TEMPORARILY_LOCKED');
     }, 30000);
@@ -195,7 +268,8 @@ describe('auth and users (API)', () => {
       // An address of its own, so this flood does not use up the allowance of the other tests on loopback.
       const address = `2001:db8:${Date.now().toString(16).slice(-4)}:${Math.floor(Math.random() * 0xffff).toString(16)}::1`;
       const statuses: number[] = [];
-      for (let i = 0; i < 32; i += 1) statuses.push((await http().post('/api/auth/password-reset-requests').set('X-Forwarded-For', address).send({ email })).status);
+      for (let i = 0; i < 32; i += 1)
+        statuses.push((await http().post('/api/auth/password-reset-requests').set('X-Forwarded-For', address).send({ email })).status);
       expect(statuses.slice(0, 30).every((s) => s === 202)).toBe(true);
       expect(statuses.slice(30)).toEqual([429, 429]);
     }, 30000);

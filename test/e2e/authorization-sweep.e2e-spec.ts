@@ -16,15 +16,19 @@ const DOCS_ROUTES = /^\/api\/docs/;
 // Signing out ends the token each role's sweep runs with, so it is called last.
 const ENDS_SESSION = 'post /api/auth/logout';
 
-const toConcretePath = (openApiPath: string) => openApiPath.replace(/\{[^}]+\}/g, NO_SUCH_ID);
-const expressToOpenApi = (path: string) => path.replace(/:([A-Za-z0-9_]+)/g, '{$1}');
+const toConcretePath = (openApiPath: string) => openApiPath.replace(/\{[^{}]+\}/g, NO_SUCH_ID);
+const expressToOpenApi = (path: string) => path.replace(/:(\w+)/g, '{$1}');
 
 /** Every route the running Express app answers, as "METHOD /path" in OpenAPI notation. */
 function liveRoutes(app: INestApplication): string[] {
   const express = app.getHttpAdapter().getInstance() as { router: { stack: { route?: { path: string; methods: Record<string, boolean> } }[] } };
   return express.router.stack
     .filter((layer) => layer.route)
-    .flatMap((layer) => Object.keys(layer.route!.methods).filter((m) => METHODS.includes(m)).map((m) => `${m.toUpperCase()} ${expressToOpenApi(layer.route!.path)}`))
+    .flatMap((layer) =>
+      Object.keys(layer.route!.methods)
+        .filter((m) => METHODS.includes(m))
+        .map((m) => `${m.toUpperCase()} ${expressToOpenApi(layer.route!.path)}`),
+    )
     .filter((route) => !DOCS_ROUTES.test(route.split(' ')[1]));
 }
 
@@ -40,7 +44,9 @@ describe('authorization sweep over every documented route', () => {
       paths: Record<string, Record<string, { 'x-roles'?: string[] }>>;
     };
     operations = Object.entries(docs.paths).flatMap(([path, item]) =>
-      Object.entries(item).filter(([method]) => METHODS.includes(method)).map(([method, op]) => ({ method, path, roles: op['x-roles'] })),
+      Object.entries(item)
+        .filter(([method]) => METHODS.includes(method))
+        .map(([method, op]) => ({ method, path, roles: op['x-roles'] })),
     );
     const endsSession = (op: Operation) => Number(`${op.method} ${op.path}` === ENDS_SESSION);
     operations.sort((a, b) => endsSession(a) - endsSession(b));
@@ -73,16 +79,20 @@ describe('authorization sweep over every documented route', () => {
     expect(leaks).toEqual([]);
   });
 
-  it.each(ROLES)('as %s: 403 where the role is not listed, never 401/403/5xx where it is', async (role) => {
-    const problems: string[] = [];
-    for (const op of operations.filter((o) => !o.roles?.includes('public'))) {
-      const res = await call(op, tokens[role]);
-      const allowed = op.roles!.includes(role);
-      if (!allowed && res.status !== 403) problems.push(`${op.method.toUpperCase()} ${op.path}: expected 403, got ${res.status}`);
-      if (allowed && (res.status === 401 || res.status === 403 || res.status >= 500)) {
-        problems.push(`${op.method.toUpperCase()} ${op.path}: allowed for ${role} but got ${res.status} ${res.body?.code ?? ''}`);
+  it.each(ROLES)(
+    'as %s: 403 where the role is not listed, never 401/403/5xx where it is',
+    async (role) => {
+      const problems: string[] = [];
+      for (const op of operations.filter((o) => !o.roles?.includes('public'))) {
+        const res = await call(op, tokens[role]);
+        const allowed = op.roles!.includes(role);
+        if (!allowed && res.status !== 403) problems.push(`${op.method.toUpperCase()} ${op.path}: expected 403, got ${res.status}`);
+        if (allowed && (res.status === 401 || res.status === 403 || res.status >= 500)) {
+          problems.push(`${op.method.toUpperCase()} ${op.path}: allowed for ${role} but got ${res.status} ${res.body?.code ?? ''}`);
+        }
       }
-    }
-    expect(problems).toEqual([]);
-  }, 60000);
+      expect(problems).toEqual([]);
+    },
+    60000,
+  );
 });

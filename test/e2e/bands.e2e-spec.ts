@@ -17,7 +17,13 @@ describe('band library, band sets and regulatory limits (API)', () => {
   };
   const auditOf = async (entityType: string, entityId: number) =>
     // Newest first; only the last three matter here (an id freed by a rolled-back insert can be reused).
-    ((await call('get', `/api/audit?entityType=${entityType}&entityId=${entityId}`, 'admin').expect(200)).body.items as { action: string; user: { email: string } | null; changes: Record<string, unknown> }[]).slice(0, 3);
+    (
+      (await call('get', `/api/audit?entityType=${entityType}&entityId=${entityId}`, 'admin').expect(200)).body.items as {
+        action: string;
+        user: { email: string } | null;
+        changes: Record<string, unknown>;
+      }[]
+    ).slice(0, 3);
 
   beforeAll(async () => {
     app = await createApiApp();
@@ -26,9 +32,15 @@ describe('band library, band sets and regulatory limits (API)', () => {
   afterAll(() => app.close());
 
   const newBand = () => ({
-    technology: 'ism', designation: unique('T').slice(0, 38), name: 'Test sub-GHz band', duplex: 'half-duplex',
-    ranges: [{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.79 }], regions: ['EU'],
-    sourceDocument: 'ERC/REC 70-03', sourceTable: 'Annex 1', sourceNote: 'test data',
+    technology: 'ism',
+    designation: unique('T').slice(0, 38),
+    name: 'Test sub-GHz band',
+    duplex: 'half-duplex',
+    ranges: [{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.79 }],
+    regions: ['EU'],
+    sourceDocument: 'ERC/REC 70-03',
+    sourceTable: 'Annex 1',
+    sourceNote: 'test data',
   });
 
   describe('GET /api/bands', () => {
@@ -54,12 +66,20 @@ describe('band library, band sets and regulatory limits (API)', () => {
     it('returns B12 in the documented shape with its source and release note', async () => {
       const res = await call('get', '/api/bands?designation=B12', 'procurement').expect(200);
       expect(res.body).toHaveLength(1);
-      expect(res.body[0]).toEqual(expect.objectContaining({
-        id: 112, technology: 'lte', designation: 'B12', duplex: 'FDD',
-        // 3GPP TS 36.101 Table 5.5-1 (current release): UL 699–716, DL 729–746 MHz
-        ranges: [{ role: 'uplink', fromMhz: 699, toMhz: 716 }, { role: 'downlink', fromMhz: 729, toMhz: 746 }],
-        source: { document: '3GPP TS 36.101', table: expect.stringContaining('5.5-1'), note: expect.stringContaining('698') },
-      }));
+      expect(res.body[0]).toEqual(
+        expect.objectContaining({
+          id: 112,
+          technology: 'lte',
+          designation: 'B12',
+          duplex: 'FDD',
+          // 3GPP TS 36.101 Table 5.5-1 (current release): UL 699–716, DL 729–746 MHz
+          ranges: [
+            { role: 'uplink', fromMhz: 699, toMhz: 716 },
+            { role: 'downlink', fromMhz: 729, toMhz: 746 },
+          ],
+          source: { document: '3GPP TS 36.101', table: expect.stringContaining('5.5-1'), note: expect.stringContaining('698') },
+        }),
+      );
     });
 
     it('filters by technology', async () => {
@@ -67,20 +87,29 @@ describe('band library, band sets and regulatory limits (API)', () => {
       expect(res.body.length).toBeGreaterThanOrEqual(12);
       expect(res.body.every((b: { technology: string }) => b.technology === 'nr')).toBe(true);
       // 3GPP TS 38.101-1 Table 5.2-1: n78 3300–3800 MHz TDD
-      expect(res.body.find((b: { designation: string }) => b.designation === 'n78')).toMatchObject({ duplex: 'TDD', ranges: [{ role: 'tdd', fromMhz: 3300, toMhz: 3800 }] });
+      expect(res.body.find((b: { designation: string }) => b.designation === 'n78')).toMatchObject({
+        duplex: 'TDD',
+        ranges: [{ role: 'tdd', fromMhz: 3300, toMhz: 3800 }],
+      });
     });
 
     it('filters by overlap with a frequency window and by a single frequency', async () => {
       // Upper L-band RNSS 1559–1610 MHz holds L1/E1/B1I/B1C/G1 but not L5 (ITU RR Art. 5, RNSS allocation; from memory).
-      const upper = (await call('get', '/api/bands?technology=gnss&fromMhz=1559&toMhz=1610', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
+      const upper = (await call('get', '/api/bands?technology=gnss&fromMhz=1559&toMhz=1610', 'engineer').expect(200)).body.map(
+        (b: { designation: string }) => b.designation,
+      );
       expect(upper).toEqual(expect.arrayContaining(['GPS L1', 'Galileo E1', 'GLONASS G1', 'BeiDou B1I', 'BeiDou B1C']));
       expect(upper).not.toContain('GPS L5');
       // 1575.42 MHz lies in GPS L1, Galileo E1 and BeiDou B1C, not in B1I (1559.052–1563.144).
-      const point = (await call('get', '/api/bands?fromMhz=1575.42&toMhz=1575.42', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
+      const point = (await call('get', '/api/bands?fromMhz=1575.42&toMhz=1575.42', 'engineer').expect(200)).body.map(
+        (b: { designation: string }) => b.designation,
+      );
       expect(point).toEqual(expect.arrayContaining(['GPS L1', 'Galileo E1', 'BeiDou B1C']));
       expect(point).not.toContain('BeiDou B1I');
       // 700 MHz: B12 uplink (699–716), B17 (704–716 uplink starts above 700) no, B28 uplink 703– no, B85 uplink 698–716 yes.
-      const at700 = (await call('get', '/api/bands?technology=lte&fromMhz=700&toMhz=700', 'engineer').expect(200)).body.map((b: { designation: string }) => b.designation);
+      const at700 = (await call('get', '/api/bands?technology=lte&fromMhz=700&toMhz=700', 'engineer').expect(200)).body.map(
+        (b: { designation: string }) => b.designation,
+      );
       expect(at700.sort()).toEqual(['B12', 'B85']);
     });
   });
@@ -127,7 +156,11 @@ describe('band library, band sets and regulatory limits (API)', () => {
     it('creates, corrects and deletes a band, each with an audit entry', async () => {
       const input = newBand();
       const created = await call('post', '/api/bands', 'admin', input).expect(201);
-      expect(created.body).toMatchObject({ designation: input.designation, ranges: input.ranges, source: { document: 'ERC/REC 70-03', table: 'Annex 1', note: 'test data' } });
+      expect(created.body).toMatchObject({
+        designation: input.designation,
+        ranges: input.ranges,
+        source: { document: 'ERC/REC 70-03', table: 'Annex 1', note: 'test data' },
+      });
       const id = created.body.id;
       const patched = await call('patch', `/api/bands/${id}`, 'admin', { ranges: [{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.8 }] }).expect(200);
       expect(patched.body.ranges).toEqual([{ role: 'transmit-receive', fromMhz: 433.05, toMhz: 434.8 }]);
@@ -153,7 +186,14 @@ describe('band library, band sets and regulatory limits (API)', () => {
     });
 
     it('returns one set and 404 for an unknown one', async () => {
-      expect((await call('get', '/api/band-sets/2', 'procurement').expect(200)).body.bands.map((b: { designation: string }) => b.designation)).toEqual(['B2', 'B4', 'B5', 'B12', 'B13', 'B66']);
+      expect((await call('get', '/api/band-sets/2', 'procurement').expect(200)).body.bands.map((b: { designation: string }) => b.designation)).toEqual([
+        'B2',
+        'B4',
+        'B5',
+        'B12',
+        'B13',
+        'B66',
+      ]);
       expect((await call('get', '/api/band-sets/999999', 'procurement').expect(404)).body.code).toBe('BAND_SET_NOT_FOUND');
     });
   });
@@ -195,7 +235,10 @@ describe('band library, band sets and regulatory limits (API)', () => {
       await call('get', `/api/band-sets/${id}`, 'admin').expect(404);
       const audit = await auditOf('band-set', id);
       expect(audit.map((e) => e.action)).toEqual(['deleted', 'updated', 'created']);
-      expect(audit[1].changes.bandIds).toEqual([[103, 120], [108, 103]]);
+      expect(audit[1].changes.bandIds).toEqual([
+        [103, 120],
+        [108, 103],
+      ]);
       expect(audit[1].user?.email).toBe('admin@bandwright.test');
     });
   });
@@ -209,9 +252,22 @@ describe('band library, band sets and regulatory limits (API)', () => {
     it.each(['procurement', 'engineer', 'admin'] as const)('lists the seeded limits for %s', async (role) => {
       const res = await call('get', '/api/regulatory-limits', role).expect(200);
       // 47 CFR 15.247(b)(3), (b)(4): 1 W conducted, reduced dB for dB above 6 dBi.
-      expect(res.body.find((l: { id: number }) => l.id === 2)).toMatchObject({ region: 'US', fromMhz: 2400, toMhz: 2483.5, kind: 'conducted-gain-rule', valueDbm: 30, gainThresholdDbi: 6, reductionDbPerDb: 1 });
+      expect(res.body.find((l: { id: number }) => l.id === 2)).toMatchObject({
+        region: 'US',
+        fromMhz: 2400,
+        toMhz: 2483.5,
+        kind: 'conducted-gain-rule',
+        valueDbm: 30,
+        gainThresholdDbi: 6,
+        reductionDbPerDb: 1,
+      });
       // ETSI EN 300 328 (from memory): 20 dBm e.i.r.p.
-      expect(res.body.find((l: { id: number }) => l.id === 4)).toMatchObject({ region: 'EU', kind: 'eirp', valueDbm: 20, note: expect.stringMatching(/from memory/i) });
+      expect(res.body.find((l: { id: number }) => l.id === 4)).toMatchObject({
+        region: 'EU',
+        kind: 'eirp',
+        valueDbm: 20,
+        note: expect.stringMatching(/from memory/i),
+      });
     });
 
     it('keeps 868 MHz limits as unrounded ERP in dBm', async () => {
@@ -233,7 +289,16 @@ describe('band library, band sets and regulatory limits (API)', () => {
   });
 
   describe('POST, PATCH, DELETE /api/regulatory-limits', () => {
-    const body = () => ({ region: 'EU', title: unique('Test limit'), fromMhz: 433.05, toMhz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW e.r.p.', source: 'ERC/REC 70-03 Annex 1 (test)' });
+    const body = () => ({
+      region: 'EU',
+      title: unique('Test limit'),
+      fromMhz: 433.05,
+      toMhz: 434.79,
+      kind: 'erp',
+      valueDbm: 10,
+      valueText: '10 mW e.r.p.',
+      source: 'ERC/REC 70-03 Annex 1 (test)',
+    });
 
     it.each([
       ['post', '/api/regulatory-limits'],
@@ -287,7 +352,10 @@ describe('band library, band sets and regulatory limits (API)', () => {
       const bands = await app.get(BandsService).findByIds([120, 999999, 501]);
       expect(bands.map((b) => b.designation)).toEqual(['B20', 'GPS L1']);
       // 3GPP TS 36.101 Table 5.5-1: band 20 UL 832–862, DL 791–821 MHz (uplink above downlink).
-      expect(bands[0].ranges).toEqual([{ role: 'uplink', fromMhz: 832, toMhz: 862 }, { role: 'downlink', fromMhz: 791, toMhz: 821 }]);
+      expect(bands[0].ranges).toEqual([
+        { role: 'uplink', fromMhz: 832, toMhz: 862 },
+        { role: 'downlink', fromMhz: 791, toMhz: 821 },
+      ]);
     });
   });
 });

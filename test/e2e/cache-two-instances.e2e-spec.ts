@@ -4,7 +4,11 @@ import { DataSource } from 'typeorm';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
 import { createDraft, s1pWithGamma } from '../support/parts';
 
-interface Finding { ruleId: string; severity: string; code: string }
+interface Finding {
+  ruleId: string;
+  severity: string;
+  code: string;
+}
 interface Matrix {
   rows: { radioId: number; designation: string }[];
   columns: { partId: number; reviewState: string; assignments: { radioId: number; state: string }[] }[];
@@ -35,11 +39,33 @@ describe('caches on two instances: a write on one is seen at once on the other',
     [a, b] = await Promise.all([createApiApp(), createApiApp()]);
     tokens = await demoTokens(a);
     const ble = (await on(a).get('/api/bands').query({ designation: 'BLE 2.4 GHz' }).set(as('engineer')).expect(200)).body[0];
-    const product = await on(a).post('/api/products').set(as('engineer'))
-      .send({ name: unique('cache probe'), code: unique('CP').slice(0, 40), owner: 'e2e', groundPlaneLengthMm: 62, groundPlaneWidthMm: 28, targetRegions: ['EU'] }).expect(201);
+    const product = await on(a)
+      .post('/api/products')
+      .set(as('engineer'))
+      .send({
+        name: unique('cache probe'),
+        code: unique('CP').slice(0, 40),
+        owner: 'e2e',
+        groundPlaneLengthMm: 62,
+        groundPlaneWidthMm: 28,
+        targetRegions: ['EU'],
+      })
+      .expect(201);
     productId = product.body.id;
-    const radio = await on(a).post(`/api/products/${productId}/radios`).set(as('engineer'))
-      .send({ name: 'BLE', technology: 'ble', module: 'test module', transmitPowerDbm: 8, polarization: 'linear', connector: 'solder-pad', feedLossDb: PROBE_FEED_LOSS, bands: [{ bandId: ble.id, certifiedMaxGainDbi: 2.5 }] }).expect(201);
+    const radio = await on(a)
+      .post(`/api/products/${productId}/radios`)
+      .set(as('engineer'))
+      .send({
+        name: 'BLE',
+        technology: 'ble',
+        module: 'test module',
+        transmitPowerDbm: 8,
+        polarization: 'linear',
+        connector: 'solder-pad',
+        feedLossDb: PROBE_FEED_LOSS,
+        bands: [{ bandId: ble.id, certifiedMaxGainDbi: 2.5 }],
+      })
+      .expect(201);
     radioId = radio.body.id;
     const draft = await createDraft(a, tokens.engineer);
     partId = draft.id;
@@ -53,11 +79,19 @@ describe('caches on two instances: a write on one is seen at once on the other',
     await Promise.all([a.close(), b.close()]);
   });
 
-  const searchOnB = async () => (await on(b).get('/api/parts').query({ q: mpn }).set(as('engineer')).expect(200)).body.items.find((p: { id: number }) => p.id === partId);
-  const coversOnB = async () => (await on(b).get('/api/parts').query({ q: mpn, covers: '2400-2483.5' }).set(as('engineer')).expect(200)).body.items.map((p: { id: number }) => p.id);
+  const searchOnB = async () =>
+    (await on(b).get('/api/parts').query({ q: mpn }).set(as('engineer')).expect(200)).body.items.find((p: { id: number }) => p.id === partId);
+  const coversOnB = async () =>
+    (await on(b).get('/api/parts').query({ q: mpn, covers: '2400-2483.5' }).set(as('engineer')).expect(200)).body.items.map((p: { id: number }) => p.id);
   const pageOnB = async () => (await on(b).get(`/api/parts/${partId}`).set(as('engineer')).expect(200)).body;
   const matrixOn = async (app: INestApplication, parts?: number[]): Promise<Matrix> =>
-    (await on(app).get(`/api/products/${productId}/matrix`).query(parts ? { parts: parts.join(',') } : {}).set(as('engineer')).expect(200)).body;
+    (
+      await on(app)
+        .get(`/api/products/${productId}/matrix`)
+        .query(parts ? { parts: parts.join(',') } : {})
+        .set(as('engineer'))
+        .expect(200)
+    ).body;
   const candidatesOnB = async () =>
     (await on(b).get(`/api/products/${productId}/radios/${radioId}/candidates`).query({ limit: 200 }).set(as('engineer')).expect(200)).body;
   const warmB = () => Promise.all([searchOnB(), coversOnB(), pageOnB(), matrixOn(b, [partId]), matrixOn(b), candidatesOnB()]);
@@ -68,7 +102,13 @@ describe('caches on two instances: a write on one is seen at once on the other',
     expect(covering).not.toContain(partId);
     expect(page.measurements).toEqual([]);
 
-    const s11 = s1pWithGamma([[2300, 0.1], [2400, 0.1], [2450, 0.1], [2500, 0.1], [2600, 0.1]]);
+    const s11 = s1pWithGamma([
+      [2300, 0.1],
+      [2400, 0.1],
+      [2450, 0.1],
+      [2500, 0.1],
+      [2600, 0.1],
+    ]);
     await on(a).post(`/api/parts/${partId}/measurements`).set(as('engineer')).field('kind', 's11').attach('file', Buffer.from(s11), 'probe.s1p').expect(201);
 
     expect((await searchOnB()).measuredKinds).toEqual(['s11']);
@@ -89,7 +129,11 @@ describe('caches on two instances: a write on one is seen at once on the other',
     expect((await pageOnB()).reviewState).toBe('in-review');
 
     await warmB();
-    await on(a).post(`/api/parts/${partId}/approval`).set(as('admin')).send({ version: page.version + 1 }).expect(200);
+    await on(a)
+      .post(`/api/parts/${partId}/approval`)
+      .set(as('admin'))
+      .send({ version: page.version + 1 })
+      .expect(200);
     expect((await searchOnB()).reviewState).toBe('approved');
     expect((await pageOnB()).reviewState).toBe('approved');
     expect((await matrixOn(b, [partId])).columns[0].reviewState).toBe('approved');
@@ -99,18 +143,32 @@ describe('caches on two instances: a write on one is seen at once on the other',
   it('rule created and edited on A: the matrix and candidates on B apply it at once', async () => {
     await warmB();
     const probe = {
-      id: ruleId, title: 'Cache probe', description: 'made by the cache e2e test', severity: 'marginal', enabled: true, version: 1, source: 'test',
+      id: ruleId,
+      title: 'Cache probe',
+      description: 'made by the cache e2e test',
+      severity: 'marginal',
+      enabled: true,
+      version: 1,
+      source: 'test',
       parameters: { loss: PROBE_FEED_LOSS },
       conditions: { all: [{ fact: 'feedLossDb', operator: 'equal', value: { param: 'loss' } }] },
       event: { type: 'finding', params: { code: 'CACHE_PROBE', message: 'probe on {designation}' } },
     };
     await on(a).post('/api/rules').set(as('admin')).send({ definition: probe }).expect(201);
-    const probed = (m: Matrix) => m.cells.flatMap((c) => c.findings).filter((f) => f.ruleId === ruleId).map((f) => f.severity);
+    const probed = (m: Matrix) =>
+      m.cells
+        .flatMap((c) => c.findings)
+        .filter((f) => f.ruleId === ruleId)
+        .map((f) => f.severity);
     expect(probed(await matrixOn(b, [partId]))).toEqual(['marginal']);
     const candidate = (await candidatesOnB()).candidates.find((c: { partId: number }) => c.partId === partId);
     expect(candidate.bands[0].findings.map((f: Finding) => f.ruleId)).toContain(ruleId);
 
-    await on(a).put(`/api/rules/${ruleId}`).set(as('admin')).send({ version: 1, definition: { ...probe, severity: 'fail' } }).expect(200);
+    await on(a)
+      .put(`/api/rules/${ruleId}`)
+      .set(as('admin'))
+      .send({ version: 1, definition: { ...probe, severity: 'fail' } })
+      .expect(200);
     expect(probed(await matrixOn(b, [partId]))).toEqual(['fail']);
     const edited = (await candidatesOnB()).candidates.find((c: { partId: number }) => c.partId === partId);
     expect(edited.status).toBe('fail');
@@ -119,7 +177,11 @@ describe('caches on two instances: a write on one is seen at once on the other',
   it('radio edit on A: the matrix rows and candidates on B follow', async () => {
     const radio = (await on(a).get(`/api/products/${productId}/radios/${radioId}`).set(as('engineer')).expect(200)).body;
     await warmB();
-    await on(a).patch(`/api/products/${productId}/radios/${radioId}`).set(as('engineer')).send({ version: radio.version, name: 'BLE renamed', feedLossDb: 0.5 }).expect(200);
+    await on(a)
+      .patch(`/api/products/${productId}/radios/${radioId}`)
+      .set(as('engineer'))
+      .send({ version: radio.version, name: 'BLE renamed', feedLossDb: 0.5 })
+      .expect(200);
     const matrix = await matrixOn(b, [partId]);
     expect(matrix.rows.map((r) => (r as { radioName?: string }).radioName)).toEqual(['BLE renamed']);
     // The probe rule needs the old feed loss: it no longer fires.

@@ -11,8 +11,17 @@ const LOW_EFFICIENCY_CHIP = 1029;
 const GOOD_BLE_CHIP = 1025;
 const LINEAR_GNSS_CHIP = 1019;
 
-interface Cell { row: number; column: number; status: string; findings: { ruleId: string; severity: string; code: string; message: string }[] }
-interface Matrix { rows: { radioId: number; bandId: number; designation: string; ranges: unknown[] }[]; columns: { partId: number; mpn: string; title: string }[]; cells: Cell[] }
+interface Cell {
+  row: number;
+  column: number;
+  status: string;
+  findings: { ruleId: string; severity: string; code: string; message: string }[];
+}
+interface Matrix {
+  rows: { radioId: number; bandId: number; designation: string; ranges: unknown[] }[];
+  columns: { partId: number; mpn: string; title: string }[];
+  cells: Cell[];
+}
 
 function cellsOf(matrix: Matrix, radioId: number, partId: number): Cell[] {
   const column = matrix.columns.findIndex((c) => c.partId === partId);
@@ -22,7 +31,13 @@ function cellsOf(matrix: Matrix, radioId: number, partId: number): Cell[] {
 /** A rule that can never fire on real data, so creating it leaves everyone's matrices alone. */
 function inertRule(id: string, overrides: Record<string, unknown> = {}) {
   return {
-    id, title: `Test rule ${id}`, description: 'made by the e2e tests', severity: 'marginal', enabled: true, version: 1, source: 'test',
+    id,
+    title: `Test rule ${id}`,
+    description: 'made by the e2e tests',
+    severity: 'marginal',
+    enabled: true,
+    version: 1,
+    source: 'test',
     parameters: { designationNever: `never-${id}` },
     conditions: { all: [{ fact: 'designation', operator: 'equal', value: { param: 'designationNever' } }] },
     event: { type: 'finding', params: { code: 'TEST_RULE', message: 'never {designation}' } },
@@ -45,10 +60,32 @@ describe('compatibility (API)', () => {
   /** A product of our own with one BLE radio, so assignment tests never touch the demo products. */
   async function ownBleProduct(): Promise<{ productId: number; radioId: number }> {
     const bands = await http().get('/api/bands').query({ designation: 'BLE 2.4 GHz' }).set(as('engineer')).expect(200);
-    const product = await http().post('/api/products').set(as('engineer'))
-      .send({ name: unique('matrix test'), code: unique('MT').slice(0, 40), owner: 'e2e', groundPlaneLengthMm: 62, groundPlaneWidthMm: 28, targetRegions: ['EU', 'US'] }).expect(201);
-    const radio = await http().post(`/api/products/${product.body.id}/radios`).set(as('engineer'))
-      .send({ name: 'BLE', technology: 'ble', module: 'test module', transmitPowerDbm: 8, polarization: 'linear', connector: 'solder-pad', feedLossDb: 0.2, bands: [{ bandId: bands.body[0].id, certifiedMaxGainDbi: 2.5 }] }).expect(201);
+    const product = await http()
+      .post('/api/products')
+      .set(as('engineer'))
+      .send({
+        name: unique('matrix test'),
+        code: unique('MT').slice(0, 40),
+        owner: 'e2e',
+        groundPlaneLengthMm: 62,
+        groundPlaneWidthMm: 28,
+        targetRegions: ['EU', 'US'],
+      })
+      .expect(201);
+    const radio = await http()
+      .post(`/api/products/${product.body.id}/radios`)
+      .set(as('engineer'))
+      .send({
+        name: 'BLE',
+        technology: 'ble',
+        module: 'test module',
+        transmitPowerDbm: 8,
+        polarization: 'linear',
+        connector: 'solder-pad',
+        feedLossDb: 0.2,
+        bands: [{ bandId: bands.body[0].id, certifiedMaxGainDbi: 2.5 }],
+      })
+      .expect(201);
     return { productId: product.body.id, radioId: radio.body.id };
   }
 
@@ -89,15 +126,31 @@ describe('compatibility (API)', () => {
     });
 
     it('shows the expected mix of states over the demo products, and no data for a part without measurements', async () => {
-      const draft = await http().post('/api/parts').set(as('engineer'))
-        .send({ manufacturer: 'E2E Test Antennas', mpn: unique('ND'), title: 'draft part with no data', formFactor: 'chip', connector: 'solder-pad', polarization: 'linear' }).expect(201);
+      const draft = await http()
+        .post('/api/parts')
+        .set(as('engineer'))
+        .send({
+          manufacturer: 'E2E Test Antennas',
+          mpn: unique('ND'),
+          title: 'draft part with no data',
+          formFactor: 'chip',
+          connector: 'solder-pad',
+          polarization: 'linear',
+        })
+        .expect(201);
       const statuses = new Set<string>();
       for (const product of [TRACKER, GATEWAY]) {
         const matrix: Matrix = (await http().get(`/api/products/${product}/matrix`).set(as('engineer')).expect(200)).body;
         for (const cell of matrix.cells) statuses.add(cell.status);
       }
       expect([...statuses]).toEqual(expect.arrayContaining(['pass', 'marginal', 'fail']));
-      const noData: Matrix = (await http().get(`/api/products/${TRACKER}/matrix`).query({ parts: String(draft.body.id) }).set(as('engineer')).expect(200)).body;
+      const noData: Matrix = (
+        await http()
+          .get(`/api/products/${TRACKER}/matrix`)
+          .query({ parts: String(draft.body.id) })
+          .set(as('engineer'))
+          .expect(200)
+      ).body;
       expect(noData.cells.every((c) => c.status === 'no-data')).toBe(true);
       expect(noData.cells[0].findings.find((f) => f.code === 'BAND_NOT_COVERED_NO_DATA')!.message).toContain('S11/VSWR');
     });
@@ -112,7 +165,8 @@ describe('compatibility (API)', () => {
 
     it('ranks approved parts for the tracker BLE radio: passes first by margin, each with its deciding figure', async () => {
       const res = await http().get(`/api/products/${TRACKER}/radios/${TRACKER_BLE}/candidates`).query({ limit: 200 }).set(as('procurement')).expect(200);
-      const candidates: { partId: number; status: string; marginDb: number | null; deciding: { text: string } | null; assignment: string | null }[] = res.body.candidates;
+      const candidates: { partId: number; status: string; marginDb: number | null; deciding: { text: string } | null; assignment: string | null }[] =
+        res.body.candidates;
       const order = { pass: 0, marginal: 1, 'no-data': 2, fail: 3 } as Record<string, number>;
       for (let i = 1; i < candidates.length; i++) expect(order[candidates[i].status]).toBeGreaterThanOrEqual(order[candidates[i - 1].status]);
       const passes = candidates.filter((c) => c.status === 'pass');
@@ -135,8 +189,13 @@ describe('compatibility (API)', () => {
 
     it('answers 400 for a bad body and 404 for an unknown part or a radio of another product', async () => {
       const { productId, radioId } = await ownBleProduct();
-      expect((await http().post(`/api/products/${productId}/radios/${radioId}/shortlist`).set(as('engineer')).send({ partId: 'x' }).expect(400)).body.fields[0].field).toBe('partId');
-      expect((await http().post(`/api/products/${productId}/radios/${radioId}/shortlist`).set(as('engineer')).send({ partId: 999999 }).expect(404)).body.code).toBe('PART_NOT_FOUND');
+      expect(
+        (await http().post(`/api/products/${productId}/radios/${radioId}/shortlist`).set(as('engineer')).send({ partId: 'x' }).expect(400)).body.fields[0]
+          .field,
+      ).toBe('partId');
+      expect(
+        (await http().post(`/api/products/${productId}/radios/${radioId}/shortlist`).set(as('engineer')).send({ partId: 999999 }).expect(404)).body.code,
+      ).toBe('PART_NOT_FOUND');
       await http().put(`/api/products/${productId}/radios/${TRACKER_BLE}/choice`).set(as('engineer')).send({ partId: GOOD_BLE_CHIP }).expect(404);
       const assignments = await http().get(`/api/products/${productId}/assignments`).set(as('engineer')).expect(200);
       expect(assignments.body).toEqual([]);
@@ -150,13 +209,20 @@ describe('compatibility (API)', () => {
       expect(cellsOf(matrix, radioId, LOW_EFFICIENCY_CHIP)[0].status).toBe('fail');
 
       const chosen = await http().put(`/api/products/${productId}/radios/${radioId}/choice`).set(as('admin')).send({ partId: GOOD_BLE_CHIP }).expect(200);
-      expect(chosen.body.map((a: { partId: number; state: string }) => [a.partId, a.state]).sort()).toEqual([[LOW_EFFICIENCY_CHIP, 'shortlisted'], [GOOD_BLE_CHIP, 'chosen']].sort());
+      expect(chosen.body.map((a: { partId: number; state: string }) => [a.partId, a.state]).sort()).toEqual(
+        [
+          [LOW_EFFICIENCY_CHIP, 'shortlisted'],
+          [GOOD_BLE_CHIP, 'chosen'],
+        ].sort(),
+      );
       matrix = (await http().get(`/api/products/${productId}/matrix`).set(as('engineer')).expect(200)).body;
       expect(matrix.columns[0].partId).toBe(GOOD_BLE_CHIP);
       expect(cellsOf(matrix, radioId, GOOD_BLE_CHIP).map((c) => c.status)).toEqual(['pass']);
 
       await http().delete(`/api/products/${productId}/radios/${radioId}/choice`).set(as('engineer')).expect(200);
-      expect((await http().delete(`/api/products/${productId}/radios/${radioId}/choice`).set(as('engineer')).expect(404)).body.code).toBe('ASSIGNMENT_NOT_FOUND');
+      expect((await http().delete(`/api/products/${productId}/radios/${radioId}/choice`).set(as('engineer')).expect(404)).body.code).toBe(
+        'ASSIGNMENT_NOT_FOUND',
+      );
       const removed = await http().delete(`/api/products/${productId}/radios/${radioId}/shortlist/${LOW_EFFICIENCY_CHIP}`).set(as('engineer')).expect(200);
       expect(removed.body.map((a: { partId: number }) => a.partId)).toEqual([GOOD_BLE_CHIP]);
 
@@ -171,9 +237,15 @@ describe('compatibility (API)', () => {
       await http().get('/api/rules').expect(401);
       await http().get('/api/rules').set(as('procurement')).expect(403);
       const list = await http().get('/api/rules').set(as('engineer')).expect(200);
-      expect(list.body.map((r: { id: string }) => r.id)).toEqual(expect.arrayContaining(['band-coverage', 'vswr-in-band', 'efficiency-floor', 'regional-power-limit', 'gnss-polarization', 'part-end-of-life']));
+      expect(list.body.map((r: { id: string }) => r.id)).toEqual(
+        expect.arrayContaining(['band-coverage', 'vswr-in-band', 'efficiency-floor', 'regional-power-limit', 'gnss-polarization', 'part-end-of-life']),
+      );
       await http().get('/api/rules/vswr-in-band').set(as('engineer')).expect(200);
-      await http().post('/api/rules').set(as('engineer')).send({ definition: inertRule(unique('e2e')) }).expect(403);
+      await http()
+        .post('/api/rules')
+        .set(as('engineer'))
+        .send({ definition: inertRule(unique('e2e')) })
+        .expect(403);
       await http().put('/api/rules/vswr-in-band').set(as('engineer')).send({ definition: {}, version: 1 }).expect(403);
       await http().put('/api/rules/vswr-in-band/enabled').set(as('engineer')).send({ enabled: false, version: 1 }).expect(403);
       await http().post('/api/rules/validation').set(as('engineer')).send({ definition: {} }).expect(403);
@@ -181,35 +253,89 @@ describe('compatibility (API)', () => {
     });
 
     it('validates without saving and names an unknown fact with its place', async () => {
-      const res = await http().post('/api/rules/validation').set(as('admin'))
-        .send({ definition: inertRule('e2e-probe', { conditions: { all: [{ fact: 'efficiencyPercentage', operator: 'lessThan', value: 40 }] } }) }).expect(200);
+      const res = await http()
+        .post('/api/rules/validation')
+        .set(as('admin'))
+        .send({ definition: inertRule('e2e-probe', { conditions: { all: [{ fact: 'efficiencyPercentage', operator: 'lessThan', value: 40 }] } }) })
+        .expect(200);
       expect(res.body).toEqual({ valid: false, problems: [{ path: 'conditions.all[0].fact', message: 'unknown fact "efficiencyPercentage"' }] });
-      expect((await http().post('/api/rules/validation').set(as('admin')).send({ definition: inertRule('e2e-probe') }).expect(200)).body.valid).toBe(true);
+      expect(
+        (
+          await http()
+            .post('/api/rules/validation')
+            .set(as('admin'))
+            .send({ definition: inertRule('e2e-probe') })
+            .expect(200)
+        ).body.valid,
+      ).toBe(true);
     });
 
     it('creates, edits with validation before saving, refuses stale versions, disables, and keeps the history', async () => {
       const id = unique('e2e-rule').toLowerCase();
-      const created = await http().post('/api/rules').set(as('admin')).send({ definition: inertRule(id) }).expect(201);
+      const created = await http()
+        .post('/api/rules')
+        .set(as('admin'))
+        .send({ definition: inertRule(id) })
+        .expect(201);
       expect(created.body).toMatchObject({ id, version: 1, origin: 'admin', enabled: true });
-      expect((await http().post('/api/rules').set(as('admin')).send({ definition: inertRule(id) }).expect(409)).body.code).toBe('RULE_ID_TAKEN');
-      expect((await http().post('/api/rules').set(as('admin')).send({ definition: inertRule('vswr-in-band') }).expect(409)).body.code).toBe('RULE_ID_TAKEN');
+      expect(
+        (
+          await http()
+            .post('/api/rules')
+            .set(as('admin'))
+            .send({ definition: inertRule(id) })
+            .expect(409)
+        ).body.code,
+      ).toBe('RULE_ID_TAKEN');
+      expect(
+        (
+          await http()
+            .post('/api/rules')
+            .set(as('admin'))
+            .send({ definition: inertRule('vswr-in-band') })
+            .expect(409)
+        ).body.code,
+      ).toBe('RULE_ID_TAKEN');
 
-      const bad = await http().put(`/api/rules/${id}`).set(as('admin'))
-        .send({ version: 1, definition: inertRule(id, { conditions: { all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'maxVswr' } }] } }) }).expect(400);
+      const bad = await http()
+        .put(`/api/rules/${id}`)
+        .set(as('admin'))
+        .send({ version: 1, definition: inertRule(id, { conditions: { all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'maxVswr' } }] } }) })
+        .expect(400);
       expect(bad.body.code).toBe('VALIDATION_FAILED');
       expect(bad.body.fields).toEqual([{ field: 'definition.conditions.all[0].value.param', message: 'unknown parameter "maxVswr"' }]);
       expect((await http().get(`/api/rules/${id}`).set(as('admin')).expect(200)).body.version).toBe(1);
 
-      const edited = await http().put(`/api/rules/${id}`).set(as('admin')).send({ version: 1, definition: inertRule(id, { title: 'edited title' }) }).expect(200);
+      const edited = await http()
+        .put(`/api/rules/${id}`)
+        .set(as('admin'))
+        .send({ version: 1, definition: inertRule(id, { title: 'edited title' }) })
+        .expect(200);
       expect(edited.body).toMatchObject({ version: 2, title: 'edited title' });
-      expect((await http().put(`/api/rules/${id}`).set(as('admin')).send({ version: 1, definition: inertRule(id) }).expect(409)).body.code).toBe('RULE_VERSION_CONFLICT');
-      const renamed = await http().put(`/api/rules/${id}`).set(as('admin')).send({ version: 2, definition: inertRule('another-id') }).expect(400);
+      expect(
+        (
+          await http()
+            .put(`/api/rules/${id}`)
+            .set(as('admin'))
+            .send({ version: 1, definition: inertRule(id) })
+            .expect(409)
+        ).body.code,
+      ).toBe('RULE_VERSION_CONFLICT');
+      const renamed = await http()
+        .put(`/api/rules/${id}`)
+        .set(as('admin'))
+        .send({ version: 2, definition: inertRule('another-id') })
+        .expect(400);
       expect(renamed.body.fields[0].field).toBe('definition.id');
 
       const disabled = await http().put(`/api/rules/${id}/enabled`).set(as('admin')).send({ enabled: false, version: 2 }).expect(200);
       expect(disabled.body).toMatchObject({ enabled: false, version: 3 });
       const versions = await http().get(`/api/rules/${id}/versions`).set(as('engineer')).expect(200);
-      expect(versions.body.map((v: { version: number; action: string }) => [v.version, v.action])).toEqual([[3, 'disabled'], [2, 'edited'], [1, 'created']]);
+      expect(versions.body.map((v: { version: number; action: string }) => [v.version, v.action])).toEqual([
+        [3, 'disabled'],
+        [2, 'edited'],
+        [1, 'created'],
+      ]);
       await http().get('/api/rules/not-a-rule-at-all').set(as('admin')).expect(404);
       await http().get('/api/rules/Bad_Id').set(as('admin')).expect(400);
     });
@@ -217,7 +343,12 @@ describe('compatibility (API)', () => {
     it('previews which demo cells a rule would change, without saving it', async () => {
       const id = unique('e2e-preview').toLowerCase();
       // "End of life" for every active part: every pass or marginal cell of the demo matrices would fail.
-      const sweeping = inertRule(id, { severity: 'fail', parameters: { active: 'active' }, conditions: { all: [{ fact: 'lifecycle', operator: 'equal', value: { param: 'active' } }] }, event: { type: 'finding', params: { code: 'TEST_SWEEP', message: 'lifecycle {lifecycle}' } } });
+      const sweeping = inertRule(id, {
+        severity: 'fail',
+        parameters: { active: 'active' },
+        conditions: { all: [{ fact: 'lifecycle', operator: 'equal', value: { param: 'active' } }] },
+        event: { type: 'finding', params: { code: 'TEST_SWEEP', message: 'lifecycle {lifecycle}' } },
+      });
       const res = await http().post('/api/rules/preview').set(as('admin')).send({ definition: sweeping }).expect(200);
       expect(res.body.ruleId).toBe(id);
       const tracker = res.body.changes.filter((c: { productId: number }) => c.productId === TRACKER);
@@ -231,11 +362,19 @@ describe('compatibility (API)', () => {
       await http().get(`/api/rules/${id}`).set(as('admin')).expect(404);
       // An unsaved edit of an existing rule: VSWR target 1.01:1 makes passing cells marginal, and nothing is stored.
       const vswr = (await http().get('/api/rules/vswr-in-band').set(as('admin')).expect(200)).body;
-      const strict = await http().post('/api/rules/preview').set(as('admin')).send({ definition: { ...vswr.definition, parameters: { maxVswr: 1.01 } } }).expect(200);
+      const strict = await http()
+        .post('/api/rules/preview')
+        .set(as('admin'))
+        .send({ definition: { ...vswr.definition, parameters: { maxVswr: 1.01 } } })
+        .expect(200);
       expect(strict.body.changes.length).toBeGreaterThan(0);
       for (const change of strict.body.changes) expect([change.before, change.after]).toEqual(['pass', 'marginal']);
       expect((await http().get('/api/rules/vswr-in-band').set(as('admin')).expect(200)).body.version).toBe(vswr.version);
-      const invalid = await http().post('/api/rules/preview').set(as('admin')).send({ definition: inertRule(id, { severity: 'warning' }) }).expect(400);
+      const invalid = await http()
+        .post('/api/rules/preview')
+        .set(as('admin'))
+        .send({ definition: inertRule(id, { severity: 'warning' }) })
+        .expect(400);
       expect(invalid.body.fields[0].field).toBe('definition.severity');
     });
   });

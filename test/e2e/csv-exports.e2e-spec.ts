@@ -25,15 +25,48 @@ describe('CSV exports (API)', () => {
     app = await createApiApp();
     tokens = await demoTokens(app);
     mpn = `${HOSTILE_MPN}${unique('')}`;
-    const part = await http().post('/api/parts').set(as('engineer'))
-      .send({ manufacturer: '+Formula Antennas', mpn, title: HOSTILE_TITLE, formFactor: 'chip', connector: 'solder-pad', polarization: 'linear', notes: '\t=1+1' }).expect(201);
+    const part = await http()
+      .post('/api/parts')
+      .set(as('engineer'))
+      .send({
+        manufacturer: '+Formula Antennas',
+        mpn,
+        title: HOSTILE_TITLE,
+        formFactor: 'chip',
+        connector: 'solder-pad',
+        polarization: 'linear',
+        notes: '\t=1+1',
+      })
+      .expect(201);
     partId = part.body.id;
     const bands = await http().get('/api/bands').query({ designation: 'BLE 2.4 GHz' }).set(as('engineer')).expect(200);
-    const product = await http().post('/api/products').set(as('engineer'))
-      .send({ name: `=cmd ${unique('csv')}`, code: unique('CSV').slice(0, 40), owner: 'e2e', groundPlaneLengthMm: 62, groundPlaneWidthMm: 28, targetRegions: ['EU'] }).expect(201);
+    const product = await http()
+      .post('/api/products')
+      .set(as('engineer'))
+      .send({
+        name: `=cmd ${unique('csv')}`,
+        code: unique('CSV').slice(0, 40),
+        owner: 'e2e',
+        groundPlaneLengthMm: 62,
+        groundPlaneWidthMm: 28,
+        targetRegions: ['EU'],
+      })
+      .expect(201);
     productId = product.body.id;
-    const radio = await http().post(`/api/products/${productId}/radios`).set(as('engineer'))
-      .send({ name: HOSTILE_RADIO, technology: 'ble', module: 'test module', transmitPowerDbm: 8, polarization: 'linear', connector: 'solder-pad', feedLossDb: 0.2, bands: [{ bandId: bands.body[0].id, certifiedMaxGainDbi: 2.5 }] }).expect(201);
+    const radio = await http()
+      .post(`/api/products/${productId}/radios`)
+      .set(as('engineer'))
+      .send({
+        name: HOSTILE_RADIO,
+        technology: 'ble',
+        module: 'test module',
+        transmitPowerDbm: 8,
+        polarization: 'linear',
+        connector: 'solder-pad',
+        feedLossDb: 0.2,
+        bands: [{ bandId: bands.body[0].id, certifiedMaxGainDbi: 2.5 }],
+      })
+      .expect(201);
     await http().post(`/api/products/${productId}/radios/${radio.body.id}/shortlist`).set(as('engineer')).send({ partId }).expect(201);
   }, 30_000);
   afterAll(() => app.close());
@@ -48,7 +81,9 @@ describe('CSV exports (API)', () => {
       const missing = await http().get('/api/products/999999/matrix.csv').set(as('engineer')).expect(404);
       expect(missing.headers['content-type']).toMatch(/json/);
       expect(missing.body.code).toBe('PRODUCT_NOT_FOUND');
-      expect((await http().get(`/api/products/${TRACKER}/matrix.csv`).query({ parts: '1,x' }).set(as('engineer')).expect(400)).body.fields[0].field).toBe('parts');
+      expect((await http().get(`/api/products/${TRACKER}/matrix.csv`).query({ parts: '1,x' }).set(as('engineer')).expect(400)).body.fields[0].field).toBe(
+        'parts',
+      );
     });
 
     it('writes the caution, headers in words with units, and every hostile name neutralised', async () => {
@@ -60,27 +95,47 @@ describe('CSV exports (API)', () => {
       expect(records[1]).toEqual(['Product', 'Radio', 'Band', 'Band ranges (MHz)', 'Manufacturer', 'Part number (MPN)', 'Part title', 'Status', 'Findings']);
       const line = records.find((r) => r[5] === `'${mpn}`)!;
       expect(line).toBeDefined();
-      expect(line.slice(0, 7)).toEqual([expect.stringMatching(/^'=cmd /), `'${HOSTILE_RADIO}`, 'BLE 2.4 GHz', expect.stringMatching(/MHz|tdd|–/), "'+Formula Antennas", `'${mpn}`, `'${HOSTILE_TITLE}`]);
+      expect(line.slice(0, 7)).toEqual([
+        expect.stringMatching(/^'=cmd /),
+        `'${HOSTILE_RADIO}`,
+        'BLE 2.4 GHz',
+        expect.stringMatching(/MHz|tdd|–/),
+        "'+Formula Antennas",
+        `'${mpn}`,
+        `'${HOSTILE_TITLE}`,
+      ]);
       for (const record of records) for (const cell of record) expect(startsFormula(cell)).toBe(false);
     });
 
     it('writes the same cells as the matrix, in words', async () => {
       const matrix = (await http().get(`/api/products/${TRACKER}/matrix`).set(as('engineer')).expect(200)).body;
-      const records: string[][] = parse((await http().get(`/api/products/${TRACKER}/matrix.csv`).set(as('engineer')).expect(200)).text, { relax_column_count: true });
+      const records: string[][] = parse((await http().get(`/api/products/${TRACKER}/matrix.csv`).set(as('engineer')).expect(200)).text, {
+        relax_column_count: true,
+      });
       expect(records).toHaveLength(2 + matrix.cells.length);
-      expect(new Set(records.slice(2).map((r) => r[7]))).toEqual(new Set(matrix.cells.map((c: { status: string }) => (c.status === 'no-data' ? 'not checked (no data)' : c.status))));
+      expect(new Set(records.slice(2).map((r) => r[7]))).toEqual(
+        new Set(matrix.cells.map((c: { status: string }) => (c.status === 'no-data' ? 'not checked (no data)' : c.status))),
+      );
     });
   });
 
   describe('GET /api/parts/export', () => {
     it('answers a bad query with a JSON 400 naming the field, not a CSV', async () => {
-      const res = await http().get('/api/parts/export').query({ q: 'x'.repeat(201) }).set(as('engineer')).expect(400);
+      const res = await http()
+        .get('/api/parts/export')
+        .query({ q: 'x'.repeat(201) })
+        .set(as('engineer'))
+        .expect(400);
       expect(res.headers['content-type']).toMatch(/json/);
       expect(res.body.fields[0].field).toBe('q');
     });
 
     it('neutralises a hostile MPN, title, manufacturer and notes, and keeps plain negative numbers', async () => {
-      const res = await http().get('/api/parts/export').query({ q: mpn.slice(-12) }).set(as('engineer')).expect(200);
+      const res = await http()
+        .get('/api/parts/export')
+        .query({ q: mpn.slice(-12) })
+        .set(as('engineer'))
+        .expect(200);
       const [header, ...rows]: string[][] = parse(res.text);
       const row = rows.find((r) => Number(r[header.indexOf('id')]) === partId)!;
       expect(row).toBeDefined();

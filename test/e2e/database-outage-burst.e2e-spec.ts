@@ -6,8 +6,7 @@ import { DataSource } from 'typeorm';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
 import { draftBody } from '../support/parts';
 
-const dbScript = (command: 'start' | 'stop') =>
-  execFileSync('bash', [resolve(__dirname, '../../scripts/db.sh'), command], { stdio: 'pipe', timeout: 60000 });
+const dbScript = (command: 'start' | 'stop') => execFileSync('bash', [resolve(__dirname, '../../scripts/db.sh'), command], { stdio: 'pipe', timeout: 60000 });
 
 const SPEC_BANDS = [
   { fromMhz: 824, toMhz: 960, maxVswr: 2, minReturnLossDb: null, efficiencyPct: 50, peakGainDbi: 1, averageGainDbi: null },
@@ -32,7 +31,9 @@ describe('MariaDB stopped during a burst of writes', () => {
     let stopped = false;
     const writer = async (i: number) => {
       for (let n = 0; n < 12; n += 1) {
-        const res = await request(app.getHttpServer()).post('/api/parts').set('Authorization', `Bearer ${engineer}`)
+        const res = await request(app.getHttpServer())
+          .post('/api/parts')
+          .set('Authorization', `Bearer ${engineer}`)
           .send(draftBody({ mpn: `${batch}-${i}-${n}`, specBands: SPEC_BANDS }));
         created.push({ status: res.status, code: res.body?.code });
         if (stopped && res.status === 503) await new Promise((r) => setTimeout(r, 100));
@@ -49,7 +50,12 @@ describe('MariaDB stopped during a burst of writes', () => {
     const deadline = Date.now() + 30000;
     let after = 0;
     while (Date.now() < deadline) {
-      after = (await request(app.getHttpServer()).post('/api/parts').set('Authorization', `Bearer ${engineer}`).send(draftBody({ mpn: `${batch}-after`, specBands: SPEC_BANDS }))).status;
+      after = (
+        await request(app.getHttpServer())
+          .post('/api/parts')
+          .set('Authorization', `Bearer ${engineer}`)
+          .send(draftBody({ mpn: `${batch}-after`, specBands: SPEC_BANDS }))
+      ).status;
       if (after === 201) break;
       await new Promise((r) => setTimeout(r, 300));
     }

@@ -5,8 +5,7 @@ import request from 'supertest';
 import { createApiApp } from '../support/api-app';
 import { testClientAddress } from '../support/client-address';
 
-const dbScript = (command: 'start' | 'stop') =>
-  execFileSync('bash', [resolve(__dirname, '../../scripts/db.sh'), command], { stdio: 'pipe', timeout: 60000 });
+const dbScript = (command: 'start' | 'stop') => execFileSync('bash', [resolve(__dirname, '../../scripts/db.sh'), command], { stdio: 'pipe', timeout: 60000 });
 
 async function waitForHealth(app: INestApplication, status: number, timeoutMs = 20000) {
   const deadline = Date.now() + timeoutMs;
@@ -40,13 +39,20 @@ describe('GET /api/health', () => {
     const down = await waitForHealth(app, 503);
     expect(down.body).toMatchObject({ db: 'down' });
     // A route that needs the database fails cleanly rather than hanging or leaking SQL.
-    const login = await request(app.getHttpServer()).post('/api/auth/login').set('X-Forwarded-For', testClientAddress()).send({ email: 'admin@bandwright.test', password: 'x' });
+    const login = await request(app.getHttpServer())
+      .post('/api/auth/login')
+      .set('X-Forwarded-For', testClientAddress())
+      .send({ email: 'admin@bandwright.test', password: 'x' });
     expect(login.status).toBe(503);
     expect(login.body.code).toBe('DATABASE_UNAVAILABLE');
 
     dbScript('start');
     const up = await waitForHealth(app, 200, 30000);
     expect(up.body).toMatchObject({ status: 'ok', db: 'up' });
-    await request(app.getHttpServer()).post('/api/auth/login').set('X-Forwarded-For', testClientAddress()).send({ email: 'admin@bandwright.test', password: 'bandwright-demo' }).expect(200);
+    await request(app.getHttpServer())
+      .post('/api/auth/login')
+      .set('X-Forwarded-For', testClientAddress())
+      .send({ email: 'admin@bandwright.test', password: 'bandwright-demo' })
+      .expect(200);
   }, 90000);
 });

@@ -34,12 +34,22 @@ describe('bounded parsers of uploaded files (API)', () => {
     expect(await storedOf(draft.id)).toEqual({ rows: 0, objects: 0 });
     return { check, real };
   };
-  const importCsv = (text: string, dryRun: boolean) => http().post('/api/parts/imports').query({ dryRun: String(dryRun) }).set(auth()).attach('file', Buffer.from(text), 'parts.csv');
+  const importCsv = (text: string, dryRun: boolean) =>
+    http()
+      .post('/api/parts/imports')
+      .query({ dryRun: String(dryRun) })
+      .set(auth())
+      .attach('file', Buffer.from(text), 'parts.csv');
 
   beforeAll(async () => {
     app = await createApiApp();
     tokens = await demoTokens(app);
-    s3 = new S3Client({ endpoint: config.s3.endpoint, region: config.s3.region, forcePathStyle: true, credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey } });
+    s3 = new S3Client({
+      endpoint: config.s3.endpoint,
+      region: config.s3.region,
+      forcePathStyle: true,
+      credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey },
+    });
   });
   afterAll(async () => {
     s3?.destroy();
@@ -80,7 +90,14 @@ describe('bounded parsers of uploaded files (API)', () => {
     });
 
     it('refuses a CSV frequency that overflows in Hz, by row, in the check and the upload alike', async () => {
-      const { check, real } = await checkAndUpload('efficiency', 'eff.csv', csvCurve('frequency (GHz),efficiency (%)', [[0.8, 40], [1e300, 50]]));
+      const { check, real } = await checkAndUpload(
+        'efficiency',
+        'eff.csv',
+        csvCurve('frequency (GHz),efficiency (%)', [
+          [0.8, 40],
+          [1e300, 50],
+        ]),
+      );
       expect(check.status).toBe(422);
       expect(check.body).toMatchObject({ code: 'CSV_BAD_ROWS', line: 3 });
       expect(real.body).toMatchObject({ code: 'CSV_BAD_ROWS', line: 3 });
@@ -88,7 +105,11 @@ describe('bounded parsers of uploaded files (API)', () => {
 
     it('still checks and stores a good passive S11 (|S11| up to 1)', async () => {
       const draft = await createDraft(app, tokens.engineer);
-      const file = s1pWithGamma([[800, 0.2], [850, 1], [900, 0.3]]);
+      const file = s1pWithGamma([
+        [800, 0.2],
+        [850, 1],
+        [900, 0.3],
+      ]);
       await upload(draft.id, 's11', 'ok.s1p', file, { dryRun: 'true' }).expect(201);
       await upload(draft.id, 's11', 'ok.s1p', file).expect(201);
       expect(await storedOf(draft.id)).toEqual({ rows: 1, objects: 1 });
@@ -99,7 +120,11 @@ describe('bounded parsers of uploaded files (API)', () => {
     it('sniffs a file of repeated empty comments in well under a second and refuses it as 415', async () => {
       const draft = await createDraft(app, tokens.engineer);
       const started = Date.now();
-      const res = await http().post(`/api/parts/${draft.id}/documents`).set(auth()).field('kind', 'drawing').attach('file', Buffer.from('<!---->'.repeat(36)), 'drawing.svg');
+      const res = await http()
+        .post(`/api/parts/${draft.id}/documents`)
+        .set(auth())
+        .field('kind', 'drawing')
+        .attach('file', Buffer.from('<!---->'.repeat(36)), 'drawing.svg');
       expect(res.status).toBe(415);
       expect(Date.now() - started).toBeLessThan(5_000);
       expect(await storedOf(draft.id)).toEqual({ rows: 0, objects: 0 });
@@ -116,16 +141,20 @@ describe('bounded parsers of uploaded files (API)', () => {
     it('applies the checks of POST /api/parts to every row: dBi, MHz, band count, numbers; by row and column', async () => {
       const mpn = unique('IMP');
       const bands = Array.from({ length: 2000 }, (_, i) => `${i + 1}-${i + 2}`).join('; ');
-      const text = IMPORT_HEADER
-        + `Testbench Antennas,${mpn}-1,Gain,chip,solder-pad,linear,50,791-862 peak=1e300\n`
-        + `Testbench Antennas,${mpn}-2,Range,chip,solder-pad,linear,50,791-999999999\n`
-        + `Testbench Antennas,${mpn}-3,Bands,chip,solder-pad,linear,50,"${bands}"\n`
-        + `Testbench Antennas,${mpn}-4,Impedance,chip,solder-pad,linear,1e300,\n`
-        + `Testbench Antennas,${mpn}-5,Good,chip,solder-pad,linear,50,791-862 vswr=3\n`;
+      const text =
+        IMPORT_HEADER +
+        `Testbench Antennas,${mpn}-1,Gain,chip,solder-pad,linear,50,791-862 peak=1e300\n` +
+        `Testbench Antennas,${mpn}-2,Range,chip,solder-pad,linear,50,791-999999999\n` +
+        `Testbench Antennas,${mpn}-3,Bands,chip,solder-pad,linear,50,"${bands}"\n` +
+        `Testbench Antennas,${mpn}-4,Impedance,chip,solder-pad,linear,1e300,\n` +
+        `Testbench Antennas,${mpn}-5,Good,chip,solder-pad,linear,50,791-862 vswr=3\n`;
       const dry = await importCsv(text, true).expect(200);
       expect(dry.body).toMatchObject({ rowCount: 5, validRows: 1 });
       expect(dry.body.problems.map((p: { row: number; line: number; field: string }) => `${p.row}/${p.line}:${p.field}`)).toEqual([
-        '1/2:specBands', '2/3:specBands', '3/4:specBands', '4/5:nominalImpedanceOhms',
+        '1/2:specBands',
+        '2/3:specBands',
+        '3/4:specBands',
+        '4/5:nominalImpedanceOhms',
       ]);
       const real = await importCsv(text, false).expect(422);
       expect(real.body.code).toBe('PART_IMPORT_INVALID');
@@ -135,7 +164,11 @@ describe('bounded parsers of uploaded files (API)', () => {
   });
 
   describe('POST /api/rf/touchstone/analyze', () => {
-    const analyze = (content: string | Buffer, name: string) => http().post('/api/rf/touchstone/analyze').set(auth()).attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content), name);
+    const analyze = (content: string | Buffer, name: string) =>
+      http()
+        .post('/api/rf/touchstone/analyze')
+        .set(auth())
+        .attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content), name);
 
     it('lists at most 100 matched ranges and says how many there are', async () => {
       const points = Array.from({ length: 1000 }, (_, i) => `${800 + i} ${i % 2 === 0 ? 0.1 : 0.9} 0`).join('\n');

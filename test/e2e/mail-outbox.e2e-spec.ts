@@ -44,11 +44,15 @@ describe('mail outbox: SMTP relay down, then back', () => {
   it('POST /api/users/invitations succeeds while the relay is down, keeps the mail, and delivers it when the relay returns', async () => {
     const tokens = await demoTokens(app);
     const email = `${unique('patient')}@bandwright.test`;
-    await request(app.getHttpServer()).post('/api/users/invitations').set('Authorization', `Bearer ${tokens.admin}`)
-      .send({ email, name: 'Pat Patient', role: 'engineer' }).expect(201);
+    await request(app.getHttpServer())
+      .post('/api/users/invitations')
+      .set('Authorization', `Bearer ${tokens.admin}`)
+      .send({ email, name: 'Pat Patient', role: 'engineer' })
+      .expect(201);
 
     const db = app.get(DataSource);
-    const row = async () => (await db.query('SELECT status, attempts, last_error FROM mail_outbox WHERE JSON_CONTAINS(to_addresses, JSON_QUOTE(?))', [email]))[0];
+    const row = async () =>
+      (await db.query('SELECT status, attempts, last_error FROM mail_outbox WHERE JSON_CONTAINS(to_addresses, JSON_QUOTE(?))', [email]))[0];
     // The request only queues the mail; the poller makes the first attempt.
     const pending = await waitFor(async () => {
       const current = await row();

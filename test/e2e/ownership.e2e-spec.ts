@@ -22,17 +22,35 @@ describe('data ownership and edits (API)', () => {
     if (role) req.set('Authorization', `Bearer ${tokens[role]}`);
     return body ? req.send(body) : req;
   };
-  const productBody = () => ({ name: unique('Owned product'), code: unique('OWN').slice(0, 40), owner: 'Test Owner', groundPlaneLengthMm: 80, groundPlaneWidthMm: 40, targetRegions: ['EU'] });
+  const productBody = () => ({
+    name: unique('Owned product'),
+    code: unique('OWN').slice(0, 40),
+    owner: 'Test Owner',
+    groundPlaneLengthMm: 80,
+    groundPlaneWidthMm: 40,
+    targetRegions: ['EU'],
+  });
   const cellular = () => ({
-    name: 'Cellular', technology: 'lte', module: 'Test modem (invented)', transmitPowerDbm: 23, polarization: 'linear', connector: 'solder-pad', feedLossDb: 0.5,
-    bands: [{ bandId: 103, certifiedMaxGainDbi: 5 }, { bandId: 120, certifiedMaxGainDbi: 4.5 }],
+    name: 'Cellular',
+    technology: 'lte',
+    module: 'Test modem (invented)',
+    transmitPowerDbm: 23,
+    polarization: 'linear',
+    connector: 'solder-pad',
+    feedLossDb: 0.5,
+    bands: [
+      { bandId: 103, certifiedMaxGainDbi: 5 },
+      { bandId: 120, certifiedMaxGainDbi: 4.5 },
+    ],
   });
-  const createProduct = async (role: DemoRole = 'engineer') => (await call('post', '/api/products', role, productBody()).expect(201)).body as { id: number; code: string; version: number };
-  const binary = (req: request.Test) => req.buffer(true).parse((r, cb) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => cb(null, Buffer.concat(chunks)));
-  });
+  const createProduct = async (role: DemoRole = 'engineer') =>
+    (await call('post', '/api/products', role, productBody()).expect(201)).body as { id: number; code: string; version: number };
+  const binary = (req: request.Test) =>
+    req.buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
 
   beforeAll(async () => {
     app = await createApiApp();
@@ -93,22 +111,40 @@ describe('data ownership and edits (API)', () => {
       for (const path of ['', '/radios', `/radios/${radio.id}`, '/matrix', `/radios/${radio.id}/candidates`, '/assignments']) {
         expect((await call('get', `/api/products/${product.id}${path}`, 'engineer').expect(404)).body.code).toBe('PRODUCT_NOT_FOUND');
       }
-      expect((await call('patch', `/api/products/${product.id}`, 'engineer', { version: product.version, notes: 'x' }).expect(404)).body.code).toBe('PRODUCT_NOT_FOUND');
+      expect((await call('patch', `/api/products/${product.id}`, 'engineer', { version: product.version, notes: 'x' }).expect(404)).body.code).toBe(
+        'PRODUCT_NOT_FOUND',
+      );
       expect((await call('post', `/api/products/${product.id}/radios`, 'engineer', cellular()).expect(404)).body.code).toBe('PRODUCT_NOT_FOUND');
-      expect((await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', { version: radio.version, name: 'x' }).expect(404)).body.code).toBe('PRODUCT_NOT_FOUND');
-      expect((await call('delete', `/api/products/${product.id}/radios/${radio.id}/shortlist/${APPROVED_PART}`, 'engineer').expect(404)).body.code).toBe('PRODUCT_NOT_FOUND');
-      expect((await call('put', `/api/products/${product.id}/radios/${radio.id}/choice`, 'engineer', { partId: APPROVED_PART }).expect(404)).body.code).toBe('PRODUCT_NOT_FOUND');
+      expect(
+        (await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', { version: radio.version, name: 'x' }).expect(404)).body.code,
+      ).toBe('PRODUCT_NOT_FOUND');
+      expect((await call('delete', `/api/products/${product.id}/radios/${radio.id}/shortlist/${APPROVED_PART}`, 'engineer').expect(404)).body.code).toBe(
+        'PRODUCT_NOT_FOUND',
+      );
+      expect((await call('put', `/api/products/${product.id}/radios/${radio.id}/choice`, 'engineer', { partId: APPROVED_PART }).expect(404)).body.code).toBe(
+        'PRODUCT_NOT_FOUND',
+      );
       expect((await call('delete', `/api/products/${product.id}`, 'engineer').expect(404)).body.code).toBe('PRODUCT_NOT_FOUND');
 
       // Admins see it among the deleted, with who deleted it; nobody else may ask.
       expect((await call('get', '/api/products?deleted=true', 'engineer').expect(403)).body.code).toBe('FORBIDDEN_ROLE');
-      const deleted = (await call('get', '/api/products?deleted=true', 'admin').expect(200)).body as { id: number; deletedAt: string | null; deletedBy: { id: number } | null; radioCount: number }[];
+      const deleted = (await call('get', '/api/products?deleted=true', 'admin').expect(200)).body as {
+        id: number;
+        deletedAt: string | null;
+        deletedBy: { id: number } | null;
+        radioCount: number;
+      }[];
       expect(deleted.find((p) => p.id === product.id)).toMatchObject({ deletedAt: expect.any(String), deletedBy: { id: ids.engineer }, radioCount: 1 });
 
       // Only admins restore.
       expect((await call('post', `/api/products/${product.id}/restore`, 'engineer').expect(403)).body.code).toBe('FORBIDDEN_ROLE');
       const restored = (await call('post', `/api/products/${product.id}/restore`, 'admin').expect(200)).body;
-      expect(restored).toMatchObject({ id: product.id, deletedAt: null, deletedBy: null, radios: [{ id: radio.id, bands: [{ band: { id: 103 } }, { band: { id: 120 } }] }] });
+      expect(restored).toMatchObject({
+        id: product.id,
+        deletedAt: null,
+        deletedBy: null,
+        radios: [{ id: radio.id, bands: [{ band: { id: 103 } }, { band: { id: 120 } }] }],
+      });
       expect((await call('post', `/api/products/${product.id}/restore`, 'admin').expect(409)).body.code).toBe('PRODUCT_NOT_DELETED');
       const assignments = (await call('get', `/api/products/${product.id}/assignments`, 'procurement').expect(200)).body;
       expect(assignments).toEqual([expect.objectContaining({ radioId: radio.id, partId: APPROVED_PART, state: 'shortlisted' })]);
@@ -118,8 +154,14 @@ describe('data ownership and edits (API)', () => {
       expect((await call('get', '/api/products?deleted=true', 'admin').expect(200)).body.map((p: { id: number }) => p.id)).not.toContain(product.id);
 
       // The audit log says who deleted and who restored.
-      const history = (await call('get', `/api/products/${product.id}/history`, 'admin').expect(200)).body.items as { action: string; user: { id: number } | null }[];
-      expect(history.slice(0, 2).map((e) => [e.action, e.user?.id])).toEqual([['restored', ids.admin], ['deleted', ids.engineer]]);
+      const history = (await call('get', `/api/products/${product.id}/history`, 'admin').expect(200)).body.items as {
+        action: string;
+        user: { id: number } | null;
+      }[];
+      expect(history.slice(0, 2).map((e) => [e.action, e.user?.id])).toEqual([
+        ['restored', ids.admin],
+        ['deleted', ids.engineer],
+      ]);
     });
 
     it("keeps a deleted product's code taken (409 PRODUCT_CODE_TAKEN_BY_DELETED) until it is restored, and never 5xx", async () => {
@@ -155,14 +197,20 @@ describe('data ownership and edits (API)', () => {
       await call('patch', `/api/band-sets/${set.id}`, 'admin', { version: 1, description: 'first' }).expect(200);
       const stale = await call('patch', `/api/band-sets/${set.id}`, 'admin', { version: 1, bandIds: [108] }).expect(409);
       expect(stale.body).toMatchObject({ code: 'BAND_SET_VERSION_CONFLICT', currentVersion: 2 });
-      expect((await call('get', `/api/band-sets/${set.id}`, 'admin').expect(200)).body).toMatchObject({ version: 2, description: 'first', bandIds: [103, 120] });
+      expect((await call('get', `/api/band-sets/${set.id}`, 'admin').expect(200)).body).toMatchObject({
+        version: 2,
+        description: 'first',
+        bandIds: [103, 120],
+      });
       expect((await call('delete', `/api/band-sets/${set.id}?version=1`, 'admin').expect(409)).body.code).toBe('BAND_SET_VERSION_CONFLICT');
       await call('delete', `/api/band-sets/${set.id}?version=2`, 'admin').expect(204);
     });
 
     it('30 parallel edits of the same version: exactly one 200, 409 BAND_SET_VERSION_CONFLICT for the rest', async () => {
       const set = (await call('post', '/api/band-sets', 'admin', setBody()).expect(201)).body;
-      const edits = await Promise.all(Array.from({ length: 30 }, (_, i) => call('patch', `/api/band-sets/${set.id}`, 'admin', { version: set.version, description: `edit ${i}` })));
+      const edits = await Promise.all(
+        Array.from({ length: 30 }, (_, i) => call('patch', `/api/band-sets/${set.id}`, 'admin', { version: set.version, description: `edit ${i}` })),
+      );
       const statuses = edits.map((r) => r.status).sort();
       expect(statuses.filter((s) => s === 200)).toHaveLength(1);
       expect(statuses.filter((s) => s === 409)).toHaveLength(29);
@@ -174,14 +222,38 @@ describe('data ownership and edits (API)', () => {
 
   describe('GET /api/parts/:id/measurements/:measurementId/file', () => {
     const upload = (partId: number, kind: string, name: string, content: string, declaredType: string) =>
-      http().post(`/api/parts/${partId}/measurements`).set('Authorization', `Bearer ${tokens.engineer}`).field('kind', kind)
+      http()
+        .post(`/api/parts/${partId}/measurements`)
+        .set('Authorization', `Bearer ${tokens.engineer}`)
+        .field('kind', kind)
         .attach('file', Buffer.from(content), { filename: name, contentType: declaredType });
 
-    it("serves a Touchstone file as text/plain and a CSV as text/csv, never as the uploader declared, with nosniff and as an attachment", async () => {
+    it('serves a Touchstone file as text/plain and a CSV as text/csv, never as the uploader declared, with nosniff and as an attachment', async () => {
       const draft = await createDraft(app, tokens.engineer);
-      const s11 = await upload(draft.id, 's11', 'looks-like-a-page.s1p', s1pWithGamma([[800, 0.2], [900, 0.3]]), 'text/html').expect(201);
-      const csv = await upload(draft.id, 'efficiency', 'efficiency.csv', csvCurve('frequency (MHz),efficiency (%)', [[800, 50], [900, 60]]), 'image/svg+xml').expect(201);
-      for (const [measurement, type] of [[s11.body.measurement, 'text/plain'], [csv.body.measurement, 'text/csv']] as const) {
+      const s11 = await upload(
+        draft.id,
+        's11',
+        'looks-like-a-page.s1p',
+        s1pWithGamma([
+          [800, 0.2],
+          [900, 0.3],
+        ]),
+        'text/html',
+      ).expect(201);
+      const csv = await upload(
+        draft.id,
+        'efficiency',
+        'efficiency.csv',
+        csvCurve('frequency (MHz),efficiency (%)', [
+          [800, 50],
+          [900, 60],
+        ]),
+        'image/svg+xml',
+      ).expect(201);
+      for (const [measurement, type] of [
+        [s11.body.measurement, 'text/plain'],
+        [csv.body.measurement, 'text/csv'],
+      ] as const) {
         const res = await binary(call('get', `/api/parts/${draft.id}/measurements/${measurement.id}/file`, 'procurement')).expect(200);
         expect(res.headers['content-type'].split(';')[0]).toBe(type);
         expect(res.headers['x-content-type-options']).toBe('nosniff');
@@ -189,24 +261,32 @@ describe('data ownership and edits (API)', () => {
       }
     });
 
-    it.each([
-      ['Messung-Bänder-µ.s1p'],
-      ['測定.s1p'],
-      ["antenne (rev 2) l'été*📡.s1p"],
-    ])('stores and returns the non-ASCII file name %s as UTF-8 (RFC 5987 filename*)', async (name) => {
-      const draft = await createDraft(app, tokens.engineer);
-      const res = await upload(draft.id, 's11', name, s1pWithGamma([[800, 0.2], [900, 0.3]]), 'application/octet-stream').expect(201);
-      expect(res.body.measurement.fileName).toBe(name);
-      const detail = await call('get', `/api/parts/${draft.id}`, 'engineer').expect(200);
-      expect(detail.body.measurements.map((m: { fileName: string }) => m.fileName)).toEqual([name]);
-      const file = await binary(call('get', `/api/parts/${draft.id}/measurements/${res.body.measurement.id}/file`, 'engineer')).expect(200);
-      const disposition: string = file.headers['content-disposition'];
-      const encoded = /filename\*=UTF-8''([^;\s]+)/.exec(disposition)?.[1];
-      // attr-char of RFC 5987 (section 3.2.1): letters, digits and !#$&+-.^_`|~, everything else percent-encoded.
-      expect(encoded).toMatch(/^[A-Za-z0-9!#$&+\-.^_`|~%]+$/);
-      expect(decodeURIComponent(encoded!)).toBe(name);
-      // The ASCII fallback is plain printable ASCII.
-      expect(/filename="([^"]*)"/.exec(disposition)?.[1]).toMatch(/^[\x20-\x7e]+$/);
-    });
+    it.each([['Messung-Bänder-µ.s1p'], ['測定.s1p'], ["antenne (rev 2) l'été*📡.s1p"]])(
+      'stores and returns the non-ASCII file name %s as UTF-8 (RFC 5987 filename*)',
+      async (name) => {
+        const draft = await createDraft(app, tokens.engineer);
+        const res = await upload(
+          draft.id,
+          's11',
+          name,
+          s1pWithGamma([
+            [800, 0.2],
+            [900, 0.3],
+          ]),
+          'application/octet-stream',
+        ).expect(201);
+        expect(res.body.measurement.fileName).toBe(name);
+        const detail = await call('get', `/api/parts/${draft.id}`, 'engineer').expect(200);
+        expect(detail.body.measurements.map((m: { fileName: string }) => m.fileName)).toEqual([name]);
+        const file = await binary(call('get', `/api/parts/${draft.id}/measurements/${res.body.measurement.id}/file`, 'engineer')).expect(200);
+        const disposition: string = file.headers['content-disposition'];
+        const encoded = /filename\*=UTF-8''([^;\s]+)/.exec(disposition)?.[1];
+        // attr-char of RFC 5987 (section 3.2.1): letters, digits and !#$&+-.^_`|~, everything else percent-encoded.
+        expect(encoded).toMatch(/^[\w!#$&+\-.^`|~%]+$/);
+        expect(decodeURIComponent(encoded!)).toBe(name);
+        // The ASCII fallback is plain printable ASCII.
+        expect(/filename="([^"]*)"/.exec(disposition)?.[1]).toMatch(/^[\x20-\x7e]+$/);
+      },
+    );
   });
 });

@@ -20,7 +20,9 @@ describe('concurrent edits of one part', () => {
       const auth = { Authorization: `Bearer ${tokens.engineer}` };
       const draft = await createDraft(app, tokens.engineer, { title: 'Concurrency probe antenna' });
       const attempts = Array.from({ length: 50 }, (_, i) =>
-        request(app.getHttpServer()).patch(`/api/parts/${draft.id}`).set(auth)
+        request(app.getHttpServer())
+          .patch(`/api/parts/${draft.id}`)
+          .set(auth)
           .send({ version: draft.version, title: `Edit ${i}`, notes: `note of edit ${i}`, lengthMm: 10 + i / 10 })
           .then((res) => ({ i, status: res.status, body: res.body })),
       );

@@ -23,8 +23,12 @@ describe('GET /api/parts/:id coveredRanges (drawn on the band library strip)', (
 
   it('gives the VSWR ≤ 2 intervals of the measured S11 with interpolated edges', async () => {
     const draft = await createDraft(app, engineer);
-    await request(app.getHttpServer()).post(`/api/parts/${draft.id}/measurements`).set('Authorization', `Bearer ${engineer}`)
-      .field('kind', 's11').attach('file', Buffer.from(EXAMPLE_A), 'example-a.s1p').expect(201);
+    await request(app.getHttpServer())
+      .post(`/api/parts/${draft.id}/measurements`)
+      .set('Authorization', `Bearer ${engineer}`)
+      .field('kind', 's11')
+      .attach('file', Buffer.from(EXAMPLE_A), 'example-a.s1p')
+      .expect(201);
     const part = (await request(app.getHttpServer()).get(`/api/parts/${draft.id}`).set('Authorization', `Bearer ${engineer}`).expect(200)).body;
     expect(part.coveredRanges).toHaveLength(1);
     const [range] = part.coveredRanges;

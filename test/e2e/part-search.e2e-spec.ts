@@ -17,7 +17,11 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
   const upload = (id: number, kind: string, name: string, content: string) =>
     http().post(`/api/parts/${id}/measurements`).set(as('engineer')).field('kind', kind).attach('file', Buffer.from(content), name).expect(201);
   const search = async (query: Record<string, string | number>, role: Role = 'engineer') => {
-    const res = await http().get('/api/parts').query({ q: maker, limit: 200, ...query }).set(as(role)).expect(200);
+    const res = await http()
+      .get('/api/parts')
+      .query({ q: maker, limit: 200, ...query })
+      .set(as(role))
+      .expect(200);
     return (res.body.items as { mpn: string }[]).map((i) => i.mpn.split(':')[0]).sort();
   };
 
@@ -30,15 +34,76 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
       return part.id;
     };
     // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3): worst point at 850 MHz.
-    await upload(await make('at', { formFactor: 'flex' }), 's11', 'at.s1p', s1pWithGamma([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6], [1700, 0.2], [1900, 0.2]]));
-    await upload(ids.at, 'efficiency', 'at.csv', csvCurve('frequency (MHz),efficiency (%)', [[700, 50], [850, 40], [1000, 50], [1700, 60], [1900, 60]]));
+    await upload(
+      await make('at', { formFactor: 'flex' }),
+      's11',
+      'at.s1p',
+      s1pWithGamma([
+        [700, 0.6],
+        [800, 0.2],
+        [850, 1 / 3],
+        [900, 0.2],
+        [1000, 0.6],
+        [1700, 0.2],
+        [1900, 0.2],
+      ]),
+    );
+    await upload(
+      ids.at,
+      'efficiency',
+      'at.csv',
+      csvCurve('frequency (MHz),efficiency (%)', [
+        [700, 50],
+        [850, 40],
+        [1000, 50],
+        [1700, 60],
+        [1900, 60],
+      ]),
+    );
     // |Γ| 0.32 → VSWR 1.941 (just inside 2); |Γ| 0.34 → VSWR 2.030 (just outside).
-    await upload(await make('inside', { connector: 'SMA' }), 's11', 'in.s1p', s1pWithGamma([[700, 0.6], [800, 0.2], [850, 0.32], [900, 0.2], [1000, 0.6]]));
-    await upload(await make('outside'), 's11', 'out.s1p', s1pWithGamma([[700, 0.6], [800, 0.2], [850, 0.34], [900, 0.2], [1000, 0.6]]));
+    await upload(
+      await make('inside', { connector: 'SMA' }),
+      's11',
+      'in.s1p',
+      s1pWithGamma([
+        [700, 0.6],
+        [800, 0.2],
+        [850, 0.32],
+        [900, 0.2],
+        [1000, 0.6],
+      ]),
+    );
+    await upload(
+      await make('outside'),
+      's11',
+      'out.s1p',
+      s1pWithGamma([
+        [700, 0.6],
+        [800, 0.2],
+        [850, 0.34],
+        [900, 0.2],
+        [1000, 0.6],
+      ]),
+    );
     // Samples inside the range are fine, but the interpolated edge at 800 MHz is |Γ| 0.35 → VSWR 2.08.
-    await upload(await make('edge'), 's11', 'edge.s1p', s1pWithGamma([[780, 0.5], [820, 0.2], [900, 0.2], [1000, 0.5]]));
+    await upload(
+      await make('edge'),
+      's11',
+      'edge.s1p',
+      s1pWithGamma([
+        [780, 0.5],
+        [820, 0.2],
+        [900, 0.2],
+        [1000, 0.5],
+      ]),
+    );
     // Datasheet-only parts: the spec bands decide.
-    await make('spec', { specBands: [{ fromMhz: 791, toMhz: 862, maxVswr: 2, efficiencyPct: 45 }, { fromMhz: 862, toMhz: 960, maxVswr: 2.5, efficiencyPct: 50 }] });
+    await make('spec', {
+      specBands: [
+        { fromMhz: 791, toMhz: 862, maxVswr: 2, efficiencyPct: 45 },
+        { fromMhz: 862, toMhz: 960, maxVswr: 2.5, efficiencyPct: 50 },
+      ],
+    });
     // RL ≥ 10 dB is VSWR ≤ 1.925 (Pozar 4th ed. §2.3; a common confusion with VSWR 2).
     await make('rl10', { specBands: [{ fromMhz: 791, toMhz: 862, minReturnLossDb: 10 }] });
   });
@@ -98,7 +163,14 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
     it('filters by form factor, connector and price ceiling; sorts and pages server-side', async () => {
       expect(await search({ formFactor: 'flex' })).toEqual(['at']);
       expect(await search({ connector: 'SMA,N' })).toEqual(['inside']);
-      const offer = { supplier: 'Ferncastle Electronics Supply', currency: 'USD', priceBreaks: [{ quantity: 1, unitPrice: '0.9000' }, { quantity: 1000, unitPrice: '0.3800' }] };
+      const offer = {
+        supplier: 'Ferncastle Electronics Supply',
+        currency: 'USD',
+        priceBreaks: [
+          { quantity: 1, unitPrice: '0.9000' },
+          { quantity: 1000, unitPrice: '0.3800' },
+        ],
+      };
       await http().post(`/api/parts/${ids.inside}/offers`).set(as('procurement')).send(offer).expect(201);
       expect(await search({ priceMax: 0.38 })).toEqual(['inside']);
       expect(await search({ priceMax: 0.37 })).toEqual([]);
@@ -113,12 +185,22 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
 
   describe('GET /api/parts/export', () => {
     it('exports the current search as CSV, one line per match', async () => {
-      const res = await http().get('/api/parts/export').query({ q: maker, covers: '800-900' }).set(as('procurement')).query({ status: 'approved,draft' }).expect(200);
+      const res = await http()
+        .get('/api/parts/export')
+        .query({ q: maker, covers: '800-900' })
+        .set(as('procurement'))
+        .query({ status: 'approved,draft' })
+        .expect(200);
       expect(res.headers['content-type']).toMatch(/text\/csv/);
       const lines = res.text.trim().split(/\r\n/);
       expect(lines[0].split(',').slice(0, 4)).toEqual(['id', 'manufacturer', 'mpn', 'title']);
       expect(lines).toHaveLength(3);
-      expect(lines.slice(1).map((l) => Number(l.split(',')[0])).sort()).toEqual([ids.at, ids.inside].sort());
+      expect(
+        lines
+          .slice(1)
+          .map((l) => Number(l.split(',')[0]))
+          .sort(),
+      ).toEqual([ids.at, ids.inside].sort());
     });
   });
 
@@ -127,7 +209,8 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
 
     it('a dry run lists every problem by row and writes nothing; the real import then refuses it with 422', async () => {
       const mpn = unique('IMP');
-      const csv = [header,
+      const csv = [
+        header,
         `${maker},${mpn}-1,Good row,chip,solder-pad,linear,active,80,791-862 vswr=2 eff=45`,
         `${maker},${mpn}-2,Bad enum,wire,solder-pad,linear,active,,`,
         `${maker},,Missing mpn,chip,SMA,linear,active,abc,`,
@@ -135,22 +218,46 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
       ].join('\n');
       const dry = await http().post('/api/parts/imports').set(as('engineer')).attach('file', Buffer.from(csv), 'parts.csv').expect(200);
       expect(dry.body).toMatchObject({ dryRun: true, rowCount: 4, validRows: 1, createdIds: [] });
-      expect(dry.body.problems.map((p: { row: number; field: string }) => `${p.row}:${p.field}`)).toEqual(['2:formFactor', '3:mpn', '3:evalGroundLengthMm', '4:specBands', '4:mpn']);
+      expect(dry.body.problems.map((p: { row: number; field: string }) => `${p.row}:${p.field}`)).toEqual([
+        '2:formFactor',
+        '3:mpn',
+        '3:evalGroundLengthMm',
+        '4:specBands',
+        '4:mpn',
+      ]);
       expect(dry.body.problems[0].line).toBe(3);
-      const real = await http().post('/api/parts/imports').query({ dryRun: 'false' }).set(as('engineer')).attach('file', Buffer.from(csv), 'parts.csv').expect(422);
+      const real = await http()
+        .post('/api/parts/imports')
+        .query({ dryRun: 'false' })
+        .set(as('engineer'))
+        .attach('file', Buffer.from(csv), 'parts.csv')
+        .expect(422);
       expect(real.body.code).toBe('PART_IMPORT_INVALID');
       expect(await search({ q: `${maker} ${mpn}` })).toEqual([]);
     });
 
     it('imports a clean file in one go as drafts, and refuses a re-import of the same MPNs', async () => {
       const mpn = unique('IMP');
-      const csv = [header, `${maker},${mpn}-a,Imported A,chip,solder-pad,linear,active,80,791-862 vswr=2 eff=45; 880-960 vswr=2.5`, `${maker},${mpn}-b,Imported B,patch,solder-pad,RHCP,nrnd,,`].join('\n');
+      const csv = [
+        header,
+        `${maker},${mpn}-a,Imported A,chip,solder-pad,linear,active,80,791-862 vswr=2 eff=45; 880-960 vswr=2.5`,
+        `${maker},${mpn}-b,Imported B,patch,solder-pad,RHCP,nrnd,,`,
+      ].join('\n');
       const dry = await http().post('/api/parts/imports').set(as('engineer')).attach('file', Buffer.from(csv), 'parts.csv').expect(200);
       expect(dry.body.problems).toEqual([]);
-      const res = await http().post('/api/parts/imports').query({ dryRun: 'false' }).set(as('engineer')).attach('file', Buffer.from(csv), 'parts.csv').expect(200);
+      const res = await http()
+        .post('/api/parts/imports')
+        .query({ dryRun: 'false' })
+        .set(as('engineer'))
+        .attach('file', Buffer.from(csv), 'parts.csv')
+        .expect(200);
       expect(res.body.createdIds).toHaveLength(2);
       const a = await http().get(`/api/parts/${res.body.createdIds[0]}`).set(as('engineer')).expect(200);
-      expect(a.body).toMatchObject({ reviewState: 'draft', evalGroundLengthMm: 80, specBands: [expect.objectContaining({ fromMhz: 791, maxVswr: 2, efficiencyPct: 45 }), expect.objectContaining({ fromMhz: 880, maxVswr: 2.5 })] });
+      expect(a.body).toMatchObject({
+        reviewState: 'draft',
+        evalGroundLengthMm: 80,
+        specBands: [expect.objectContaining({ fromMhz: 791, maxVswr: 2, efficiencyPct: 45 }), expect.objectContaining({ fromMhz: 880, maxVswr: 2.5 })],
+      });
       const again = await http().post('/api/parts/imports').set(as('engineer')).attach('file', Buffer.from(csv), 'parts.csv').expect(200);
       expect(again.body.problems.map((p: { row: number; field: string }) => `${p.row}:${p.field}`)).toEqual(['1:mpn', '2:mpn']);
     });

@@ -70,21 +70,36 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
       expect(res.body.code).toBe('VALIDATION_FAILED');
       const fields = res.body.fields.map((f: { field: string }) => f.field);
       expect(fields).toEqual(expect.arrayContaining(['mpn', 'title', 'formFactor', 'polarization']));
-      const bands = await http().post('/api/parts').set(as('engineer')).send(draftBody({ specBands: [{ fromMhz: 960, toMhz: 880 }] })).expect(400);
+      const bands = await http()
+        .post('/api/parts')
+        .set(as('engineer'))
+        .send(draftBody({ specBands: [{ fromMhz: 960, toMhz: 880 }] }))
+        .expect(400);
       expect(bands.body.fields[0].field).toBe('specBands.0.toMhz');
     });
 
     it('creates a draft owned by the engineer, and refuses the same MPN twice for one manufacturer with 409', async () => {
       const body = draftBody({ specBands: [{ fromMhz: 791, toMhz: 862, maxVswr: 2.5, efficiencyPct: 45 }], evalGroundLengthMm: 100, evalGroundWidthMm: 40 });
       const res = await http().post('/api/parts').set(as('engineer')).send(body).expect(201);
-      expect(res.body).toMatchObject({ mpn: body.mpn, manufacturer: 'Testbench Antennas', reviewState: 'draft', lifecycle: 'active', version: 1, nominalImpedanceOhms: 50 });
+      expect(res.body).toMatchObject({
+        mpn: body.mpn,
+        manufacturer: 'Testbench Antennas',
+        reviewState: 'draft',
+        lifecycle: 'active',
+        version: 1,
+        nominalImpedanceOhms: 50,
+      });
       expect(res.body.createdBy.name).toEqual(expect.any(String));
       expect(res.body.specBands).toEqual([expect.objectContaining({ fromMhz: 791, toMhz: 862, maxVswr: 2.5, efficiencyPct: 45 })]);
       expect(res.body.permissions).toMatchObject({ edit: true, submit: true, review: false, editSourcing: false });
       const dup = await http().post('/api/parts').set(as('admin')).send(body).expect(409);
       expect(dup.body.code).toBe('PART_MPN_TAKEN');
       // Another manufacturer may use the same MPN.
-      await http().post('/api/parts').set(as('admin')).send({ ...body, manufacturer: unique('Other Maker') }).expect(201);
+      await http()
+        .post('/api/parts')
+        .set(as('admin'))
+        .send({ ...body, manufacturer: unique('Other Maker') })
+        .expect(201);
     });
   });
 
@@ -100,7 +115,9 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
       const mine = await createDraft(app, tokens.admin);
       const res = await http().patch(`/api/parts/${mine.id}`).set(as('engineer')).send({ version: 1, title: 'Hijack' }).expect(403);
       expect(res.body.code).toBe('PART_EDIT_FORBIDDEN');
-      expect((await http().patch(`/api/parts/${mine.id}`).set(as('procurement')).send({ version: 1, title: 'x' }).expect(403)).body.code).toBe('FORBIDDEN_ROLE');
+      expect((await http().patch(`/api/parts/${mine.id}`).set(as('procurement')).send({ version: 1, title: 'x' }).expect(403)).body.code).toBe(
+        'FORBIDDEN_ROLE',
+      );
 
       const draft = await createDraft(app, tokens.engineer);
       await http().post(`/api/parts/${draft.id}/submission`).set(as('engineer')).send({ version: 1 }).expect(200);
@@ -124,8 +141,15 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
       const draft = await createDraft(app, tokens.engineer);
       const cleared = await http().patch(`/api/parts/${draft.id}`).set(as('engineer')).send({ version: 1, title: null }).expect(400);
       expect(cleared.body.fields[0].field).toBe('title');
-      const res = await http().patch(`/api/parts/${draft.id}`).set(as('engineer'))
-        .send({ version: 1, connector: 'SMA', notes: 'Needs 3 mm clearance', specBands: [{ fromMhz: 2400, toMhz: 2483.5, minReturnLossDb: 10, peakGainDbi: 2.1 }] })
+      const res = await http()
+        .patch(`/api/parts/${draft.id}`)
+        .set(as('engineer'))
+        .send({
+          version: 1,
+          connector: 'SMA',
+          notes: 'Needs 3 mm clearance',
+          specBands: [{ fromMhz: 2400, toMhz: 2483.5, minReturnLossDb: 10, peakGainDbi: 2.1 }],
+        })
         .expect(200);
       expect(res.body).toMatchObject({ connector: 'SMA', notes: 'Needs 3 mm clearance', version: 2 });
       expect(res.body.specBands).toHaveLength(1);
@@ -179,7 +203,11 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
       await http().post(`/api/parts/${draft.id}/submission`).set(as('admin')).send({ version: 1 }).expect(200);
       await http().post(`/api/parts/${draft.id}/approval`).set(as('admin')).send({ version: 2 }).expect(200);
       expect((await http().post(`/api/parts/${draft.id}/restriction`).set(as('admin')).send({ version: 3 }).expect(400)).body.fields[0].field).toBe('comment');
-      const restricted = await http().post(`/api/parts/${draft.id}/restriction`).set(as('admin')).send({ version: 3, comment: 'Supplier allocation' }).expect(200);
+      const restricted = await http()
+        .post(`/api/parts/${draft.id}/restriction`)
+        .set(as('admin'))
+        .send({ version: 3, comment: 'Supplier allocation' })
+        .expect(200);
       expect(restricted.body.reviewState).toBe('restricted');
       expect((await http().post(`/api/parts/${draft.id}/reinstatement`).set(as('admin')).send({ version: 4 }).expect(200)).body.reviewState).toBe('approved');
       expect((await http().post(`/api/parts/${draft.id}/retirement`).set(as('admin')).send({ version: 5 }).expect(200)).body.reviewState).toBe('retired');
@@ -190,7 +218,9 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
 
     it("refuses an engineer submitting someone else's draft", async () => {
       const draft = await createDraft(app, tokens.admin);
-      expect((await http().post(`/api/parts/${draft.id}/submission`).set(as('engineer')).send({ version: 1 }).expect(403)).body.code).toBe('PART_EDIT_FORBIDDEN');
+      expect((await http().post(`/api/parts/${draft.id}/submission`).set(as('engineer')).send({ version: 1 }).expect(403)).body.code).toBe(
+        'PART_EDIT_FORBIDDEN',
+      );
     });
   });
 
@@ -198,18 +228,41 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
     it('procurement adds and edits offers (409 on a stale version), links alternates both ways; engineers may not', async () => {
       const a = await createDraft(app, tokens.engineer);
       const b = await createDraft(app, tokens.engineer);
-      const offer = { supplier: 'Brightwater Components', sku: 'BW-1', currency: 'USD', priceBreaks: [{ quantity: 1000, unitPrice: '0.38' }, { quantity: 1, unitPrice: '0.9500' }], moq: 1, leadTimeDays: 28, lastCheckedOn: '2025-11-20' };
+      const offer = {
+        supplier: 'Brightwater Components',
+        sku: 'BW-1',
+        currency: 'USD',
+        priceBreaks: [
+          { quantity: 1000, unitPrice: '0.38' },
+          { quantity: 1, unitPrice: '0.9500' },
+        ],
+        moq: 1,
+        leadTimeDays: 28,
+        lastCheckedOn: '2025-11-20',
+      };
       expect((await http().post(`/api/parts/${a.id}/offers`).set(as('engineer')).send(offer).expect(403)).body.code).toBe('FORBIDDEN_ROLE');
-      const bad = await http().post(`/api/parts/${a.id}/offers`).set(as('procurement')).send({ ...offer, priceBreaks: [{ quantity: 1, unitPrice: '0.1234567' }] }).expect(400);
+      const bad = await http()
+        .post(`/api/parts/${a.id}/offers`)
+        .set(as('procurement'))
+        .send({ ...offer, priceBreaks: [{ quantity: 1, unitPrice: '0.1234567' }] })
+        .expect(400);
       expect(bad.body.fields[0].field).toBe('priceBreaks.0.unitPrice');
       const created = await http().post(`/api/parts/${a.id}/offers`).set(as('procurement')).send(offer).expect(201);
       expect(created.body.priceBreaks.map((p: { quantity: number }) => p.quantity)).toEqual([1, 1000]);
-      const edited = await http().patch(`/api/parts/${a.id}/offers/${created.body.id}`).set(as('procurement')).send({ version: 1, leadTimeDays: 42 }).expect(200);
+      const edited = await http()
+        .patch(`/api/parts/${a.id}/offers/${created.body.id}`)
+        .set(as('procurement'))
+        .send({ version: 1, leadTimeDays: 42 })
+        .expect(200);
       expect(edited.body).toMatchObject({ leadTimeDays: 42, version: 2 });
-      expect((await http().patch(`/api/parts/${a.id}/offers/${created.body.id}`).set(as('procurement')).send({ version: 1, leadTimeDays: 7 }).expect(409)).body.code).toBe('OFFER_VERSION_CONFLICT');
+      expect(
+        (await http().patch(`/api/parts/${a.id}/offers/${created.body.id}`).set(as('procurement')).send({ version: 1, leadTimeDays: 7 }).expect(409)).body.code,
+      ).toBe('OFFER_VERSION_CONFLICT');
 
       await http().put(`/api/parts/${a.id}/alternates/${b.id}`).set(as('procurement')).send({ kind: 'second-source', note: 'Same footprint' }).expect(204);
-      expect((await http().put(`/api/parts/${a.id}/alternates/${a.id}`).set(as('procurement')).send({ kind: 'alternate' }).expect(400)).body.code).toBe('ALTERNATE_SELF');
+      expect((await http().put(`/api/parts/${a.id}/alternates/${a.id}`).set(as('procurement')).send({ kind: 'alternate' }).expect(400)).body.code).toBe(
+        'ALTERNATE_SELF',
+      );
       const detailB = await http().get(`/api/parts/${b.id}`).set(as('procurement')).expect(200);
       expect(detailB.body.alternates).toEqual([expect.objectContaining({ partId: a.id, kind: 'second-source', note: 'Same footprint' })]);
       const detailA = await http().get(`/api/parts/${a.id}`).set(as('procurement')).expect(200);
@@ -219,7 +272,9 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
       expect((await http().get(`/api/parts/${a.id}`).set(as('procurement')).expect(200)).body.alternates).toEqual([]);
       await http().delete(`/api/parts/${a.id}/offers/${created.body.id}`).set(as('admin')).expect(204);
       const history = await http().get(`/api/parts/${a.id}/history`).set(as('procurement')).expect(200);
-      expect(history.body.items.map((e: { action: string }) => e.action)).toEqual(expect.arrayContaining(['offer-added', 'offer-updated', 'offer-removed', 'alternate-linked', 'alternate-unlinked']));
+      expect(history.body.items.map((e: { action: string }) => e.action)).toEqual(
+        expect.arrayContaining(['offer-added', 'offer-updated', 'offer-removed', 'alternate-linked', 'alternate-unlinked']),
+      );
     });
   });
 });

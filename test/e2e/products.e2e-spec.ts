@@ -17,13 +17,36 @@ describe('products and radios (API)', () => {
   // The fields named in a 400, each once (one field can break several constraints).
   const fields = (res: request.Response) => [...new Set((res.body.fields as { field: string }[]).map((f) => f.field))];
 
-  const productBody = () => ({ name: unique('Test product'), code: unique('TP').slice(0, 40), owner: 'Test Owner', groundPlaneLengthMm: 80, groundPlaneWidthMm: 40, targetRegions: ['EU', 'US'], notes: 'e2e' });
+  const productBody = () => ({
+    name: unique('Test product'),
+    code: unique('TP').slice(0, 40),
+    owner: 'Test Owner',
+    groundPlaneLengthMm: 80,
+    groundPlaneWidthMm: 40,
+    targetRegions: ['EU', 'US'],
+    notes: 'e2e',
+  });
   const cellular = () => ({
-    name: 'Cellular', technology: 'lte', module: 'Test modem (invented)', transmitPowerDbm: 23, polarization: 'linear', connector: 'solder-pad', feedLossDb: 0.5,
-    bands: [{ bandId: 103, certifiedMaxGainDbi: 5 }, { bandId: 120, certifiedMaxGainDbi: 4.5 }],
+    name: 'Cellular',
+    technology: 'lte',
+    module: 'Test modem (invented)',
+    transmitPowerDbm: 23,
+    polarization: 'linear',
+    connector: 'solder-pad',
+    feedLossDb: 0.5,
+    bands: [
+      { bandId: 103, certifiedMaxGainDbi: 5 },
+      { bandId: 120, certifiedMaxGainDbi: 4.5 },
+    ],
   });
   const gnss = () => ({
-    name: 'GNSS', technology: 'gnss', module: 'Test GNSS (invented)', transmitPowerDbm: null, polarization: 'RHCP', connector: 'solder-pad', feedLossDb: 0.2,
+    name: 'GNSS',
+    technology: 'gnss',
+    module: 'Test GNSS (invented)',
+    transmitPowerDbm: null,
+    polarization: 'RHCP',
+    connector: 'solder-pad',
+    feedLossDb: 0.2,
     bands: [{ bandId: 501 }, { bandId: 511 }],
   });
   const createProduct = async () => (await call('post', '/api/products', 'engineer', productBody()).expect(201)).body;
@@ -40,13 +63,14 @@ describe('products and radios (API)', () => {
   afterAll(() => app.close());
 
   describe('who may call each route', () => {
-    const reads = () => [
-      ['get', '/api/products'],
-      ['get', `/api/products/${scratch.id}`],
-      ['get', `/api/products/${scratch.id}/history`],
-      ['get', `/api/products/${scratch.id}/radios`],
-      ['get', `/api/products/${scratch.id}/radios/${scratchRadio.id}`],
-    ] as const;
+    const reads = () =>
+      [
+        ['get', '/api/products'],
+        ['get', `/api/products/${scratch.id}`],
+        ['get', `/api/products/${scratch.id}/history`],
+        ['get', `/api/products/${scratch.id}/radios`],
+        ['get', `/api/products/${scratch.id}/radios/${scratchRadio.id}`],
+      ] as const;
 
     it('read routes: 401 anonymous, 200 for every role', async () => {
       for (const [method, path] of reads()) {
@@ -87,10 +111,18 @@ describe('products and radios (API)', () => {
 
   describe('POST /api/products', () => {
     it('answers 400 naming the field for negative, absurd and missing values', async () => {
-      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), groundPlaneLengthMm: -5 }).expect(400))).toEqual(['groundPlaneLengthMm']);
-      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), groundPlaneWidthMm: 50000 }).expect(400))).toEqual(['groundPlaneWidthMm']);
-      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), groundPlaneWidthMm: 'wide' }).expect(400))).toContain('groundPlaneWidthMm');
-      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), targetRegions: ['EU', 'Mars'] }).expect(400))).toEqual(['targetRegions']);
+      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), groundPlaneLengthMm: -5 }).expect(400))).toEqual([
+        'groundPlaneLengthMm',
+      ]);
+      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), groundPlaneWidthMm: 50000 }).expect(400))).toEqual([
+        'groundPlaneWidthMm',
+      ]);
+      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), groundPlaneWidthMm: 'wide' }).expect(400))).toContain(
+        'groundPlaneWidthMm',
+      );
+      expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), targetRegions: ['EU', 'Mars'] }).expect(400))).toEqual([
+        'targetRegions',
+      ]);
       expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), name: undefined }).expect(400))).toContain('name');
       expect(fields(await call('post', '/api/products', 'engineer', { ...productBody(), version: 4 }).expect(400))).toEqual(['version']);
     });
@@ -129,7 +161,16 @@ describe('products and radios (API)', () => {
       expect(cell).toMatchObject({ technology: 'lte', transmitPowerDbm: 23, receiveOnly: false, feedLossDb: 0.3 });
       const b12 = cell.bands.find((b: { band: { designation: string } }) => b.band.designation === 'B12');
       // 3GPP TS 36.101 Table 5.5-1: band 12 UL 699–716, DL 729–746 MHz.
-      expect(b12).toEqual({ certifiedMaxGainDbi: 8.5, band: expect.objectContaining({ id: 112, ranges: [{ role: 'uplink', fromMhz: 699, toMhz: 716 }, { role: 'downlink', fromMhz: 729, toMhz: 746 }] }) });
+      expect(b12).toEqual({
+        certifiedMaxGainDbi: 8.5,
+        band: expect.objectContaining({
+          id: 112,
+          ranges: [
+            { role: 'uplink', fromMhz: 699, toMhz: 716 },
+            { role: 'downlink', fromMhz: 729, toMhz: 746 },
+          ],
+        }),
+      });
       expect(res.body.radios[1]).toMatchObject({ technology: 'gnss', transmitPowerDbm: null, receiveOnly: true, polarization: 'RHCP' });
     });
 
@@ -139,7 +180,8 @@ describe('products and radios (API)', () => {
       const lora = detail.radios.find((r) => r.id === 23)!;
       // LoRaWAN RP002-1.0.x: EU863-870 is 863–870 MHz, US902-928 is 902–928 MHz.
       expect(lora.bands.map((b) => [b.band.designation, b.band.ranges[0].fromMhz, b.band.ranges[0].toMhz, b.certifiedMaxGainDbi])).toEqual([
-        ['EU863-870', 863, 870, 3], ['US902-928', 902, 928, 6],
+        ['EU863-870', 863, 870, 3],
+        ['US902-928', 902, 928, 6],
       ]);
     });
   });
@@ -158,7 +200,9 @@ describe('products and radios (API)', () => {
 
     it('answers 400 for an absurd size and 409 for a taken code, leaving the product as it was', async () => {
       const product = await createProduct();
-      expect(fields(await call('patch', `/api/products/${product.id}`, 'engineer', { version: 1, groundPlaneLengthMm: 0 }).expect(400))).toEqual(['groundPlaneLengthMm']);
+      expect(fields(await call('patch', `/api/products/${product.id}`, 'engineer', { version: 1, groundPlaneLengthMm: 0 }).expect(400))).toEqual([
+        'groundPlaneLengthMm',
+      ]);
       await call('patch', `/api/products/${product.id}`, 'engineer', { version: 1, code: 'DEMO-CG2' }).expect(409);
       expect((await call('get', `/api/products/${product.id}`, 'engineer').expect(200)).body).toMatchObject({ code: product.code, version: 1 });
     });
@@ -167,7 +211,11 @@ describe('products and radios (API)', () => {
       const product = await createProduct();
       await call('patch', `/api/products/${product.id}`, 'admin', { version: 1, groundPlaneWidthMm: 35, targetRegions: ['EU'] }).expect(200);
       const [latest] = (await call('get', `/api/products/${product.id}/history`, 'engineer').expect(200)).body.items;
-      expect(latest).toMatchObject({ action: 'updated', user: { name: 'Ada Okonkwo' }, changes: { groundPlaneWidthMm: [40, 35], targetRegions: [['EU', 'US'], ['EU']] } });
+      expect(latest).toMatchObject({
+        action: 'updated',
+        user: { name: 'Ada Okonkwo' },
+        changes: { groundPlaneWidthMm: [40, 35], targetRegions: [['EU', 'US'], ['EU']] },
+      });
     });
   });
 
@@ -180,7 +228,10 @@ describe('products and radios (API)', () => {
       await call('get', `/api/products/${product.id}/radios/${radio.id}`, 'engineer').expect(200);
       await call('delete', `/api/products/${product.id}?version=2`, 'engineer').expect(204);
       await call('get', `/api/products/${product.id}/radios/${radio.id}`, 'engineer').expect(404);
-      expect((await call('get', `/api/audit?entityType=product&entityId=${product.id}`, 'admin').expect(200)).body.items[0]).toMatchObject({ action: 'deleted', changes: { radioCount: 1 } });
+      expect((await call('get', `/api/audit?entityType=product&entityId=${product.id}`, 'admin').expect(200)).body.items[0]).toMatchObject({
+        action: 'deleted',
+        changes: { radioCount: 1 },
+      });
     });
   });
 
@@ -190,13 +241,27 @@ describe('products and radios (API)', () => {
     });
 
     it('answers 400 naming the band for a band of another technology, an unknown band and a repeated band', async () => {
-      const wifiOnLte = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...cellular(), bands: [{ bandId: 601, certifiedMaxGainDbi: 3 }] }).expect(400);
+      const wifiOnLte = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', {
+        ...cellular(),
+        bands: [{ bandId: 601, certifiedMaxGainDbi: 3 }],
+      }).expect(400);
       expect(wifiOnLte.body.fields).toEqual([{ field: 'bands.0.bandId', message: expect.stringMatching(/wifi band.*lte radio/) }]);
-      const nrOnLte = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...cellular(), bands: [{ bandId: 103, certifiedMaxGainDbi: 5 }, { bandId: 378, certifiedMaxGainDbi: 5 }] }).expect(400);
+      const nrOnLte = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', {
+        ...cellular(),
+        bands: [
+          { bandId: 103, certifiedMaxGainDbi: 5 },
+          { bandId: 378, certifiedMaxGainDbi: 5 },
+        ],
+      }).expect(400);
       expect(fields(nrOnLte)).toEqual(['bands.1.bandId']);
-      const unknown = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...cellular(), bands: [{ bandId: 103 }, { bandId: 999999 }] }).expect(400);
+      const unknown = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', {
+        ...cellular(),
+        bands: [{ bandId: 103 }, { bandId: 999999 }],
+      }).expect(400);
       expect(unknown.body.fields).toEqual([{ field: 'bands.1.bandId', message: expect.stringContaining('999999') }]);
-      const twice = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...cellular(), bands: [{ bandId: 103 }, { bandId: 103 }] }).expect(400);
+      const twice = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...cellular(), bands: [{ bandId: 103 }, { bandId: 103 }] }).expect(
+        400,
+      );
       expect(fields(twice)).toEqual(['bands.1.bandId']);
       const none = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...cellular(), bands: [] }).expect(400);
       expect(fields(none)).toEqual(['bands']);
@@ -205,7 +270,10 @@ describe('products and radios (API)', () => {
     it('answers 400 for transmit power on a receive-only radio, and for a transmitter without one', async () => {
       const gnssTx = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...gnss(), transmitPowerDbm: 10 }).expect(400);
       expect(gnssTx.body.fields).toEqual([{ field: 'transmitPowerDbm', message: expect.stringContaining('receive-only') }]);
-      const gnssGain = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...gnss(), bands: [{ bandId: 501, certifiedMaxGainDbi: 3 }] }).expect(400);
+      const gnssGain = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', {
+        ...gnss(),
+        bands: [{ bandId: 501, certifiedMaxGainDbi: 3 }],
+      }).expect(400);
       expect(fields(gnssGain)).toEqual(['bands.0.certifiedMaxGainDbi']);
       const silent = await call('post', `/api/products/${scratch.id}/radios`, 'engineer', { ...cellular(), transmitPowerDbm: null }).expect(400);
       expect(fields(silent)).toEqual(['transmitPowerDbm']);
@@ -226,9 +294,21 @@ describe('products and radios (API)', () => {
       const product = await createProduct();
       await call('post', `/api/products/${product.id}/radios`, 'engineer', { ...gnss(), transmitPowerDbm: 5 }).expect(400);
       const cell = await call('post', `/api/products/${product.id}/radios`, 'engineer', cellular()).expect(201);
-      expect(cell.body).toMatchObject({ productId: product.id, version: 1, receiveOnly: false, bands: [{ certifiedMaxGainDbi: 5, band: { designation: 'B3' } }, { certifiedMaxGainDbi: 4.5, band: { designation: 'B20' } }] });
+      expect(cell.body).toMatchObject({
+        productId: product.id,
+        version: 1,
+        receiveOnly: false,
+        bands: [
+          { certifiedMaxGainDbi: 5, band: { designation: 'B3' } },
+          { certifiedMaxGainDbi: 4.5, band: { designation: 'B20' } },
+        ],
+      });
       const rx = await call('post', `/api/products/${product.id}/radios`, 'engineer', gnss()).expect(201);
-      expect(rx.body).toMatchObject({ receiveOnly: true, transmitPowerDbm: null, bands: [{ certifiedMaxGainDbi: null, band: { designation: 'GPS L1' } }, { band: { designation: 'Galileo E1' } }] });
+      expect(rx.body).toMatchObject({
+        receiveOnly: true,
+        transmitPowerDbm: null,
+        bands: [{ certifiedMaxGainDbi: null, band: { designation: 'GPS L1' } }, { band: { designation: 'Galileo E1' } }],
+      });
       const detail = (await call('get', `/api/products/${product.id}`, 'procurement').expect(200)).body;
       expect(detail.radios.map((r: { name: string }) => r.name)).toEqual(['Cellular', 'GNSS']);
       const history = (await call('get', `/api/products/${product.id}/history`, 'engineer').expect(200)).body.items;
@@ -248,7 +328,11 @@ describe('products and radios (API)', () => {
       const radio = (await call('post', `/api/products/${product.id}/radios`, 'engineer', cellular()).expect(201)).body;
       const first = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', { version: 1, transmitPowerDbm: 20 }).expect(200);
       expect(first.body.version).toBe(2);
-      const stale = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'admin', { version: 1, transmitPowerDbm: 26, bands: [{ bandId: 108, certifiedMaxGainDbi: 2 }] }).expect(409);
+      const stale = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'admin', {
+        version: 1,
+        transmitPowerDbm: 26,
+        bands: [{ bandId: 108, certifiedMaxGainDbi: 2 }],
+      }).expect(409);
       expect(stale.body).toMatchObject({ code: 'RADIO_VERSION_CONFLICT', expectedVersion: 1, currentVersion: 2 });
       const now = (await call('get', `/api/products/${product.id}/radios/${radio.id}`, 'engineer').expect(200)).body;
       expect(now).toMatchObject({ version: 2, transmitPowerDbm: 20 });
@@ -260,18 +344,40 @@ describe('products and radios (API)', () => {
       const radio = (await call('post', `/api/products/${product.id}/radios`, 'engineer', cellular()).expect(201)).body;
       const res = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', { version: 1, technology: 'nr' }).expect(400);
       expect(fields(res)).toEqual(['bands.0.bandId', 'bands.1.bandId']);
-      const toGnss = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', { version: 1, technology: 'gnss', bands: [{ bandId: 501 }] }).expect(400);
+      const toGnss = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', {
+        version: 1,
+        technology: 'gnss',
+        bands: [{ bandId: 501 }],
+      }).expect(400);
       expect(fields(toGnss)).toEqual(['transmitPowerDbm']);
-      expect((await call('get', `/api/products/${product.id}/radios/${radio.id}`, 'engineer').expect(200)).body).toMatchObject({ technology: 'lte', version: 1 });
+      expect((await call('get', `/api/products/${product.id}/radios/${radio.id}`, 'engineer').expect(200)).body).toMatchObject({
+        technology: 'lte',
+        version: 1,
+      });
     });
 
     it('replaces the bands and records the change with before and after', async () => {
       const product = await createProduct();
       const radio = (await call('post', `/api/products/${product.id}/radios`, 'engineer', cellular()).expect(201)).body;
-      const res = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', { version: 1, bands: [{ bandId: 108, certifiedMaxGainDbi: 4 }, { bandId: 120, certifiedMaxGainDbi: 4.5 }] }).expect(200);
+      const res = await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', {
+        version: 1,
+        bands: [
+          { bandId: 108, certifiedMaxGainDbi: 4 },
+          { bandId: 120, certifiedMaxGainDbi: 4.5 },
+        ],
+      }).expect(200);
       expect(res.body.bands.map((b: { band: { designation: string } }) => b.band.designation)).toEqual(['B8', 'B20']);
       const [latest] = (await call('get', `/api/products/${product.id}/history`, 'engineer').expect(200)).body.items;
-      expect(latest).toMatchObject({ action: 'radio-updated', changes: { radioId: radio.id, bands: [['B3 (5 dBi)', 'B20 (4.5 dBi)'], ['B8 (4 dBi)', 'B20 (4.5 dBi)']] } });
+      expect(latest).toMatchObject({
+        action: 'radio-updated',
+        changes: {
+          radioId: radio.id,
+          bands: [
+            ['B3 (5 dBi)', 'B20 (4.5 dBi)'],
+            ['B8 (4 dBi)', 'B20 (4.5 dBi)'],
+          ],
+        },
+      });
     });
   });
 
@@ -280,7 +386,9 @@ describe('products and radios (API)', () => {
       const product = await createProduct();
       const radio = (await call('post', `/api/products/${product.id}/radios`, 'engineer', gnss()).expect(201)).body;
       await call('patch', `/api/products/${product.id}/radios/${radio.id}`, 'engineer', { version: 1, feedLossDb: 0.3 }).expect(200);
-      expect((await call('delete', `/api/products/${product.id}/radios/${radio.id}?version=1`, 'engineer').expect(409)).body.code).toBe('RADIO_VERSION_CONFLICT');
+      expect((await call('delete', `/api/products/${product.id}/radios/${radio.id}?version=1`, 'engineer').expect(409)).body.code).toBe(
+        'RADIO_VERSION_CONFLICT',
+      );
       await call('delete', `/api/products/${product.id}/radios/${radio.id}?version=2`, 'engineer').expect(204);
       expect((await call('get', `/api/products/${product.id}`, 'engineer').expect(200)).body.radios).toEqual([]);
       const [latest] = (await call('get', `/api/products/${product.id}/history`, 'engineer').expect(200)).body.items;

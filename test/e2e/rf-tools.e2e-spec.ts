@@ -111,7 +111,17 @@ describe('RF tools (API)', () => {
 
     it('reads Example A: VSWR 3.0 / 1.5 / 2.0 at 820 / 868 / 915 MHz', async () => {
       const res = await analyze(EXAMPLE_A, 'example-a.s1p').expect(200);
-      expect(res.body).toMatchObject({ version: '1.0', ports: 1, parameter: 'S', format: 'RI', referenceOhms: [50], points: 3, port: 1, criterion: 'vswr', resampled: false });
+      expect(res.body).toMatchObject({
+        version: '1.0',
+        ports: 1,
+        parameter: 'S',
+        format: 'RI',
+        referenceOhms: [50],
+        points: 3,
+        port: 1,
+        criterion: 'vswr',
+        resampled: false,
+      });
       expect(res.body.minFrequencyHz).toBe(820e6);
       expect(res.body.maxFrequencyHz).toBe(915e6);
       // Example A expected values (Pozar 4th ed. §2.3 formulas)
@@ -198,26 +208,62 @@ describe('RF tools (API)', () => {
     });
 
     it('answers 400 naming the nested fields', async () => {
-      const missing = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, loadOhms: { im: -100 } }).expect(400);
+      const missing = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, loadOhms: { im: -100 } })
+        .expect(400);
       expect(fieldsOf(missing.body)).toContain('loadOhms.re');
-      const noLoad = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, loadOhms: undefined }).expect(400);
+      const noLoad = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, loadOhms: undefined })
+        .expect(400);
       expect(fieldsOf(noLoad.body)).toContain('loadOhms');
-      const lossless = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, loadOhms: { re: 0, im: 10 } }).expect(400);
+      const lossless = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, loadOhms: { re: 0, im: 10 } })
+        .expect(400);
       expect(fieldsOf(lossless.body)).toEqual(['loadOhms.re']);
-      const sweep = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, sweep: { fromHz: 600e6, toHz: 400e6 } }).expect(400);
+      const sweep = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, sweep: { fromHz: 600e6, toHz: 400e6 } })
+        .expect(400);
       expect(fieldsOf(sweep.body)).toEqual(['sweep.toHz']);
-      const zero = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, frequencyHz: 0 }).expect(400);
+      const zero = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, frequencyHz: 0 })
+        .expect(400);
       expect(fieldsOf(zero.body)).toEqual(['frequencyHz']);
-      const tooHigh = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, frequencyHz: 301e9 }).expect(400);
+      const tooHigh = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, frequencyHz: 301e9 })
+        .expect(400);
       expect(fieldsOf(tooHigh.body)).toEqual(['frequencyHz']);
-      const z0 = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, z0Ohms: -50 }).expect(400);
+      const z0 = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, z0Ohms: -50 })
+        .expect(400);
       expect(fieldsOf(z0.body)).toContain('z0Ohms');
-      const series = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, series: 'E96' }).expect(400);
+      const series = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, series: 'E96' })
+        .expect(400);
       expect(fieldsOf(series.body)).toEqual(['series']);
     });
 
     it('gives Pozar Example 5.1: 0.923 pF shunt + 38.98 nH series, and 46.1 nH shunt + 2.60 pF series', async () => {
-      const res = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, sweep: { fromHz: 400e6, toHz: 600e6, points: 201 } }).expect(200);
+      const res = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, sweep: { fromHz: 400e6, toHz: 600e6, points: 201 } })
+        .expect(200);
       const shuntAtLoad = res.body.solutions.filter((s: { topology: string }) => s.topology === 'shunt-at-load');
       expect(shuntAtLoad).toHaveLength(2);
       const [first, second] = shuntAtLoad;
@@ -245,7 +291,11 @@ describe('RF tools (API)', () => {
     });
 
     it('snaps to E12 when asked: 0.923 pF → 1.0 pF', async () => {
-      const res = await http().post('/api/rf/matching').set(auth()).send({ ...pozar, series: 'E12' }).expect(200);
+      const res = await http()
+        .post('/api/rf/matching')
+        .set(auth())
+        .send({ ...pozar, series: 'E12' })
+        .expect(200);
       // IEC 60063:2015: 0.923 pF → E12 1.0 pF
       expect(res.body.solutions[0].snapped.elements[0].capacitancePf).toBe(1);
       expect(res.body.solutions[0].exact.sweep).toEqual([]);
@@ -266,8 +316,28 @@ describe('RF tools (API)', () => {
     it('answers 400 naming missing and out-of-range fields', async () => {
       const { distanceM: _omit, ...noDistance } = base;
       expect(fieldsOf((await http().post('/api/rf/link-budget').set(auth()).send(noDistance).expect(400)).body)).toContain('distanceM');
-      expect(fieldsOf((await http().post('/api/rf/link-budget').set(auth()).send({ ...base, frequencyHz: -1 }).expect(400)).body)).toContain('frequencyHz');
-      expect(fieldsOf((await http().post('/api/rf/link-budget').set(auth()).send({ ...base, txPowerDbm: 'high' }).expect(400)).body)).toContain('txPowerDbm');
+      expect(
+        fieldsOf(
+          (
+            await http()
+              .post('/api/rf/link-budget')
+              .set(auth())
+              .send({ ...base, frequencyHz: -1 })
+              .expect(400)
+          ).body,
+        ),
+      ).toContain('frequencyHz');
+      expect(
+        fieldsOf(
+          (
+            await http()
+              .post('/api/rf/link-budget')
+              .set(auth())
+              .send({ ...base, txPowerDbm: 'high' })
+              .expect(400)
+          ).body,
+        ),
+      ).toContain('txPowerDbm');
     });
 
     it('matches the FSPL table: 2.4 GHz is 60.05 dB at 10 m and 100.05 dB at 1 km', async () => {
@@ -312,7 +382,17 @@ describe('RF tools (API)', () => {
       expect(fieldsOf((await http().post('/api/rf/conversions').set(auth()).send({ vswr: 0.5 }).expect(400)).body)).toEqual(['vswr']);
       expect(fieldsOf((await http().post('/api/rf/conversions').set(auth()).send({ gammaMagnitude: 1.2 }).expect(400)).body)).toEqual(['gammaMagnitude']);
       expect(fieldsOf((await http().post('/api/rf/conversions').set(auth()).send({ efficiencyPct: 120 }).expect(400)).body)).toEqual(['efficiencyPct']);
-      expect(fieldsOf((await http().post('/api/rf/conversions').set(auth()).send({ impedanceOhms: { re: 50 } }).expect(400)).body)).toEqual(['impedanceOhms.im']);
+      expect(
+        fieldsOf(
+          (
+            await http()
+              .post('/api/rf/conversions')
+              .set(auth())
+              .send({ impedanceOhms: { re: 50 } })
+              .expect(400)
+          ).body,
+        ),
+      ).toEqual(['impedanceOhms.im']);
       expect(fieldsOf((await http().post('/api/rf/conversions').set(auth()).send({ vswr: 2, z0Ohms: 75 }).expect(400)).body)).toEqual(['z0Ohms']);
     });
 
@@ -347,7 +427,11 @@ describe('RF tools (API)', () => {
 
     it('converts 50 + j50 Ω on 50 Ω to Γ 0.2 + j0.4, |Γ| 0.4472 ∠63.43°, VSWR 2.618', async () => {
       // Γ = (Z − Z0)/(Z + Z0), Pozar 4th ed. §2.3
-      const res = await http().post('/api/rf/conversions').set(auth()).send({ impedanceOhms: { re: 50, im: 50 } }).expect(200);
+      const res = await http()
+        .post('/api/rf/conversions')
+        .set(auth())
+        .send({ impedanceOhms: { re: 50, im: 50 } })
+        .expect(200);
       expect(res.body.gamma.re).toBeCloseTo(0.2, 9);
       expect(res.body.gamma.im).toBeCloseTo(0.4, 9);
       expect(res.body.gamma.angleDeg).toBeCloseTo(63.43, 2);
@@ -357,7 +441,11 @@ describe('RF tools (API)', () => {
 
     it('converts 40 + j70 Ω on 100 Ω to |Γ| 0.589 ∠104.04°, SWR 3.87, RL 4.60 dB', async () => {
       // Pozar 4th ed. Example 2.2
-      const res = await http().post('/api/rf/conversions').set(auth()).send({ impedanceOhms: { re: 40, im: 70 }, z0Ohms: 100 }).expect(200);
+      const res = await http()
+        .post('/api/rf/conversions')
+        .set(auth())
+        .send({ impedanceOhms: { re: 40, im: 70 }, z0Ohms: 100 })
+        .expect(200);
       expect(res.body.gamma.magnitude).toBeCloseTo(0.589, 3);
       expect(res.body.gamma.angleDeg).toBeCloseTo(104.04, 2);
       expect(res.body.reflection.vswr).toBeCloseTo(3.87, 2);

@@ -8,13 +8,29 @@ const TRACKER = 1;
 const TRACKER_BLE = 13;
 const LOW_EFFICIENCY_CHIP = 1029;
 
-interface Finding { ruleId: string; severity: string; code: string; message: string }
-interface Cell { row: number; column: number; status: string; findings: Finding[] }
+interface Finding {
+  ruleId: string;
+  severity: string;
+  code: string;
+  message: string;
+}
+interface Cell {
+  row: number;
+  column: number;
+  status: string;
+  findings: Finding[];
+}
 
 /** A sound rule that never fires on real data; each test breaks one part of it. */
 function rule(id: string, overrides: Record<string, unknown> = {}) {
   return {
-    id, title: `Safety rule ${id}`, description: 'made by the rule-safety e2e tests', severity: 'fail', enabled: true, version: 1, source: 'test',
+    id,
+    title: `Safety rule ${id}`,
+    description: 'made by the rule-safety e2e tests',
+    severity: 'fail',
+    enabled: true,
+    version: 1,
+    source: 'test',
     parameters: { states: ['never-a-state'], limit: 3 },
     conditions: { all: [{ fact: 'reviewState', operator: 'in', value: { param: 'states' } }] },
     event: { type: 'finding', params: { code: 'SAFETY_RULE', message: 'never {reviewState}' } },
@@ -64,25 +80,49 @@ describe('rules can never break the matrix (API)', () => {
       ['"in" with a number parameter', leaf('reviewState', 'in', { param: 'limit' }), 'definition.conditions.all[0].value.param'],
       ['"greaterThan" with a list parameter', leaf('worstVswr', 'greaterThan', { param: 'states' }), 'definition.conditions.all[0].value.param'],
       ['"lessThan" with text', leaf('worstVswr', 'lessThan', 'three'), 'definition.conditions.all[0].value'],
-      ['a placeholder {toString}', { event: { type: 'finding', params: { code: 'SAFETY_RULE', message: 'see {toString}' } } }, 'definition.event.params.message'],
+      [
+        'a placeholder {toString}',
+        { event: { type: 'finding', params: { code: 'SAFETY_RULE', message: 'see {toString}' } } },
+        'definition.event.params.message',
+      ],
       ['conditions nested 9 levels deep', nested(9), `definition.conditions${'.all[0]'.repeat(8)}`],
-      ['201 conditions', { conditions: { any: Array.from({ length: 201 }, (_, i) => ({ fact: 'worstVswr', operator: 'greaterThan', value: i })) } }, 'definition.conditions.any[199]'],
+      [
+        '201 conditions',
+        { conditions: { any: Array.from({ length: 201 }, (_, i) => ({ fact: 'worstVswr', operator: 'greaterThan', value: i })) } },
+        'definition.conditions.any[199]',
+      ],
     ];
 
     it.each(hostile)('refuses %s with 400 naming the place, and stores nothing', async (_, change, field) => {
       const id = newId();
-      const created = await http().post('/api/rules').set(as('admin')).send({ definition: rule(id, change) }).expect(400);
+      const created = await http()
+        .post('/api/rules')
+        .set(as('admin'))
+        .send({ definition: rule(id, change) })
+        .expect(400);
       expect(created.body.code).toBe('VALIDATION_FAILED');
       expect(created.body.fields.map((f: { field: string }) => f.field)).toContain(field);
       await http().get(`/api/rules/${id}`).set(as('admin')).expect(404);
-      const preview = await http().post('/api/rules/preview').set(as('admin')).send({ definition: rule(id, change) }).expect(400);
+      const preview = await http()
+        .post('/api/rules/preview')
+        .set(as('admin'))
+        .send({ definition: rule(id, change) })
+        .expect(400);
       expect(preview.body.fields.map((f: { field: string }) => f.field)).toContain(field);
     });
 
     it('refuses an edit that would break a rule, keeping the saved version', async () => {
       const id = newId();
-      await http().post('/api/rules').set(as('admin')).send({ definition: rule(id) }).expect(201);
-      const edit = await http().put(`/api/rules/${id}`).set(as('admin')).send({ version: 1, definition: rule(id, leaf('reviewState', 'notIn', { param: 'constructor' })) }).expect(400);
+      await http()
+        .post('/api/rules')
+        .set(as('admin'))
+        .send({ definition: rule(id) })
+        .expect(201);
+      const edit = await http()
+        .put(`/api/rules/${id}`)
+        .set(as('admin'))
+        .send({ version: 1, definition: rule(id, leaf('reviewState', 'notIn', { param: 'constructor' })) })
+        .expect(400);
       expect(edit.body.fields[0].field).toBe('definition.conditions.all[0].value.param');
       expect((await http().get(`/api/rules/${id}`).set(as('admin')).expect(200)).body.version).toBe(1);
     });
@@ -94,7 +134,11 @@ describe('rules can never break the matrix (API)', () => {
     beforeAll(async () => {
       // Around the API, as an old or hand-edited row could be: "in" against an inherited property.
       const broken = rule(id, leaf('reviewState', 'in', { param: 'constructor' }));
-      await db.query('INSERT INTO compatibility_rules (rule_key, origin, definition, version, enabled) VALUES (?, ?, ?, 1, 1)', [id, 'admin', JSON.stringify(broken)]);
+      await db.query('INSERT INTO compatibility_rules (rule_key, origin, definition, version, enabled) VALUES (?, ?, ?, 1, 1)', [
+        id,
+        'admin',
+        JSON.stringify(broken),
+      ]);
     });
     afterAll(async () => {
       // Before the next describe of any later file reads a matrix.
@@ -125,7 +169,11 @@ describe('rules can never break the matrix (API)', () => {
     });
 
     it('POST /api/rules/preview of another rule answers 200', async () => {
-      const res = await http().post('/api/rules/preview').set(as('admin')).send({ definition: rule(newId()) }).expect(200);
+      const res = await http()
+        .post('/api/rules/preview')
+        .set(as('admin'))
+        .send({ definition: rule(newId()) })
+        .expect(200);
       expect(res.body.cellsCompared).toBeGreaterThan(0);
     });
 

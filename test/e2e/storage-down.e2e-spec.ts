@@ -57,11 +57,30 @@ describe('object storage down', () => {
   describe('POST /api/parts/:id/measurements and /documents', () => {
     it('answer 503 STORAGE_UNAVAILABLE for a Touchstone file and a PDF and write no rows; the sweeper removes the notes once storage is back', async () => {
       const part = await createDraft(app, tokens.engineer);
-      const curve = await request(app.getHttpServer()).post(`/api/parts/${part.id}/measurements`).set(auth()).field('kind', 's11')
-        .attach('file', Buffer.from(s1pWithGamma([[800, 0.2], [900, 0.3], [1000, 0.25]])), 'sweep.s1p').expect(503);
+      const curve = await request(app.getHttpServer())
+        .post(`/api/parts/${part.id}/measurements`)
+        .set(auth())
+        .field('kind', 's11')
+        .attach(
+          'file',
+          Buffer.from(
+            s1pWithGamma([
+              [800, 0.2],
+              [900, 0.3],
+              [1000, 0.25],
+            ]),
+          ),
+          'sweep.s1p',
+        )
+        .expect(503);
       expect(curve.body).toMatchObject({ code: 'STORAGE_UNAVAILABLE', message: expect.stringMatching(/nothing was saved/) });
       const pdf = Buffer.from('%PDF-1.4\n% invented test datasheet\n1 0 obj <<>> endobj\ntrailer <<>>\n%%EOF\n');
-      const doc = await request(app.getHttpServer()).post(`/api/parts/${part.id}/documents`).set(auth()).field('kind', 'datasheet').attach('file', pdf, 'datasheet.pdf').expect(503);
+      const doc = await request(app.getHttpServer())
+        .post(`/api/parts/${part.id}/documents`)
+        .set(auth())
+        .field('kind', 'datasheet')
+        .attach('file', pdf, 'datasheet.pdf')
+        .expect(503);
       expect(doc.body.code).toBe('STORAGE_UNAVAILABLE');
 
       const db = app.get<DataSource>(getDataSourceToken());

@@ -21,7 +21,10 @@ async function startInstance(): Promise<{ url: string; process: ChildProcess }> 
   const url = `http://127.0.0.1:${port}`;
   const deadline = Date.now() + 30000;
   while (Date.now() < deadline) {
-    const up = await fetch(`${url}/api/health`).then((r) => r.ok, () => false);
+    const up = await fetch(`${url}/api/health`).then(
+      (r) => r.ok,
+      () => false,
+    );
     if (up) return { url, process: child };
     await new Promise((r) => setTimeout(r, 150));
   }
@@ -30,7 +33,10 @@ async function startInstance(): Promise<{ url: string; process: ChildProcess }> 
 }
 
 const json = (url: string, init: RequestInit & { token?: string; body?: string } = {}) =>
-  fetch(url, { ...init, headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress(), ...(init.token ? { Authorization: `Bearer ${init.token}` } : {}) } });
+  fetch(url, {
+    ...init,
+    headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress(), ...(init.token ? { Authorization: `Bearer ${init.token}` } : {}) },
+  });
 
 describe('two API instances against one database', () => {
   let a: Awaited<ReturnType<typeof startInstance>>;
@@ -54,17 +60,30 @@ describe('two API instances against one database', () => {
   });
 
   it('50 concurrent edits of one product with the same version, spread over both: exactly one wins, 49 get 409, nothing lost', async () => {
-    const { accessToken: token } = await (await json(`${a.url}/api/auth/login`, { method: 'POST', body: JSON.stringify({ email: DEMO.engineer, password: DEMO_PASSWORD }) })).json();
+    const { accessToken: token } = await (
+      await json(`${a.url}/api/auth/login`, { method: 'POST', body: JSON.stringify({ email: DEMO.engineer, password: DEMO_PASSWORD }) })
+    ).json();
     const created = await json(`${a.url}/api/products`, {
       method: 'POST',
       token,
-      body: JSON.stringify({ name: 'Concurrency probe', code: unique('CC').slice(0, 40), owner: 'Test', groundPlaneLengthMm: 80, groundPlaneWidthMm: 40, targetRegions: ['EU'] }),
+      body: JSON.stringify({
+        name: 'Concurrency probe',
+        code: unique('CC').slice(0, 40),
+        owner: 'Test',
+        groundPlaneLengthMm: 80,
+        groundPlaneWidthMm: 40,
+        targetRegions: ['EU'],
+      }),
     });
     expect(created.status).toBe(201);
     const product = await created.json();
 
     const attempts = Array.from({ length: 50 }, (_, i) =>
-      json(`${(i % 2 ? a : b).url}/api/products/${product.id}`, { method: 'PATCH', token, body: JSON.stringify({ version: product.version, notes: `edit ${i}` }) }).then(async (r) => ({ status: r.status, body: await r.json(), i })),
+      json(`${(i % 2 ? a : b).url}/api/products/${product.id}`, {
+        method: 'PATCH',
+        token,
+        body: JSON.stringify({ version: product.version, notes: `edit ${i}` }),
+      }).then(async (r) => ({ status: r.status, body: await r.json(), i })),
     );
     const results = await Promise.all(attempts);
     const winners = results.filter((r) => r.status === 200);

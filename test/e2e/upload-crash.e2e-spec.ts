@@ -26,7 +26,13 @@ async function startInstance(extraEnv: Record<string, string> = {}): Promise<{ u
   const url = `http://127.0.0.1:${port}`;
   const deadline = Date.now() + 30000;
   while (Date.now() < deadline) {
-    if (await fetch(`${url}/api/health`).then((r) => r.ok, () => false)) return { url, process: child };
+    if (
+      await fetch(`${url}/api/health`).then(
+        (r) => r.ok,
+        () => false,
+      )
+    )
+      return { url, process: child };
     await new Promise((r) => setTimeout(r, 150));
   }
   child.kill('SIGKILL');
@@ -57,7 +63,12 @@ describe('an upload killed between storing the object and committing its row', (
 
   beforeAll(async () => {
     db = await new DataSource(dataSourceOptions(config)).initialize();
-    s3 = new S3Client({ endpoint: config.s3.endpoint, region: config.s3.region, forcePathStyle: true, credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey } });
+    s3 = new S3Client({
+      endpoint: config.s3.endpoint,
+      region: config.s3.region,
+      forcePathStyle: true,
+      credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey },
+    });
   });
   afterAll(async () => {
     for (const child of instances) child.kill('SIGKILL');
@@ -69,10 +80,18 @@ describe('an upload killed between storing the object and committing its row', (
     // Test-only pause (UPLOAD_TEST_PAUSE_MS) holds each upload after its object is stored, before its row commits.
     const doomed = await startInstance({ UPLOAD_TEST_PAUSE_MS: '60000' });
     instances.push(doomed.process);
-    const login = await fetch(`${doomed.url}/api/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress() }, body: JSON.stringify({ email: DEMO.engineer, password: DEMO_PASSWORD }) });
+    const login = await fetch(`${doomed.url}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': testClientAddress() },
+      body: JSON.stringify({ email: DEMO.engineer, password: DEMO_PASSWORD }),
+    });
     const { accessToken } = await login.json();
     const auth = { Authorization: `Bearer ${accessToken}` };
-    const created = await fetch(`${doomed.url}/api/parts`, { method: 'POST', headers: { ...auth, 'Content-Type': 'application/json' }, body: JSON.stringify(draftBody()) });
+    const created = await fetch(`${doomed.url}/api/parts`, {
+      method: 'POST',
+      headers: { ...auth, 'Content-Type': 'application/json' },
+      body: JSON.stringify(draftBody()),
+    });
     expect(created.status).toBe(201);
     const part: { id: number } = await created.json();
 
@@ -87,8 +106,14 @@ describe('an upload killed between storing the object and committing its row', (
     documentForm.set('kind', 'datasheet');
     documentForm.set('file', new Blob([pdf], { type: 'application/pdf' }), 'big-datasheet.pdf');
     const inFlight = [
-      fetch(`${doomed.url}/api/parts/${part.id}/measurements`, { method: 'POST', headers: auth, body: curveForm }).then((r) => r.status, (e: Error) => e.name),
-      fetch(`${doomed.url}/api/parts/${part.id}/documents`, { method: 'POST', headers: auth, body: documentForm }).then((r) => r.status, (e: Error) => e.name),
+      fetch(`${doomed.url}/api/parts/${part.id}/measurements`, { method: 'POST', headers: auth, body: curveForm }).then(
+        (r) => r.status,
+        (e: Error) => e.name,
+      ),
+      fetch(`${doomed.url}/api/parts/${part.id}/documents`, { method: 'POST', headers: auth, body: documentForm }).then(
+        (r) => r.status,
+        (e: Error) => e.name,
+      ),
     ];
 
     // Inside the window: both objects are in the bucket, both notes committed, no rows yet.
@@ -110,8 +135,23 @@ describe('an upload killed between storing the object and committing its row', (
     // The restarted instance still takes uploads normally, and the ledger keeps nothing for a committed one.
     const again = new FormData();
     again.set('kind', 's11');
-    again.set('file', new Blob([s1pWithGamma([[800, 0.2], [900, 0.3]])], { type: 'text/plain' }), 'small.s1p');
-    expect((await fetch(`${restarted.url}/api/parts/${part.id}/measurements`, { method: 'POST', headers: { Authorization: `Bearer ${accessToken}` }, body: again })).status).toBe(201);
+    again.set(
+      'file',
+      new Blob(
+        [
+          s1pWithGamma([
+            [800, 0.2],
+            [900, 0.3],
+          ]),
+        ],
+        { type: 'text/plain' },
+      ),
+      'small.s1p',
+    );
+    expect(
+      (await fetch(`${restarted.url}/api/parts/${part.id}/measurements`, { method: 'POST', headers: { Authorization: `Bearer ${accessToken}` }, body: again }))
+        .status,
+    ).toBe(201);
     expect(await measurementRows(part.id)).toBe(1);
     expect(await objectKeysOf(part.id)).toHaveLength(1);
     expect(await pendingNotes(part.id)).toBe(0);

@@ -25,7 +25,12 @@ describe('upload size and type limits on every multipart route', () => {
   beforeAll(async () => {
     app = await createApiApp();
     tokens = await demoTokens(app);
-    s3 = new S3Client({ endpoint: config.s3.endpoint, region: config.s3.region, forcePathStyle: true, credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey } });
+    s3 = new S3Client({
+      endpoint: config.s3.endpoint,
+      region: config.s3.region,
+      forcePathStyle: true,
+      credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey },
+    });
   });
   afterAll(async () => {
     s3.destroy();
@@ -44,7 +49,10 @@ describe('upload size and type limits on every multipart route', () => {
 
     it('answers 415 MEASUREMENT_TYPE_NOT_ALLOWED for binary content whatever the name says, for Touchstone and CSV kinds', async () => {
       const draft = await createDraft(app, tokens.engineer);
-      for (const [kind, name] of [['s11', 'disguised.s1p'], ['efficiency', 'disguised.csv']]) {
+      for (const [kind, name] of [
+        ['s11', 'disguised.s1p'],
+        ['efficiency', 'disguised.csv'],
+      ]) {
         const res = await http().post(`/api/parts/${draft.id}/measurements`).set(auth()).field('kind', kind).attach('file', PNG, name).expect(415);
         expect(res.body).toMatchObject({ code: 'MEASUREMENT_TYPE_NOT_ALLOWED', field: 'file' });
       }
@@ -90,7 +98,21 @@ describe('upload size and type limits on every multipart route', () => {
 
   it('a measurement within the limit still uploads (the limit is not a blanket refusal)', async () => {
     const draft = await createDraft(app, tokens.engineer);
-    await http().post(`/api/parts/${draft.id}/measurements`).set(auth()).field('kind', 's11').attach('file', Buffer.from(s1pWithGamma([[800, 0.2], [900, 0.3]])), 'ok.s1p').expect(201);
+    await http()
+      .post(`/api/parts/${draft.id}/measurements`)
+      .set(auth())
+      .field('kind', 's11')
+      .attach(
+        'file',
+        Buffer.from(
+          s1pWithGamma([
+            [800, 0.2],
+            [900, 0.3],
+          ]),
+        ),
+        'ok.s1p',
+      )
+      .expect(201);
     expect(await storedOf(draft.id)).toEqual({ rows: 1, objects: 1 });
   });
 });

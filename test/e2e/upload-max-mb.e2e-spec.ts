@@ -28,13 +28,23 @@ describe('UPLOAD_MAX_MB (API)', () => {
 
   it('measurements: 413 MEASUREMENT_FILE_TOO_LARGE at the configured limit', async () => {
     const draft = await createDraft(app, tokens.engineer);
-    const res = await http().post(`/api/parts/${draft.id}/measurements`).set(auth()).field('kind', 's11').attach('file', overLimit('# MHz S RI R 50\n'), 'big.s1p').expect(413);
+    const res = await http()
+      .post(`/api/parts/${draft.id}/measurements`)
+      .set(auth())
+      .field('kind', 's11')
+      .attach('file', overLimit('# MHz S RI R 50\n'), 'big.s1p')
+      .expect(413);
     expect(res.body).toMatchObject({ code: 'MEASUREMENT_FILE_TOO_LARGE', field: 'file', limitBytes });
   });
 
   it('documents: 413 DOCUMENT_TOO_LARGE at the configured limit', async () => {
     const draft = await createDraft(app, tokens.engineer);
-    const res = await http().post(`/api/parts/${draft.id}/documents`).set(auth()).field('kind', 'datasheet').attach('file', overLimit('%PDF-1.4\n'), 'big.pdf').expect(413);
+    const res = await http()
+      .post(`/api/parts/${draft.id}/documents`)
+      .set(auth())
+      .field('kind', 'datasheet')
+      .attach('file', overLimit('%PDF-1.4\n'), 'big.pdf')
+      .expect(413);
     expect(res.body).toMatchObject({ code: 'DOCUMENT_TOO_LARGE', field: 'file', limitBytes });
   });
 
@@ -49,7 +59,11 @@ describe('UPLOAD_MAX_MB (API)', () => {
   });
 
   it('a file under the limit still goes through', async () => {
-    const res = await http().post('/api/rf/touchstone/analyze').set(auth()).attach('file', Buffer.from('# MHz S RI R 50\n800 0.2 0\n900 0.3 0\n'), 'ok.s1p').expect(200);
+    const res = await http()
+      .post('/api/rf/touchstone/analyze')
+      .set(auth())
+      .attach('file', Buffer.from('# MHz S RI R 50\n800 0.2 0\n900 0.3 0\n'), 'ok.s1p')
+      .expect(200);
     expect(res.body.points).toBe(2);
   });
 });

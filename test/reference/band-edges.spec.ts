@@ -5,8 +5,21 @@ import { resolve } from 'node:path';
  * The seeded band library (catalog-seed/bands.json) against values typed from the published tables,
  * as the 3GPP, IEEE, Bluetooth, LoRa Alliance and GNSS documents publish them.
  */
-interface SeedRange { role: string; fromMhz: number; toMhz: number }
-interface SeedBand { id: number; technology: string; designation: string; duplex: string; ranges: SeedRange[]; centreMhz?: number; bandwidthMhz?: number; source: { document: string; table: string; note?: string } }
+interface SeedRange {
+  role: string;
+  fromMhz: number;
+  toMhz: number;
+}
+interface SeedBand {
+  id: number;
+  technology: string;
+  designation: string;
+  duplex: string;
+  ranges: SeedRange[];
+  centreMhz?: number;
+  bandwidthMhz?: number;
+  source: { document: string; table: string; note?: string };
+}
 
 const bands: SeedBand[] = JSON.parse(readFileSync(resolve(__dirname, '../../catalog-seed/bands.json'), 'utf8'));
 const band = (designation: string): SeedBand => {
@@ -26,7 +39,20 @@ describe('catalog-seed/bands.json', () => {
   it('holds every band and signal the issue lists, once each', () => {
     const lte = [1, 2, 3, 4, 5, 7, 8, 12, 13, 14, 17, 18, 19, 20, 25, 26, 28, 66, 71, 85].map((n) => `B${n}`);
     const nr = [1, 3, 5, 7, 8, 28, 41, 66, 71, 77, 78, 79].map((n) => `n${n}`);
-    const gnss = ['GPS L1', 'GPS L2C', 'GPS L5', 'Galileo E1', 'Galileo E5a', 'Galileo E5b', 'Galileo E6', 'GLONASS G1', 'GLONASS G2', 'BeiDou B1I', 'BeiDou B1C', 'BeiDou B2a'];
+    const gnss = [
+      'GPS L1',
+      'GPS L2C',
+      'GPS L5',
+      'Galileo E1',
+      'Galileo E5a',
+      'Galileo E5b',
+      'Galileo E6',
+      'GLONASS G1',
+      'GLONASS G2',
+      'BeiDou B1I',
+      'BeiDou B1C',
+      'BeiDou B2a',
+    ];
     const lora = ['EU863-870', 'US902-928', 'AU915-928', 'AS923', 'IN865-867', 'KR920-923'];
     for (const d of [...lte, ...nr, ...gnss, ...lora, 'Wi-Fi 2.4 GHz', 'Wi-Fi 6 GHz', 'BLE 2.4 GHz', 'UWB ch5', 'UWB ch9']) expect(band(d)).toBeDefined();
     const designations = bands.map((b) => b.designation);

@@ -64,7 +64,8 @@ function shapes(): Shape[] {
   const list: Shape[] = [];
   const f1 = sweep(700e6, 1000e6, 601);
   const f2 = sweep(2.3e9, 2.6e9, 301);
-  const gammaOf = (f: Float64Array, f0: number, r: number, q: number, z0: number) => columns(f.length, (i) => gammaFromImpedance(resonatorOhms(f[i], f0, r, q), z0));
+  const gammaOf = (f: Float64Array, f0: number, r: number, q: number, z0: number) =>
+    columns(f.length, (i) => gammaFromImpedance(resonatorOhms(f[i], f0, r, q), z0));
   const transfer = (f: Float64Array, scale: number) => columns(f.length, (i) => complex(scale * Math.cos(i / 40), -scale * Math.sin(i / 40)));
   for (const format of ['RI', 'MA', 'DB'] as const) {
     for (const frequencyUnit of ['Hz', 'kHz', 'MHz', 'GHz'] as const) {
@@ -76,45 +77,97 @@ function shapes(): Shape[] {
       }
     }
   }
-  list.push({ name: 'v1 1-port S RI 75 ohm', input: { version: 1, ports: 1, format: 'RI', frequencyUnit: 'MHz', referenceOhms: [75], frequenciesHz: f1, data: [gammaOf(f1, 900e6, 60, 5, 75)] } });
+  list.push({
+    name: 'v1 1-port S RI 75 ohm',
+    input: { version: 1, ports: 1, format: 'RI', frequencyUnit: 'MHz', referenceOhms: [75], frequenciesHz: f1, data: [gammaOf(f1, 900e6, 60, 5, 75)] },
+  });
   for (const format of ['RI', 'MA', 'DB'] as const) {
     const data = [gammaOf(f2, 2.45e9, 40, 6, 50), transfer(f2, 0.9), transfer(f2, 0.05), gammaOf(f2, 2.5e9, 70, 4, 50)];
     list.push({ name: `v1 2-port S ${format}`, input: { version: 1, ports: 2, format, frequencyUnit: 'GHz', frequenciesHz: f2, data } });
     for (const twoPortDataOrder of ['12_21', '21_12'] as const) {
-      list.push({ name: `v2 2-port S ${format} ${twoPortDataOrder}`, input: { version: 2, ports: 2, format, frequencyUnit: 'MHz', twoPortDataOrder, frequenciesHz: f2, data } });
+      list.push({
+        name: `v2 2-port S ${format} ${twoPortDataOrder}`,
+        input: { version: 2, ports: 2, format, frequencyUnit: 'MHz', twoPortDataOrder, frequenciesHz: f2, data },
+      });
     }
   }
   const data75 = [gammaOf(f2, 2.45e9, 40, 6, 50), transfer(f2, 0.9), transfer(f2, 0.05), gammaOf(f2, 2.44e9, 90, 6, 75)];
-  list.push({ name: 'v2 2-port S references 50/75', input: { version: 2, ports: 2, format: 'MA', frequencyUnit: 'GHz', referenceOhms: [50, 75], frequenciesHz: f2, data: data75 } });
+  list.push({
+    name: 'v2 2-port S references 50/75',
+    input: { version: 2, ports: 2, format: 'MA', frequencyUnit: 'GHz', referenceOhms: [50, 75], frequenciesHz: f2, data: data75 },
+  });
   list.push({
     name: 'v1 2-port S with noise block',
-    input: { version: 1, ports: 2, format: 'DB', frequencyUnit: 'GHz', frequenciesHz: f2, data: data75, noise: [[2.3e9, 1.2, 0.4, 30, 0.3], [2.5e9, 1.3, 0.4, 35, 0.3]] },
+    input: {
+      version: 1,
+      ports: 2,
+      format: 'DB',
+      frequencyUnit: 'GHz',
+      frequenciesHz: f2,
+      data: data75,
+      noise: [
+        [2.3e9, 1.2, 0.4, 30, 0.3],
+        [2.5e9, 1.3, 0.4, 35, 0.3],
+      ],
+    },
   });
   // Z and Y: version 1 normalised to R, version 2 in ohms and siemens (Touchstone 2.0, Option Line).
-  const z = (f: Float64Array, scale: number) => columns(f.length, (i) => {
-    const v = resonatorOhms(f[i], 868e6, 45, 7);
-    return complex(v.re * scale, v.im * scale);
+  const z = (f: Float64Array, scale: number) =>
+    columns(f.length, (i) => {
+      const v = resonatorOhms(f[i], 868e6, 45, 7);
+      return complex(v.re * scale, v.im * scale);
+    });
+  const y = (f: Float64Array, scale: number) =>
+    columns(f.length, (i) => {
+      const v = inverse(resonatorOhms(f[i], 868e6, 45, 7));
+      return complex(v.re * scale, v.im * scale);
+    });
+  list.push({
+    name: 'v1 1-port Z RI',
+    input: { version: 1, ports: 1, parameter: 'Z', format: 'RI', frequencyUnit: 'MHz', referenceOhms: [50], frequenciesHz: f1, data: [z(f1, 1 / 50)] },
   });
-  const y = (f: Float64Array, scale: number) => columns(f.length, (i) => {
-    const v = inverse(resonatorOhms(f[i], 868e6, 45, 7));
-    return complex(v.re * scale, v.im * scale);
+  list.push({
+    name: 'v1 1-port Y MA 75',
+    input: { version: 1, ports: 1, parameter: 'Y', format: 'MA', frequencyUnit: 'GHz', referenceOhms: [75], frequenciesHz: f1, data: [y(f1, 75)] },
   });
-  list.push({ name: 'v1 1-port Z RI', input: { version: 1, ports: 1, parameter: 'Z', format: 'RI', frequencyUnit: 'MHz', referenceOhms: [50], frequenciesHz: f1, data: [z(f1, 1 / 50)] } });
-  list.push({ name: 'v1 1-port Y MA 75', input: { version: 1, ports: 1, parameter: 'Y', format: 'MA', frequencyUnit: 'GHz', referenceOhms: [75], frequenciesHz: f1, data: [y(f1, 75)] } });
-  list.push({ name: 'v2 1-port Z RI ohms', input: { version: 2, ports: 1, parameter: 'Z', format: 'RI', frequencyUnit: 'MHz', referenceOhms: [50], frequenciesHz: f1, data: [z(f1, 1)] } });
-  list.push({ name: 'v2 1-port Y DB siemens', input: { version: 2, ports: 1, parameter: 'Y', format: 'DB', frequencyUnit: 'kHz', referenceOhms: [50], frequenciesHz: f1, data: [y(f1, 1)] } });
+  list.push({
+    name: 'v2 1-port Z RI ohms',
+    input: { version: 2, ports: 1, parameter: 'Z', format: 'RI', frequencyUnit: 'MHz', referenceOhms: [50], frequenciesHz: f1, data: [z(f1, 1)] },
+  });
+  list.push({
+    name: 'v2 1-port Y DB siemens',
+    input: { version: 2, ports: 1, parameter: 'Y', format: 'DB', frequencyUnit: 'kHz', referenceOhms: [50], frequenciesHz: f1, data: [y(f1, 1)] },
+  });
   // A 2-port T-network: Z = [[za + zc, zc], [zc, zb + zc]] with an invented resonant za.
   const tNetwork = (f: Float64Array, scale: number) => {
     const za = (i: number) => resonatorOhms(f[i], 868e6, 30, 6);
     const zb = complex(20, -15);
     const zc = complex(150, 40);
-    return [columns(f.length, (i) => add(za(i), zc)), columns(f.length, () => zc), columns(f.length, () => zc), columns(f.length, () => add(zb, zc))].map((c) => ({
-      re: Float64Array.from(c.re, (v) => v * scale),
-      im: Float64Array.from(c.im, (v) => v * scale),
-    }));
+    return [columns(f.length, (i) => add(za(i), zc)), columns(f.length, () => zc), columns(f.length, () => zc), columns(f.length, () => add(zb, zc))].map(
+      (c) => ({
+        re: Float64Array.from(c.re, (v) => v * scale),
+        im: Float64Array.from(c.im, (v) => v * scale),
+      }),
+    );
   };
-  list.push({ name: 'v1 2-port Z RI', input: { version: 1, ports: 2, parameter: 'Z', format: 'RI', frequencyUnit: 'MHz', frequenciesHz: f1, data: tNetwork(f1, 1 / 50) } });
-  list.push({ name: 'v2 2-port Z MA 12_21 references 50/75', input: { version: 2, ports: 2, parameter: 'Z', format: 'MA', frequencyUnit: 'MHz', twoPortDataOrder: '12_21', referenceOhms: [50, 75], frequenciesHz: f1, data: tNetwork(f1, 1) } });
+  list.push({
+    name: 'v1 2-port Z RI',
+    input: { version: 1, ports: 2, parameter: 'Z', format: 'RI', frequencyUnit: 'MHz', frequenciesHz: f1, data: tNetwork(f1, 1 / 50) },
+  });
+  list.push({
+    name: 'v2 2-port Z MA 12_21 references 50/75',
+    input: {
+      version: 2,
+      ports: 2,
+      parameter: 'Z',
+      format: 'MA',
+      frequencyUnit: 'MHz',
+      twoPortDataOrder: '12_21',
+      referenceOhms: [50, 75],
+      frequenciesHz: f1,
+      data: tNetwork(f1, 1),
+    },
+  });
   return list;
 }
 
@@ -142,6 +195,7 @@ describe('scikit-rf cross-check (Debian python3-scikit-rf)', () => {
       throw new Error(
         `${DEBIAN_PYTHON} cannot import skrf, so the scikit-rf cross-check cannot run. Install Debian's python3-scikit-rf ` +
           `(apt-get install python3-scikit-rf; npm test does this). ${(error as Error).message}`,
+        { cause: error },
       );
     }
     const manifest = join(workDir, 'manifest.json');

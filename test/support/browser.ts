@@ -7,8 +7,16 @@ import { testClientAddress } from './client-address';
 export const APP_URL = process.env.APP_URL ?? 'http://127.0.0.1:3100';
 
 // Flags that keep Debian's Chromium quiet on a machine with no outside network.
-const CHROMIUM_FLAGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-  '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage'];
+const CHROMIUM_FLAGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--disable-dev-shm-usage',
+];
 
 export interface BrowserSession {
   context: BrowserContext;

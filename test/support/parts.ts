@@ -28,7 +28,11 @@ export async function createDraft(app: INestApplication, token: string, override
 /** A 1-port Touchstone file (RI) with |Γ| given per frequency; Γ is real so |Γ| is exact. */
 export function s1pWithGamma(points: [mhz: number, gammaMagnitude: number][]): string {
   return writeTouchstone({
-    version: 1, ports: 1, frequencyUnit: 'MHz', format: 'RI', comments: ['test data, invented'],
+    version: 1,
+    ports: 1,
+    frequencyUnit: 'MHz',
+    format: 'RI',
+    comments: ['test data, invented'],
     frequenciesHz: points.map(([mhz]) => mhz * 1e6),
     data: [{ re: points.map(([, g]) => g), im: points.map(() => 0) }],
   });

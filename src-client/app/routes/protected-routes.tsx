@@ -47,49 +47,91 @@ export const protectedRoutes: RouteObject[] = [
     path: paths.rules,
     lazy: async () => {
       const { RulesPage } = await import('../../features/rules/components/RulesPage');
-      return { element: <RequireAuth roles={['admin', 'engineer']}><RulesPage /></RequireAuth> };
+      return {
+        element: (
+          <RequireAuth roles={['admin', 'engineer']}>
+            <RulesPage />
+          </RequireAuth>
+        ),
+      };
     },
   },
   {
     path: paths.users,
     lazy: async () => {
       const { UsersPage } = await import('../../features/users/components/UsersPage');
-      return { element: <RequireAuth roles={['admin']}><UsersPage /></RequireAuth> };
+      return {
+        element: (
+          <RequireAuth roles={['admin']}>
+            <UsersPage />
+          </RequireAuth>
+        ),
+      };
     },
   },
   {
     path: paths.audit,
     lazy: async () => {
       const { AuditLogPage } = await import('../../features/audit/components/AuditLogPage');
-      return { element: <RequireAuth roles={['admin']}><AuditLogPage /></RequireAuth> };
+      return {
+        element: (
+          <RequireAuth roles={['admin']}>
+            <AuditLogPage />
+          </RequireAuth>
+        ),
+      };
     },
   },
   {
     path: paths.tools,
     lazy: async () => {
       const { ToolsPage } = await import('../../features/tools/components/ToolsPage');
-      return { element: <RequireAuth><ToolsPage /></RequireAuth> };
+      return {
+        element: (
+          <RequireAuth>
+            <ToolsPage />
+          </RequireAuth>
+        ),
+      };
     },
   },
   {
     path: paths.catalogue,
     lazy: async () => {
       const { CataloguePage } = await import('../../features/catalogue/components/CataloguePage');
-      return { element: <RequireAuth><CataloguePage /></RequireAuth> };
+      return {
+        element: (
+          <RequireAuth>
+            <CataloguePage />
+          </RequireAuth>
+        ),
+      };
     },
   },
   {
     path: paths.reviewQueue,
     lazy: async () => {
       const { ReviewQueuePage } = await import('../../features/catalogue/components/ReviewQueuePage');
-      return { element: <RequireAuth roles={['admin']}><ReviewQueuePage /></RequireAuth> };
+      return {
+        element: (
+          <RequireAuth roles={['admin']}>
+            <ReviewQueuePage />
+          </RequireAuth>
+        ),
+      };
     },
   },
   {
     path: paths.part(':id'),
     lazy: async () => {
       const { PartPage } = await import('../../features/catalogue/components/PartPage');
-      return { element: <RequireAuth><PartPage /></RequireAuth> };
+      return {
+        element: (
+          <RequireAuth>
+            <PartPage />
+          </RequireAuth>
+        ),
+      };
     },
   },
 ];

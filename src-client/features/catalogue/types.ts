@@ -1,7 +1,15 @@
 import type { components } from '../../lib/api-types';
 
 type Schemas = components['schemas'];
-export const FORM_FACTORS = ['chip', 'pcb-trace', 'flex', 'stamped-metal', 'patch', 'external-whip', 'panel'] as const satisfies readonly Schemas['FormFactor'][];
+export const FORM_FACTORS = [
+  'chip',
+  'pcb-trace',
+  'flex',
+  'stamped-metal',
+  'patch',
+  'external-whip',
+  'panel',
+] as const satisfies readonly Schemas['FormFactor'][];
 export const CONNECTORS = ['solder-pad', 'SMA', 'RP-SMA', 'MMCX', 'MCX', 'N', 'micro-coax'] as const satisfies readonly Schemas['Connector'][];
 export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP'] as const satisfies readonly Schemas['PartPolarization'][];
 export const LIFECYCLES = ['active', 'nrnd', 'eol'] as const satisfies readonly Schemas['Lifecycle'][];

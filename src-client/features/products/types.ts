@@ -61,15 +61,35 @@ export interface HistoryEntry {
 }
 
 export const TECHNOLOGY_LABELS: Record<Technology, string> = {
-  lte: 'LTE (LTE-M, NB-IoT, Cat-1)', nr: '5G NR', gnss: 'GNSS (receive only)', wifi: 'Wi-Fi', ble: 'Bluetooth LE', ism: 'Sub-GHz ISM / LoRa', uwb: 'UWB', other: 'Other',
+  lte: 'LTE (LTE-M, NB-IoT, Cat-1)',
+  nr: '5G NR',
+  gnss: 'GNSS (receive only)',
+  wifi: 'Wi-Fi',
+  ble: 'Bluetooth LE',
+  ism: 'Sub-GHz ISM / LoRa',
+  uwb: 'UWB',
+  other: 'Other',
 };
 /** Short words for lists where the full label would crowd the cell. */
 export const TECHNOLOGY_SHORT_LABELS: Record<Technology, string> = {
-  lte: 'LTE', nr: '5G NR', gnss: 'GNSS', wifi: 'Wi-Fi', ble: 'Bluetooth LE', ism: 'Sub-GHz ISM', uwb: 'UWB', other: 'Other',
+  lte: 'LTE',
+  nr: '5G NR',
+  gnss: 'GNSS',
+  wifi: 'Wi-Fi',
+  ble: 'Bluetooth LE',
+  ism: 'Sub-GHz ISM',
+  uwb: 'UWB',
+  other: 'Other',
 };
 export const RECEIVE_ONLY: Technology[] = ['gnss'];
 export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
 export const POLARIZATIONS: Polarization[] = ['linear', 'RHCP', 'LHCP', 'any'];
 export const CONNECTOR_LABELS: Record<Connector, string> = {
-  'solder-pad': 'Solder pad', SMA: 'SMA', 'RP-SMA': 'RP-SMA', MMCX: 'MMCX', MCX: 'MCX', N: 'N', 'micro-coax': 'Micro-coax',
+  'solder-pad': 'Solder pad',
+  SMA: 'SMA',
+  'RP-SMA': 'RP-SMA',
+  MMCX: 'MMCX',
+  MCX: 'MCX',
+  N: 'N',
+  'micro-coax': 'Micro-coax',
 };

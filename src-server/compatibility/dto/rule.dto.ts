@@ -14,12 +14,19 @@ export class RuleSummaryDto {
   @ApiProperty() enabled: boolean;
   @ApiProperty() version: number;
   @ApiProperty() source: string;
-  @ApiProperty({ enum: ['file', 'file-edited', 'admin'], description: 'file: as in rules/; file-edited: a file rule an admin changed; admin: made by an admin' }) origin: RuleOrigin;
+  @ApiProperty({
+    enum: ['file', 'file-edited', 'admin'],
+    description: 'file: as in rules/; file-edited: a file rule an admin changed; admin: made by an admin',
+  })
+  origin: RuleOrigin;
   @ApiPropertyOptional({ type: String, nullable: true }) updatedAt: string | null;
 }
 
 export class RuleDetailDto extends RuleSummaryDto {
-  @ApiProperty({ description: 'The whole rule as JSON: parameters, appliesWhen, conditions (json-rules-engine) and event' }) definition: Record<string, unknown>;
+  @ApiProperty({ description: 'The whole rule as JSON: parameters, appliesWhen, conditions (json-rules-engine) and event' }) definition: Record<
+    string,
+    unknown
+  >;
 }
 
 export class RuleProblemDto {

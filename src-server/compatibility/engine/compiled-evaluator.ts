@@ -1,7 +1,18 @@
 import { FACT_CATALOG, isFactName } from './fact-catalog';
 import type { RuleDefinition } from './rule-definition';
 import {
-  type BoundRule, type EngineCondition, EVALUATION_FAILED, PREPARATION_FAILED, bindOrBreak, bindingKeyOrBroken, brokenFindingOf, completeFacts, findingOf, noDataFindingOf, ruleDefect, verdictOf,
+  type BoundRule,
+  type EngineCondition,
+  EVALUATION_FAILED,
+  PREPARATION_FAILED,
+  bindOrBreak,
+  bindingKeyOrBroken,
+  brokenFindingOf,
+  completeFacts,
+  findingOf,
+  noDataFindingOf,
+  ruleDefect,
+  verdictOf,
 } from './rule-binding';
 import { factsNamedBy } from './rule-definition';
 import { type Margin, marginOf } from './margin';
@@ -177,7 +188,10 @@ export class CompiledRuleSet {
     const key = this.rules.map((r, i) => bindingKeyOrBroken(r, i, this.defects[i], complete)).join('\n') + '\n' + rowKey(complete);
     let row = this.rows.get(key);
     if (!row) {
-      row = new CompiledRow(this.rules.map((rule, index) => bindOrBreak(rule, index, this.defects[index], complete)), complete);
+      row = new CompiledRow(
+        this.rules.map((rule, index) => bindOrBreak(rule, index, this.defects[index], complete)),
+        complete,
+      );
       this.rows.set(key, row);
     }
     return row;

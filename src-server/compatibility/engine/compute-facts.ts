@@ -1,5 +1,14 @@
 import {
-  type FrequencyRange, type SampledCurve, bandStatistics, combinedBandStatistics, coverageOfBand, efficiencyInBand, gainInBand, inMeasuredRange, interpolateAt, mergeRanges,
+  type FrequencyRange,
+  type SampledCurve,
+  bandStatistics,
+  combinedBandStatistics,
+  coverageOfBand,
+  efficiencyInBand,
+  gainInBand,
+  inMeasuredRange,
+  interpolateAt,
+  mergeRanges,
   segmentIndex,
 } from '../../rf/curves';
 import { type ReflectionCurve, matchedRanges } from '../../rf/reflection';
@@ -43,7 +52,10 @@ function gammaCurveOf(reflection: ReflectionCurve): SampledCurve {
 class MeasuredSampler implements RangeSampler {
   readonly source = 'measured' as const;
 
-  constructor(readonly curve: SampledCurve, private readonly range: FrequencyRange) {}
+  constructor(
+    readonly curve: SampledCurve,
+    private readonly range: FrequencyRange,
+  ) {}
 
   at(frequencyHz: number): number {
     return interpolateAt(this.curve, frequencyHz)!;
@@ -88,7 +100,13 @@ function usableSpecOf(specBands: readonly SpecBand[], figure: SpecFigure, value:
 }
 
 /** Spec bands hold one figure per range; where two overlap the worse one counts. Null unless they cover the whole range. */
-function specSampler(specBands: readonly SpecBand[], range: FrequencyRange, figure: SpecFigure, value: (band: SpecBand) => number | null, worse: Worse): RangeSampler | null {
+function specSampler(
+  specBands: readonly SpecBand[],
+  range: FrequencyRange,
+  figure: SpecFigure,
+  value: (band: SpecBand) => number | null,
+  worse: Worse,
+): RangeSampler | null {
   if (specBands.length === 0) return null;
   const { usable, merged } = usableSpecOf(specBands, figure, value);
   if (usable.length === 0) return null;
@@ -172,21 +190,32 @@ function acrossRanges(perRange: (RangeStats | null)[]): RangeStats | null {
   const totalWidth = stats.reduce((sum, s) => sum + s.widthHz, 0);
   const min = stats.reduce((best, s) => (s.min.value < best.value ? s.min : best), stats[0].min);
   const max = stats.reduce((best, s) => (s.max.value > best.value ? s.max : best), stats[0].max);
-  const average = totalWidth === 0 ? stats.reduce((sum, s) => sum + s.average, 0) / stats.length : stats.reduce((sum, s) => sum + s.average * s.widthHz, 0) / totalWidth;
+  const average =
+    totalWidth === 0 ? stats.reduce((sum, s) => sum + s.average, 0) / stats.length : stats.reduce((sum, s) => sum + s.average * s.widthHz, 0) / totalWidth;
   return { min, max, average, widthHz: totalWidth };
 }
 
 function linearStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
   const stats = bandStatistics(curve, range, 'linear');
   if (stats.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${stats.reason})`);
-  return { min: { value: stats.min, atHz: stats.minAtHz }, max: { value: stats.max, atHz: stats.maxAtHz }, average: stats.average, widthHz: range.toHz - range.fromHz };
+  return {
+    min: { value: stats.min, atHz: stats.minAtHz },
+    max: { value: stats.max, atHz: stats.maxAtHz },
+    average: stats.average,
+    widthHz: range.toHz - range.fromHz,
+  };
 }
 
 /** efficiencyInBand reports no frequency of its maximum; the minimum's stands there. */
 function efficiencyStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
   const eff = efficiencyInBand(curve, range);
   if (eff.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${eff.reason})`);
-  return { min: { value: eff.minPercent, atHz: eff.minAtHz }, max: { value: eff.maxPercent, atHz: eff.minAtHz }, average: eff.averagePercent, widthHz: range.toHz - range.fromHz };
+  return {
+    min: { value: eff.minPercent, atHz: eff.minAtHz },
+    max: { value: eff.maxPercent, atHz: eff.minAtHz },
+    average: eff.averagePercent,
+    widthHz: range.toHz - range.fromHz,
+  };
 }
 
 const totalEfficiencyPercent = (efficiencyPercent: number, gammaMagnitude: number) => totalEfficiency(efficiencyPercent / 100, gammaMagnitude) * 100;
@@ -195,13 +224,23 @@ const totalEfficiencyPercent = (efficiencyPercent: number, gammaMagnitude: numbe
 function measuredTotalEfficiencyStats(efficiency: SampledCurve, gamma: SampledCurve, range: FrequencyRange): RangeStats {
   const stats = combinedBandStatistics(efficiency, gamma, range, totalEfficiencyPercent);
   if (stats.status === 'no-data') throw new Error(`internal: measured curves miss a range they cover (${stats.reason})`);
-  return { min: { value: stats.min, atHz: stats.minAtHz }, max: { value: stats.max, atHz: stats.minAtHz }, average: stats.average, widthHz: range.toHz - range.fromHz };
+  return {
+    min: { value: stats.min, atHz: stats.minAtHz },
+    max: { value: stats.max, atHz: stats.minAtHz },
+    average: stats.average,
+    widthHz: range.toHz - range.fromHz,
+  };
 }
 
 function gainStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
   const gain = gainInBand(curve, range);
   if (gain.status === 'no-data') throw new Error(`internal: combined curve misses its own range (${gain.reason})`);
-  return { min: { value: gain.minDbi, atHz: gain.peakAtHz }, max: { value: gain.peakDbi, atHz: gain.peakAtHz }, average: gain.averageDbi, widthHz: range.toHz - range.fromHz };
+  return {
+    min: { value: gain.minDbi, atHz: gain.peakAtHz },
+    max: { value: gain.peakDbi, atHz: gain.peakAtHz },
+    average: gain.averageDbi,
+    widthHz: range.toHz - range.fromHz,
+  };
 }
 
 interface CoverageResult {
@@ -336,7 +375,11 @@ export function computeRowFacts(requirement: RadioBandRequirement): Record<strin
  * The facts of one (radio band × part) pair, from the part's curves where they cover a range and
  * from its spec bands otherwise. Anything unknown is null, so rules that need it report no data.
  */
-export function computeFacts(requirement: RadioBandRequirement, part: PartEvaluationData, rowFacts: Record<string, FactValue> = computeRowFacts(requirement)): Facts {
+export function computeFacts(
+  requirement: RadioBandRequirement,
+  part: PartEvaluationData,
+  rowFacts: Record<string, FactValue> = computeRowFacts(requirement),
+): Facts {
   if (requirement.ranges.length === 0) throw new RangeError(`band ${requirement.designation} has no frequency ranges`);
   const ranges = requirement.ranges;
   const sources = new Set<Source>();
@@ -364,21 +407,36 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
       const g = gammas[i];
       if (!e || !g) return null;
       if (e.curve && g.curve) return measuredTotalEfficiencyStats(e.curve, g.curve, r);
-      return efficiencyStats(combinedCurve(r, [e, g], ([ev, gv]) => totalEfficiencyPercent(ev, gv)), r);
+      return efficiencyStats(
+        combinedCurve(r, [e, g], ([ev, gv]) => totalEfficiencyPercent(ev, gv)),
+        r,
+      );
     }),
   );
   const gain = acrossRanges(ranges.map((r, i) => (gains[i] ? gainStats(single(r, gains[i]!), r) : null)));
   const realized = acrossRanges(
-    ranges.map((r, i) => (gains[i] && gammas[i] ? linearStats(combinedCurve(r, [gains[i]!, gammas[i]!], ([g, m]) => realizedGainDbi(g, m)), r) : null)),
+    ranges.map((r, i) =>
+      gains[i] && gammas[i]
+        ? linearStats(
+            combinedCurve(r, [gains[i]!, gammas[i]!], ([g, m]) => realizedGainDbi(g, m)),
+            r,
+          )
+        : null,
+    ),
   );
   const at2 = coverageAt(part, ranges, 2);
   const at3 = coverageAt(part, ranges, 3);
 
   const tx = transmitRanges(requirement);
-  const txGain = tx.length > 0 ? acrossRanges(tx.map((r) => {
-    const s = gainSampler(part, r);
-    return s ? gainStats(single(r, s), r) : null;
-  })) : null;
+  const txGain =
+    tx.length > 0
+      ? acrossRanges(
+          tx.map((r) => {
+            const s = gainSampler(part, r);
+            return s ? gainStats(single(r, s), r) : null;
+          }),
+        )
+      : null;
   const txPeakGainDbi = txGain ? txGain.max.value : null;
   const eirp = requirement.txPowerDbm !== null && txPeakGainDbi !== null ? eirpDbm(requirement.txPowerDbm, txPeakGainDbi, requirement.feedLossDb) : null;
   const regional = regionalLimitFacts(requirement, part, tx);
@@ -386,7 +444,8 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   const evalBoard = part.evaluationGroundPlane ? sortedSides(part.evaluationGroundPlane.lengthMm, part.evaluationGroundPlane.widthMm) : null;
   const productLength = rowFacts.productGroundPlaneLengthMm as number | null;
   const productWidth = rowFacts.productGroundPlaneWidthMm as number | null;
-  const polarizationLoss = requirement.requiredPolarization !== null && part.polarization !== null ? polarizationLossDb(part.polarization, requirement.requiredPolarization) : null;
+  const polarizationLoss =
+    requirement.requiredPolarization !== null && part.polarization !== null ? polarizationLossDb(part.polarization, requirement.requiredPolarization) : null;
   const missingKinds = (missingMask & 1) + ((missingMask >> 1) & 1) + ((missingMask >> 2) & 1);
   const knownKinds = 3 - missingKinds;
 
@@ -416,7 +475,9 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   facts.peakGainAtMhz = rounded(gain ? mhz(gain.max.atHz) : null);
   facts.realizedPeakGainDbi = rounded(realized ? realized.max.value : null);
   facts.txPeakGainDbi = rounded(txPeakGainDbi);
-  facts.gainOverCertifiedDb = rounded(txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null);
+  facts.gainOverCertifiedDb = rounded(
+    txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null,
+  );
   facts.eirpDbm = rounded(eirp);
   facts.erpDbm = rounded(eirp === null ? null : erpDbmFromEirpDbm(eirp));
   facts.regionalLimitDbm = rounded(regional.regionalLimitDbm ?? null);
@@ -428,7 +489,9 @@ export function computeFacts(requirement: RadioBandRequirement, part: PartEvalua
   facts.evalGroundPlaneKnown = evalBoard !== null;
   facts.evalGroundPlaneLengthMm = rounded(evalBoard ? evalBoard[0] : null);
   facts.evalGroundPlaneWidthMm = rounded(evalBoard ? evalBoard[1] : null);
-  facts.groundPlaneVsEvalPct = rounded(evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null);
+  facts.groundPlaneVsEvalPct = rounded(
+    evalBoard && productLength !== null && productWidth !== null ? Math.min(productLength / evalBoard[0], productWidth / evalBoard[1]) * 100 : null,
+  );
   facts.polarizationLossDb = rounded(polarizationLoss);
   // Every number above went through rounded(): a loop over all facts here cost a fifth of a catalogue ranking.
   return facts;
@@ -458,7 +521,14 @@ function roundFacts<T extends Partial<Record<FactName, FactValue>>>(facts: T): T
 
 /** The tightest regional limit over the transmit ranges; margin null when the gain there is unknown. */
 function regionalLimitFacts(requirement: RadioBandRequirement, part: PartEvaluationData, tx: readonly BandRange[]): Partial<Record<FactName, FactValue>> {
-  const empty = { regionalLimitDbm: null, regionalLimitKind: null, regionalLimitRegion: null, regionalLimitSource: null, regionalRadiatedDbm: null, regionalLimitMarginDb: null };
+  const empty = {
+    regionalLimitDbm: null,
+    regionalLimitKind: null,
+    regionalLimitRegion: null,
+    regionalLimitSource: null,
+    regionalRadiatedDbm: null,
+    regionalLimitMarginDb: null,
+  };
   if (requirement.txPowerDbm === null) return empty;
   let tightest: Partial<Record<FactName, FactValue>> | null = null;
   let tightestMargin = Infinity;

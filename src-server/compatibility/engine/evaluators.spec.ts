@@ -11,10 +11,34 @@ import { type ConditionNode, type RuleDefinition, SUPPORTED_OPERATORS, validateR
 import { TECHNOLOGIES, type FactValue, type Facts } from './types';
 
 const FILE_RULES = loadRuleFiles();
-const WORDS = ['lte', 'gnss', 'wifi', 'ism', 'approved', 'draft', 'retired', 'eol', 'nrnd', 'active', 'linear', 'rhcp', 'lhcp', 'spec', 'measured', 'mixed', 'none', ''];
+const WORDS = [
+  'lte',
+  'gnss',
+  'wifi',
+  'ism',
+  'approved',
+  'draft',
+  'retired',
+  'eol',
+  'nrnd',
+  'active',
+  'linear',
+  'rhcp',
+  'lhcp',
+  'spec',
+  'measured',
+  'mixed',
+  'none',
+  '',
+];
 const NUMBERS = [0, 1, 2, 3, 15, 30, 40, 50, 100, -3, 2.5, 99.9, 36, 13.979];
 
-const numberFact = fc.oneof(fc.constant(null), fc.constantFrom(...NUMBERS), fc.double({ min: -200, max: 200, noNaN: true }), fc.constantFrom(Infinity, -Infinity));
+const numberFact = fc.oneof(
+  fc.constant(null),
+  fc.constantFrom(...NUMBERS),
+  fc.double({ min: -200, max: 200, noNaN: true }),
+  fc.constantFrom(Infinity, -Infinity),
+);
 const factValue = (name: FactName): fc.Arbitrary<FactValue> => {
   const type = FACT_CATALOG[name].type;
   if (type === 'number') return numberFact;
@@ -28,8 +52,14 @@ const NUMBER_FACTS = FACT_NAMES.filter((n) => FACT_CATALOG[n].type === 'number')
 const scalar = fc.oneof(fc.constantFrom(...NUMBERS), fc.constantFrom(...WORDS), fc.boolean());
 const leaf: fc.Arbitrary<ConditionNode> = fc
   .record({
-    fact: fc.constantFrom(...FACT_NAMES), operator: fc.constantFrom(...SUPPORTED_OPERATORS), pick: fc.nat(4), other: fc.constantFrom(...FACT_NAMES), otherNumber: fc.constantFrom(...NUMBER_FACTS),
-    n: fc.constantFrom(...NUMBERS), s: scalar, list: fc.array(scalar, { maxLength: 4 }),
+    fact: fc.constantFrom(...FACT_NAMES),
+    operator: fc.constantFrom(...SUPPORTED_OPERATORS),
+    pick: fc.nat(4),
+    other: fc.constantFrom(...FACT_NAMES),
+    otherNumber: fc.constantFrom(...NUMBER_FACTS),
+    n: fc.constantFrom(...NUMBERS),
+    s: scalar,
+    list: fc.array(scalar, { maxLength: 4 }),
   })
   .map(({ fact, operator, pick, other, otherNumber, n, s, list }) => {
     if (operator === 'in' || operator === 'notIn') return { fact, operator, value: list };
@@ -40,20 +70,36 @@ const leaf: fc.Arbitrary<ConditionNode> = fc
     return { fact, operator, value: pick === 0 ? { fact: other } : pick === 1 ? null : s };
   });
 const countConditions = (node: ConditionNode): number =>
-  1 + ('all' in node ? node.all.reduce((n, c) => n + countConditions(c), 0) : 'any' in node ? node.any.reduce((n, c) => n + countConditions(c), 0) : 'not' in node ? countConditions(node.not) : 0);
+  1 +
+  ('all' in node
+    ? node.all.reduce((n, c) => n + countConditions(c), 0)
+    : 'any' in node
+      ? node.any.reduce((n, c) => n + countConditions(c), 0)
+      : 'not' in node
+        ? countConditions(node.not)
+        : 0);
 /** Trees within the rule limits (RULE_LIMITS): at most 6 levels, and both trees of a rule together at most 200 conditions. */
-const tree: fc.Arbitrary<ConditionNode> = fc.letrec<{ node: ConditionNode }>((self) => ({
-  node: fc.oneof(
-    { depthSize: 'small', withCrossShrink: true, maxDepth: 5 },
-    leaf,
-    fc.array(self('node'), { maxLength: 3 }).map((all) => ({ all })),
-    fc.array(self('node'), { maxLength: 3 }).map((any) => ({ any })),
-    self('node').map((not) => ({ not })),
-  ),
-})).node.filter((node) => countConditions(node) <= 99);
+const tree: fc.Arbitrary<ConditionNode> = fc
+  .letrec<{ node: ConditionNode }>((self) => ({
+    node: fc.oneof(
+      { depthSize: 'small', withCrossShrink: true, maxDepth: 5 },
+      leaf,
+      fc.array(self('node'), { maxLength: 3 }).map((all) => ({ all })),
+      fc.array(self('node'), { maxLength: 3 }).map((any) => ({ any })),
+      self('node').map((not) => ({ not })),
+    ),
+  }))
+  .node.filter((node) => countConditions(node) <= 99);
 
 const randomRule = fc
-  .record({ n: fc.nat(9999), severity: fc.constantFrom('fail', 'marginal', 'info' as const), conditions: tree, appliesWhen: fc.option(tree, { nil: undefined }), threshold: fc.constantFrom(...NUMBERS), enabled: fc.boolean() })
+  .record({
+    n: fc.nat(9999),
+    severity: fc.constantFrom('fail', 'marginal', 'info' as const),
+    conditions: tree,
+    appliesWhen: fc.option(tree, { nil: undefined }),
+    threshold: fc.constantFrom(...NUMBERS),
+    enabled: fc.boolean(),
+  })
   .map(({ n, severity, conditions, appliesWhen, threshold, enabled }): RuleDefinition => ({
     id: `random-${n}`,
     title: `random rule ${n}`,
@@ -130,16 +176,29 @@ describe(validateRuleDefinition.name, () => {
     const problems = validateRuleDefinition(
       withChange({
         parameters: { floorPctByTechnology: { lte: 15 } },
-        conditions: { any: [{ fact: 'worstVswr', operator: 'biggerThan', value: 2 }, { fact: 'worstVswr', operator: 'greaterThan', value: { param: 'maxVswr' } }] },
+        conditions: {
+          any: [
+            { fact: 'worstVswr', operator: 'biggerThan', value: 2 },
+            { fact: 'worstVswr', operator: 'greaterThan', value: { param: 'maxVswr' } },
+          ],
+        },
         event: { type: 'finding', params: { code: 'X_Y', message: 'VSWR {worstVswrr}' } },
       }),
     );
-    expect(problems.map((p) => p.path)).toEqual(['parameters.floorPctByTechnology', 'conditions.any[0].operator', 'conditions.any[1].value.param', 'event.params.message']);
+    expect(problems.map((p) => p.path)).toEqual([
+      'parameters.floorPctByTechnology',
+      'conditions.any[0].operator',
+      'conditions.any[1].value.param',
+      'event.params.message',
+    ]);
     expect(problems[3].message).toContain('{worstVswrr}');
   });
 
   it('refuses a shape json-rules-engine would refuse, and fields it does not know', () => {
-    expect(validateRuleDefinition(withChange({ conditions: { all: { fact: 'worstVswr' } } }))).toContainEqual({ path: 'conditions.all', message: '"all" takes a list of conditions' });
+    expect(validateRuleDefinition(withChange({ conditions: { all: { fact: 'worstVswr' } } }))).toContainEqual({
+      path: 'conditions.all',
+      message: '"all" takes a list of conditions',
+    });
     expect(validateRuleDefinition(withChange({ conditions: { fact: 'worstVswr', operator: 'equal', value: 1 } }))[0].path).toBe('conditions');
     expect(validateRuleDefinition(withChange({ colour: 'red' }))).toContainEqual({ path: 'colour', message: 'unexpected field "colour"' });
     expect(validateRuleDefinition(withChange({ severity: 'warning' }))[0].path).toBe('severity');
@@ -149,7 +208,11 @@ describe(validateRuleDefinition.name, () => {
   it('refuses a numeric comparison on a text fact and a table keyed by a pair fact', () => {
     const text = validateRuleDefinition(withChange({ conditions: { all: [{ fact: 'lifecycle', operator: 'lessThan', value: 3 }] } }));
     expect(text[0]).toEqual({ path: 'conditions.all[0].value', message: 'operator "lessThan" compares numbers, and this fact is string' });
-    const key = validateRuleDefinition(withChange({ conditions: { all: [{ fact: 'minTotalEfficiencyPct', operator: 'lessThan', value: { param: 'floorPctByTechnology', key: 'reviewState' } }] } }));
+    const key = validateRuleDefinition(
+      withChange({
+        conditions: { all: [{ fact: 'minTotalEfficiencyPct', operator: 'lessThan', value: { param: 'floorPctByTechnology', key: 'reviewState' } }] },
+      }),
+    );
     expect(key[0].path).toBe('conditions.all[0].value.key');
   });
 });

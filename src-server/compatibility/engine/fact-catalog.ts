@@ -72,7 +72,7 @@ export const FACT_CATALOG = {
   evalGroundPlaneKnown: pair('boolean', 'none', "whether the datasheet states the part's evaluation board size"),
   evalGroundPlaneLengthMm: pair('number', 'mm', "longer side of the part's evaluation board"),
   evalGroundPlaneWidthMm: pair('number', 'mm', "shorter side of the part's evaluation board"),
-  groundPlaneVsEvalPct: pair('number', 'percent', "product ground plane as a share of the evaluation board (worse side)"),
+  groundPlaneVsEvalPct: pair('number', 'percent', 'product ground plane as a share of the evaluation board (worse side)'),
   groundPlaneVsQuarterWavePct: row('number', 'percent', "product ground-plane length as a share of λ/4 at the band's lowest frequency"),
   polarizationLossDb: { ...pair('number', 'db', 'polarization loss between part and required polarization (Balanis §2.12)'), ideal: 0 },
 } as const satisfies Record<string, FactDescription>;

@@ -14,7 +14,13 @@ const base = FILE_RULES.find((r) => r.id === 'part-retired')!;
 
 /** A rule as it could sit in the database, written around the API (no validation), that throws when evaluated. */
 function faulty(id: string, value: unknown, operator = 'in'): RuleDefinition {
-  return { ...base, id, title: `faulty ${id}`, conditions: { all: [{ fact: 'reviewState', operator, value }] } as never, event: { type: 'finding', params: { code: 'FAULTY', message: 'faulty' } } };
+  return {
+    ...base,
+    id,
+    title: `faulty ${id}`,
+    conditions: { all: [{ fact: 'reviewState', operator, value }] } as never,
+    event: { type: 'finding', params: { code: 'FAULTY', message: 'faulty' } },
+  };
 }
 
 const withoutBroken = (verdict: CellVerdict) => verdict.findings.filter((f) => f.code !== RULE_BROKEN_CODE);
@@ -56,7 +62,13 @@ describe('a faulty rule during evaluation', () => {
       return original(a, b);
     });
     try {
-      const throwing: RuleDefinition = { ...base, id: 'throws-sometimes', title: 'throws sometimes', conditions: { all: [{ fact: 'minRadiationEfficiencyPct', operator: 'lessThan', value: 12345 }] }, event: { type: 'finding', params: { code: 'THROWS', message: 'x' } } };
+      const throwing: RuleDefinition = {
+        ...base,
+        id: 'throws-sometimes',
+        title: 'throws sometimes',
+        conditions: { all: [{ fact: 'minRadiationEfficiencyPct', operator: 'lessThan', value: 12345 }] },
+        event: { type: 'finding', params: { code: 'THROWS', message: 'x' } },
+      };
       expect(validateRuleDefinition(throwing)).toEqual([]);
       const set = new CompiledRuleSet([...FILE_RULES, throwing]);
       const matrix = evaluateMatrix([requirement], [good, poor], set);
@@ -95,7 +107,11 @@ describe('a faulty rule during evaluation', () => {
   it('contains rules nested past the limits and rules that are not rules at all', async () => {
     let deep: unknown = { fact: 'worstVswr', operator: 'greaterThan', value: 2 };
     for (let i = 0; i < 5000; i++) deep = { all: [deep] };
-    const rules = [...FILE_RULES, { ...base, id: 'too-deep', conditions: deep } as RuleDefinition, { id: 'garbage', enabled: true } as unknown as RuleDefinition];
+    const rules = [
+      ...FILE_RULES,
+      { ...base, id: 'too-deep', conditions: deep } as RuleDefinition,
+      { id: 'garbage', enabled: true } as unknown as RuleDefinition,
+    ];
     const facts = computeFacts(requirement, good);
     const fast = new CompiledRuleSet(rules).evaluate(facts);
     expect(fast).toEqual(await new ReferenceEvaluator(rules).evaluate(facts));
@@ -114,18 +130,49 @@ describe(`${validateRuleDefinition.name}: operator and value types`, () => {
     ['in with a parameter named toString', leaf('reviewState', 'in', { param: 'toString' }), 'conditions.all[0].value.param'],
     ['in with a fact reference', leaf('reviewState', 'in', { fact: 'lifecycle' }), 'conditions.all[0].value'],
     ['notIn with a text value', leaf('reviewState', 'notIn', 'approved'), 'conditions.all[0].value'],
-    ['in with a parameter holding a number', rule({ all: [{ fact: 'reviewState', operator: 'in', value: { param: 'limit' } }] }, { limit: 3 }), 'conditions.all[0].value.param'],
-    ['in with a table of text', rule({ all: [{ fact: 'reviewState', operator: 'in', value: { param: 'states', key: 'technology' } }] }, { states: { default: 'x' } }), 'conditions.all[0].value.param'],
+    [
+      'in with a parameter holding a number',
+      rule({ all: [{ fact: 'reviewState', operator: 'in', value: { param: 'limit' } }] }, { limit: 3 }),
+      'conditions.all[0].value.param',
+    ],
+    [
+      'in with a table of text',
+      rule({ all: [{ fact: 'reviewState', operator: 'in', value: { param: 'states', key: 'technology' } }] }, { states: { default: 'x' } }),
+      'conditions.all[0].value.param',
+    ],
     ['lessThan with a text value', leaf('worstVswr', 'lessThan', '2'), 'conditions.all[0].value'],
-    ['lessThan with a list parameter', rule({ all: [{ fact: 'worstVswr', operator: 'lessThan', value: { param: 'limits' } }] }, { limits: [1, 2] }), 'conditions.all[0].value.param'],
-    ['greaterThan with a table holding text', rule({ all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'byTech', key: 'technology' } }] }, { byTech: { default: 2, lte: 'three' } }), 'conditions.all[0].value.param'],
+    [
+      'lessThan with a list parameter',
+      rule({ all: [{ fact: 'worstVswr', operator: 'lessThan', value: { param: 'limits' } }] }, { limits: [1, 2] }),
+      'conditions.all[0].value.param',
+    ],
+    [
+      'greaterThan with a table holding text',
+      rule({ all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'byTech', key: 'technology' } }] }, { byTech: { default: 2, lte: 'three' } }),
+      'conditions.all[0].value.param',
+    ],
     ['greaterThan with a text fact reference', leaf('worstVswr', 'greaterThan', { fact: 'technology' }), 'conditions.all[0].value.fact'],
     ['equal with a list', leaf('reviewState', 'equal', ['approved']), 'conditions.all[0].value'],
     ['equal with a list parameter', leaf('reviewState', 'equal', { param: 'blockedStates' }), 'conditions.all[0].value.param'],
-    ['a parameter named constructor', rule({ all: [{ fact: 'reviewState', operator: 'in', value: { param: 'constructor' } }] }, { constructor: ['retired'] }), 'parameters.constructor'],
-    ['a table key named __proto__', rule({ all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'byTech', key: 'technology' } }] }, JSON.parse('{"byTech":{"default":2,"__proto__":3}}')), 'parameters.byTech.__proto__'],
+    [
+      'a parameter named constructor',
+      rule({ all: [{ fact: 'reviewState', operator: 'in', value: { param: 'constructor' } }] }, { constructor: ['retired'] }),
+      'parameters.constructor',
+    ],
+    [
+      'a table key named __proto__',
+      rule(
+        { all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'byTech', key: 'technology' } }] },
+        JSON.parse('{"byTech":{"default":2,"__proto__":3}}'),
+      ),
+      'parameters.byTech.__proto__',
+    ],
     ['a fact named constructor', leaf('constructor', 'equal', 1), 'conditions.all[0].fact'],
-    ['a table keyed by hasOwnProperty', rule({ all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'byTech', key: 'hasOwnProperty' } }] }, { byTech: { default: 2 } }), 'conditions.all[0].value.key'],
+    [
+      'a table keyed by hasOwnProperty',
+      rule({ all: [{ fact: 'worstVswr', operator: 'greaterThan', value: { param: 'byTech', key: 'hasOwnProperty' } }] }, { byTech: { default: 2 } }),
+      'conditions.all[0].value.key',
+    ],
   ])('refuses %s, naming the place', (_, input, path) => {
     expect(pathsOf(input)).toContain(path);
   });

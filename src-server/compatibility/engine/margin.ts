@@ -57,7 +57,10 @@ export function marginOf(node: EngineCondition, facts: Facts): Margin {
     return { ...inner, distanceDb: -inner.distanceDb };
   }
   const value = facts[node.fact];
-  const threshold = typeof node.value === 'object' && node.value !== null && !Array.isArray(node.value) && 'fact' in node.value ? facts[(node.value as { fact: string }).fact] : node.value;
+  const threshold =
+    typeof node.value === 'object' && node.value !== null && !Array.isArray(node.value) && 'fact' in node.value
+      ? facts[(node.value as { fact: string }).fact]
+      : node.value;
   const below = isBelow(node.operator);
   if ((below || isAbove(node.operator)) && typeof value === 'number' && typeof threshold === 'number' && Number.isFinite(threshold)) {
     const gap = onDbScale(node.fact, value) - onDbScale(node.fact, threshold);

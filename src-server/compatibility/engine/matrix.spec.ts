@@ -45,7 +45,12 @@ describe(`${rankCandidates.name} with a limit`, () => {
   const independentRanking = () =>
     catalogue
       .map((part, order) => ({ order, candidate: rankCandidates(requirements, [part], RULES)[0] }))
-      .sort((a, b) => statusRank(a.candidate.status) - statusRank(b.candidate.status) || (b.candidate.marginDb ?? -Infinity) - (a.candidate.marginDb ?? -Infinity) || a.order - b.order)
+      .sort(
+        (a, b) =>
+          statusRank(a.candidate.status) - statusRank(b.candidate.status) ||
+          (b.candidate.marginDb ?? -Infinity) - (a.candidate.marginDb ?? -Infinity) ||
+          a.order - b.order,
+      )
       .map((entry) => entry.candidate);
 
   it.each([3, 8, 39, 40])('top %i equals the top of an independent full ranking, also when failures must fill the list', (limit) => {
@@ -70,7 +75,12 @@ describe(evaluateMatrix.name, () => {
     const parts = [constructedPart({}, { partId: 1 }), constructedPart({ vswr: 3.5 }, { partId: 2 })];
     const requirements = [constructedRequirement(), constructedRequirement({ bandId: 13, designation: 'B13' })];
     const first = evaluateMatrix(requirements, parts, RULES, { cache, partKey: (p) => String(p.partId) });
-    expect(first.cells.map((c) => [c.row, c.column, c.status])).toEqual([[0, 0, 'pass'], [0, 1, 'fail'], [1, 0, 'pass'], [1, 1, 'fail']]);
+    expect(first.cells.map((c) => [c.row, c.column, c.status])).toEqual([
+      [0, 0, 'pass'],
+      [0, 1, 'fail'],
+      [1, 0, 'pass'],
+      [1, 1, 'fail'],
+    ]);
     expect(cache.size).toBe(4);
     const second = evaluateMatrix(requirements, parts, RULES, { cache, partKey: (p) => String(p.partId) });
     expect(second).toEqual(first);

@@ -87,7 +87,11 @@ interface PreparedRow {
 }
 
 function prepare(requirements: readonly RadioBandRequirement[], cache: FactsCache | undefined): PreparedRow[] {
-  return requirements.map((requirement) => ({ requirement, rowFacts: computeRowFacts(requirement), cached: cache ? cache.forRow(requirementKey(requirement)) : null }));
+  return requirements.map((requirement) => ({
+    requirement,
+    rowFacts: computeRowFacts(requirement),
+    cached: cache ? cache.forRow(requirementKey(requirement)) : null,
+  }));
 }
 
 function pairFacts(row: PreparedRow, part: PartEvaluationData, cache: FactsCache | undefined, partKey: (part: PartEvaluationData) => string | null): Facts {
@@ -116,7 +120,12 @@ export function matrixRow(requirement: RadioBandRequirement): MatrixRow {
 }
 
 /** Every radio band against every part, through the compiled rules. */
-export function evaluateMatrix(requirements: readonly RadioBandRequirement[], parts: readonly PartEvaluationData[], rules: CompiledRuleSet, options: EvaluationOptions = {}): Matrix {
+export function evaluateMatrix(
+  requirements: readonly RadioBandRequirement[],
+  parts: readonly PartEvaluationData[],
+  rules: CompiledRuleSet,
+  options: EvaluationOptions = {},
+): Matrix {
   const rows = prepare(requirements, options.cache);
   const cells: MatrixCell[] = [];
   rows.forEach((row, r) => {
@@ -194,7 +203,13 @@ export function rankCandidates(
       if (margin.value === (FACT_CATALOG[margin.fact] as { ideal?: number }).ideal) return;
       if (deciding === null || margin.distanceDb < deciding.marginDb) {
         deciding = {
-          ruleId: bound.rule.id, ruleTitle: bound.rule.title, designation, fact: margin.fact, value: margin.value, threshold: margin.threshold, marginDb: margin.distanceDb,
+          ruleId: bound.rule.id,
+          ruleTitle: bound.rule.title,
+          designation,
+          fact: margin.fact,
+          value: margin.value,
+          threshold: margin.threshold,
+          marginDb: margin.distanceDb,
           text: '',
         };
       }
@@ -212,7 +227,10 @@ export function rankCandidates(
   if (ranked.filter((r) => r.status !== 'fail').length < limit) {
     ranked = ranked.map((r) => (r.complete ? r : assess(r.part, r.order, false)));
   }
-  ranked.sort((a, b) => statusRank(a.status) - statusRank(b.status) || byMarginDescending(a.deciding?.marginDb ?? null, b.deciding?.marginDb ?? null) || a.order - b.order);
+  ranked.sort(
+    (a, b) =>
+      statusRank(a.status) - statusRank(b.status) || byMarginDescending(a.deciding?.marginDb ?? null, b.deciding?.marginDb ?? null) || a.order - b.order,
+  );
   // Second pass for the ones shown: their findings per band and the deciding figure in words.
   return ranked.slice(0, limit).map(({ part, status, deciding }) => ({
     partId: part.partId,
@@ -220,7 +238,9 @@ export function rankCandidates(
     title: part.title,
     status,
     marginDb: deciding ? deciding.marginDb : null,
-    deciding: deciding ? { ...deciding, text: describeDeciding(deciding.ruleTitle, deciding.designation, deciding.fact, deciding.value, deciding.threshold, deciding.marginDb) } : null,
+    deciding: deciding
+      ? { ...deciding, text: describeDeciding(deciding.ruleTitle, deciding.designation, deciding.fact, deciding.value, deciding.threshold, deciding.marginDb) }
+      : null,
     bands: rows.map((row, i) => {
       const verdict = compiledRows[i].evaluate(pairFacts(row, part, options.cache, partKey));
       return { bandId: row.requirement.bandId, designation: row.requirement.designation, status: verdict.status, findings: verdict.findings };

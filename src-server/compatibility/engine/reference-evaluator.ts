@@ -1,7 +1,18 @@
 import { Engine, type RuleProperties, type TopLevelCondition } from 'json-rules-engine';
 import type { RuleDefinition } from './rule-definition';
 import {
-  type BoundRule, type EngineCondition, EVALUATION_FAILED, PREPARATION_FAILED, bindOrBreak, bindingKeyOrBroken, brokenFindingOf, completeFacts, findingOf, noDataFindingOf, ruleDefect, verdictOf,
+  type BoundRule,
+  type EngineCondition,
+  EVALUATION_FAILED,
+  PREPARATION_FAILED,
+  bindOrBreak,
+  bindingKeyOrBroken,
+  brokenFindingOf,
+  completeFacts,
+  findingOf,
+  noDataFindingOf,
+  ruleDefect,
+  verdictOf,
 } from './rule-binding';
 import type { CellVerdict, Facts, Finding } from './types';
 

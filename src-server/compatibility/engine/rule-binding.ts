@@ -51,7 +51,13 @@ export function bindingKey(rule: RuleDefinition, rowFacts: Facts): string {
   };
   collect(rule.appliesWhen);
   collect(rule.conditions);
-  return `${rule.id}@${rule.version}` + [...keys].sort().map((k) => `|${k}=${String(rowFacts[k])}`).join('');
+  return (
+    `${rule.id}@${rule.version}` +
+    [...keys]
+      .sort()
+      .map((k) => `|${k}=${String(rowFacts[k])}`)
+      .join('')
+  );
 }
 
 function lookup(rule: RuleDefinition, param: string, key: string | undefined, facts: Facts): ParameterValue {
@@ -84,7 +90,16 @@ export function bindRule(rule: RuleDefinition, index: number, rowFacts: Facts): 
   const appliesWhen = rule.appliesWhen ? bindNode(rule, rule.appliesWhen, rowFacts, used) : null;
   const conditions = bindNode(rule, rule.conditions, rowFacts, used);
   const bound = { ...values, ...used };
-  return { rule, index, values: bound, appliesWhen, conditions, requiredFacts: factsNamedBy(rule.conditions), template: parseTemplate(rule.event.params.message, bound), noDataCode: `${rule.event.params.code}_NO_DATA` };
+  return {
+    rule,
+    index,
+    values: bound,
+    appliesWhen,
+    conditions,
+    requiredFacts: factsNamedBy(rule.conditions),
+    template: parseTemplate(rule.event.params.message, bound),
+    noDataCode: `${rule.event.params.code}_NO_DATA`,
+  };
 }
 
 /** Every catalogue fact present, unknown ones as null, so json-rules-engine never meets an undefined fact. */
@@ -101,7 +116,10 @@ export function formatValue(value: unknown): string {
     return String(Number(value.toFixed(Math.abs(value) >= 100 ? 1 : 2)));
   }
   if (Array.isArray(value)) return value.map(formatValue).join(', ');
-  if (typeof value === 'object') return Object.entries(value).map(([k, v]) => `${k} ${formatValue(v)}`).join(', ');
+  if (typeof value === 'object')
+    return Object.entries(value)
+      .map(([k, v]) => `${k} ${formatValue(v)}`)
+      .join(', ');
   return String(value);
 }
 
@@ -165,7 +183,12 @@ export function ruleDefect(rule: unknown): string | null {
 export function brokenFindingOf(rule: RuleDefinition, reason: string): Finding {
   const id = typeof rule?.id === 'string' ? rule.id : String(rule?.id);
   const title = typeof rule?.title === 'string' ? rule.title : id;
-  return { ruleId: id, severity: 'no-data', code: RULE_BROKEN_CODE, message: `rule "${title}" (${id}) is broken and was not checked: ${reason}; an admin must correct or disable it` };
+  return {
+    ruleId: id,
+    severity: 'no-data',
+    code: RULE_BROKEN_CODE,
+    message: `rule "${title}" (${id}) is broken and was not checked: ${reason}; an admin must correct or disable it`,
+  };
 }
 
 /** The rule bound to a row, or its broken finding when it is faulty or binding it throws. */

@@ -6,7 +6,8 @@ import { SEVERITIES, type Severity } from './types';
 export type ParameterValue = number | string | boolean | readonly (number | string | boolean)[] | Readonly<Record<string, number | string | boolean>>;
 
 /** A comparison value: a literal, another fact, or a parameter of the rule (optionally looked up by a row fact). */
-export type ConditionValue = number | string | boolean | null | readonly (number | string | boolean)[] | { readonly fact: string } | { readonly param: string; readonly key?: string };
+export type ConditionValue =
+  number | string | boolean | null | readonly (number | string | boolean)[] | { readonly fact: string } | { readonly param: string; readonly key?: string };
 
 export interface LeafCondition {
   readonly fact: string;
@@ -14,7 +15,8 @@ export interface LeafCondition {
   readonly value: ConditionValue;
 }
 
-export type ConditionNode = LeafCondition | { readonly all: readonly ConditionNode[] } | { readonly any: readonly ConditionNode[] } | { readonly not: ConditionNode };
+export type ConditionNode =
+  LeafCondition | { readonly all: readonly ConditionNode[] } | { readonly any: readonly ConditionNode[] } | { readonly not: ConditionNode };
 
 /** One rule as it is stored in rules/<id>.json or in the database. */
 export interface RuleDefinition {
@@ -41,7 +43,18 @@ export interface RuleProblem {
 }
 
 /** The operators of json-rules-engine 7 that the compiled path reproduces. */
-export const SUPPORTED_OPERATORS = ['equal', 'notEqual', 'in', 'notIn', 'contains', 'doesNotContain', 'lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive'] as const;
+export const SUPPORTED_OPERATORS = [
+  'equal',
+  'notEqual',
+  'in',
+  'notIn',
+  'contains',
+  'doesNotContain',
+  'lessThan',
+  'lessThanInclusive',
+  'greaterThan',
+  'greaterThanInclusive',
+] as const;
 const NUMERIC_OPERATORS = new Set(['lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive']);
 const LIST_OPERATORS = new Set(['in', 'notIn']);
 
@@ -56,7 +69,8 @@ const PLACEHOLDER = /\{([A-Za-z][A-Za-z0-9]*)(?:\|([a-z]+))?\}/g;
 export const MESSAGE_FILTERS = ['upper'] as const;
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
-const isScalar = (v: unknown): v is number | string | boolean => (typeof v === 'number' && Number.isFinite(v)) || typeof v === 'string' || typeof v === 'boolean';
+const isScalar = (v: unknown): v is number | string | boolean =>
+  (typeof v === 'number' && Number.isFinite(v)) || typeof v === 'string' || typeof v === 'boolean';
 const has = (object: object, key: string): boolean => Object.hasOwn(object, key);
 
 /** What a parameter holds, in words, for the operator checks. */
@@ -76,7 +90,7 @@ interface WalkState {
 
 function validateParameter(name: string, value: unknown, problems: RuleProblem[]): void {
   const path = `parameters.${name}`;
-  if (!/^[A-Za-z][A-Za-z0-9]*$/.test(name)) problems.push({ path, message: 'a parameter name is letters and digits, starting with a letter' });
+  if (!/^[A-Z][A-Z0-9]*$/i.test(name)) problems.push({ path, message: 'a parameter name is letters and digits, starting with a letter' });
   else if (INHERITED_NAMES.has(name)) problems.push({ path, message: `"${name}" is a reserved name; choose another parameter name` });
   if (isScalar(value)) return;
   if (Array.isArray(value)) {
@@ -96,10 +110,18 @@ function validateParameter(name: string, value: unknown, problems: RuleProblem[]
   problems.push({ path, message: 'must be a number, text, true/false, a list or a table' });
 }
 
-function validateValue(value: unknown, path: string, operator: string, factType: string | undefined, parameters: Record<string, unknown>, problems: RuleProblem[]): void {
+function validateValue(
+  value: unknown,
+  path: string,
+  operator: string,
+  factType: string | undefined,
+  parameters: Record<string, unknown>,
+  problems: RuleProblem[],
+): void {
   const numeric = NUMERIC_OPERATORS.has(operator);
   const list = LIST_OPERATORS.has(operator);
-  if (numeric && factType !== undefined && factType !== 'number') problems.push({ path, message: `operator "${operator}" compares numbers, and this fact is ${factType}` });
+  if (numeric && factType !== undefined && factType !== 'number')
+    problems.push({ path, message: `operator "${operator}" compares numbers, and this fact is ${factType}` });
   if (isRecord(value)) {
     if (has(value, 'fact')) {
       if (Object.keys(value).length !== 1) problems.push({ path, message: 'a fact reference holds only "fact"' });
@@ -110,7 +132,8 @@ function validateValue(value: unknown, path: string, operator: string, factType:
       // Every fact is one value, never a list, so "in" cannot take one; numeric comparisons need a numeric fact.
       if (list) problems.push({ path, message: `operator "${operator}" needs a list, and a fact is a single value` });
       const otherType = FACT_CATALOG[value.fact].type;
-      if (numeric && otherType !== 'number') problems.push({ path: `${path}.fact`, message: `operator "${operator}" compares numbers, and "${value.fact}" is ${otherType}` });
+      if (numeric && otherType !== 'number')
+        problems.push({ path: `${path}.fact`, message: `operator "${operator}" compares numbers, and "${value.fact}" is ${otherType}` });
       return;
     }
     if (has(value, 'param')) {
@@ -124,7 +147,8 @@ function validateValue(value: unknown, path: string, operator: string, factType:
       if (has(value, 'key')) {
         const key = String(value.key);
         if (typeof value.key !== 'string' || !isFactName(key)) problems.push({ path: `${path}.key`, message: `unknown fact "${key}"` });
-        else if (FACT_CATALOG[key].scope !== 'row' || FACT_CATALOG[key].type !== 'string') problems.push({ path: `${path}.key`, message: `"${key}" cannot key a table: only text facts of the radio band can` });
+        else if (FACT_CATALOG[key].scope !== 'row' || FACT_CATALOG[key].type !== 'string')
+          problems.push({ path: `${path}.key`, message: `"${key}" cannot key a table: only text facts of the radio band can` });
         if (!isRecord(param)) problems.push({ path: `${path}.param`, message: `parameter "${value.param}" is not a table, so it takes no key` });
       } else if (isRecord(param)) {
         problems.push({ path, message: `parameter "${value.param}" is a table: name the fact that picks the entry with "key"` });
@@ -132,9 +156,12 @@ function validateValue(value: unknown, path: string, operator: string, factType:
       }
       // What the comparison meets: the parameter itself, or any entry of its table.
       const kinds = isRecord(param) ? [...new Set(Object.values(param).map(parameterKind))] : [parameterKind(param)];
-      if (list && kinds.some((k) => k !== 'list')) problems.push({ path: `${path}.param`, message: `operator "${operator}" needs a list, and parameter "${value.param}" holds ${kinds.join(' and ')}` });
-      if (numeric && kinds.some((k) => k !== 'number')) problems.push({ path: `${path}.param`, message: `operator "${operator}" needs a number, and parameter "${value.param}" holds ${kinds.join(' and ')}` });
-      if (!list && !numeric && kinds.includes('list')) problems.push({ path: `${path}.param`, message: `operator "${operator}" compares single values, and parameter "${value.param}" is a list` });
+      if (list && kinds.some((k) => k !== 'list'))
+        problems.push({ path: `${path}.param`, message: `operator "${operator}" needs a list, and parameter "${value.param}" holds ${kinds.join(' and ')}` });
+      if (numeric && kinds.some((k) => k !== 'number'))
+        problems.push({ path: `${path}.param`, message: `operator "${operator}" needs a number, and parameter "${value.param}" holds ${kinds.join(' and ')}` });
+      if (!list && !numeric && kinds.includes('list'))
+        problems.push({ path: `${path}.param`, message: `operator "${operator}" compares single values, and parameter "${value.param}" is a list` });
       return;
     }
     problems.push({ path, message: 'must be a number, text, true/false, null, a list, {"fact": …} or {"param": …}' });
@@ -143,7 +170,8 @@ function validateValue(value: unknown, path: string, operator: string, factType:
   if (list && !Array.isArray(value)) problems.push({ path, message: `operator "${operator}" needs a list` });
   if (numeric && !(typeof value === 'number' && Number.isFinite(value))) problems.push({ path, message: `operator "${operator}" needs a number` });
   if (!list && Array.isArray(value)) problems.push({ path, message: `operator "${operator}" compares single values, not a list` });
-  if (!(value === null || isScalar(value) || (Array.isArray(value) && value.every(isScalar)))) problems.push({ path, message: 'must be a number, text, true/false, null or a list of those' });
+  if (!(value === null || isScalar(value) || (Array.isArray(value) && value.every(isScalar))))
+    problems.push({ path, message: 'must be a number, text, true/false, null or a list of those' });
 }
 
 function validateCondition(node: unknown, path: string, depth: number, parameters: Record<string, unknown>, state: WalkState, problems: RuleProblem[]): void {
@@ -198,7 +226,15 @@ function validateCondition(node: unknown, path: string, depth: number, parameter
     problems.push({ path: `${path}.operator`, message: `unknown operator "${String(operator)}"; use one of ${SUPPORTED_OPERATORS.join(', ')}` });
   }
   if (!has(node, 'value')) problems.push({ path: `${path}.value`, message: 'a condition needs a value' });
-  else validateValue(node.value, `${path}.value`, String(operator), typeof fact === 'string' && isFactName(fact) ? FACT_CATALOG[fact].type : undefined, parameters, problems);
+  else
+    validateValue(
+      node.value,
+      `${path}.value`,
+      String(operator),
+      typeof fact === 'string' && isFactName(fact) ? FACT_CATALOG[fact].type : undefined,
+      parameters,
+      problems,
+    );
 }
 
 /** Placeholders {name} or {name|upper} in a message must name a fact or a parameter. */
@@ -216,10 +252,14 @@ export function validateRuleDefinition(input: unknown): RuleProblem[] {
   const tooLarge = sizeProblem(input);
   if (tooLarge) return [tooLarge];
   for (const key of Object.keys(input)) if (!RULE_KEYS.has(key)) problems.push({ path: key, message: `unexpected field "${key}"` });
-  if (typeof input.id !== 'string' || !/^[a-z0-9][a-z0-9-]{1,62}[a-z0-9]$/.test(input.id)) problems.push({ path: 'id', message: 'lower-case letters, digits and dashes, 3 to 64 characters' });
-  if (typeof input.title !== 'string' || input.title.trim().length === 0 || input.title.length > 120) problems.push({ path: 'title', message: 'text of 1 to 120 characters' });
-  if (typeof input.description !== 'string' || input.description.length > 2000) problems.push({ path: 'description', message: 'text of at most 2000 characters' });
-  if (typeof input.source !== 'string' || input.source.trim().length === 0 || input.source.length > 500) problems.push({ path: 'source', message: 'name where the threshold comes from (a standard, a book, or "common practice"), at most 500 characters' });
+  if (typeof input.id !== 'string' || !/^[a-z0-9][a-z0-9-]{1,62}[a-z0-9]$/.test(input.id))
+    problems.push({ path: 'id', message: 'lower-case letters, digits and dashes, 3 to 64 characters' });
+  if (typeof input.title !== 'string' || input.title.trim().length === 0 || input.title.length > 120)
+    problems.push({ path: 'title', message: 'text of 1 to 120 characters' });
+  if (typeof input.description !== 'string' || input.description.length > 2000)
+    problems.push({ path: 'description', message: 'text of at most 2000 characters' });
+  if (typeof input.source !== 'string' || input.source.trim().length === 0 || input.source.length > 500)
+    problems.push({ path: 'source', message: 'name where the threshold comes from (a standard, a book, or "common practice"), at most 500 characters' });
   if (!(SEVERITIES as readonly unknown[]).includes(input.severity)) problems.push({ path: 'severity', message: `one of ${SEVERITIES.join(', ')}` });
   if (typeof input.enabled !== 'boolean') problems.push({ path: 'enabled', message: 'true or false' });
   if (!Number.isInteger(input.version) || (input.version as number) < 1) problems.push({ path: 'version', message: 'a whole number from 1' });
@@ -239,12 +279,16 @@ export function validateRuleDefinition(input: unknown): RuleProblem[] {
     problems.push({ path: 'event', message: 'must be {"type": "finding", "params": {"code": …, "message": …}}' });
   } else {
     const { code, message } = event.params;
-    if (typeof code !== 'string' || !/^[A-Z][A-Z0-9_]{2,63}$/.test(code)) problems.push({ path: 'event.params.code', message: 'upper-case letters, digits and underscores, 3 to 64 characters' });
-    if (typeof message !== 'string' || message.trim().length === 0 || message.length > 500) problems.push({ path: 'event.params.message', message: 'text of 1 to 500 characters' });
+    if (typeof code !== 'string' || !/^[A-Z][A-Z0-9_]{2,63}$/.test(code))
+      problems.push({ path: 'event.params.code', message: 'upper-case letters, digits and underscores, 3 to 64 characters' });
+    if (typeof message !== 'string' || message.trim().length === 0 || message.length > 500)
+      problems.push({ path: 'event.params.message', message: 'text of 1 to 500 characters' });
     else {
       for (const { name, filter } of messagePlaceholders(message)) {
-        if (!isFactName(name) && !(has(parameters, name) && !INHERITED_NAMES.has(name))) problems.push({ path: 'event.params.message', message: `unknown placeholder {${name}}: name a fact or a parameter` });
-        if (filter !== undefined && !(MESSAGE_FILTERS as readonly string[]).includes(filter)) problems.push({ path: 'event.params.message', message: `unknown filter "|${filter}" in {${name}|${filter}}` });
+        if (!isFactName(name) && !(has(parameters, name) && !INHERITED_NAMES.has(name)))
+          problems.push({ path: 'event.params.message', message: `unknown placeholder {${name}}: name a fact or a parameter` });
+        if (filter !== undefined && !(MESSAGE_FILTERS as readonly string[]).includes(filter))
+          problems.push({ path: 'event.params.message', message: `unknown filter "|${filter}" in {${name}|${filter}}` });
       }
     }
   }

@@ -30,9 +30,22 @@ const lte = (overrides: Partial<RadioBandRequirement> = {}) => constructedRequir
 describe('rule files', () => {
   it('loads all sixteen starting rules, each enabled at version 1 with a named source', () => {
     expect(FILE_RULES.map((r) => r.id)).toEqual([
-      'band-coverage', 'certified-gain-cap', 'datasheet-only', 'efficiency-floor', 'efficiency-target', 'eval-board-unknown', 'gnss-polarization',
-      'ground-plane-quarter-wave', 'ground-plane-vs-eval-board', 'part-end-of-life', 'part-not-approved', 'part-not-recommended',
-      'part-retired', 'polarization-opposite-sense', 'regional-power-limit', 'vswr-in-band',
+      'band-coverage',
+      'certified-gain-cap',
+      'datasheet-only',
+      'efficiency-floor',
+      'efficiency-target',
+      'eval-board-unknown',
+      'gnss-polarization',
+      'ground-plane-quarter-wave',
+      'ground-plane-vs-eval-board',
+      'part-end-of-life',
+      'part-not-approved',
+      'part-not-recommended',
+      'part-retired',
+      'polarization-opposite-sense',
+      'regional-power-limit',
+      'vswr-in-band',
     ]);
     for (const rule of FILE_RULES) {
       expect(rule.enabled).toBe(true);
@@ -75,7 +88,15 @@ describe('band-coverage', () => {
   });
 
   it('judges a datasheet-only part from its spec bands: a spec band elsewhere covers nothing of B12', async () => {
-    const spec = (fromMhz: number, toMhz: number, maxVswr: number) => ({ fromHz: fromMhz * MHZ, toHz: toMhz * MHZ, maxVswr, minReturnLossDb: null, efficiencyPercent: 50, peakGainDbi: 1, averageGainDbi: null });
+    const spec = (fromMhz: number, toMhz: number, maxVswr: number) => ({
+      fromHz: fromMhz * MHZ,
+      toHz: toMhz * MHZ,
+      maxVswr,
+      minReturnLossDb: null,
+      efficiencyPercent: 50,
+      peakGainDbi: 1,
+      averageGainDbi: null,
+    });
     const base = { reflection: null, radiationEfficiencyPercent: null, peakGainDbi: null };
     const covered = await check('band-coverage', lte(), constructedPart({}, { ...base, specBands: [spec(690, 760, 2.5)] }));
     expect(covered.finding).toBeUndefined();
@@ -167,7 +188,10 @@ describe('certified-gain-cap', () => {
   });
 
   it('looks at the transmit ranges only: a gain peak in the downlink does not count', async () => {
-    const part = constructedPart({}, { peakGainDbi: { frequenciesHz: Float64Array.from([600e6, 720e6, 725e6, 900e6]), values: Float64Array.from([1, 1, 5, 5]) } });
+    const part = constructedPart(
+      {},
+      { peakGainDbi: { frequenciesHz: Float64Array.from([600e6, 720e6, 725e6, 900e6]), values: Float64Array.from([1, 1, 5, 5]) } },
+    );
     const { facts, finding } = await check('certified-gain-cap', certified, part);
     expect(facts.txPeakGainDbi).toBe(1);
     expect(facts.peakGainDbi).toBe(5);
@@ -178,7 +202,8 @@ describe('certified-gain-cap', () => {
 describe('regional-power-limit', () => {
   // ETSI EN 300 220-2 / ERC/REC 70-03 Annex 1: 868.0–868.6 MHz, 25 mW e.r.p. = 13.979 dBm.
   const erp25mW = { region: 'EU', fromHz: 868.0 * MHZ, toHz: 868.6 * MHZ, kind: 'erp' as const, valueDbm: mwToDbm(25), source: 'ETSI EN 300 220-2' };
-  const lora = (txPowerDbm: number) => lte({ technology: 'ism', designation: 'EU868', ranges: [rangeMhz(863, 870, 'tdd')], txPowerDbm, regulatoryLimits: [erp25mW] });
+  const lora = (txPowerDbm: number) =>
+    lte({ technology: 'ism', designation: 'EU868', ranges: [rangeMhz(863, 870, 'tdd')], txPowerDbm, regulatoryLimits: [erp25mW] });
   const dipole = constructedPart({ gainDbi: 2.15 });
 
   it('passes ERP exactly 25 mW (at) and 13.9 dBm (inside); fails 14 dBm ERP (outside, 0.02 dB over)', async () => {
@@ -194,7 +219,8 @@ describe('regional-power-limit', () => {
 
   // 47 CFR 15.247(b)(3)+(b)(4): 30 dBm conducted, minus (G − 6) above 6 dBi, so 36 dBm EIRP point-to-multipoint.
   const fcc = { region: 'US', fromHz: 2400 * MHZ, toHz: 2483.5 * MHZ, kind: 'eirp' as const, valueDbm: 36, source: '47 CFR 15.247(b)(4)' };
-  const wifi = (feedLossDb = 0) => lte({ technology: 'wifi', designation: '2.4 GHz', ranges: [rangeMhz(2400, 2483.5, 'tdd')], txPowerDbm: 30, feedLossDb, regulatoryLimits: [fcc] });
+  const wifi = (feedLossDb = 0) =>
+    lte({ technology: 'wifi', designation: '2.4 GHz', ranges: [rangeMhz(2400, 2483.5, 'tdd')], txPowerDbm: 30, feedLossDb, regulatoryLimits: [fcc] });
 
   it('passes 30 dBm into 6 dBi (36 dBm EIRP, at), fails 6.1 dBi, and counts the feed loss', async () => {
     expect((await check('regional-power-limit', wifi(), constructedPart({ gainDbi: 6 }))).finding).toBeUndefined();
@@ -204,8 +230,18 @@ describe('regional-power-limit', () => {
   });
 
   // 47 CFR 15.247(b)(4) as a conducted rule: 30 dBm minus (G − 6) above 6 dBi; at 9 dBi 27 dBm.
-  const conducted = { region: 'US', fromHz: 2400 * MHZ, toHz: 2483.5 * MHZ, kind: 'conducted-gain-rule' as const, valueDbm: 30, gainThresholdDbi: 6, reductionDbPerDb: 1, source: '47 CFR 15.247(b)(4)' };
-  const wifiConducted = (txPowerDbm: number) => lte({ technology: 'wifi', designation: '2.4 GHz', ranges: [rangeMhz(2400, 2483.5, 'tdd')], txPowerDbm, regulatoryLimits: [conducted] });
+  const conducted = {
+    region: 'US',
+    fromHz: 2400 * MHZ,
+    toHz: 2483.5 * MHZ,
+    kind: 'conducted-gain-rule' as const,
+    valueDbm: 30,
+    gainThresholdDbi: 6,
+    reductionDbPerDb: 1,
+    source: '47 CFR 15.247(b)(4)',
+  };
+  const wifiConducted = (txPowerDbm: number) =>
+    lte({ technology: 'wifi', designation: '2.4 GHz', ranges: [rangeMhz(2400, 2483.5, 'tdd')], txPowerDbm, regulatoryLimits: [conducted] });
 
   it('applies the conducted gain rule: 27 dBm into 9 dBi passes (at), 26.9 passes, 27.1 fails', async () => {
     const at = await check('regional-power-limit', wifiConducted(27), constructedPart({ gainDbi: 9 }));
@@ -252,7 +288,7 @@ describe('ground-plane-vs-eval-board', () => {
 
 describe('ground-plane-quarter-wave', () => {
   // λ/4 at 699 MHz = 107.2 mm (c = 299 792 458 m/s); the ≥ λ/4 rule is common practice.
-  const quarterWaveMm = 299_792_458 / 699e6 / 4 * 1000;
+  const quarterWaveMm = (299_792_458 / 699e6 / 4) * 1000;
   const withLength = (lengthMm: number) => lte({ productGroundPlane: { lengthMm, widthMm: 50 } });
 
   it('computes λ/4 at the lowest frequency of B12 as 107.2 mm', async () => {
@@ -278,7 +314,13 @@ describe('ground-plane-quarter-wave', () => {
 
 describe('gnss-polarization and polarization-opposite-sense', () => {
   // Balanis, Antenna Theory 4th ed. §2.12: linear antenna for a circular signal loses 3.01 dB; opposite senses reject.
-  const gnss = lte({ technology: 'gnss', designation: 'GPS L1', ranges: [rangeMhz(1574.397, 1576.443, 'receive')], txPowerDbm: null, requiredPolarization: 'rhcp' });
+  const gnss = lte({
+    technology: 'gnss',
+    designation: 'GPS L1',
+    ranges: [rangeMhz(1574.397, 1576.443, 'receive')],
+    txPowerDbm: null,
+    requiredPolarization: 'rhcp',
+  });
   const withPolarization = (polarization: PartEvaluationData['polarization']) => constructedPart({}, { polarization });
 
   it('marks a linear part on an RHCP signal marginal with about 3 dB', async () => {
@@ -298,7 +340,10 @@ describe('gnss-polarization and polarization-opposite-sense', () => {
   it('passes an RHCP part, fails an LHCP part, and reports no data for an unknown polarization', async () => {
     expect((await check('gnss-polarization', gnss, withPolarization('rhcp'))).finding).toBeUndefined();
     expect((await check('polarization-opposite-sense', gnss, withPolarization('rhcp'))).finding).toBeUndefined();
-    expect((await check('polarization-opposite-sense', gnss, withPolarization('lhcp'))).finding).toMatchObject({ severity: 'fail', code: 'POLARIZATION_OPPOSITE' });
+    expect((await check('polarization-opposite-sense', gnss, withPolarization('lhcp'))).finding).toMatchObject({
+      severity: 'fail',
+      code: 'POLARIZATION_OPPOSITE',
+    });
     expect((await check('gnss-polarization', gnss, withPolarization(null))).finding?.severity).toBe('no-data');
   });
 
@@ -335,10 +380,15 @@ describe('review state and lifecycle rules', () => {
 
 describe('datasheet-only', () => {
   it('notes spec-band data as info, which leaves the cell a pass', async () => {
-    const specPart = constructedPart({}, {
-      reflection: null, radiationEfficiencyPercent: null, peakGainDbi: null,
-      specBands: [{ fromHz: 690 * MHZ, toHz: 760 * MHZ, maxVswr: 2, minReturnLossDb: null, efficiencyPercent: 50, peakGainDbi: 1, averageGainDbi: null }],
-    });
+    const specPart = constructedPart(
+      {},
+      {
+        reflection: null,
+        radiationEfficiencyPercent: null,
+        peakGainDbi: null,
+        specBands: [{ fromHz: 690 * MHZ, toHz: 760 * MHZ, maxVswr: 2, minReturnLossDb: null, efficiencyPercent: 50, peakGainDbi: 1, averageGainDbi: null }],
+      },
+    );
     const { facts, verdict, finding } = await check('datasheet-only', lte(), specPart);
     expect(facts.dataSource).toBe('spec');
     expect(finding?.severity).toBe('info');
@@ -365,7 +415,9 @@ describe('the whole starting set on one pair', () => {
     expect(noData.verdict.status).toBe('no-data');
     const fail = await both(lte(), constructedPart({ vswr: 3.5 }, { radiationEfficiencyPercent: null }));
     expect(fail.verdict.status).toBe('fail');
-    expect(fail.verdict.findings.map((f) => f.code)).toEqual(expect.arrayContaining(['BAND_NOT_COVERED', 'VSWR_ABOVE_TARGET', 'EFFICIENCY_BELOW_FLOOR_NO_DATA']));
+    expect(fail.verdict.findings.map((f) => f.code)).toEqual(
+      expect.arrayContaining(['BAND_NOT_COVERED', 'VSWR_ABOVE_TARGET', 'EFFICIENCY_BELOW_FLOOR_NO_DATA']),
+    );
   });
 
   it('uses a measured curve across both ranges of an FDD band and skips the duplex gap', async () => {

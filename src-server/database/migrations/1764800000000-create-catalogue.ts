@@ -154,7 +154,16 @@ export class CreateCatalogue1764800000000 implements MigrationInterface {
   }
 
   async down(q: QueryRunner): Promise<void> {
-    for (const table of ['catalogue_revision', 'part_alternates', 'part_offers', 'part_documents', 'part_measurements', 'part_spec_bands', 'parts', 'manufacturers']) {
+    for (const table of [
+      'catalogue_revision',
+      'part_alternates',
+      'part_offers',
+      'part_documents',
+      'part_measurements',
+      'part_spec_bands',
+      'parts',
+      'manufacturers',
+    ]) {
       await q.query(`DROP TABLE ${table}`);
     }
   }

@@ -27,7 +27,9 @@ export class HardenAccounts1765300000000 implements MigrationInterface {
   }
 
   async down(q: QueryRunner): Promise<void> {
-    await q.query('ALTER TABLE users ADD COLUMN failed_logins INT UNSIGNED NOT NULL DEFAULT 0 AFTER token_version, ADD COLUMN locked_until DATETIME(3) NULL AFTER failed_logins');
+    await q.query(
+      'ALTER TABLE users ADD COLUMN failed_logins INT UNSIGNED NOT NULL DEFAULT 0 AFTER token_version, ADD COLUMN locked_until DATETIME(3) NULL AFTER failed_logins',
+    );
     await q.query('ALTER TABLE mail_outbox DROP COLUMN carries_link_token');
     await q.query('DROP TABLE rate_limit_counters');
     await q.query('DROP TABLE login_attempts');

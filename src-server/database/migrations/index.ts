@@ -10,4 +10,15 @@ import { OwnershipAndLocking1765310000000 } from './1765310000000-ownership-and-
 import { OneApiVocabulary1765400000000 } from './1765400000000-one-api-vocabulary';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
-export const MIGRATIONS = [CreateUsersAndAudit1764620000000, CreateBands1764700000000, CreateProducts1764700100000, CreateCatalogue1764800000000, CreateCompatibility1764900000000, CreateMailOutbox1765000000000, CreatePendingUploads1765100000000, HardenAccounts1765300000000, OwnershipAndLocking1765310000000, OneApiVocabulary1765400000000];
+export const MIGRATIONS = [
+  CreateUsersAndAudit1764620000000,
+  CreateBands1764700000000,
+  CreateProducts1764700100000,
+  CreateCatalogue1764800000000,
+  CreateCompatibility1764900000000,
+  CreateMailOutbox1765000000000,
+  CreatePendingUploads1765100000000,
+  HardenAccounts1765300000000,
+  OwnershipAndLocking1765310000000,
+  OneApiVocabulary1765400000000,
+];

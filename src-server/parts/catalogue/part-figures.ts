@@ -33,10 +33,20 @@ const mhz = (hz: number) => hz / 1e6;
 /** The figures of one range from the measured curves (RF module), else from the spec bands that span it. */
 export function figuresForRange(curves: PartCurves, range: FrequencyRange): RangeFigures {
   const figures: RangeFigures = {
-    fromMhz: mhz(range.fromHz), toMhz: mhz(range.toHz),
-    matchSource: 'no-data', coveredFractionVswr2: null, worstVswr: null, worstVswrAtMhz: null, minReturnLossDb: null,
-    efficiencySource: 'no-data', minEfficiencyPct: null, averageEfficiencyPct: null, averageEfficiencyDb: null,
-    peakGainDbi: null, averageGainDbi: null, notes: [],
+    fromMhz: mhz(range.fromHz),
+    toMhz: mhz(range.toHz),
+    matchSource: 'no-data',
+    coveredFractionVswr2: null,
+    worstVswr: null,
+    worstVswrAtMhz: null,
+    minReturnLossDb: null,
+    efficiencySource: 'no-data',
+    minEfficiencyPct: null,
+    averageEfficiencyPct: null,
+    averageEfficiencyDb: null,
+    peakGainDbi: null,
+    averageGainDbi: null,
+    notes: [],
   };
   const spec = overlappingBands(curves.specBands, range);
 
@@ -108,6 +118,9 @@ export function coveredRangesOf(curves: PartCurves, maxVswr = 2): CoveredRange[]
     return matchedRanges(curves.s11, { kind: 'vswr', maxVswr }).map((r) => ({ fromMhz: mhz(r.fromHz), toMhz: mhz(r.toHz), source: 'measured' as const }));
   }
   return curves.specBands
-    .filter((band) => { const v = claimedMaxVswr(band); return v !== null && v <= maxVswr; })
+    .filter((band) => {
+      const v = claimedMaxVswr(band);
+      return v !== null && v <= maxVswr;
+    })
     .map((band) => ({ fromMhz: mhz(band.fromHz), toMhz: mhz(band.toHz), source: 'spec' as const }));
 }

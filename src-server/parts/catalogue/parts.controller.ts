@@ -58,7 +58,10 @@ export class PartsController {
   @UseInterceptors(LimitedFileUpload(PART_IMPORT_MAX_BYTES, 'PART_IMPORT_TOO_LARGE', 'an import'))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } } } })
-  @ApiOperation({ summary: 'Import draft parts from CSV (at most 4 MiB and 5,000 rows; each row checked like POST /api/parts); dryRun (default true) lists every problem by row and column and writes nothing' })
+  @ApiOperation({
+    summary:
+      'Import draft parts from CSV (at most 4 MiB and 5,000 rows; each row checked like POST /api/parts); dryRun (default true) lists every problem by row and column and writes nothing',
+  })
   @ApiOkResponse({ type: ImportResultDto })
   import(@UploadedFileParam() file: UploadedFile | undefined, @Query() query: ImportQueryDto, @CurrentUser() user: AuthUser): Promise<ImportResultDto> {
     return this.csv.importCsv(file, query.dryRun ?? true, user);

@@ -26,25 +26,66 @@ import type { DocumentDto, MeasurementDto, OfferDto, PartDetailDto } from '../dt
 
 /** Part fields an update may change, in the order the audit log lists them. */
 const EDITABLE_FIELDS = [
-  'mpn', 'title', 'formFactor', 'mounting', 'connector', 'polarization', 'nominalImpedanceOhms', 'lengthMm', 'widthMm', 'heightMm',
-  'evalGroundLengthMm', 'evalGroundWidthMm', 'tempMinC', 'tempMaxC', 'lifecycle', 'notes',
+  'mpn',
+  'title',
+  'formFactor',
+  'mounting',
+  'connector',
+  'polarization',
+  'nominalImpedanceOhms',
+  'lengthMm',
+  'widthMm',
+  'heightMm',
+  'evalGroundLengthMm',
+  'evalGroundWidthMm',
+  'tempMinC',
+  'tempMaxC',
+  'lifecycle',
+  'notes',
 ] as const;
 const REQUIRED_ON_UPDATE = ['mpn', 'title', 'formFactor', 'connector', 'polarization', 'nominalImpedanceOhms', 'lifecycle'] as const;
 
 export const measurementDto = (m: Measurement, current: boolean): MeasurementDto => ({
-  id: m.id, kind: m.kind, groundLengthMm: m.groundLengthMm, groundWidthMm: m.groundWidthMm, conditions: m.conditions,
-  fileName: m.fileName, sizeBytes: m.sizeBytes, sha256: m.sha256, sourceFormat: m.sourceFormat, referenceOhms: m.referenceOhms,
-  pointCount: m.pointCount, fromMhz: m.fromHz / 1e6, toMhz: m.toHz / 1e6, current, uploadedBy: userRef(m.uploadedBy), createdAt: m.createdAt.toISOString(),
+  id: m.id,
+  kind: m.kind,
+  groundLengthMm: m.groundLengthMm,
+  groundWidthMm: m.groundWidthMm,
+  conditions: m.conditions,
+  fileName: m.fileName,
+  sizeBytes: m.sizeBytes,
+  sha256: m.sha256,
+  sourceFormat: m.sourceFormat,
+  referenceOhms: m.referenceOhms,
+  pointCount: m.pointCount,
+  fromMhz: m.fromHz / 1e6,
+  toMhz: m.toHz / 1e6,
+  current,
+  uploadedBy: userRef(m.uploadedBy),
+  createdAt: m.createdAt.toISOString(),
 });
 
 export const documentDto = (d: PartDocument): DocumentDto => ({
-  id: d.id, kind: d.kind, title: d.title, fileName: d.fileName, contentType: d.contentType, sizeBytes: d.sizeBytes, sha256: d.sha256,
-  uploadedBy: userRef(d.uploadedBy), createdAt: d.createdAt.toISOString(),
+  id: d.id,
+  kind: d.kind,
+  title: d.title,
+  fileName: d.fileName,
+  contentType: d.contentType,
+  sizeBytes: d.sizeBytes,
+  sha256: d.sha256,
+  uploadedBy: userRef(d.uploadedBy),
+  createdAt: d.createdAt.toISOString(),
 });
 
 export const offerDto = (o: PartOffer): OfferDto => ({
-  id: o.id, supplier: o.supplier, sku: o.sku, currency: o.currency, priceBreaks: o.priceBreaks, moq: o.moq, leadTimeDays: o.leadTimeDays,
-  lastCheckedOn: o.lastCheckedOn, version: o.version,
+  id: o.id,
+  supplier: o.supplier,
+  sku: o.sku,
+  currency: o.currency,
+  priceBreaks: o.priceBreaks,
+  moq: o.moq,
+  leadTimeDays: o.leadTimeDays,
+  lastCheckedOn: o.lastCheckedOn,
+  version: o.version,
 });
 
 export function checkSpecBands(bands: SpecBandInputDto[] | undefined, prefix = 'specBands'): FieldProblem[] {
@@ -95,10 +136,19 @@ export class PartsService {
   private async replaceSpecBands(manager: EntityManager, partId: number, bands: SpecBandInputDto[]): Promise<void> {
     await manager.delete(SpecBand, { partId });
     if (bands.length === 0) return;
-    await manager.insert(SpecBand, bands.map((b) => ({
-      partId, fromMhz: b.fromMhz, toMhz: b.toMhz, maxVswr: b.maxVswr ?? null, minReturnLossDb: b.minReturnLossDb ?? null,
-      efficiencyPct: b.efficiencyPct ?? null, peakGainDbi: b.peakGainDbi ?? null, averageGainDbi: b.averageGainDbi ?? null,
-    })));
+    await manager.insert(
+      SpecBand,
+      bands.map((b) => ({
+        partId,
+        fromMhz: b.fromMhz,
+        toMhz: b.toMhz,
+        maxVswr: b.maxVswr ?? null,
+        minReturnLossDb: b.minReturnLossDb ?? null,
+        efficiencyPct: b.efficiencyPct ?? null,
+        peakGainDbi: b.peakGainDbi ?? null,
+        averageGainDbi: b.averageGainDbi ?? null,
+      })),
+    );
   }
 
   /** Inside the caller's transaction: used by the API, the CSV import and the demo seeder. */
@@ -108,20 +158,40 @@ export class PartsService {
     const manufacturerId = await this.manufacturerId(manager, input.manufacturer);
     await this.assertMpnFree(manager, manufacturerId, input.manufacturer.trim(), input.mpn);
     const fields = {
-      manufacturerId, mpn: input.mpn, title: input.title, formFactor: input.formFactor, mounting: input.mounting ?? null, connector: input.connector,
-      polarization: input.polarization, nominalImpedanceOhms: input.nominalImpedanceOhms ?? 50, lengthMm: input.lengthMm ?? null,
-      widthMm: input.widthMm ?? null, heightMm: input.heightMm ?? null, evalGroundLengthMm: input.evalGroundLengthMm ?? null,
-      evalGroundWidthMm: input.evalGroundWidthMm ?? null, tempMinC: input.tempMinC ?? null, tempMaxC: input.tempMaxC ?? null,
-      lifecycle: input.lifecycle ?? 'active', notes: input.notes ?? null,
+      manufacturerId,
+      mpn: input.mpn,
+      title: input.title,
+      formFactor: input.formFactor,
+      mounting: input.mounting ?? null,
+      connector: input.connector,
+      polarization: input.polarization,
+      nominalImpedanceOhms: input.nominalImpedanceOhms ?? 50,
+      lengthMm: input.lengthMm ?? null,
+      widthMm: input.widthMm ?? null,
+      heightMm: input.heightMm ?? null,
+      evalGroundLengthMm: input.evalGroundLengthMm ?? null,
+      evalGroundWidthMm: input.evalGroundWidthMm ?? null,
+      tempMinC: input.tempMinC ?? null,
+      tempMaxC: input.tempMaxC ?? null,
+      lifecycle: input.lifecycle ?? 'active',
+      notes: input.notes ?? null,
     };
     const inserted = await manager.insert(Part, {
-      ...(fixedId ? { id: fixedId } : {}), ...fields, reviewState: 'draft', createdById: actorId, searchText: searchTextOf(input.manufacturer.trim(), fields), version: 1,
+      ...(fixedId ? { id: fixedId } : {}),
+      ...fields,
+      reviewState: 'draft',
+      createdById: actorId,
+      searchText: searchTextOf(input.manufacturer.trim(), fields),
+      version: 1,
     });
     const id: number = inserted.identifiers[0].id;
     await this.replaceSpecBands(manager, id, input.specBands ?? []);
     await touchPart(manager, id);
     await this.audit.record(manager, {
-      entityType: 'part', entityId: id, action, userId: actorId,
+      entityType: 'part',
+      entityId: id,
+      action,
+      userId: actorId,
       changes: { manufacturer: input.manufacturer.trim(), ...fields, manufacturerId: undefined, specBands: input.specBands ?? [] },
     });
     return id;
@@ -155,7 +225,15 @@ export class PartsService {
       }
       if (input.specBands) {
         const before = (await manager.findBy(SpecBand, { partId: id })).map(specBandDto).map(({ id: _id, ...rest }) => rest);
-        const after = input.specBands.map((b) => ({ fromMhz: b.fromMhz, toMhz: b.toMhz, maxVswr: b.maxVswr ?? null, minReturnLossDb: b.minReturnLossDb ?? null, efficiencyPct: b.efficiencyPct ?? null, peakGainDbi: b.peakGainDbi ?? null, averageGainDbi: b.averageGainDbi ?? null }));
+        const after = input.specBands.map((b) => ({
+          fromMhz: b.fromMhz,
+          toMhz: b.toMhz,
+          maxVswr: b.maxVswr ?? null,
+          minReturnLossDb: b.minReturnLossDb ?? null,
+          efficiencyPct: b.efficiencyPct ?? null,
+          peakGainDbi: b.peakGainDbi ?? null,
+          averageGainDbi: b.averageGainDbi ?? null,
+        }));
         if (JSON.stringify(before) !== JSON.stringify(after)) diff.specBands = [before, after];
         await this.replaceSpecBands(manager, id, input.specBands);
       }
@@ -175,8 +253,11 @@ export class PartsService {
     return {
       ...detail,
       permissions: {
-        edit: partAccess.canEdit(actor, owner), uploadData: partAccess.canUploadData(actor, owner), submit: partAccess.canSubmit(actor, owner),
-        review: partAccess.canReview(actor), editSourcing: partAccess.canEditSourcing(actor),
+        edit: partAccess.canEdit(actor, owner),
+        uploadData: partAccess.canUploadData(actor, owner),
+        submit: partAccess.canSubmit(actor, owner),
+        review: partAccess.canReview(actor),
+        editSourcing: partAccess.canEditSourcing(actor),
       },
     };
   }
@@ -199,17 +280,47 @@ export class PartsService {
     const curves = curvesByPart.get(id);
     const figureRanges = [...specBands.map((b) => ({ fromHz: b.fromMhz * 1e6, toHz: b.toMhz * 1e6 })), ...ranges];
     const partCurves = {
-      s11: curves?.s11?.curve ?? null, efficiencyPercent: curves?.efficiency?.curve ?? null, peakGainDbi: curves?.peakGain?.curve ?? null,
-      averageGainDbi: curves?.averageGain?.curve ?? null, specBands: specBands.map(specBandClaim),
+      s11: curves?.s11?.curve ?? null,
+      efficiencyPercent: curves?.efficiency?.curve ?? null,
+      peakGainDbi: curves?.peakGain?.curve ?? null,
+      averageGainDbi: curves?.averageGain?.curve ?? null,
+      specBands: specBands.map(specBandClaim),
     };
-    const currentIds = new Set([curves?.s11?.measurementId, curves?.efficiency?.measurementId, curves?.peakGain?.measurementId, curves?.averageGain?.measurementId]);
+    const currentIds = new Set([
+      curves?.s11?.measurementId,
+      curves?.efficiency?.measurementId,
+      curves?.peakGain?.measurementId,
+      curves?.averageGain?.measurementId,
+    ]);
     const detail: Omit<PartDetailDto, 'permissions'> = {
-      id: part.id, manufacturer: part.manufacturer.name, mpn: part.mpn, title: part.title, formFactor: part.formFactor, mounting: part.mounting,
-      connector: part.connector, polarization: part.polarization, nominalImpedanceOhms: part.nominalImpedanceOhms, lengthMm: part.lengthMm,
-      widthMm: part.widthMm, heightMm: part.heightMm, evalGroundLengthMm: part.evalGroundLengthMm, evalGroundWidthMm: part.evalGroundWidthMm,
-      tempMinC: part.tempMinC, tempMaxC: part.tempMaxC, lifecycle: part.lifecycle, reviewState: part.reviewState, reviewComment: part.reviewComment,
-      notes: part.notes, version: part.version, createdBy: userRef(part.createdBy), submittedBy: userRef(part.submittedBy), submittedAt: iso(part.submittedAt),
-      reviewedBy: userRef(part.reviewedBy), reviewedAt: iso(part.reviewedAt), createdAt: part.createdAt.toISOString(), updatedAt: part.updatedAt.toISOString(),
+      id: part.id,
+      manufacturer: part.manufacturer.name,
+      mpn: part.mpn,
+      title: part.title,
+      formFactor: part.formFactor,
+      mounting: part.mounting,
+      connector: part.connector,
+      polarization: part.polarization,
+      nominalImpedanceOhms: part.nominalImpedanceOhms,
+      lengthMm: part.lengthMm,
+      widthMm: part.widthMm,
+      heightMm: part.heightMm,
+      evalGroundLengthMm: part.evalGroundLengthMm,
+      evalGroundWidthMm: part.evalGroundWidthMm,
+      tempMinC: part.tempMinC,
+      tempMaxC: part.tempMaxC,
+      lifecycle: part.lifecycle,
+      reviewState: part.reviewState,
+      reviewComment: part.reviewComment,
+      notes: part.notes,
+      version: part.version,
+      createdBy: userRef(part.createdBy),
+      submittedBy: userRef(part.submittedBy),
+      submittedAt: iso(part.submittedAt),
+      reviewedBy: userRef(part.reviewedBy),
+      reviewedAt: iso(part.reviewedAt),
+      createdAt: part.createdAt.toISOString(),
+      updatedAt: part.updatedAt.toISOString(),
       specBands: specBands.map(specBandDto),
       measurements: measurements.map((m) => measurementDto(m, currentIds.has(m.id))),
       figures: figureRanges.map((range) => figuresForRange(partCurves, range)),
@@ -217,7 +328,12 @@ export class PartsService {
       documents: documents.map(documentDto),
       offers: offers.map(offerDto),
       alternates: alternates.map((a) => ({
-        partId: a.alternatePartId, manufacturer: a.alternatePart.manufacturer.name, mpn: a.alternatePart.mpn, reviewState: a.alternatePart.reviewState, kind: a.kind, note: a.note,
+        partId: a.alternatePartId,
+        manufacturer: a.alternatePart.manufacturer.name,
+        mpn: a.alternatePart.mpn,
+        reviewState: a.alternatePart.reviewState,
+        kind: a.kind,
+        note: a.note,
       })),
     };
     return { owner: { id: part.id, createdById: part.createdById, reviewState: part.reviewState }, detail };

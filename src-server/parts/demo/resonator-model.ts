@@ -33,7 +33,7 @@ export function branchFor(resonance: Resonance): Branch {
   const f0 = Math.sqrt(resonance.fromMhz * resonance.toMhz) * 1e6;
   const g = gammaMagnitudeFromVswr(resonance.edgeVswr);
   const x = (2 * g) / Math.sqrt(1 - g * g);
-  const detune = resonance.toMhz * 1e6 / f0 - f0 / (resonance.toMhz * 1e6);
+  const detune = (resonance.toMhz * 1e6) / f0 - f0 / (resonance.toMhz * 1e6);
   return { f0Hz: f0, q: x / detune, r: resonance.matchOhms ?? 50 };
 }
 

@@ -28,7 +28,13 @@ export function demoFiles(p: DemoPart): DemoFiles | null {
   const frequenciesHz = [...evenlySpacedFrequencies(p.sweep[0] * 1e6, p.sweep[1] * 1e6, SWEEP_POINTS)];
   const gamma = s11Curve(p.resonances, frequenciesHz);
   const s1p = writeTouchstone({
-    version: 1, ports: 1, frequencyUnit: 'MHz', format: 'RI', frequenciesHz, data: [gamma], formatNumber: number,
+    version: 1,
+    ports: 1,
+    frequencyUnit: 'MHz',
+    format: 'RI',
+    frequenciesHz,
+    data: [gamma],
+    formatNumber: number,
     comments: [`${p.manufacturer} ${p.mpn} - invented demo data (resonator model), not a measurement`, 'Bandwright demo catalogue'],
   });
   // Efficiency and gain are measured more coarsely than S11, as chamber sweeps usually are.
@@ -39,8 +45,14 @@ export function demoFiles(p: DemoPart): DemoFiles | null {
   return {
     s1p,
     efficiencyCsv: csv('frequency (MHz),radiation efficiency (%)', efficiency),
-    peakGainCsv: csv('frequency (MHz),peak gain (dBi)', gains.map((g) => g.peakDbi)),
-    averageGainCsv: csv('frequency (MHz),average gain (dBi)', gains.map((g) => g.averageDbi)),
+    peakGainCsv: csv(
+      'frequency (MHz),peak gain (dBi)',
+      gains.map((g) => g.peakDbi),
+    ),
+    averageGainCsv: csv(
+      'frequency (MHz),average gain (dBi)',
+      gains.map((g) => g.averageDbi),
+    ),
   };
 }
 
@@ -71,8 +83,19 @@ export const fileStem = (p: DemoPart) => `${p.id}-${p.mpn}`;
 
 /** The bands the demo story is told in (edges from catalog-seed/bands.json). */
 const STORY_BANDS: [string, number, number][] = [
-  ['B12', 699, 746], ['B13', 746, 787], ['B20', 791, 862], ['B8', 880, 960], ['B3', 1710, 1880], ['B2', 1850, 1990], ['B66', 1710, 2200], ['B7', 2500, 2690],
-  ['GPS L1', 1565.19, 1585.65], ['2.4 GHz', 2400, 2483.5], ['UNII-3', 5725, 5850], ['EU868', 863, 870], ['US915', 902, 928],
+  ['B12', 699, 746],
+  ['B13', 746, 787],
+  ['B20', 791, 862],
+  ['B8', 880, 960],
+  ['B3', 1710, 1880],
+  ['B2', 1850, 1990],
+  ['B66', 1710, 2200],
+  ['B7', 2500, 2690],
+  ['GPS L1', 1565.19, 1585.65],
+  ['2.4 GHz', 2400, 2483.5],
+  ['UNII-3', 5725, 5850],
+  ['EU868', 863, 870],
+  ['US915', 902, 928],
 ];
 
 function main(): void {
@@ -90,8 +113,12 @@ function main(): void {
       writeFileSync(join(root, 'curves', `${stem}-efficiency.csv`), files.efficiencyCsv);
       writeFileSync(join(root, 'curves', `${stem}-peak-gain.csv`), files.peakGainCsv);
       writeFileSync(join(root, 'curves', `${stem}-average-gain.csv`), files.averageGainCsv);
-      curves.push({ kind: 's11', file: `curves/${stem}.s1p` }, { kind: 'efficiency', file: `curves/${stem}-efficiency.csv` },
-        { kind: 'peak-gain', file: `curves/${stem}-peak-gain.csv` }, { kind: 'average-gain', file: `curves/${stem}-average-gain.csv` });
+      curves.push(
+        { kind: 's11', file: `curves/${stem}.s1p` },
+        { kind: 'efficiency', file: `curves/${stem}-efficiency.csv` },
+        { kind: 'peak-gain', file: `curves/${stem}-peak-gain.csv` },
+        { kind: 'average-gain', file: `curves/${stem}-average-gain.csv` },
+      );
     }
     const documents = p.datasheet ? [{ kind: 'datasheet', title: `${p.mpn} datasheet (invented)`, file: `documents/${stem}-datasheet.pdf` }] : [];
     if (p.datasheet) writeFileSync(join(root, 'documents', `${stem}-datasheet.pdf`), demoDatasheetPdf(p));
@@ -110,9 +137,29 @@ function main(): void {
         const frequenciesHz = Float64Array.from(evenlySpacedFrequencies(p.sweep![0] * 1e6, p.sweep![1] * 1e6, SWEEP_POINTS));
         const g = s11Curve(p.resonances!, [...frequenciesHz]);
         const coarse = [...frequenciesHz].filter((_, i) => i % 6 === 0 || i === frequenciesHz.length - 1);
-        curves = { s11: reflectionCurveFromGamma(frequenciesHz, Float64Array.from(g.re), Float64Array.from(g.im)), efficiencyPercent: { frequenciesHz: coarse, values: coarse.map((f) => efficiencyAt(p.efficiency!, f)) }, peakGainDbi: null, averageGainDbi: null, specBands: [] };
+        curves = {
+          s11: reflectionCurveFromGamma(frequenciesHz, Float64Array.from(g.re), Float64Array.from(g.im)),
+          efficiencyPercent: { frequenciesHz: coarse, values: coarse.map((f) => efficiencyAt(p.efficiency!, f)) },
+          peakGainDbi: null,
+          averageGainDbi: null,
+          specBands: [],
+        };
       } else {
-        curves = { s11: null, efficiencyPercent: null, peakGainDbi: null, averageGainDbi: null, specBands: p.specBands.map(([f, t, v, e, g]) => ({ fromHz: f * 1e6, toHz: t * 1e6, maxVswr: v, minReturnLossDb: null, efficiencyPct: e, peakGainDbi: g, averageGainDbi: null })) };
+        curves = {
+          s11: null,
+          efficiencyPercent: null,
+          peakGainDbi: null,
+          averageGainDbi: null,
+          specBands: p.specBands.map(([f, t, v, e, g]) => ({
+            fromHz: f * 1e6,
+            toHz: t * 1e6,
+            maxVswr: v,
+            minReturnLossDb: null,
+            efficiencyPct: e,
+            peakGainDbi: g,
+            averageGainDbi: null,
+          })),
+        };
       }
       const fig = figuresForRange(curves, { fromHz: from * 1e6, toHz: to * 1e6 });
       if (fig.worstVswr === null) continue;

@@ -62,6 +62,7 @@ export function sniffDocumentType(bytes: Uint8Array): SniffedType | null {
   // SVG may start with an XML declaration, comments or a doctype; the root element must be svg.
   if (rootElementName(text)?.toLowerCase() === 'svg') return { contentType: 'image/svg+xml', label: 'SVG' };
   // DXF: group code 0 then SECTION on the next line (AutoCAD DXF reference, file structure).
-  if (/^0\s*\r?\n\s*SECTION\s*\r?\n/.test(text.trimStart())) return { contentType: 'image/vnd.dxf', label: 'DXF' };
+  if (/^0[\t\v\f\r \xa0\u1680\u2000-\u200a\u2028\u2029\u202f\u205f\u3000\ufeff]*\n\s*SECTION\s*\n/.test(text.trimStart()))
+    return { contentType: 'image/vnd.dxf', label: 'DXF' };
   return null;
 }

@@ -1,4 +1,16 @@
-import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  Header,
+  HttpCode,
+  Param,
+  Post,
+  StreamableFile,
+  UploadedFile as UploadedFileParam,
+  UseInterceptors,
+} from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ALL_ROLES } from '../../common/roles';
@@ -20,10 +32,21 @@ export class DocumentsController {
   @Roles('engineer', 'admin')
   @UseInterceptors(LimitedFileUpload(DOCUMENT_MAX_BYTES, 'DOCUMENT_TOO_LARGE', 'a document'))
   @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', required: ['file', 'kind'], properties: { file: { type: 'string', format: 'binary' }, kind: { type: 'string', enum: ['datasheet', 'drawing', 'other'] }, title: { type: 'string' } } } })
+  @ApiBody({
+    schema: {
+      type: 'object',
+      required: ['file', 'kind'],
+      properties: { file: { type: 'string', format: 'binary' }, kind: { type: 'string', enum: ['datasheet', 'drawing', 'other'] }, title: { type: 'string' } },
+    },
+  })
   @ApiOperation({ summary: 'Attach a datasheet or drawing (PDF, PNG, SVG, DXF by content; at most 20 MiB); stored with SHA-256' })
   @ApiCreatedResponse({ type: DocumentDto })
-  upload(@Param('id', ParseIdPipe) id: number, @UploadedFileParam() file: UploadedFile | undefined, @Body() body: UploadDocumentDto, @CurrentUser() user: AuthUser): Promise<DocumentDto> {
+  upload(
+    @Param('id', ParseIdPipe) id: number,
+    @UploadedFileParam() file: UploadedFile | undefined,
+    @Body() body: UploadDocumentDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<DocumentDto> {
     return this.documents.upload(id, file, body, user);
   }
 

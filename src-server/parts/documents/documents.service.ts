@@ -38,7 +38,8 @@ export class DocumentsService {
       throw new DomainError('DOCUMENT_TOO_LARGE', `The file is ${file.size} bytes; documents may be at most ${DOCUMENT_MAX_BYTES / 1048576} MiB`, 413);
     }
     const type = sniffDocumentType(file.buffer);
-    if (!type) throw new DomainError('DOCUMENT_TYPE_NOT_ALLOWED', `${file.originalname} is not a PDF, PNG, SVG or DXF file (judged by its content, not its name)`, 415);
+    if (!type)
+      throw new DomainError('DOCUMENT_TYPE_NOT_ALLOWED', `${file.originalname} is not a PDF, PNG, SVG or DXF file (judged by its content, not its name)`, 415);
     const key = objectKey('parts', partId, 'documents', `${randomUUID()}-${safeFileName(file.originalname)}`);
     await this.ledger.putPending(key, file.buffer, type.contentType);
     try {
@@ -46,13 +47,26 @@ export class DocumentsService {
         const locked = await this.parts.lockPart(manager, partId);
         if (actor) assertCanEdit(actor, locked, 'add documents to');
         const inserted = await manager.insert(PartDocument, {
-          partId, kind: input.kind, title: storedFileName(input.title?.trim() || file.originalname), fileName: storedFileName(file.originalname),
-          contentType: type.contentType, objectKey: key, sizeBytes: file.size, sha256: sha256Hex(file.buffer), uploadedById: actor?.id ?? null,
+          partId,
+          kind: input.kind,
+          title: storedFileName(input.title?.trim() || file.originalname),
+          fileName: storedFileName(file.originalname),
+          contentType: type.contentType,
+          objectKey: key,
+          sizeBytes: file.size,
+          sha256: sha256Hex(file.buffer),
+          uploadedById: actor?.id ?? null,
         });
         const documentId: number = inserted.identifiers[0].id;
         await this.ledger.settle(manager, key);
         await touchPart(manager, partId);
-        await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'document-added', userId: actor?.id ?? null, changes: { documentId, kind: input.kind, fileName: file.originalname, type: type.label, sizeBytes: file.size } });
+        await this.audit.record(manager, {
+          entityType: 'part',
+          entityId: partId,
+          action: 'document-added',
+          userId: actor?.id ?? null,
+          changes: { documentId, kind: input.kind, fileName: file.originalname, type: type.label, sizeBytes: file.size },
+        });
         return documentId;
       });
       return documentDto(await this.dataSource.getRepository(PartDocument).findOneOrFail({ where: { id }, relations: { uploadedBy: true } }));
@@ -77,7 +91,13 @@ export class DocumentsService {
       await manager.delete(PartDocument, { id: documentId });
       await this.ledger.release(manager, row.objectKey);
       await touchPart(manager, partId);
-      await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'document-removed', userId: actor.id, changes: { documentId, fileName: row.fileName } });
+      await this.audit.record(manager, {
+        entityType: 'part',
+        entityId: partId,
+        action: 'document-removed',
+        userId: actor.id,
+        changes: { documentId, fileName: row.fileName },
+      });
       return row.objectKey;
     });
     await this.ledger.abandon(key);

@@ -2,9 +2,7 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, ValidateNested } from 'class-validator';
 import { EnumField, IntField, NumberField, OptionalField, StringField } from '../../common/dto-fields';
-import {
-  CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, POLARIZATIONS, type PartPolarization,
-} from '../part.types';
+import { CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, POLARIZATIONS, type PartPolarization } from '../part.types';
 
 export class SpecBandInputDto {
   @NumberField({ min: 1, max: 300000, example: 791, description: 'Lower edge, MHz' }) fromMhz: number;

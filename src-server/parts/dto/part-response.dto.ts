@@ -1,7 +1,19 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
-  CONNECTORS, type Connector, DOCUMENT_KINDS, type DocumentKind, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle,
-  MEASUREMENT_KINDS, type MeasurementKind, POLARIZATIONS, type PartPolarization, REVIEW_STATES, type ReviewState,
+  CONNECTORS,
+  type Connector,
+  DOCUMENT_KINDS,
+  type DocumentKind,
+  FORM_FACTORS,
+  type FormFactor,
+  LIFECYCLES,
+  type Lifecycle,
+  MEASUREMENT_KINDS,
+  type MeasurementKind,
+  POLARIZATIONS,
+  type PartPolarization,
+  REVIEW_STATES,
+  type ReviewState,
 } from '../part.types';
 
 export class UserRefDto {
@@ -176,7 +188,8 @@ export class PartDetailDto {
   @ApiProperty({ type: [SpecBandDto] }) specBands: SpecBandDto[];
   @ApiProperty({ type: [MeasurementDto] }) measurements: MeasurementDto[];
   @ApiProperty({ type: [RangeFiguresDto], description: 'Per range: the spec bands, plus any ?ranges= asked for' }) figures: RangeFiguresDto[];
-  @ApiProperty({ type: [CoveredRangeDto], description: 'Where VSWR ≤ 2: from the current S11, else from spec bands claiming it' }) coveredRanges: CoveredRangeDto[];
+  @ApiProperty({ type: [CoveredRangeDto], description: 'Where VSWR ≤ 2: from the current S11, else from spec bands claiming it' })
+  coveredRanges: CoveredRangeDto[];
   @ApiProperty({ type: [DocumentDto] }) documents: DocumentDto[];
   @ApiProperty({ type: [OfferDto] }) offers: OfferDto[];
   @ApiProperty({ type: [AlternateDto] }) alternates: AlternateDto[];

@@ -5,8 +5,16 @@ import { IsIn, IsOptional, Matches } from 'class-validator';
 import { EnumField, IntField, NumberField, StringField } from '../../common/dto-fields';
 import { SORT_KEYS, type SortKey } from '../catalogue/catalogue-index/catalogue-index';
 import {
-  CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, POLARIZATIONS, type PartPolarization,
-  REVIEW_STATES, type ReviewState,
+  CONNECTORS,
+  type Connector,
+  FORM_FACTORS,
+  type FormFactor,
+  LIFECYCLES,
+  type Lifecycle,
+  POLARIZATIONS,
+  type PartPolarization,
+  REVIEW_STATES,
+  type ReviewState,
 } from '../part.types';
 
 /** A comma-separated query list of enum values, e.g. `status=approved,restricted`. */
@@ -14,7 +22,14 @@ function ListField(values: readonly string[], description: string) {
   return applyDecorators(
     ApiPropertyOptional({ description: `${description}; comma-separated: ${values.join(', ')}`, type: String }),
     IsOptional(),
-    Transform(({ value }) => (typeof value === 'string' ? value.split(',').map((v) => v.trim()).filter(Boolean) : value)),
+    Transform(({ value }) =>
+      typeof value === 'string'
+        ? value
+            .split(',')
+            .map((v) => v.trim())
+            .filter(Boolean)
+        : value,
+    ),
     IsIn(values as string[], { each: true, message: `each value must be one of: ${values.join(', ')}` }),
   );
 }
@@ -35,7 +50,9 @@ export class PartSearchDto {
 
   @ApiPropertyOptional({ example: '791-862,880-960', description: 'Frequency ranges in MHz the part must cover, comma-separated from-to pairs' })
   @IsOptional()
-  @Matches(/^\s*\d+(\.\d+)?\s*-\s*\d+(\.\d+)?\s*(,\s*\d+(\.\d+)?\s*-\s*\d+(\.\d+)?\s*){0,15}$/, { message: 'must be ranges in MHz like 791-862,880-960 (at most 16)' })
+  @Matches(/^\s*\d+(\.\d+)?\s*-\s*\d+(\.\d+)?\s*(,\s*\d+(\.\d+)?\s*-\s*\d+(\.\d+)?\s*){0,15}$/, {
+    message: 'must be ranges in MHz like 791-862,880-960 (at most 16)',
+  })
   covers?: string;
 
   @NumberField({ optional: true, min: 1, max: 100, description: 'Worst VSWR allowed over every covered range (default 2)' }) vswrMax?: number;

@@ -12,7 +12,8 @@ export class UploadMeasurementDto {
   @NumberField({ optional: true, min: 0, max: 5000, description: 'Ground plane width, mm' }) groundWidthMm?: number;
   @StringField({ optional: true, maxLength: 500, description: 'Conditions: fixture, enclosure, cable, chamber' }) conditions?: string;
   @EnumField(FREQUENCY_UNITS, { optional: true, description: 'CSV frequency unit when the header does not say' }) frequencyUnit?: FrequencyUnit;
-  @EnumField(VALUE_UNITS, { optional: true, description: 'CSV value unit when the header does not say: efficiency %, dB or ratio; gain dBi' }) valueUnit?: ValueUnit;
+  @EnumField(VALUE_UNITS, { optional: true, description: 'CSV value unit when the header does not say: efficiency %, dB or ratio; gain dBi' })
+  valueUnit?: ValueUnit;
   @BoolField({ optional: true, description: 'Parse and preview only; nothing is stored' }) dryRun?: boolean;
 }
 

@@ -30,7 +30,12 @@ export class PartCsvService {
   async importCsv(maybeFile: UploadedFile | undefined, dryRun: boolean, actor: AuthUser): Promise<ImportResultDto> {
     const file = requireFile(maybeFile);
     if (file.size > PART_IMPORT_MAX_BYTES) {
-      throw new DomainError('PART_IMPORT_TOO_LARGE', `file: an import may be at most ${PART_IMPORT_MAX_BYTES / 1048576} MiB; split it, nothing was imported`, 413, { field: 'file', limitBytes: PART_IMPORT_MAX_BYTES });
+      throw new DomainError(
+        'PART_IMPORT_TOO_LARGE',
+        `file: an import may be at most ${PART_IMPORT_MAX_BYTES / 1048576} MiB; split it, nothing was imported`,
+        413,
+        { field: 'file', limitBytes: PART_IMPORT_MAX_BYTES },
+      );
     }
     if (looksBinary(file.buffer)) {
       throw new DomainError('PART_IMPORT_NOT_CSV', `file: ${file.originalname} is not a CSV text file; nothing was imported`, 415, { field: 'file' });
@@ -38,7 +43,8 @@ export class PartCsvService {
     const { parts, problems } = parsePartCsv(file.buffer);
     if (parts.length > 0) {
       const existing: { name: string; mpn: string }[] = await this.dataSource.query(
-        'SELECT m.name, p.mpn FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id WHERE p.mpn IN (?)', [parts.map((p) => p.input.mpn)],
+        'SELECT m.name, p.mpn FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id WHERE p.mpn IN (?)',
+        [parts.map((p) => p.input.mpn)],
       );
       const taken = new Set(existing.map((e) => `${e.name.toLowerCase()}\u0000${e.mpn}`));
       for (const part of parts) {
@@ -54,7 +60,12 @@ export class PartCsvService {
     const valid = parts.filter((p) => !badRows.has(p.row)).length;
     if (dryRun) return { dryRun: true, rowCount, validRows: valid, problems, createdIds: [] };
     if (problems.length > 0) {
-      throw new DomainError('PART_IMPORT_INVALID', `${problems.length} problem${problems.length === 1 ? '' : 's'} in the file; nothing was imported. First: row ${problems[0].row}, ${problems[0].field}: ${problems[0].message}`, 422, { line: problems[0].line, problems });
+      throw new DomainError(
+        'PART_IMPORT_INVALID',
+        `${problems.length} problem${problems.length === 1 ? '' : 's'} in the file; nothing was imported. First: row ${problems[0].row}, ${problems[0].field}: ${problems[0].message}`,
+        422,
+        { line: problems[0].line, problems },
+      );
     }
     const createdIds = await this.dataSource.transaction(async (manager) => {
       const ids: number[] = [];
@@ -65,7 +76,10 @@ export class PartCsvService {
           // A row that passed the dry run can still collide with a part created meanwhile.
           if (error instanceof DomainError) {
             const problem: ImportProblem = { row: part.row, line: part.line, field: String(error.details.field ?? ''), message: error.message };
-            throw new DomainError('PART_IMPORT_INVALID', `row ${part.row}: ${error.message}; nothing was imported`, 422, { line: part.line, problems: [problem] });
+            throw new DomainError('PART_IMPORT_INVALID', `row ${part.row}: ${error.message}; nothing was imported`, 422, {
+              line: part.line,
+              problems: [problem],
+            });
           }
           throw error;
         }
@@ -90,9 +104,27 @@ export class PartCsvService {
       if (!part) continue;
       const bands = [...part.specBands].sort((a, b) => a.fromMhz - b.fromMhz);
       rows.push([
-        part.id, part.manufacturer.name, part.mpn, part.title, part.formFactor, part.connector, part.polarization, part.mounting, part.nominalImpedanceOhms,
-        part.lengthMm, part.widthMm, part.heightMm, part.evalGroundLengthMm, part.evalGroundWidthMm, part.tempMinC, part.tempMaxC, part.lifecycle, part.notes,
-        formatSpecBands(bands), part.reviewState, indexed.measuredKinds.join(' '),
+        part.id,
+        part.manufacturer.name,
+        part.mpn,
+        part.title,
+        part.formFactor,
+        part.connector,
+        part.polarization,
+        part.mounting,
+        part.nominalImpedanceOhms,
+        part.lengthMm,
+        part.widthMm,
+        part.heightMm,
+        part.evalGroundLengthMm,
+        part.evalGroundWidthMm,
+        part.tempMinC,
+        part.tempMaxC,
+        part.lifecycle,
+        part.notes,
+        formatSpecBands(bands),
+        part.reviewState,
+        indexed.measuredKinds.join(' '),
         [...indexed.lowestPrices].map(([currency, price]) => `${price.toFixed(4)} ${currency}`).join(' '),
       ]);
     }

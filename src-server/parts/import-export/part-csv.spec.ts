@@ -4,7 +4,10 @@ describe(parseSpecBandsText.name, () => {
   it('reads bands with their limits and round-trips through formatSpecBands', () => {
     const { bands, error } = parseSpecBandsText('791-862 vswr=2 eff=45 peak=1.5; 880-960 rl=10 avg=-2.5');
     expect(error).toBeNull();
-    expect(bands).toEqual([{ fromMhz: 791, toMhz: 862, maxVswr: 2, efficiencyPct: 45, peakGainDbi: 1.5 }, { fromMhz: 880, toMhz: 960, minReturnLossDb: 10, averageGainDbi: -2.5 }]);
+    expect(bands).toEqual([
+      { fromMhz: 791, toMhz: 862, maxVswr: 2, efficiencyPct: 45, peakGainDbi: 1.5 },
+      { fromMhz: 880, toMhz: 960, minReturnLossDb: 10, averageGainDbi: -2.5 },
+    ]);
     expect(parseSpecBandsText(formatSpecBands(bands)).bands).toEqual(bands);
   });
 

@@ -7,8 +7,24 @@ import { CreatePartDto, SpecBandInputDto } from '../dto/part-input.dto';
 
 /** The import/export columns; the export adds id, review state, measured kinds and prices. */
 export const PART_CSV_COLUMNS = [
-  'manufacturer', 'mpn', 'title', 'formFactor', 'connector', 'polarization', 'mounting', 'nominalImpedanceOhms', 'lengthMm', 'widthMm', 'heightMm',
-  'evalGroundLengthMm', 'evalGroundWidthMm', 'tempMinC', 'tempMaxC', 'lifecycle', 'notes', 'specBands',
+  'manufacturer',
+  'mpn',
+  'title',
+  'formFactor',
+  'connector',
+  'polarization',
+  'mounting',
+  'nominalImpedanceOhms',
+  'lengthMm',
+  'widthMm',
+  'heightMm',
+  'evalGroundLengthMm',
+  'evalGroundWidthMm',
+  'tempMinC',
+  'tempMaxC',
+  'lifecycle',
+  'notes',
+  'specBands',
 ] as const;
 const REQUIRED = ['manufacturer', 'mpn', 'title', 'formFactor', 'connector', 'polarization'] as const;
 /** Columns read as numbers; their ranges, like every other field check, are CreatePartDto's. */
@@ -17,7 +33,13 @@ const NUMERIC = new Set<string>(['nominalImpedanceOhms', 'lengthMm', 'widthMm', 
 export const PART_IMPORT_MAX_ROWS = 5_000;
 /** Room for quoted multi-line notes; a record holds at most 4,000 characters of notes and 64 spec bands. */
 export const PART_IMPORT_CSV_BOUNDS: CsvBounds = { maxLines: 5 * PART_IMPORT_MAX_ROWS, maxRecordSize: 32 * 1024 };
-const BAND_KEYS: Record<string, keyof SpecBandInputDto> = { vswr: 'maxVswr', rl: 'minReturnLossDb', eff: 'efficiencyPct', peak: 'peakGainDbi', avg: 'averageGainDbi' };
+const BAND_KEYS: Record<string, keyof SpecBandInputDto> = {
+  vswr: 'maxVswr',
+  rl: 'minReturnLossDb',
+  eff: 'efficiencyPct',
+  peak: 'peakGainDbi',
+  avg: 'averageGainDbi',
+};
 
 export interface ImportProblem {
   /** Data row, 1-based (the header is not counted). */
@@ -36,7 +58,11 @@ export interface ParsedImport {
 /** `791-862 vswr=3 eff=45 peak=1.5 avg=-2.5; 880-960 vswr=3` → spec bands. */
 export function parseSpecBandsText(text: string): { bands: SpecBandInputDto[]; error: string | null } {
   const bands: SpecBandInputDto[] = [];
-  for (const [i, entry] of text.split(';').map((e) => e.trim()).filter(Boolean).entries()) {
+  for (const [i, entry] of text
+    .split(';')
+    .map((e) => e.trim())
+    .filter(Boolean)
+    .entries()) {
     const [range, ...pairs] = entry.split(/\s+/);
     const match = /^(\d+(?:\.\d+)?)-(\d+(?:\.\d+)?)$/.exec(range);
     if (!match) return { bands, error: `band ${i + 1}: "${range}" is not a range in MHz like 791-862` };
@@ -51,24 +77,38 @@ export function parseSpecBandsText(text: string): { bands: SpecBandInputDto[]; e
       (band as unknown as Record<string, number>)[field] = Number(value);
     }
     if (band.maxVswr !== undefined && band.maxVswr !== null && band.maxVswr < 1) return { bands, error: `band ${i + 1}: vswr must be at least 1` };
-    if (band.efficiencyPct !== undefined && band.efficiencyPct !== null && (band.efficiencyPct < 0 || band.efficiencyPct > 100)) return { bands, error: `band ${i + 1}: eff must be 0…100 %` };
+    if (band.efficiencyPct !== undefined && band.efficiencyPct !== null && (band.efficiencyPct < 0 || band.efficiencyPct > 100))
+      return { bands, error: `band ${i + 1}: eff must be 0…100 %` };
     bands.push(band);
   }
   return { bands, error: null };
 }
 
 export function formatSpecBands(bands: readonly SpecBandInputDto[]): string {
-  return bands.map((b) => [
-    `${b.fromMhz}-${b.toMhz}`,
-    ...(Object.entries(BAND_KEYS) as [string, keyof SpecBandInputDto][]).flatMap(([key, field]) => (b[field] === null || b[field] === undefined ? [] : [`${key}=${b[field]}`])),
-  ].join(' ')).join('; ');
+  return bands
+    .map((b) =>
+      [
+        `${b.fromMhz}-${b.toMhz}`,
+        ...(Object.entries(BAND_KEYS) as [string, keyof SpecBandInputDto][]).flatMap(([key, field]) =>
+          b[field] === null || b[field] === undefined ? [] : [`${key}=${b[field]}`],
+        ),
+      ].join(' '),
+    )
+    .join('; ');
 }
 
 /** 422 for a file too long to be an import, refused before it is parsed. */
 function tooManyRows(line: number): DomainError {
-  return new DomainError('PART_IMPORT_TOO_MANY_ROWS', `line ${line}: an import may have at most ${PART_IMPORT_MAX_ROWS} rows; split the file, nothing was imported`, 422, {
-    field: 'file', line, limitRows: PART_IMPORT_MAX_ROWS,
-  });
+  return new DomainError(
+    'PART_IMPORT_TOO_MANY_ROWS',
+    `line ${line}: an import may have at most ${PART_IMPORT_MAX_ROWS} rows; split the file, nothing was imported`,
+    422,
+    {
+      field: 'file',
+      line,
+      limitRows: PART_IMPORT_MAX_ROWS,
+    },
+  );
 }
 
 /**
@@ -76,7 +116,8 @@ function tooManyRows(line: number): DomainError {
  * a row with more bands is refused before validation, whose cost grows with every band it is given.
  */
 export const SPEC_BANDS_MAX: number = (() => {
-  const rule = getMetadataStorage().getTargetValidationMetadatas(CreatePartDto, '', true, false)
+  const rule = getMetadataStorage()
+    .getTargetValidationMetadatas(CreatePartDto, '', true, false)
     .find((m) => m.propertyName === 'specBands' && m.name === 'arrayMaxSize');
   if (!rule) throw new Error('CreatePartDto.specBands has no @ArrayMaxSize');
   return Number(rule.constraints[0]);
@@ -94,7 +135,8 @@ function dtoProblems(input: Record<string, unknown>): { field: string; message: 
   return flattenValidationErrors(errors).map(({ field, message }) => {
     // specBands.3.peakGainDbi → column specBands, "band 4: peakGainDbi …", as the band text numbers them.
     const [column, index, property] = field.split('.');
-    if (column === 'specBands' && index !== undefined) return { field: column, message: `band ${Number(index) + 1}: ${property ?? ''} ${message}`.replace(/\s+/g, ' ') };
+    if (column === 'specBands' && index !== undefined)
+      return { field: column, message: `band ${Number(index) + 1}: ${property ?? ''} ${message}`.replace(/\s+/g, ' ') };
     return { field: column, message };
   });
 }
@@ -106,7 +148,12 @@ export function parsePartCsv(bytes: Uint8Array): ParsedImport {
   let records: { record: Record<string, string>; info: { lines: number } }[];
   try {
     records = parse(Buffer.from(bytes), {
-      columns: (header: string[]) => header.map((h) => h.trim()), info: true, skip_empty_lines: true, trim: true, bom: true, relax_column_count: true,
+      columns: (header: string[]) => header.map((h) => h.trim()),
+      info: true,
+      skip_empty_lines: true,
+      trim: true,
+      bom: true,
+      relax_column_count: true,
       ...csvParseLimits(PART_IMPORT_CSV_BOUNDS),
     });
   } catch (error) {
@@ -119,7 +166,8 @@ export function parsePartCsv(bytes: Uint8Array): ParsedImport {
   if (records.length > PART_IMPORT_MAX_ROWS) throw tooManyRows(records[PART_IMPORT_MAX_ROWS].info.lines);
   const header = Object.keys(records[0].record);
   for (const column of header) {
-    if (!(PART_CSV_COLUMNS as readonly string[]).includes(column)) problems.push({ row: 0, line: 1, field: column, message: `unknown column; expected: ${PART_CSV_COLUMNS.join(', ')}` });
+    if (!(PART_CSV_COLUMNS as readonly string[]).includes(column))
+      problems.push({ row: 0, line: 1, field: column, message: `unknown column; expected: ${PART_CSV_COLUMNS.join(', ')}` });
   }
   for (const column of REQUIRED) if (!header.includes(column)) problems.push({ row: 0, line: 1, field: column, message: 'required column is missing' });
   if (problems.length) return { parts, problems };

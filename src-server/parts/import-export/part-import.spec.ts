@@ -2,8 +2,25 @@ import { PART_IMPORT_MAX_ROWS, SPEC_BANDS_MAX, parsePartCsv } from './part-csv';
 
 const HEADER = 'manufacturer,mpn,title,formFactor,connector,polarization,nominalImpedanceOhms,lengthMm,tempMinC,notes,specBands\n';
 const row = (cells: Partial<Record<string, string>>) => {
-  const base: Record<string, string> = { manufacturer: 'Acme', mpn: 'M1', title: 'Chip', formFactor: 'chip', connector: 'SMA', polarization: 'linear', nominalImpedanceOhms: '50', lengthMm: '', tempMinC: '', notes: '', specBands: '791-862 vswr=3' };
-  return HEADER.trim().split(',').map((c) => cells[c] ?? base[c]).join(',') + '\n';
+  const base: Record<string, string> = {
+    manufacturer: 'Acme',
+    mpn: 'M1',
+    title: 'Chip',
+    formFactor: 'chip',
+    connector: 'SMA',
+    polarization: 'linear',
+    nominalImpedanceOhms: '50',
+    lengthMm: '',
+    tempMinC: '',
+    notes: '',
+    specBands: '791-862 vswr=3',
+  };
+  return (
+    HEADER.trim()
+      .split(',')
+      .map((c) => cells[c] ?? base[c])
+      .join(',') + '\n'
+  );
 };
 const fieldsOf = (text: string) => parsePartCsv(Buffer.from(text)).problems.map((p) => `${p.row}:${p.field}`);
 
@@ -16,14 +33,15 @@ describe('parsePartCsv field checks (the same as POST /api/parts)', () => {
 
   it('refuses gains, frequencies and counts out of the DTO ranges, by row and column', () => {
     const manyBands = Array.from({ length: 2000 }, (_, i) => `${i + 1}-${i + 2}`).join('; ');
-    const text = HEADER
-      + row({ mpn: 'A', specBands: '791-862 peak=1e300' })
-      + row({ mpn: 'B', specBands: '791-999999999' })
-      + row({ mpn: 'C', specBands: manyBands })
-      + row({ mpn: 'D', nominalImpedanceOhms: '1e300' })
-      + row({ mpn: 'E', tempMinC: '1e309' })
-      + row({ mpn: 'F', notes: 'x'.repeat(4001) })
-      + row({ mpn: 'G', connector: 'BNC' });
+    const text =
+      HEADER +
+      row({ mpn: 'A', specBands: '791-862 peak=1e300' }) +
+      row({ mpn: 'B', specBands: '791-999999999' }) +
+      row({ mpn: 'C', specBands: manyBands }) +
+      row({ mpn: 'D', nominalImpedanceOhms: '1e300' }) +
+      row({ mpn: 'E', tempMinC: '1e309' }) +
+      row({ mpn: 'F', notes: 'x'.repeat(4001) }) +
+      row({ mpn: 'G', connector: 'BNC' });
     expect(fieldsOf(text)).toEqual(['1:specBands', '2:specBands', '3:specBands', '4:nominalImpedanceOhms', '5:tempMinC', '6:notes', '7:connector']);
     expect(parsePartCsv(Buffer.from(text)).parts).toEqual([]);
   });

@@ -71,7 +71,12 @@ export async function loadCurrentCurves(
     const frequenciesHz = unpackFloat64(row.frequencies_hz);
     if (row.kind === 's11') {
       const referenceOhms = row.reference_ohms ?? 50;
-      curves.s11 = { measurementId: row.id, groundPlane, referenceOhms, curve: reflectionCurveFromGamma(frequenciesHz, unpackFloat64(row.values_a), unpackFloat64(row.values_b), referenceOhms) };
+      curves.s11 = {
+        measurementId: row.id,
+        groundPlane,
+        referenceOhms,
+        curve: reflectionCurveFromGamma(frequenciesHz, unpackFloat64(row.values_a), unpackFloat64(row.values_b), referenceOhms),
+      };
     } else {
       const stored: StoredCurve = { measurementId: row.id, groundPlane, curve: { frequenciesHz, values: unpackFloat64(row.values_a) } };
       if (row.kind === 'efficiency') curves.efficiency = stored;

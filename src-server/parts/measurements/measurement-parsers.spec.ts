@@ -12,7 +12,15 @@ describe(checkStorableCurve.name, () => {
 
   it('refuses a curve with more points than the store takes, naming the first line past the limit', () => {
     const n = MEASUREMENT_MAX_POINTS + 1;
-    const curve = { kind: 'efficiency' as const, sourceFormat: 'CSV', referenceOhms: null, frequenciesHz: Float64Array.from({ length: n }, (_, i) => i + 1), valuesA: new Float64Array(n), valuesB: null, lines: Int32Array.from({ length: n }, (_, i) => i + 2) };
+    const curve = {
+      kind: 'efficiency' as const,
+      sourceFormat: 'CSV',
+      referenceOhms: null,
+      frequenciesHz: Float64Array.from({ length: n }, (_, i) => i + 1),
+      valuesA: new Float64Array(n),
+      valuesB: null,
+      lines: Int32Array.from({ length: n }, (_, i) => i + 2),
+    };
     expect(() => checkStorableCurve(curve)).toThrow(expect.objectContaining({ code: 'MEASUREMENT_TOO_MANY_POINTS', details: { line: n + 1 } }));
   });
 

@@ -70,7 +70,12 @@ export function parseTouchstoneS11(bytes: Uint8Array, fileName: string): ParsedC
 export function checkStorableCurve(curve: ParsedCurve): ParsedCurve {
   const n = curve.frequenciesHz.length;
   if (n < 2) throw new CurveFileError('MEASUREMENT_TOO_FEW_POINTS', `A curve needs at least two points; the file has ${n}`, null);
-  if (n > MEASUREMENT_MAX_POINTS) throw new CurveFileError('MEASUREMENT_TOO_MANY_POINTS', `The file has ${n} points; the limit is ${MEASUREMENT_MAX_POINTS}`, curve.lines[MEASUREMENT_MAX_POINTS] ?? null);
+  if (n > MEASUREMENT_MAX_POINTS)
+    throw new CurveFileError(
+      'MEASUREMENT_TOO_MANY_POINTS',
+      `The file has ${n} points; the limit is ${MEASUREMENT_MAX_POINTS}`,
+      curve.lines[MEASUREMENT_MAX_POINTS] ?? null,
+    );
   let previousHz = 0;
   for (let i = 0; i < n; i++) {
     const line = curve.lines[i];
@@ -81,7 +86,8 @@ export function checkStorableCurve(curve: ParsedCurve): ParsedCurve {
     previousHz = hz;
     const a = curve.valuesA[i];
     const b = curve.valuesB ? curve.valuesB[i] : 0;
-    if (!Number.isFinite(a) || !Number.isFinite(b)) throw new CurveFileError('MEASUREMENT_VALUE_NOT_FINITE', `line ${line}: the value is not a finite number`, line);
+    if (!Number.isFinite(a) || !Number.isFinite(b))
+      throw new CurveFileError('MEASUREMENT_VALUE_NOT_FINITE', `line ${line}: the value is not a finite number`, line);
     if (curve.kind === 's11') {
       const magnitude = Math.sqrt(a * a + b * b);
       if (!(magnitude <= PASSIVE_REFLECTION_LIMIT)) {
@@ -130,7 +136,11 @@ function pickUnit<T extends string>(fromHeader: T | null, fromForm: T | undefine
   }
   const unit = fromHeader ?? fromForm;
   if (!unit) {
-    throw new CurveFileError('CSV_UNIT_MISSING', `line ${line}: the ${column} unit is not in the header; name it there (e.g. "${column} (${allowed[0]})") or choose it in the form`, line);
+    throw new CurveFileError(
+      'CSV_UNIT_MISSING',
+      `line ${line}: the ${column} unit is not in the header; name it there (e.g. "${column} (${allowed[0]})") or choose it in the form`,
+      line,
+    );
   }
   if (!allowed.includes(unit)) {
     throw new CurveFileError('CSV_UNIT_NOT_ALLOWED', `line ${line}: ${unit} is not a ${column} unit here; use ${allowed.join(', ')}`, line);
@@ -142,15 +152,29 @@ function pickUnit<T extends string>(fromHeader: T | null, fromForm: T | undefine
  * Efficiency or gain from CSV: a header row, then frequency and value columns. Units come from the
  * header ("frequency (MHz)", "efficiency (%)") or from the form; every bad row is reported by line.
  */
-export function parseCurveCsv(bytes: Uint8Array, kind: Exclude<MeasurementKind, 's11'>, form: { frequencyUnit?: FrequencyUnit; valueUnit?: ValueUnit } = {}): ParsedCurve {
+export function parseCurveCsv(
+  bytes: Uint8Array,
+  kind: Exclude<MeasurementKind, 's11'>,
+  form: { frequencyUnit?: FrequencyUnit; valueUnit?: ValueUnit } = {},
+): ParsedCurve {
   const lineTooMany = firstLineBeyond(bytes, CURVE_CSV_BOUNDS.maxLines);
   if (lineTooMany !== null) {
-    throw new CurveFileError('CSV_TOO_MANY_LINES', `line ${lineTooMany}: the file has more than ${CURVE_CSV_BOUNDS.maxLines} lines; a curve has at most ${MEASUREMENT_MAX_POINTS} points`, lineTooMany);
+    throw new CurveFileError(
+      'CSV_TOO_MANY_LINES',
+      `line ${lineTooMany}: the file has more than ${CURVE_CSV_BOUNDS.maxLines} lines; a curve has at most ${MEASUREMENT_MAX_POINTS} points`,
+      lineTooMany,
+    );
   }
   let records: { record: string[]; info: { lines: number } }[];
   try {
     records = parse(Buffer.from(bytes), {
-      info: true, relax_column_count: true, skip_empty_lines: true, comment: '#', trim: true, bom: true, ...csvParseLimits(CURVE_CSV_BOUNDS),
+      info: true,
+      relax_column_count: true,
+      skip_empty_lines: true,
+      comment: '#',
+      trim: true,
+      bom: true,
+      ...csvParseLimits(CURVE_CSV_BOUNDS),
     }) as unknown as typeof records;
   } catch (error) {
     const e = error as { message: string; lines?: number };
@@ -159,12 +183,17 @@ export function parseCurveCsv(bytes: Uint8Array, kind: Exclude<MeasurementKind, 
   if (records.length === 0) throw new CurveFileError('CSV_EMPTY', 'The file has no rows', null);
   const [header, ...data] = records;
   if (header.record.length < 2 || !Number.isNaN(Number(header.record[0]))) {
-    throw new CurveFileError('CSV_MISSING_HEADER', `line ${header.info.lines}: the first row must name the columns, e.g. "frequency (MHz),${kind === 'efficiency' ? 'efficiency (%)' : 'gain (dBi)'}"`, header.info.lines);
+    throw new CurveFileError(
+      'CSV_MISSING_HEADER',
+      `line ${header.info.lines}: the first row must name the columns, e.g. "frequency (MHz),${kind === 'efficiency' ? 'efficiency (%)' : 'gain (dBi)'}"`,
+      header.info.lines,
+    );
   }
   const frequencyUnit = pickUnit(frequencyUnitFromHeader(header.record[0]), form.frequencyUnit, 'frequency', FREQUENCY_UNITS, header.info.lines);
   const valueUnit = pickUnit(valueUnitFromHeader(header.record[1]), form.valueUnit, 'value', UNITS_FOR_KIND[kind], header.info.lines);
   if (data.length < 2) throw new CurveFileError('CSV_TOO_FEW_POINTS', `A curve needs at least two data rows; the file has ${data.length}`, null);
-  if (data.length > MEASUREMENT_MAX_POINTS) throw new CurveFileError('CSV_TOO_MANY_POINTS', `The file has ${data.length} rows; the limit is ${MEASUREMENT_MAX_POINTS}`, null);
+  if (data.length > MEASUREMENT_MAX_POINTS)
+    throw new CurveFileError('CSV_TOO_MANY_POINTS', `The file has ${data.length} rows; the limit is ${MEASUREMENT_MAX_POINTS}`, null);
 
   const multiplier = FREQUENCY_UNIT_HZ[frequencyUnit];
   const [low, high, shown] = VALUE_LIMITS[kind];
@@ -187,7 +216,8 @@ export function parseCurveCsv(bytes: Uint8Array, kind: Exclude<MeasurementKind, 
     const hz = frequency * multiplier;
     if (!(hz > 0)) return report('frequency must be positive');
     if (!Number.isFinite(hz)) return report(`frequency ${frequency} ${frequencyUnit} is beyond any representable number of Hz`);
-    if (hz <= previousHz) return report(`frequency ${frequency} ${frequencyUnit} does not increase (the row before is ${previousHz / multiplier} ${frequencyUnit})`);
+    if (hz <= previousHz)
+      return report(`frequency ${frequency} ${frequencyUnit} does not increase (the row before is ${previousHz / multiplier} ${frequencyUnit})`);
     previousHz = hz;
     const value = valueUnit === 'dB' ? efficiencyDbToPercent(raw) : valueUnit === 'ratio' ? raw * 100 : raw;
     if (value < low || value > high) return report(`value ${raw} ${valueUnit} is outside ${low}…${high} ${shown}`);
@@ -197,7 +227,12 @@ export function parseCurveCsv(bytes: Uint8Array, kind: Exclude<MeasurementKind, 
   });
   if (problemCount > 0) {
     const first = problems[0];
-    throw new CurveFileError('CSV_BAD_ROWS', `${problemCount} row${problemCount === 1 ? ' is' : 's are'} invalid; first at line ${first.line}: ${first.message}`, first.line, problems);
+    throw new CurveFileError(
+      'CSV_BAD_ROWS',
+      `${problemCount} row${problemCount === 1 ? ' is' : 's are'} invalid; first at line ${first.line}: ${first.message}`,
+      first.line,
+      problems,
+    );
   }
   return { kind, sourceFormat: `CSV, ${frequencyUnit}, ${valueUnit}`, referenceOhms: null, frequenciesHz, valuesA: values, valuesB: null, lines };
 }

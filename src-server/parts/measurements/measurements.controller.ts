@@ -1,4 +1,16 @@
-import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, StreamableFile, UploadedFile as UploadedFileParam, UseInterceptors } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  Header,
+  HttpCode,
+  Param,
+  Post,
+  StreamableFile,
+  UploadedFile as UploadedFileParam,
+  UseInterceptors,
+} from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ALL_ROLES } from '../../common/roles';
@@ -18,10 +30,33 @@ export class MeasurementsController {
   @Roles('engineer', 'admin')
   @UseInterceptors(LimitedFileUpload(MEASUREMENT_MAX_BYTES, 'MEASUREMENT_FILE_TOO_LARGE', 'a measurement file'))
   @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', required: ['file', 'kind'], properties: { file: { type: 'string', format: 'binary' }, kind: { type: 'string', enum: ['s11', 'efficiency', 'peak-gain', 'average-gain'] }, groundLengthMm: { type: 'number' }, groundWidthMm: { type: 'number' }, conditions: { type: 'string' }, frequencyUnit: { type: 'string' }, valueUnit: { type: 'string' }, dryRun: { type: 'boolean' } } } })
-  @ApiOperation({ summary: 'Upload a curve: s11 as Touchstone, the others as CSV; at most 16 MiB (413), text only (415); 422 { code, message, line } for a bad file, and nothing is stored' })
+  @ApiBody({
+    schema: {
+      type: 'object',
+      required: ['file', 'kind'],
+      properties: {
+        file: { type: 'string', format: 'binary' },
+        kind: { type: 'string', enum: ['s11', 'efficiency', 'peak-gain', 'average-gain'] },
+        groundLengthMm: { type: 'number' },
+        groundWidthMm: { type: 'number' },
+        conditions: { type: 'string' },
+        frequencyUnit: { type: 'string' },
+        valueUnit: { type: 'string' },
+        dryRun: { type: 'boolean' },
+      },
+    },
+  })
+  @ApiOperation({
+    summary:
+      'Upload a curve: s11 as Touchstone, the others as CSV; at most 16 MiB (413), text only (415); 422 { code, message, line } for a bad file, and nothing is stored',
+  })
   @ApiOkResponse({ type: UploadMeasurementResultDto })
-  upload(@Param('id', ParseIdPipe) id: number, @UploadedFileParam() file: UploadedFile | undefined, @Body() body: UploadMeasurementDto, @CurrentUser() user: AuthUser): Promise<UploadMeasurementResultDto> {
+  upload(
+    @Param('id', ParseIdPipe) id: number,
+    @UploadedFileParam() file: UploadedFile | undefined,
+    @Body() body: UploadMeasurementDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<UploadMeasurementResultDto> {
     return this.measurements.upload(id, file, body, user);
   }
 

@@ -19,7 +19,11 @@ const draft = { id: 7, createdById: 2, reviewState: 'draft' };
 describe(MeasurementsService.name, () => {
   it('deletes the stored object again when the database transaction fails, so nothing is half-stored', async () => {
     const { puts, deletes, storage, ledger } = fakeStorage();
-    const dataSource = { transaction: async () => { throw new Error('deadlock'); } } as unknown as DataSource;
+    const dataSource = {
+      transaction: async () => {
+        throw new Error('deadlock');
+      },
+    } as unknown as DataSource;
     const service = new MeasurementsService(dataSource, storage, ledger, {} as PartsService, {} as AuditService);
     const file = { originalname: 'a.s1p', mimetype: 'text/plain', size: 10, buffer: Buffer.from('# MHz S RI R 50\n800 0.1 0\n900 0.2 0\n') };
     const curve = service.parse(file, { kind: 's11' });

@@ -36,7 +36,11 @@ export const MEASUREMENT_MAX_BYTES = 16 * 1024 * 1024;
 export function safeFileName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? 'file';
   // Runs of dots collapse to one: objectKey refuses ".." anywhere, and "rev..2.pdf" must still upload.
-  const cleaned = base.replace(/[^A-Za-z0-9._-]+/g, '_').replace(/\.{2,}/g, '.').replace(/^[._-]+/, '').slice(0, 80);
+  const cleaned = base
+    .replace(/[^\w.-]+/g, '_')
+    .replace(/\.{2,}/g, '.')
+    .replace(/^[._-]+/, '')
+    .slice(0, 80);
   return cleaned || 'file';
 }
 
@@ -51,7 +55,9 @@ export function sha256Hex(bytes: Buffer): string {
 
 export function requireFile(file: UploadedFile | undefined): UploadedFile {
   if (!file || file.size === 0) {
-    throw new DomainError('VALIDATION_FAILED', 'file: attach a non-empty file in the multipart field "file"', 400, { fields: [{ field: 'file', message: 'is required and must not be empty' }] });
+    throw new DomainError('VALIDATION_FAILED', 'file: attach a non-empty file in the multipart field "file"', 400, {
+      fields: [{ field: 'file', message: 'is required and must not be empty' }],
+    });
   }
   return file;
 }
@@ -63,9 +69,14 @@ function previewOf(curve: ParsedCurve): CurvePreviewDto {
   for (let i = 0; i < n; i += step) picks.push(i);
   if (picks[picks.length - 1] !== n - 1) picks.push(n - 1);
   let values: ArrayLike<number> = curve.valuesA;
-  if (curve.kind === 's11') values = returnLossDbSeries(reflectionCurveFromGamma(curve.frequenciesHz, curve.valuesA, curve.valuesB!, curve.referenceOhms ?? 50));
+  if (curve.kind === 's11')
+    values = returnLossDbSeries(reflectionCurveFromGamma(curve.frequenciesHz, curve.valuesA, curve.valuesB!, curve.referenceOhms ?? 50));
   return {
-    kind: curve.kind, sourceFormat: curve.sourceFormat, pointCount: n, fromMhz: curve.frequenciesHz[0] / 1e6, toMhz: curve.frequenciesHz[n - 1] / 1e6,
+    kind: curve.kind,
+    sourceFormat: curve.sourceFormat,
+    pointCount: n,
+    fromMhz: curve.frequenciesHz[0] / 1e6,
+    toMhz: curve.frequenciesHz[n - 1] / 1e6,
     referenceOhms: curve.referenceOhms,
     valueLabel: curve.kind === 's11' ? 'Return loss (dB)' : curve.kind === 'efficiency' ? 'Efficiency (%)' : 'Gain (dBi)',
     frequenciesMhz: picks.map((i) => curve.frequenciesHz[i] / 1e6),
@@ -86,14 +97,22 @@ export class MeasurementsService {
   /** The one validation of a measurement file: the dry run ("Check file"), the upload and the demo seeder all call it. */
   parse(file: UploadedFile, input: UploadMeasurementDto): ParsedCurve {
     if (file.size > MEASUREMENT_MAX_BYTES) {
-      throw new DomainError('MEASUREMENT_FILE_TOO_LARGE', `file: a measurement file may be at most ${MEASUREMENT_MAX_BYTES / 1048576} MiB; nothing was stored`, 413, { field: 'file', limitBytes: MEASUREMENT_MAX_BYTES });
+      throw new DomainError(
+        'MEASUREMENT_FILE_TOO_LARGE',
+        `file: a measurement file may be at most ${MEASUREMENT_MAX_BYTES / 1048576} MiB; nothing was stored`,
+        413,
+        { field: 'file', limitBytes: MEASUREMENT_MAX_BYTES },
+      );
     }
     if (looksBinary(file.buffer)) {
-      throw new DomainError('MEASUREMENT_TYPE_NOT_ALLOWED', `file: ${file.originalname} is not a text file; curves are Touchstone (s11) or CSV text`, 415, { field: 'file' });
+      throw new DomainError('MEASUREMENT_TYPE_NOT_ALLOWED', `file: ${file.originalname} is not a text file; curves are Touchstone (s11) or CSV text`, 415, {
+        field: 'file',
+      });
     }
-    const curve = input.kind === 's11'
-      ? parseTouchstoneS11(file.buffer, file.originalname)
-      : parseCurveCsv(file.buffer, input.kind, { frequencyUnit: input.frequencyUnit, valueUnit: input.valueUnit });
+    const curve =
+      input.kind === 's11'
+        ? parseTouchstoneS11(file.buffer, file.originalname)
+        : parseCurveCsv(file.buffer, input.kind, { frequencyUnit: input.frequencyUnit, valueUnit: input.valueUnit });
     return checkStorableCurve(curve);
   }
 
@@ -114,7 +133,13 @@ export class MeasurementsService {
   }
 
   /** Also used by the demo seeder, so demo curves take the same path as uploads. */
-  async store(partId: number, file: UploadedFile, input: Omit<UploadMeasurementDto, 'dryRun'>, curve: ParsedCurve, actor: AuthUser | null): Promise<Measurement> {
+  async store(
+    partId: number,
+    file: UploadedFile,
+    input: Omit<UploadMeasurementDto, 'dryRun'>,
+    curve: ParsedCurve,
+    actor: AuthUser | null,
+  ): Promise<Measurement> {
     const key = objectKey('parts', partId, 'measurements', `${randomUUID()}-${safeFileName(file.originalname)}`);
     const contentType = measurementContentType(curve.kind);
     await this.ledger.putPending(key, file.buffer, contentType);
@@ -124,19 +149,42 @@ export class MeasurementsService {
         if (actor) assertCanEdit(actor, locked, 'upload data to');
         const n = curve.frequenciesHz.length;
         const inserted = await manager.insert(Measurement, {
-          partId, kind: curve.kind, groundLengthMm: input.groundLengthMm ?? null, groundWidthMm: input.groundWidthMm ?? null, conditions: input.conditions ?? null,
-          fileName: storedFileName(file.originalname), contentType, objectKey: key, sizeBytes: file.size,
-          sha256: sha256Hex(file.buffer), sourceFormat: curve.sourceFormat, referenceOhms: curve.referenceOhms, pointCount: n,
-          fromHz: curve.frequenciesHz[0], toHz: curve.frequenciesHz[n - 1],
-          frequenciesHz: packFloat64(curve.frequenciesHz), valuesA: packFloat64(curve.valuesA), valuesB: curve.valuesB ? packFloat64(curve.valuesB) : null,
+          partId,
+          kind: curve.kind,
+          groundLengthMm: input.groundLengthMm ?? null,
+          groundWidthMm: input.groundWidthMm ?? null,
+          conditions: input.conditions ?? null,
+          fileName: storedFileName(file.originalname),
+          contentType,
+          objectKey: key,
+          sizeBytes: file.size,
+          sha256: sha256Hex(file.buffer),
+          sourceFormat: curve.sourceFormat,
+          referenceOhms: curve.referenceOhms,
+          pointCount: n,
+          fromHz: curve.frequenciesHz[0],
+          toHz: curve.frequenciesHz[n - 1],
+          frequenciesHz: packFloat64(curve.frequenciesHz),
+          valuesA: packFloat64(curve.valuesA),
+          valuesB: curve.valuesB ? packFloat64(curve.valuesB) : null,
           uploadedById: actor?.id ?? null,
         });
         const measurementId: number = inserted.identifiers[0].id;
         await this.ledger.settle(manager, key);
         await touchPart(manager, partId);
         await this.audit.record(manager, {
-          entityType: 'part', entityId: partId, action: 'measurement-uploaded', userId: actor?.id ?? null,
-          changes: { measurementId, kind: curve.kind, fileName: file.originalname, points: n, groundLengthMm: input.groundLengthMm ?? null, groundWidthMm: input.groundWidthMm ?? null },
+          entityType: 'part',
+          entityId: partId,
+          action: 'measurement-uploaded',
+          userId: actor?.id ?? null,
+          changes: {
+            measurementId,
+            kind: curve.kind,
+            fileName: file.originalname,
+            points: n,
+            groundLengthMm: input.groundLengthMm ?? null,
+            groundWidthMm: input.groundWidthMm ?? null,
+          },
         });
         return measurementId;
       });
@@ -148,7 +196,9 @@ export class MeasurementsService {
   }
 
   async points(partId: number, measurementId: number): Promise<MeasurementPointsDto> {
-    const row = await this.dataSource.getRepository(Measurement).createQueryBuilder('m')
+    const row = await this.dataSource
+      .getRepository(Measurement)
+      .createQueryBuilder('m')
       .addSelect(['m.frequenciesHz', 'm.valuesA', 'm.valuesB'])
       .where('m.id = :measurementId AND m.part_id = :partId', { measurementId, partId })
       .getOne();
@@ -158,8 +208,12 @@ export class MeasurementsService {
     if (row.kind !== 's11') return { id: row.id, kind: row.kind, frequenciesHz: [...frequenciesHz], values: [...a] };
     const curve = reflectionCurveFromGamma(frequenciesHz, a, unpackFloat64(row.valuesB), row.referenceOhms ?? 50);
     return {
-      id: row.id, kind: row.kind, frequenciesHz: [...frequenciesHz], values: [...curve.gammaMagnitude],
-      vswr: [...vswrSeries(curve)].map((v) => (Number.isFinite(v) ? v : 1e6)), returnLossDb: [...returnLossDbSeries(curve)],
+      id: row.id,
+      kind: row.kind,
+      frequenciesHz: [...frequenciesHz],
+      values: [...curve.gammaMagnitude],
+      vswr: [...vswrSeries(curve)].map((v) => (Number.isFinite(v) ? v : 1e6)),
+      returnLossDb: [...returnLossDbSeries(curve)],
     };
   }
 
@@ -178,7 +232,13 @@ export class MeasurementsService {
       await manager.delete(Measurement, { id: measurementId });
       await this.ledger.release(manager, row.objectKey);
       await touchPart(manager, partId);
-      await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'measurement-deleted', userId: actor.id, changes: { measurementId, kind: row.kind, fileName: row.fileName } });
+      await this.audit.record(manager, {
+        entityType: 'part',
+        entityId: partId,
+        action: 'measurement-deleted',
+        userId: actor.id,
+        changes: { measurementId, kind: row.kind, fileName: row.fileName },
+      });
       return row.objectKey;
     });
     // The row is gone, so the object is unreachable; a crash before this leaves a note the sweeper finishes.

@@ -65,7 +65,10 @@ export class ReviewService {
       await manager.update(Part, { id }, changes);
       await touchPart(manager, id);
       await this.audit.record(manager, {
-        entityType: 'part', entityId: id, action: rule.verb, userId: actor.id,
+        entityType: 'part',
+        entityId: id,
+        action: rule.verb,
+        userId: actor.id,
         changes: { reviewState: [part.reviewState, rule.to], ...(comment ? { comment } : {}) },
       });
       const manufacturer = (await manager.findOneByOrFail(Manufacturer, { id: part.manufacturerId })).name;
@@ -87,7 +90,8 @@ export class ReviewService {
         return {
           to: submitter.email,
           subject: `Part ${verdict}: ${label}`,
-          text: `Hello ${submitter.name},\n\n${actor.name} ${verdict} ${label} (${part.title}).\n` +
+          text:
+            `Hello ${submitter.name},\n\n${actor.name} ${verdict} ${label} (${part.title}).\n` +
             (comment ? `\nComment:\n${comment}\n` : '') +
             (action === 'reject' ? '\nThe part is back in draft; edit it and submit it again.\n' : '') +
             `\n${link}\n`,
@@ -109,10 +113,22 @@ export class ReviewService {
     });
     if (parts.length === 0) return [];
     const ids = parts.map((p) => p.id);
-    const kinds: { part_id: number; kind: string }[] = await this.dataSource.query('SELECT DISTINCT part_id, kind FROM part_measurements WHERE part_id IN (?)', [ids]);
-    const docs: { part_id: number; n: number | string }[] = await this.dataSource.query('SELECT part_id, COUNT(*) AS n FROM part_documents WHERE part_id IN (?) GROUP BY part_id', [ids]);
+    const kinds: { part_id: number; kind: string }[] = await this.dataSource.query(
+      'SELECT DISTINCT part_id, kind FROM part_measurements WHERE part_id IN (?)',
+      [ids],
+    );
+    const docs: { part_id: number; n: number | string }[] = await this.dataSource.query(
+      'SELECT part_id, COUNT(*) AS n FROM part_documents WHERE part_id IN (?) GROUP BY part_id',
+      [ids],
+    );
     return parts.map((p) => ({
-      id: p.id, manufacturer: p.manufacturer.name, mpn: p.mpn, title: p.title, version: p.version, submittedBy: userRef(p.submittedBy), submittedAt: iso(p.submittedAt),
+      id: p.id,
+      manufacturer: p.manufacturer.name,
+      mpn: p.mpn,
+      title: p.title,
+      version: p.version,
+      submittedBy: userRef(p.submittedBy),
+      submittedAt: iso(p.submittedAt),
       measuredKinds: kinds.filter((k) => k.part_id === p.id).map((k) => k.kind) as ReviewQueueItemDto['measuredKinds'],
       documentCount: Number(docs.find((d) => d.part_id === p.id)?.n ?? 0),
     }));

@@ -23,7 +23,12 @@ export class SourcingController {
   @Roles('procurement', 'admin')
   @ApiOperation({ summary: 'Edit an offer; 409 OFFER_VERSION_CONFLICT on a stale version (procurement, admin)' })
   @ApiOkResponse({ type: OfferDto })
-  updateOffer(@Param('id', ParseIdPipe) id: number, @Param('offerId', ParseIdPipe) offerId: number, @Body() body: UpdateOfferDto, @CurrentUser() user: AuthUser): Promise<OfferDto> {
+  updateOffer(
+    @Param('id', ParseIdPipe) id: number,
+    @Param('offerId', ParseIdPipe) offerId: number,
+    @Body() body: UpdateOfferDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<OfferDto> {
     return this.sourcing.updateOffer(id, offerId, body, user);
   }
 
@@ -39,7 +44,12 @@ export class SourcingController {
   @Roles('procurement', 'admin')
   @HttpCode(204)
   @ApiOperation({ summary: 'Link two parts as alternates or second sources, both ways (procurement, admin)' })
-  link(@Param('id', ParseIdPipe) id: number, @Param('otherId', ParseIdPipe) otherId: number, @Body() body: AlternateInputDto, @CurrentUser() user: AuthUser): Promise<void> {
+  link(
+    @Param('id', ParseIdPipe) id: number,
+    @Param('otherId', ParseIdPipe) otherId: number,
+    @Body() body: AlternateInputDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<void> {
     return this.sourcing.link(id, otherId, body, user);
   }
 

@@ -14,7 +14,9 @@ import type { OfferDto } from '../dto/part-response.dto';
 /** Sorted by quantity, duplicates refused, the lowest price kept as a decimal string for the price filter. */
 export function normalisePriceBreaks(breaks: PriceBreakInputDto[]): { priceBreaks: PriceBreak[]; minUnitPrice: string } {
   const sorted = [...breaks].sort((a, b) => a.quantity - b.quantity);
-  const problems = sorted.flatMap((b, i) => (i > 0 && b.quantity === sorted[i - 1].quantity ? [{ field: 'priceBreaks', message: `quantity ${b.quantity} appears twice` }] : []));
+  const problems = sorted.flatMap((b, i) =>
+    i > 0 && b.quantity === sorted[i - 1].quantity ? [{ field: 'priceBreaks', message: `quantity ${b.quantity} appears twice` }] : [],
+  );
   if (problems.length) throw new ValidationFailedError(problems);
   // Compare as scaled integers (ten-thousandths) so money never goes through binary fractions.
   const scaled = (price: string) => {
@@ -38,7 +40,16 @@ export class SourcingService {
   async createOfferIn(manager: EntityManager, partId: number, input: CreateOfferDto, actorId: number | null): Promise<number> {
     await this.parts.lockPart(manager, partId);
     const { priceBreaks, minUnitPrice } = normalisePriceBreaks(input.priceBreaks);
-    const fields = { supplier: input.supplier.trim(), sku: input.sku ?? null, currency: input.currency, priceBreaks, minUnitPrice, moq: input.moq ?? null, leadTimeDays: input.leadTimeDays ?? null, lastCheckedOn: input.lastCheckedOn ?? null };
+    const fields = {
+      supplier: input.supplier.trim(),
+      sku: input.sku ?? null,
+      currency: input.currency,
+      priceBreaks,
+      minUnitPrice,
+      moq: input.moq ?? null,
+      leadTimeDays: input.leadTimeDays ?? null,
+      lastCheckedOn: input.lastCheckedOn ?? null,
+    };
     const inserted = await manager.insert(PartOffer, { partId, ...fields, version: 1 });
     const offerId: number = inserted.identifiers[0].id;
     await touchPart(manager, partId);
@@ -61,7 +72,8 @@ export class SourcingService {
       for (const field of ['supplier', 'sku', 'currency', 'moq', 'leadTimeDays', 'lastCheckedOn'] as const) {
         if (input[field] !== undefined) (changes as Record<string, unknown>)[field] = input[field];
       }
-      if (changes.supplier === null || changes.currency === null) throw new ValidationFailedError([{ field: changes.supplier === null ? 'supplier' : 'currency', message: 'cannot be cleared' }]);
+      if (changes.supplier === null || changes.currency === null)
+        throw new ValidationFailedError([{ field: changes.supplier === null ? 'supplier' : 'currency', message: 'cannot be cleared' }]);
       if (input.priceBreaks) Object.assign(changes, normalisePriceBreaks(input.priceBreaks));
       const diff = diffFields(offer, changes, ['supplier', 'sku', 'currency', 'priceBreaks', 'moq', 'leadTimeDays', 'lastCheckedOn']);
       await manager.update(PartOffer, { id: offerId }, { ...changes, version: offer.version + 1 });
@@ -78,7 +90,13 @@ export class SourcingService {
       if (!offer) throw new NotFoundError('offer', offerId);
       await manager.delete(PartOffer, { id: offerId });
       await touchPart(manager, partId);
-      await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'offer-removed', userId: actor.id, changes: { offerId, supplier: offer.supplier } });
+      await this.audit.record(manager, {
+        entityType: 'part',
+        entityId: partId,
+        action: 'offer-removed',
+        userId: actor.id,
+        changes: { offerId, supplier: offer.supplier },
+      });
     });
   }
 
@@ -88,13 +106,29 @@ export class SourcingService {
     // Lock in id order so two opposite links cannot deadlock.
     for (const id of [partId, otherId].sort((a, b) => a - b)) await this.parts.lockPart(manager, id);
     const note = input.note?.trim() || null;
-    await manager.upsert(PartAlternate, [
-      { partId, alternatePartId: otherId, kind: input.kind, note },
-      { partId: otherId, alternatePartId: partId, kind: input.kind, note },
-    ], ['partId', 'alternatePartId']);
+    await manager.upsert(
+      PartAlternate,
+      [
+        { partId, alternatePartId: otherId, kind: input.kind, note },
+        { partId: otherId, alternatePartId: partId, kind: input.kind, note },
+      ],
+      ['partId', 'alternatePartId'],
+    );
     for (const id of [partId, otherId]) await touchPart(manager, id);
-    await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'alternate-linked', userId: actorId, changes: { alternatePartId: otherId, kind: input.kind, note } });
-    await this.audit.record(manager, { entityType: 'part', entityId: otherId, action: 'alternate-linked', userId: actorId, changes: { alternatePartId: partId, kind: input.kind, note } });
+    await this.audit.record(manager, {
+      entityType: 'part',
+      entityId: partId,
+      action: 'alternate-linked',
+      userId: actorId,
+      changes: { alternatePartId: otherId, kind: input.kind, note },
+    });
+    await this.audit.record(manager, {
+      entityType: 'part',
+      entityId: otherId,
+      action: 'alternate-linked',
+      userId: actorId,
+      changes: { alternatePartId: partId, kind: input.kind, note },
+    });
   }
 
   async link(partId: number, otherId: number, input: AlternateInputDto, actor: AuthUser): Promise<void> {
@@ -108,8 +142,20 @@ export class SourcingService {
       await manager.delete(PartAlternate, { partId: otherId, alternatePartId: partId });
       if (!forward.affected) throw new NotFoundError('alternate link', `${partId}-${otherId}`);
       for (const id of [partId, otherId]) await touchPart(manager, id);
-      await this.audit.record(manager, { entityType: 'part', entityId: partId, action: 'alternate-unlinked', userId: actor.id, changes: { alternatePartId: otherId } });
-      await this.audit.record(manager, { entityType: 'part', entityId: otherId, action: 'alternate-unlinked', userId: actor.id, changes: { alternatePartId: partId } });
+      await this.audit.record(manager, {
+        entityType: 'part',
+        entityId: partId,
+        action: 'alternate-unlinked',
+        userId: actor.id,
+        changes: { alternatePartId: otherId },
+      });
+      await this.audit.record(manager, {
+        entityType: 'part',
+        entityId: otherId,
+        action: 'alternate-unlinked',
+        userId: actor.id,
+        changes: { alternatePartId: partId },
+      });
     });
   }
 }

@@ -60,7 +60,11 @@ export class ProductSummaryDto extends OmitType(CreateProductDto, ['notes'] as c
   @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology', isArray: true, description: 'Technologies of its radios' }) technologies: Technology[];
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
-  @ApiProperty({ type: PersonRefDto, nullable: true, description: 'Who created it; null when unknown (seeded or older products). The creator and admins may delete it.' })
+  @ApiProperty({
+    type: PersonRefDto,
+    nullable: true,
+    description: 'Who created it; null when unknown (seeded or older products). The creator and admins may delete it.',
+  })
   createdBy: PersonRefDto | null;
   @ApiProperty({ type: String, nullable: true, description: 'Set when the product was deleted; an admin can restore it' }) deletedAt: string | null;
   @ApiProperty({ type: PersonRefDto, nullable: true }) deletedBy: PersonRefDto | null;

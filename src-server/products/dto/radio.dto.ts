@@ -10,7 +10,13 @@ export class RadioBandInputDto {
   @IntField({ min: 1, description: 'A band id from /api/bands' })
   bandId: number;
 
-  @NumberField({ optional: true, nullable: true, min: -20, max: 20, description: "The module's certified maximum antenna gain in this band (dBi); empty for receive-only radios" })
+  @NumberField({
+    optional: true,
+    nullable: true,
+    min: -20,
+    max: 20,
+    description: "The module's certified maximum antenna gain in this band (dBi); empty for receive-only radios",
+  })
   certifiedMaxGainDbi?: number | null;
 }
 
@@ -24,7 +30,13 @@ export class CreateRadioDto {
   @StringField({ maxLength: 160, example: 'Halvorn HM-410 (invented)' })
   module: string;
 
-  @NumberField({ optional: true, nullable: true, min: -40, max: 36, description: 'Conducted transmit power (dBm); must be empty for receive-only radios (GNSS)' })
+  @NumberField({
+    optional: true,
+    nullable: true,
+    min: -40,
+    max: 36,
+    description: 'Conducted transmit power (dBm); must be empty for receive-only radios (GNSS)',
+  })
   transmitPowerDbm?: number | null;
 
   @EnumField(POLARIZATIONS, { enumName: 'RadioPolarization' })

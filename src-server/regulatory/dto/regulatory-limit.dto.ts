@@ -28,7 +28,13 @@ export class CreateRegulatoryLimitDto {
   @NumberField({ optional: true, nullable: true, min: -10, max: 40, description: 'conducted-gain-rule: gain above which power is reduced' })
   gainThresholdDbi?: number | null;
 
-  @NumberField({ optional: true, nullable: true, min: 0, max: 10, description: 'conducted-gain-rule: dB of power reduction per dB of gain above the threshold' })
+  @NumberField({
+    optional: true,
+    nullable: true,
+    min: 0,
+    max: 10,
+    description: 'conducted-gain-rule: dB of power reduction per dB of gain above the threshold',
+  })
   reductionDbPerDb?: number | null;
 
   @StringField({ optional: true, nullable: true, maxLength: 600 })

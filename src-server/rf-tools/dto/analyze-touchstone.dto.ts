@@ -12,7 +12,11 @@ export class AnalyzeTouchstoneDto {
   @IntField({ optional: true, min: 1, max: 2, description: 'Port whose reflection (S11 or S22) is analysed', example: 1 })
   port?: number;
 
-  @EnumField(MATCH_CRITERIA, { enumName: 'MatchCriterion', optional: true, description: '"vswr" uses vswrMax; "return-loss-10db" is |S11| ≤ −10 dB (VSWR ≈ 1.92)' })
+  @EnumField(MATCH_CRITERIA, {
+    enumName: 'MatchCriterion',
+    optional: true,
+    description: '"vswr" uses vswrMax; "return-loss-10db" is |S11| ≤ −10 dB (VSWR ≈ 1.92)',
+  })
   criterion?: MatchCriterionName;
 }
 
@@ -56,7 +60,9 @@ export class TouchstoneAnalysisDto {
   @ApiProperty({ description: 'The criterion as a minimum return loss, dB' }) thresholdReturnLossDb: number;
   @ApiProperty({ type: [FrequencyRangeDto], description: 'Ranges meeting the criterion, computed on every file point with interpolated edges' })
   matchedRanges: FrequencyRangeDto[];
-  @ApiProperty({ description: 'How many ranges meet the criterion; matchedRanges holds the first 100 of them (a noisy file can cross the limit at every point)' })
+  @ApiProperty({
+    description: 'How many ranges meet the criterion; matchedRanges holds the first 100 of them (a noisy file can cross the limit at every point)',
+  })
   matchedRangeCount: number;
   @ApiProperty({ type: MatchPointDto, description: 'The file point with the lowest |Γ|' }) bestMatch: MatchPointDto;
   @ApiPropertyOptional({ description: 'True when the curve below is resampled (files with more points than curve holds)' }) resampled: boolean;

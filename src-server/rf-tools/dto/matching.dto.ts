@@ -78,7 +78,8 @@ export class MatchingSolutionDto {
   @ApiProperty({ enum: ['shunt-at-load', 'series-at-load'] }) topology: 'shunt-at-load' | 'series-at-load';
   @ApiProperty({ type: NetworkDto }) exact: NetworkDto;
   @ApiProperty({ type: NetworkDto, description: 'Every L and C replaced by its nearest preferred value' }) snapped: NetworkDto;
-  @ApiProperty({ type: Number, nullable: true, description: 'Return loss of the snapped network at the design frequency, dB' }) snappedReturnLossDb: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Return loss of the snapped network at the design frequency, dB' }) snappedReturnLossDb:
+    number | null;
 }
 
 export class MatchingResponseDto {

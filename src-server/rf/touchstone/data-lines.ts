@@ -131,7 +131,11 @@ export function scanNumbers(bytes: Uint8Array, start: number, out: LineNumbers, 
       if (negative) value = -value;
     } else {
       if (i - tokenStart > MAX_NUMBER_CHARACTERS) {
-        throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `a number of ${i - tokenStart} characters is too long (at most ${MAX_NUMBER_CHARACTERS})`);
+        throw new TouchstoneError(
+          'TOUCHSTONE_BAD_NUMBER',
+          lineNumber,
+          `a number of ${i - tokenStart} characters is too long (at most ${MAX_NUMBER_CHARACTERS})`,
+        );
       }
       value = Number(latin1(bytes, tokenStart, i));
     }

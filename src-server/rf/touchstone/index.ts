@@ -3,7 +3,16 @@ export { TouchstoneError, type TouchstoneErrorCode, type TouchstoneErrorKind } f
 export { sParameter } from './network';
 export { portsFromFileName, readTouchstone } from './reader';
 export {
-  type ComplexSeries, type DataFormat, type FrequencyUnit, type MatrixFormat, type NetworkParameter, type TouchstoneNetwork,
-  type TouchstoneReadOptions, type TwoPortDataOrder,
-  FREQUENCY_UNIT_HZ, TOUCHSTONE_MAX_BYTES, TOUCHSTONE_MAX_LINE_BYTES, TOUCHSTONE_MAX_POINTS,
+  type ComplexSeries,
+  type DataFormat,
+  type FrequencyUnit,
+  type MatrixFormat,
+  type NetworkParameter,
+  type TouchstoneNetwork,
+  type TouchstoneReadOptions,
+  type TwoPortDataOrder,
+  FREQUENCY_UNIT_HZ,
+  TOUCHSTONE_MAX_BYTES,
+  TOUCHSTONE_MAX_LINE_BYTES,
+  TOUCHSTONE_MAX_POINTS,
 } from './types';

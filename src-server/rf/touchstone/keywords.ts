@@ -81,7 +81,7 @@ export function readVersionLine(state: ReaderState, text: string, lineNumber: nu
 /** Resistances of [Reference], which may continue over the following lines. */
 export function readReferenceValues(state: ReaderState, text: string, lineNumber: number): void {
   for (const token of text.split(/\s+/).filter((t) => t.length > 0)) {
-    const ohms = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(token) ? Number(token) : NaN;
+    const ohms = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i.test(token) ? Number(token) : NaN;
     if (!(ohms > 0)) throw new TouchstoneError('TOUCHSTONE_BAD_KEYWORD', lineNumber, `[Reference] needs positive resistances in ohms, found '${token}'`);
     if (state.referencePending === 0) throw new TouchstoneError('TOUCHSTONE_BAD_KEYWORD', lineNumber, `[Reference] has more values than ports`);
     state.referenceOhms!.push(ohms);
@@ -120,7 +120,8 @@ export function readKeyword(reader: KeywordReader, text: string, lineNumber: num
     case 'two-port data order': {
       headerOnly();
       const order = keyword.argument.toUpperCase();
-      if (order !== '12_21' && order !== '21_12') throw new TouchstoneError('TOUCHSTONE_BAD_KEYWORD', lineNumber, `[Two-Port Data Order] must be 12_21 or 21_12, found '${keyword.argument}'`);
+      if (order !== '12_21' && order !== '21_12')
+        throw new TouchstoneError('TOUCHSTONE_BAD_KEYWORD', lineNumber, `[Two-Port Data Order] must be 12_21 or 21_12, found '${keyword.argument}'`);
       state.twoPortDataOrder = order;
       return;
     }
@@ -160,7 +161,8 @@ export function readKeyword(reader: KeywordReader, text: string, lineNumber: num
       if (state.ports === 2 && state.twoPortDataOrder === null) {
         throw new TouchstoneError('TOUCHSTONE_MISSING_KEYWORD', lineNumber, `[Two-Port Data Order] is required for a 2-port file`);
       }
-      if (state.frequencyCount === null) throw new TouchstoneError('TOUCHSTONE_MISSING_KEYWORD', lineNumber, `[Number of Frequencies] is required before [Network Data]`);
+      if (state.frequencyCount === null)
+        throw new TouchstoneError('TOUCHSTONE_MISSING_KEYWORD', lineNumber, `[Number of Frequencies] is required before [Network Data]`);
       reader.startNetworkData(lineNumber, state.ports);
       state.section = 'network';
       return;
@@ -181,7 +183,11 @@ export function readKeyword(reader: KeywordReader, text: string, lineNumber: num
         );
       }
       if (state.noiseFrequencyCount !== null && state.noisePointCount !== state.noiseFrequencyCount) {
-        throw new TouchstoneError('TOUCHSTONE_NOISE_COUNT_MISMATCH', lineNumber, `[Number of Noise Frequencies] says ${state.noiseFrequencyCount} but [Noise Data] holds ${state.noisePointCount}`);
+        throw new TouchstoneError(
+          'TOUCHSTONE_NOISE_COUNT_MISMATCH',
+          lineNumber,
+          `[Number of Noise Frequencies] says ${state.noiseFrequencyCount} but [Noise Data] holds ${state.noisePointCount}`,
+        );
       }
       state.section = 'ended';
       return;

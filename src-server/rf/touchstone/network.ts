@@ -23,7 +23,10 @@ class PointStore {
   re: Float64Array[];
   im: Float64Array[];
 
-  constructor(readonly elements: number, initialCapacity: number) {
+  constructor(
+    readonly elements: number,
+    initialCapacity: number,
+  ) {
     this.capacity = Math.max(16, initialCapacity);
     this.frequenciesHz = new Float64Array(this.capacity);
     this.lines = new Int32Array(this.capacity);
@@ -174,11 +177,17 @@ export class NetworkBuilder {
       throw new TouchstoneError(
         'TOUCHSTONE_FREQUENCY_NOT_INCREASING',
         lineNumber,
-        frequencyHz < 0 ? `frequency ${values[0]} is negative` : `frequency ${values[0]} does not increase (the previous point was ${this.lastFrequencyHz / frequencyMultiplier})`,
+        frequencyHz < 0
+          ? `frequency ${values[0]} is negative`
+          : `frequency ${values[0]} does not increase (the previous point was ${this.lastFrequencyHz / frequencyMultiplier})`,
       );
     }
     if (!Number.isFinite(frequencyHz)) {
-      throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `frequency ${values[0]} ${this.shape.frequencyUnit} is beyond any representable number of Hz`);
+      throw new TouchstoneError(
+        'TOUCHSTONE_BAD_NUMBER',
+        lineNumber,
+        `frequency ${values[0]} ${this.shape.frequencyUnit} is beyond any representable number of Hz`,
+      );
     }
     if (s.length >= this.maxPoints) {
       throw new TouchstoneError('TOUCHSTONE_TOO_MANY_POINTS', lineNumber, `the file has more than ${this.maxPoints} points; the limit is ${this.maxPoints}`);
@@ -232,7 +241,11 @@ export class NetworkBuilder {
     // A huge dB value overflows 10^(dB/20), and Z or Y data can divide by zero on the way to S.
     for (let e = 0; e < s.elements; e++) {
       if (!Number.isFinite(s.re[e][index]) || !Number.isFinite(s.im[e][index])) {
-        throw new TouchstoneError('TOUCHSTONE_BAD_NUMBER', lineNumber, `the values of this point give no finite S-parameter (too large a magnitude, or a singular ${parameter} matrix)`);
+        throw new TouchstoneError(
+          'TOUCHSTONE_BAD_NUMBER',
+          lineNumber,
+          `the values of this point give no finite S-parameter (too large a magnitude, or a singular ${parameter} matrix)`,
+        );
       }
     }
   }

@@ -16,7 +16,11 @@ const PARAMETERS: readonly NetworkParameter[] = ['S', 'Y', 'Z', 'H', 'G'];
 const FORMATS: readonly DataFormat[] = ['DB', 'MA', 'RI'];
 
 export function parseOptionLine(text: string, lineNumber: number): OptionLine {
-  const tokens = text.slice(1).trim().split(/\s+/).filter((t) => t.length > 0);
+  const tokens = text
+    .slice(1)
+    .trim()
+    .split(/\s+/)
+    .filter((t) => t.length > 0);
   let frequencyUnit: FrequencyUnit | undefined;
   let parameter: NetworkParameter | undefined;
   let format: DataFormat | undefined;
@@ -38,7 +42,7 @@ export function parseOptionLine(text: string, lineNumber: number): OptionLine {
     } else if (token === 'R') {
       if (referenceOhms) bad(`the option line gives R twice`);
       referenceOhms = [];
-      while (k + 1 < tokens.length && /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(tokens[k + 1])) {
+      while (k + 1 < tokens.length && /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i.test(tokens[k + 1])) {
         const ohms = Number(tokens[++k]);
         if (!(ohms > 0)) bad(`reference resistance ${tokens[k]} must be positive`);
         referenceOhms.push(ohms);
@@ -59,4 +63,3 @@ export function parseOptionLine(text: string, lineNumber: number): OptionLine {
     lineNumber,
   };
 }
-

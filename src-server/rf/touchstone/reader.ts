@@ -1,6 +1,19 @@
 import {
-  CHAR_0, CHAR_9, CHAR_BANG, CHAR_BRACKET, CHAR_CR, CHAR_DOT, CHAR_HASH, CHAR_LF, CHAR_MINUS, CHAR_PLUS,
-  LineNumbers, isBlank, latin1, nextLineStart, scanNumbers,
+  CHAR_0,
+  CHAR_9,
+  CHAR_BANG,
+  CHAR_BRACKET,
+  CHAR_CR,
+  CHAR_DOT,
+  CHAR_HASH,
+  CHAR_LF,
+  CHAR_MINUS,
+  CHAR_PLUS,
+  LineNumbers,
+  isBlank,
+  latin1,
+  nextLineStart,
+  scanNumbers,
 } from './data-lines';
 import { TouchstoneError } from './errors';
 import { type KeywordReader, type ReaderState, initialReaderState, readKeyword, readReferenceValues, readVersionLine } from './keywords';
@@ -138,13 +151,22 @@ class TouchstoneReader implements KeywordReader {
   startNetworkData(lineNumber: number, ports: 1 | 2): void {
     const state = this.state;
     const option = state.option;
-    if (!option) throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', lineNumber, `data before the option line (# <unit> <parameter> <format> R <ohms>)`);
+    if (!option)
+      throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', lineNumber, `data before the option line (# <unit> <parameter> <format> R <ohms>)`);
     if ((option.parameter === 'H' || option.parameter === 'G') && ports !== 2) {
-      throw new TouchstoneError('TOUCHSTONE_BAD_OPTION_LINE', option.lineNumber, `${option.parameter} parameters describe 2-port networks; this file has ${ports} port`);
+      throw new TouchstoneError(
+        'TOUCHSTONE_BAD_OPTION_LINE',
+        option.lineNumber,
+        `${option.parameter} parameters describe 2-port networks; this file has ${ports} port`,
+      );
     }
     const references = state.referenceOhms ?? option.referenceOhms;
     if (references.length !== 1 && references.length !== ports) {
-      throw new TouchstoneError('TOUCHSTONE_BAD_OPTION_LINE', state.referenceOhms ? state.referenceLine : option.lineNumber, `${references.length} reference resistances for a ${ports}-port file`);
+      throw new TouchstoneError(
+        'TOUCHSTONE_BAD_OPTION_LINE',
+        state.referenceOhms ? state.referenceLine : option.lineNumber,
+        `${references.length} reference resistances for a ${ports}-port file`,
+      );
     }
     state.referenceOhms = references.length === ports ? [...references] : new Array<number>(ports).fill(references[0]);
     if (!state.isVersion2 && option.referenceOhms.length > 1) state.version = '1.1';
@@ -168,7 +190,11 @@ class TouchstoneReader implements KeywordReader {
   checkPorts(ports: number, lineNumber: number, how: string): void {
     const expected = this.options.expectedPorts;
     if (expected !== undefined && expected !== ports) {
-      throw new TouchstoneError('TOUCHSTONE_WRONG_PORT_COUNT', lineNumber, `the file name says ${expected} port${expected === 1 ? '' : 's'} but ${how} ${ports}`);
+      throw new TouchstoneError(
+        'TOUCHSTONE_WRONG_PORT_COUNT',
+        lineNumber,
+        `the file name says ${expected} port${expected === 1 ? '' : 's'} but ${how} ${ports}`,
+      );
     }
     if (ports !== 1 && ports !== 2) {
       throw new TouchstoneError('TOUCHSTONE_WRONG_PORT_COUNT', lineNumber, `only 1- and 2-port files are supported, ${how} ${ports}`);
@@ -190,7 +216,8 @@ class TouchstoneReader implements KeywordReader {
     const { state, numbers, options } = this;
     const count = numbers.count;
     if (state.ports === null) {
-      if (!state.option) throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', lineNumber, `data before the option line (# <unit> <parameter> <format> R <ohms>)`);
+      if (!state.option)
+        throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', lineNumber, `data before the option line (# <unit> <parameter> <format> R <ohms>)`);
       // Version 1 has no port keyword: the file name, or else the first data line, says how many.
       const root = Math.round(Math.sqrt((count - 1) / 2));
       const impliedPorts = root >= 1 && 1 + 2 * root * root === count ? root : undefined;
@@ -275,7 +302,8 @@ class TouchstoneReader implements KeywordReader {
     if (state.isVersion2 && state.section !== 'ended') {
       throw new TouchstoneError('TOUCHSTONE_MISSING_END', Math.max(lastLine, 1), `a version-2 file must end with [End]`);
     }
-    if (!state.option) throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', null, `the file has no option line (# <unit> <parameter> <format> R <ohms>)`);
+    if (!state.option)
+      throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', null, `the file has no option line (# <unit> <parameter> <format> R <ohms>)`);
     if (!this.network || this.network.pointCount === 0) throw new TouchstoneError('TOUCHSTONE_EMPTY', null, `the file holds no data points`);
     const option: OptionLine = state.option;
     return {

@@ -51,4 +51,3 @@ export interface TouchstoneReadOptions {
   /** Longest line accepted (default TOUCHSTONE_MAX_LINE_BYTES). */
   readonly maxLineBytes?: number;
 }
-

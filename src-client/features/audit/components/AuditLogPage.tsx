@@ -9,7 +9,9 @@ const PAGE = 50;
 
 const describeChanges = (changes: Record<string, unknown>) =>
   Object.entries(changes)
-    .map(([field, value]) => (Array.isArray(value) && value.length === 2 ? `${field}: ${JSON.stringify(value[0])} → ${JSON.stringify(value[1])}` : `${field}: ${JSON.stringify(value)}`))
+    .map(([field, value]) =>
+      Array.isArray(value) && value.length === 2 ? `${field}: ${JSON.stringify(value[0])} → ${JSON.stringify(value[1])}` : `${field}: ${JSON.stringify(value)}`,
+    )
     .join('; ');
 
 const COLUMNS: { id: string; name: string; value: (e: AuditEntry) => string }[] = [
@@ -28,7 +30,12 @@ export function AuditLogPage() {
   const total = log.data?.total ?? 0;
   const getCellData = useCallback((row: number, col: number) => COLUMNS[col].value(items[row]), [items]);
   const renderers = useMemo(
-    () => COLUMNS.map((_, col) => (row: number) => <Cell><TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat></Cell>),
+    () =>
+      COLUMNS.map((_, col) => (row: number) => (
+        <Cell>
+          <TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat>
+        </Cell>
+      )),
     [getCellData],
   );
 
@@ -36,7 +43,15 @@ export function AuditLogPage() {
     <>
       <PageHeader title="Audit log" subtitle="Every change, who made it and when." />
       <div className="bw-row bw-gap">
-        <InputGroup leftIcon="filter" placeholder="Record type (part, product, user…)" value={entityType} onValueChange={(v) => { setEntityType(v); setOffset(0); }} />
+        <InputGroup
+          leftIcon="filter"
+          placeholder="Record type (part, product, user…)"
+          value={entityType}
+          onValueChange={(v) => {
+            setEntityType(v);
+            setOffset(0);
+          }}
+        />
         <ButtonGroup>
           <Button icon="chevron-left" disabled={offset === 0} onClick={() => setOffset(Math.max(0, offset - PAGE))} />
           <Button disabled text={`${total ? offset + 1 : 0}–${Math.min(offset + PAGE, total)} of ${total}`} />
@@ -46,7 +61,9 @@ export function AuditLogPage() {
       <QueryState isPending={log.isPending} error={log.error}>
         <div className="bw-table-wrap">
           <Table numRows={items.length} columnWidths={[170, 150, 150, 150, 520]} getCellClipboardData={getCellData}>
-            {COLUMNS.map((c, i) => <Column key={c.id} id={c.id} name={c.name} cellRenderer={renderers[i]} />)}
+            {COLUMNS.map((c, i) => (
+              <Column key={c.id} id={c.id} name={c.name} cellRenderer={renderers[i]} />
+            ))}
           </Table>
         </div>
       </QueryState>

@@ -19,7 +19,11 @@ export function ForgotPasswordPage() {
         <Callout intent={Intent.SUCCESS}>If {email} has an account, a reset link is on its way. It works once, for one hour.</Callout>
       ) : (
         <form onSubmit={submit}>
-          {request.error && <Callout intent={Intent.DANGER} className="bw-gap">{(request.error as Error).message}</Callout>}
+          {request.error && (
+            <Callout intent={Intent.DANGER} className="bw-gap">
+              {(request.error as Error).message}
+            </Callout>
+          )}
           <FormGroup label="E-mail" labelFor="forgot-email">
             <InputGroup id="forgot-email" type="email" value={email} onValueChange={setEmail} required autoFocus />
           </FormGroup>

@@ -45,7 +45,9 @@ describe(SetPasswordForm.name, () => {
   });
 
   it("shows the server's field message for the password", () => {
-    const error = new ApiError(400, 'VALIDATION_FAILED', 'password: too weak', { fields: [{ field: 'password', message: 'must be longer than or equal to 10 characters' }] });
+    const error = new ApiError(400, 'VALIDATION_FAILED', 'password: too weak', {
+      fields: [{ field: 'password', message: 'must be longer than or equal to 10 characters' }],
+    });
     renderForm({ error });
     expect(screen.getByRole('alert').textContent).toContain('Password must be longer than or equal to 10 characters');
   });

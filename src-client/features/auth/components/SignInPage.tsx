@@ -26,7 +26,9 @@ export function SignInPage() {
   return (
     <AuthLayout title="Sign in">
       {endedReason && !login.isPending && !error && (
-        <Callout intent={Intent.WARNING} className="bw-gap">{endedReason}</Callout>
+        <Callout intent={Intent.WARNING} className="bw-gap">
+          {endedReason}
+        </Callout>
       )}
       {error && (
         <Callout intent={Intent.DANGER} className="bw-gap" role="alert">

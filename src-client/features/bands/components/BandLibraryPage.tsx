@@ -34,7 +34,12 @@ function BandGroup({ technology, bands, part }: BandGroupProps) {
   const [showStrip, setShowStrip] = useState(false);
   const getCellData = useCallback((row: number, col: number) => COLUMNS[col].value(bands[row]), [bands]);
   const renderers = useMemo(
-    () => COLUMNS.map((_, col) => (row: number) => <Cell><TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat></Cell>),
+    () =>
+      COLUMNS.map((_, col) => (row: number) => (
+        <Cell>
+          <TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat>
+        </Cell>
+      )),
     [getCellData],
   );
   const stripRows = useMemo(
@@ -52,14 +57,39 @@ function BandGroup({ technology, bands, part }: BandGroupProps) {
   return (
     <Section
       title={TECHNOLOGY_LABELS[technology]}
-      rightElement={<><Tag minimal round>{bands.length}</Tag><Button size="small" variant="minimal" icon="timeline-bar-chart" text={showStrip ? 'Hide strip' : 'Show strip'} onClick={() => setShowStrip(!showStrip)} /></>}
+      rightElement={
+        <>
+          <Tag minimal round>
+            {bands.length}
+          </Tag>
+          <Button
+            size="small"
+            variant="minimal"
+            icon="timeline-bar-chart"
+            text={showStrip ? 'Hide strip' : 'Show strip'}
+            onClick={() => setShowStrip(!showStrip)}
+          />
+        </>
+      }
       className="bw-gap"
       data-testid={`band-group-${technology}`}
     >
-      {showStrip && <SectionCard><FrequencyStrip rows={stripRows} title={`${TECHNOLOGY_LABELS[technology]} bands`} /></SectionCard>}
+      {showStrip && (
+        <SectionCard>
+          <FrequencyStrip rows={stripRows} title={`${TECHNOLOGY_LABELS[technology]} bands`} />
+        </SectionCard>
+      )}
       <SectionCard padded={false}>
-        <Table numRows={bands.length} defaultRowHeight={30} columnWidths={COLUMNS.map((c) => c.width)} getCellClipboardData={getCellData} enableRowHeader={false}>
-          {COLUMNS.map((c, i) => <Column key={c.id} id={c.id} name={c.name} cellRenderer={renderers[i]} />)}
+        <Table
+          numRows={bands.length}
+          defaultRowHeight={30}
+          columnWidths={COLUMNS.map((c) => c.width)}
+          getCellClipboardData={getCellData}
+          enableRowHeader={false}
+        >
+          {COLUMNS.map((c, i) => (
+            <Column key={c.id} id={c.id} name={c.name} cellRenderer={renderers[i]} />
+          ))}
         </Table>
       </SectionCard>
     </Section>
@@ -83,20 +113,36 @@ export function BandLibraryPage() {
 
   return (
     <>
-      <PageHeader title="Band library" subtitle="Standard radio bands with the published table each one comes from. Edges are the specification's; check the release a module was certified against." />
+      <PageHeader
+        title="Band library"
+        subtitle="Standard radio bands with the published table each one comes from. Edges are the specification's; check the release a module was certified against."
+      />
       <BandsNav />
       <div className="bw-row bw-gap">
         <FormGroup label="Technology" labelFor="band-technology">
-          <HTMLSelect id="band-technology" value={technology} onChange={(e) => setTechnology(e.currentTarget.value as Technology | '')}
-            options={[{ value: '', label: 'All technologies' }, ...TECH_ORDER.map((t) => ({ value: t, label: TECHNOLOGY_LABELS[t] }))]} />
+          <HTMLSelect
+            id="band-technology"
+            value={technology}
+            onChange={(e) => setTechnology(e.currentTarget.value as Technology | '')}
+            options={[{ value: '', label: 'All technologies' }, ...TECH_ORDER.map((t) => ({ value: t, label: TECHNOLOGY_LABELS[t] }))]}
+          />
         </FormGroup>
-        <FormGroup label="Contains frequency (MHz)" labelFor="band-frequency" intent={frequency && !validFrequency ? 'danger' : 'none'} helperText={frequency && !validFrequency ? 'Enter a frequency in MHz, e.g. 1575.42' : undefined}>
+        <FormGroup
+          label="Contains frequency (MHz)"
+          labelFor="band-frequency"
+          intent={frequency && !validFrequency ? 'danger' : 'none'}
+          helperText={frequency && !validFrequency ? 'Enter a frequency in MHz, e.g. 1575.42' : undefined}
+        >
           <InputGroup id="band-frequency" leftIcon="search" placeholder="e.g. 868" value={frequency} onValueChange={setFrequency} />
         </FormGroup>
         <PartOverlayPicker selected={part.data ?? null} onSelect={setPartId} />
       </div>
       <QueryState isPending={bands.isPending} error={bands.error}>
-        {groups.length === 0 ? <NonIdealState icon="search" title="No band matches" /> : groups.map((g) => <BandGroup key={g.technology} technology={g.technology} bands={g.bands} part={part.data ?? null} />)}
+        {groups.length === 0 ? (
+          <NonIdealState icon="search" title="No band matches" />
+        ) : (
+          groups.map((g) => <BandGroup key={g.technology} technology={g.technology} bands={g.bands} part={part.data ?? null} />)
+        )}
       </QueryState>
     </>
   );

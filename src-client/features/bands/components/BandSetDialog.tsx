@@ -38,7 +38,12 @@ export function BandSetDialog({ set, isOpen, onClose }: BandSetDialogProps) {
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const input = { name, description, bandIds: chosen };
-    const done = { onSuccess: () => { mutation.reset(); onClose(); } };
+    const done = {
+      onSuccess: () => {
+        mutation.reset();
+        onClose();
+      },
+    };
     if (set) update.mutate({ id: set.id, version: set.version, ...input }, done);
     else create.mutate(input, done);
   };
@@ -47,30 +52,56 @@ export function BandSetDialog({ set, isOpen, onClose }: BandSetDialogProps) {
     <Dialog isOpen={isOpen} onClose={onClose} title={set ? `Edit band set ${set.name}` : 'New band set'} icon="layers" style={{ width: 640 }}>
       <form onSubmit={submit}>
         <DialogBody>
-          {conflict && <Callout intent={Intent.WARNING} className="bw-gap" title="Changed by someone else">{error!.message}</Callout>}
-          {error && !conflict && !Object.keys(fieldErrors).length && <Callout intent={Intent.DANGER} className="bw-gap">{error.message}</Callout>}
+          {conflict && (
+            <Callout intent={Intent.WARNING} className="bw-gap" title="Changed by someone else">
+              {error!.message}
+            </Callout>
+          )}
+          {error && !conflict && !Object.keys(fieldErrors).length && (
+            <Callout intent={Intent.DANGER} className="bw-gap">
+              {error.message}
+            </Callout>
+          )}
           <FormGroup label="Name" labelFor="set-name" intent={fieldErrors.name ? Intent.DANGER : Intent.NONE} helperText={fieldErrors.name}>
             <InputGroup id="set-name" value={name} onValueChange={setName} maxLength={120} />
           </FormGroup>
-          <FormGroup label="Description" labelFor="set-description" intent={fieldErrors.description ? Intent.DANGER : Intent.NONE}
-            helperText={fieldErrors.description ?? "Say where the list comes from, and that operators' band lists vary and must be checked."}>
+          <FormGroup
+            label="Description"
+            labelFor="set-description"
+            intent={fieldErrors.description ? Intent.DANGER : Intent.NONE}
+            helperText={fieldErrors.description ?? "Say where the list comes from, and that operators' band lists vary and must be checked."}
+          >
             <TextArea id="set-description" value={description} onChange={(e) => setDescription(e.currentTarget.value)} fill rows={3} />
           </FormGroup>
-          <FormGroup label={`Bands (${chosen.length} chosen)`} labelFor="set-band-search" intent={bandError ? Intent.DANGER : Intent.NONE} helperText={bandError}>
+          <FormGroup
+            label={`Bands (${chosen.length} chosen)`}
+            labelFor="set-band-search"
+            intent={bandError ? Intent.DANGER : Intent.NONE}
+            helperText={bandError}
+          >
             <InputGroup id="set-band-search" leftIcon="search" placeholder="Filter bands" value={search} onValueChange={setSearch} className="bw-gap" />
             <div className="bw-checklist">
               {groups.map((g) => (
                 <div key={g.t}>
                   <H6>{TECHNOLOGY_LABELS[g.t]}</H6>
                   <div className="bw-checklist__items">
-                    {g.bands.map((b) => <Checkbox key={b.id} inline label={b.designation} checked={chosen.includes(b.id)} onChange={() => toggle(b.id)} />)}
+                    {g.bands.map((b) => (
+                      <Checkbox key={b.id} inline label={b.designation} checked={chosen.includes(b.id)} onChange={() => toggle(b.id)} />
+                    ))}
                   </div>
                 </div>
               ))}
             </div>
           </FormGroup>
         </DialogBody>
-        <DialogFooter actions={<><Button text="Cancel" onClick={onClose} /><Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text={set ? 'Save set' : 'Create set'} /></>} />
+        <DialogFooter
+          actions={
+            <>
+              <Button text="Cancel" onClick={onClose} />
+              <Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text={set ? 'Save set' : 'Create set'} />
+            </>
+          }
+        />
       </form>
     </Dialog>
   );

@@ -41,7 +41,13 @@ export function BandSetsPage() {
                 )}
               </div>
               <p className="bw-muted">{set.description}</p>
-              <div className="bw-tags">{set.bands.map((b) => <Tag key={b.id} minimal title={b.name}>{b.designation}</Tag>)}</div>
+              <div className="bw-tags">
+                {set.bands.map((b) => (
+                  <Tag key={b.id} minimal title={b.name}>
+                    {b.designation}
+                  </Tag>
+                ))}
+              </div>
             </Card>
           ))}
         </div>
@@ -55,10 +61,16 @@ export function BandSetsPage() {
         cancelButtonText="Keep it"
         loading={remove.isPending}
         onCancel={() => setDeleting(null)}
-        onConfirm={() => deleting && remove.mutate({ id: deleting.id, version: deleting.version }, {
-          onSuccess: () => setDeleting(null),
-          onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
-        })}
+        onConfirm={() =>
+          deleting &&
+          remove.mutate(
+            { id: deleting.id, version: deleting.version },
+            {
+              onSuccess: () => setDeleting(null),
+              onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
+            },
+          )
+        }
       >
         Delete the band set <b>{deleting?.name}</b>? Radios that took bands from it keep their bands.
       </Alert>

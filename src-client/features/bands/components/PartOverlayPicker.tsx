@@ -17,16 +17,44 @@ export function PartOverlayPicker({ selected, onSelect }: PartOverlayPickerProps
   if (selected) {
     return (
       <FormGroup label="Part on the strips" helperText="Its ranges at VSWR ≤ 2 (measured S11, else datasheet bands) under each band.">
-        <Tag large onRemove={() => onSelect(null)} data-testid="strip-part">{selected.manufacturer} {selected.mpn}</Tag>
+        <Tag large onRemove={() => onSelect(null)} data-testid="strip-part">
+          {selected.manufacturer} {selected.mpn}
+        </Tag>
       </FormGroup>
     );
   }
   return (
     <FormGroup label="Compare a part" labelFor="strip-part-search" helperText="Type an MPN or title; open Show strip on a group.">
-      <Popover isOpen={open} autoFocus={false} enforceFocus={false} placement="bottom-start" minimal
-        content={<Menu>{(matches.data ?? []).map((p) => <MenuItem key={p.id} text={`${p.manufacturer} ${p.mpn}`} label={p.title.slice(0, 40)} onClick={() => { onSelect(p.id); setText(''); }} />)}</Menu>}>
-        <InputGroup id="strip-part-search" leftIcon="search" placeholder="e.g. KA-FX" value={text} onValueChange={setText}
-          rightElement={text ? <Button variant="minimal" icon="cross" aria-label="Clear" onClick={() => setText('')} /> : undefined} />
+      <Popover
+        isOpen={open}
+        autoFocus={false}
+        enforceFocus={false}
+        placement="bottom-start"
+        minimal
+        content={
+          <Menu>
+            {(matches.data ?? []).map((p) => (
+              <MenuItem
+                key={p.id}
+                text={`${p.manufacturer} ${p.mpn}`}
+                label={p.title.slice(0, 40)}
+                onClick={() => {
+                  onSelect(p.id);
+                  setText('');
+                }}
+              />
+            ))}
+          </Menu>
+        }
+      >
+        <InputGroup
+          id="strip-part-search"
+          leftIcon="search"
+          placeholder="e.g. KA-FX"
+          value={text}
+          onValueChange={setText}
+          rightElement={text ? <Button variant="minimal" icon="cross" aria-label="Clear" onClick={() => setText('')} /> : undefined}
+        />
       </Popover>
     </FormGroup>
   );

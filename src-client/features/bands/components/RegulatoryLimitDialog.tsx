@@ -14,9 +14,18 @@ export interface RegulatoryLimitDialogProps {
 type Draft = Record<keyof RegulatoryLimitInput, string>;
 
 const toDraft = (l: RegulatoryLimit | null): Draft => ({
-  region: l?.region ?? 'EU', title: l?.title ?? '', fromMhz: l ? String(l.fromMhz) : '', toMhz: l ? String(l.toMhz) : '', kind: l?.kind ?? 'eirp',
-  valueDbm: l ? String(l.valueDbm) : '', valueText: l?.valueText ?? '', gainThresholdDbi: l?.gainThresholdDbi?.toString() ?? '',
-  reductionDbPerDb: l?.reductionDbPerDb?.toString() ?? '', conditions: l?.conditions ?? '', source: l?.source ?? '', note: l?.note ?? '',
+  region: l?.region ?? 'EU',
+  title: l?.title ?? '',
+  fromMhz: l ? String(l.fromMhz) : '',
+  toMhz: l ? String(l.toMhz) : '',
+  kind: l?.kind ?? 'eirp',
+  valueDbm: l ? String(l.valueDbm) : '',
+  valueText: l?.valueText ?? '',
+  gainThresholdDbi: l?.gainThresholdDbi?.toString() ?? '',
+  reductionDbPerDb: l?.reductionDbPerDb?.toString() ?? '',
+  conditions: l?.conditions ?? '',
+  source: l?.source ?? '',
+  note: l?.note ?? '',
 });
 
 // Empty optional numbers go as null; text that is not a number goes as-is so the server names the field.
@@ -42,10 +51,18 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const body = {
-      region: draft.region, title: draft.title, kind: draft.kind as LimitKind, valueText: draft.valueText, source: draft.source,
-      fromMhz: num(draft.fromMhz), toMhz: num(draft.toMhz), valueDbm: num(draft.valueDbm),
-      gainThresholdDbi: gainRule ? num(draft.gainThresholdDbi) : null, reductionDbPerDb: gainRule ? num(draft.reductionDbPerDb) : null,
-      conditions: draft.conditions || null, note: draft.note || null,
+      region: draft.region,
+      title: draft.title,
+      kind: draft.kind as LimitKind,
+      valueText: draft.valueText,
+      source: draft.source,
+      fromMhz: num(draft.fromMhz),
+      toMhz: num(draft.toMhz),
+      valueDbm: num(draft.valueDbm),
+      gainThresholdDbi: gainRule ? num(draft.gainThresholdDbi) : null,
+      reductionDbPerDb: gainRule ? num(draft.reductionDbPerDb) : null,
+      conditions: draft.conditions || null,
+      note: draft.note || null,
     } as unknown as RegulatoryLimitInput;
     const done = { onSuccess: onClose };
     if (limit) update.mutate({ id: limit.id, ...body }, done);
@@ -56,14 +73,22 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
     <Dialog isOpen onClose={onClose} title={limit ? `Edit ${limit.title}` : 'New regulatory limit'} icon="take-action" style={{ width: 640 }}>
       <form onSubmit={submit}>
         <DialogBody>
-          {error && !Object.keys(fe).length && <Callout intent={Intent.DANGER} className="bw-gap">{error.message}</Callout>}
+          {error && !Object.keys(fe).length && (
+            <Callout intent={Intent.DANGER} className="bw-gap">
+              {error.message}
+            </Callout>
+          )}
           <div className="bw-form-grid">
             <FormGroup label="Region" labelFor="limit-region" intent={fe.region ? Intent.DANGER : Intent.NONE} helperText={fe.region}>
               <HTMLSelect id="limit-region" value={draft.region} onChange={(e) => set('region')(e.currentTarget.value)} options={[...REGIONS]} />
             </FormGroup>
             <FormGroup label="Kind" labelFor="limit-kind" intent={fe.kind ? Intent.DANGER : Intent.NONE} helperText={fe.kind}>
-              <HTMLSelect id="limit-kind" value={draft.kind} onChange={(e) => set('kind')(e.currentTarget.value)}
-                options={Object.entries(LIMIT_KIND_LABELS).map(([value, label]) => ({ value, label }))} />
+              <HTMLSelect
+                id="limit-kind"
+                value={draft.kind}
+                onChange={(e) => set('kind')(e.currentTarget.value)}
+                options={Object.entries(LIMIT_KIND_LABELS).map(([value, label]) => ({ value, label }))}
+              />
             </FormGroup>
           </div>
           {field('title', 'Title')}
@@ -81,7 +106,14 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
           {field('source', 'Source document', 'Document and clause, e.g. 47 CFR 15.247(b)(3)')}
           {field('note', 'Note', 'Corroboration, or "from memory" when no copy was at hand')}
         </DialogBody>
-        <DialogFooter actions={<><Button text="Cancel" onClick={onClose} /><Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text={limit ? 'Save limit' : 'Create limit'} /></>} />
+        <DialogFooter
+          actions={
+            <>
+              <Button text="Cancel" onClick={onClose} />
+              <Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text={limit ? 'Save limit' : 'Create limit'} />
+            </>
+          }
+        />
       </form>
     </Dialog>
   );

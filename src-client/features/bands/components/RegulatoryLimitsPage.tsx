@@ -19,7 +19,12 @@ const COLUMNS: { id: string; name: string; width: number; value: (l: RegulatoryL
   { id: 'range', name: 'Range (MHz)', width: 120, value: (l) => `${l.fromMhz}–${l.toMhz}` },
   { id: 'kind', name: 'Kind', width: 150, value: (l) => LIMIT_KIND_LABELS[l.kind] },
   { id: 'value', name: 'Value', width: 220, value: (l) => `${l.valueText} (${Number(l.valueDbm.toFixed(2))} dBm)` },
-  { id: 'rule', name: 'Gain rule', width: 170, value: (l) => (l.gainThresholdDbi === null ? '' : `−${l.reductionDbPerDb} dB per dB above ${l.gainThresholdDbi} dBi`) },
+  {
+    id: 'rule',
+    name: 'Gain rule',
+    width: 170,
+    value: (l) => (l.gainThresholdDbi === null ? '' : `−${l.reductionDbPerDb} dB per dB above ${l.gainThresholdDbi} dBi`),
+  },
   { id: 'conditions', name: 'Conditions', width: 360, value: (l) => l.conditions ?? '' },
   { id: 'source', name: 'Source', width: 300, value: (l) => l.source },
   { id: 'note', name: 'Note', width: 300, value: (l) => l.note ?? '' },
@@ -36,14 +41,26 @@ export function RegulatoryLimitsPage() {
 
   const getCellData = useCallback((row: number, col: number) => COLUMNS[col].value(rows[row]), [rows]);
   const renderers = useMemo(
-    () => COLUMNS.map((_, col) => (row: number) => <Cell><TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat></Cell>),
+    () =>
+      COLUMNS.map((_, col) => (row: number) => (
+        <Cell>
+          <TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat>
+        </Cell>
+      )),
     [getCellData],
   );
   const actionCell = useCallback(
     (row: number) => (
       <Cell interactive>
         <Button size="small" variant="minimal" icon="edit" aria-label={`Edit ${rows[row].title}`} onClick={() => setEditing(rows[row])} />
-        <Button size="small" variant="minimal" icon="trash" intent={Intent.DANGER} aria-label={`Delete ${rows[row].title}`} onClick={() => setDeleting(rows[row])} />
+        <Button
+          size="small"
+          variant="minimal"
+          icon="trash"
+          intent={Intent.DANGER}
+          aria-label={`Delete ${rows[row].title}`}
+          onClick={() => setDeleting(rows[row])}
+        />
       </Cell>
     ),
     [rows],
@@ -60,7 +77,12 @@ export function RegulatoryLimitsPage() {
       <ScreeningCaution />
       <QueryState isPending={limits.isPending} error={limits.error}>
         <div className="bw-table-wrap" data-testid="limits-table">
-          <Table numRows={rows.length} defaultRowHeight={30} columnWidths={[...COLUMNS.map((c) => c.width), ...(isAdmin ? [80] : [])]} getCellClipboardData={getCellData}>
+          <Table
+            numRows={rows.length}
+            defaultRowHeight={30}
+            columnWidths={[...COLUMNS.map((c) => c.width), ...(isAdmin ? [80] : [])]}
+            getCellClipboardData={getCellData}
+          >
             {[
               ...COLUMNS.map((c, i) => <Column key={c.id} id={c.id} name={c.name} cellRenderer={renderers[i]} />),
               ...(isAdmin ? [<Column key="actions" id="actions" name="" cellRenderer={actionCell} />] : []),
@@ -77,10 +99,13 @@ export function RegulatoryLimitsPage() {
         cancelButtonText="Keep it"
         loading={remove.isPending}
         onCancel={() => setDeleting(null)}
-        onConfirm={() => deleting && remove.mutate(deleting.id, {
-          onSuccess: () => setDeleting(null),
-          onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
-        })}
+        onConfirm={() =>
+          deleting &&
+          remove.mutate(deleting.id, {
+            onSuccess: () => setDeleting(null),
+            onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
+          })
+        }
       >
         Delete the limit <b>{deleting?.title}</b> ({deleting?.region})?
       </Alert>

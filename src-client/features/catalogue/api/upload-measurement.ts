@@ -22,7 +22,11 @@ export const uploadMeasurement = ({ id, file, onProgress, dryRun, ...fields }: M
   for (const [key, value] of Object.entries(fields)) if (value && key !== 'kind') form.set(key, String(value));
   if (dryRun) form.set('dryRun', 'true');
   form.set('file', file);
-  return apiRequest<{ measurement: Measurement | null; preview: CurvePreview }>(`/parts/${id}/measurements`, { method: 'POST', form, onUploadProgress: onProgress ?? (() => {}) });
+  return apiRequest<{ measurement: Measurement | null; preview: CurvePreview }>(`/parts/${id}/measurements`, {
+    method: 'POST',
+    form,
+    onUploadProgress: onProgress ?? (() => {}),
+  });
 };
 
 /** A dry run stores nothing, so only a real upload refreshes the part and the verdicts it feeds. */

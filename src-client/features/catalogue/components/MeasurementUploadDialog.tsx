@@ -13,7 +13,12 @@ export interface MeasurementUploadDialogProps {
   defaultGround?: { lengthMm: number | null; widthMm: number | null };
 }
 
-const KIND_LABEL: Record<MeasurementKind, string> = { s11: 'S11 (Touchstone .s1p/.s2p)', efficiency: 'Radiation efficiency (CSV)', 'peak-gain': 'Peak gain (CSV)', 'average-gain': 'Average gain (CSV)' };
+const KIND_LABEL: Record<MeasurementKind, string> = {
+  s11: 'S11 (Touchstone .s1p/.s2p)',
+  efficiency: 'Radiation efficiency (CSV)',
+  'peak-gain': 'Peak gain (CSV)',
+  'average-gain': 'Average gain (CSV)',
+};
 
 /** Check a file first (nothing stored: the preview or the offending line), then upload it with progress. */
 export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround }: MeasurementUploadDialogProps) {
@@ -29,7 +34,11 @@ export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround
 
   useEffect(() => {
     if (!isOpen) return;
-    setFile(null); setPreview(null); setError(null); setProgress(null); setConditions('');
+    setFile(null);
+    setPreview(null);
+    setError(null);
+    setProgress(null);
+    setConditions('');
     setGround({ length: defaultGround?.lengthMm?.toString() ?? '', width: defaultGround?.widthMm?.toString() ?? '' });
   }, [isOpen, defaultGround?.lengthMm, defaultGround?.widthMm]);
 
@@ -38,10 +47,28 @@ export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround
     setError(null);
     setProgress(0);
     upload.mutate(
-      { id: partId, file, kind, dryRun, groundLengthMm: ground.length, groundWidthMm: ground.width, conditions, ...(kind === 's11' ? {} : units), onProgress: setProgress },
       {
-        onSuccess: (result) => { setProgress(null); setPreview(result.preview); if (!dryRun) onClose(); },
-        onError: (e) => { setProgress(null); setPreview(null); setError(e as ApiError); },
+        id: partId,
+        file,
+        kind,
+        dryRun,
+        groundLengthMm: ground.length,
+        groundWidthMm: ground.width,
+        conditions,
+        ...(kind === 's11' ? {} : units),
+        onProgress: setProgress,
+      },
+      {
+        onSuccess: (result) => {
+          setProgress(null);
+          setPreview(result.preview);
+          if (!dryRun) onClose();
+        },
+        onError: (e) => {
+          setProgress(null);
+          setPreview(null);
+          setError(e as ApiError);
+        },
       },
     );
   };
@@ -52,51 +79,127 @@ export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround
       <DialogBody>
         <div className="bw-form-grid">
           <FormGroup label="Kind" labelFor="upload-kind">
-            <HTMLSelect id="upload-kind" value={kind} onChange={(e) => { setKind(e.currentTarget.value as MeasurementKind); setPreview(null); setError(null); }}>
-              {MEASUREMENT_KINDS.map((k) => <option key={k} value={k}>{KIND_LABEL[k]}</option>)}
+            <HTMLSelect
+              id="upload-kind"
+              value={kind}
+              onChange={(e) => {
+                setKind(e.currentTarget.value as MeasurementKind);
+                setPreview(null);
+                setError(null);
+              }}
+            >
+              {MEASUREMENT_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {KIND_LABEL[k]}
+                </option>
+              ))}
             </HTMLSelect>
           </FormGroup>
           <FormGroup label="File" labelFor="upload-file">
-            <FileInput inputProps={{ id: 'upload-file', 'aria-label': 'Measurement file' }} text={file?.name ?? 'Choose file…'} hasSelection={!!file}
-              onInputChange={(e) => { setFile((e.target as HTMLInputElement).files?.[0] ?? null); setPreview(null); setError(null); }} />
+            <FileInput
+              inputProps={{ id: 'upload-file', 'aria-label': 'Measurement file' }}
+              text={file?.name ?? 'Choose file…'}
+              hasSelection={!!file}
+              onInputChange={(e) => {
+                setFile((e.target as HTMLInputElement).files?.[0] ?? null);
+                setPreview(null);
+                setError(null);
+              }}
+            />
           </FormGroup>
-          <FormGroup label="Ground plane length (mm)" labelFor="upload-gl"><InputGroup id="upload-gl" value={ground.length} onChange={(e) => setGround({ ...ground, length: e.currentTarget.value })} /></FormGroup>
-          <FormGroup label="Ground plane width (mm)" labelFor="upload-gw"><InputGroup id="upload-gw" value={ground.width} onChange={(e) => setGround({ ...ground, width: e.currentTarget.value })} /></FormGroup>
+          <FormGroup label="Ground plane length (mm)" labelFor="upload-gl">
+            <InputGroup id="upload-gl" value={ground.length} onChange={(e) => setGround({ ...ground, length: e.currentTarget.value })} />
+          </FormGroup>
+          <FormGroup label="Ground plane width (mm)" labelFor="upload-gw">
+            <InputGroup id="upload-gw" value={ground.width} onChange={(e) => setGround({ ...ground, width: e.currentTarget.value })} />
+          </FormGroup>
           {kind !== 's11' && (
             <>
               <FormGroup label="Frequency unit (if not in the header)" labelFor="upload-fu">
-                <HTMLSelect id="upload-fu" value={units.frequencyUnit} options={['', 'Hz', 'kHz', 'MHz', 'GHz']} onChange={(e) => setUnits({ ...units, frequencyUnit: e.currentTarget.value })} />
+                <HTMLSelect
+                  id="upload-fu"
+                  value={units.frequencyUnit}
+                  options={['', 'Hz', 'kHz', 'MHz', 'GHz']}
+                  onChange={(e) => setUnits({ ...units, frequencyUnit: e.currentTarget.value })}
+                />
               </FormGroup>
               <FormGroup label="Value unit (if not in the header)" labelFor="upload-vu">
-                <HTMLSelect id="upload-vu" value={units.valueUnit} options={kind === 'efficiency' ? ['', '%', 'dB', 'ratio'] : ['', 'dBi']} onChange={(e) => setUnits({ ...units, valueUnit: e.currentTarget.value })} />
+                <HTMLSelect
+                  id="upload-vu"
+                  value={units.valueUnit}
+                  options={kind === 'efficiency' ? ['', '%', 'dB', 'ratio'] : ['', 'dBi']}
+                  onChange={(e) => setUnits({ ...units, valueUnit: e.currentTarget.value })}
+                />
               </FormGroup>
             </>
           )}
         </div>
-        <FormGroup label="Conditions" labelFor="upload-cond"><InputGroup id="upload-cond" placeholder="Fixture, enclosure, cable, chamber" value={conditions} onChange={(e) => setConditions(e.currentTarget.value)} /></FormGroup>
+        <FormGroup label="Conditions" labelFor="upload-cond">
+          <InputGroup
+            id="upload-cond"
+            placeholder="Fixture, enclosure, cable, chamber"
+            value={conditions}
+            onChange={(e) => setConditions(e.currentTarget.value)}
+          />
+        </FormGroup>
         {progress !== null && <ProgressBar value={progress} intent={Intent.PRIMARY} className="bw-gap" />}
         {error && (
-          <Callout intent={Intent.DANGER} title={error.body.line ? `The file was refused at line ${String(error.body.line)}` : 'The file was refused'} className="bw-gap" data-testid="upload-error">
+          <Callout
+            intent={Intent.DANGER}
+            title={error.body.line ? `The file was refused at line ${String(error.body.line)}` : 'The file was refused'}
+            className="bw-gap"
+            data-testid="upload-error"
+          >
             <p>{error.message}</p>
-            {rows.length > 0 && <ul>{rows.slice(0, 12).map((r) => <li key={r.line}>Line {r.line} (row {r.row}): {r.message}</li>)}</ul>}
+            {rows.length > 0 && (
+              <ul>
+                {rows.slice(0, 12).map((r) => (
+                  <li key={r.line}>
+                    Line {r.line} (row {r.row}): {r.message}
+                  </li>
+                ))}
+              </ul>
+            )}
             <p className="bw-muted">Nothing was stored.</p>
           </Callout>
         )}
         {preview && (
           <div data-testid="upload-preview">
             <Callout intent={Intent.SUCCESS} className="bw-gap">
-              {preview.sourceFormat}: {preview.pointCount} points, {preview.fromMhz}–{preview.toMhz} MHz{preview.referenceOhms ? `, reference ${preview.referenceOhms} Ω` : ''}.
+              {preview.sourceFormat}: {preview.pointCount} points, {preview.fromMhz}–{preview.toMhz} MHz
+              {preview.referenceOhms ? `, reference ${preview.referenceOhms} Ω` : ''}.
             </Callout>
-            <FrequencyChart title={`Preview: ${preview.valueLabel}`} frequencyHz={preview.frequenciesMhz.map((f) => f * 1e6)} height={200}
-              series={[{ label: preview.valueLabel, unit: preview.kind === 's11' ? 'dB' : preview.kind === 'efficiency' ? '%' : 'dBi', values: preview.values, inverted: false }]} />
+            <FrequencyChart
+              title={`Preview: ${preview.valueLabel}`}
+              frequencyHz={preview.frequenciesMhz.map((f) => f * 1e6)}
+              height={200}
+              series={[
+                {
+                  label: preview.valueLabel,
+                  unit: preview.kind === 's11' ? 'dB' : preview.kind === 'efficiency' ? '%' : 'dBi',
+                  values: preview.values,
+                  inverted: false,
+                },
+              ]}
+            />
           </div>
         )}
       </DialogBody>
-      <DialogFooter actions={<>
-        <Button text="Cancel" onClick={onClose} />
-        <Button text="Check file" disabled={!file} loading={upload.isPending && upload.variables?.dryRun} onClick={() => send(true)} />
-        <Button intent={Intent.PRIMARY} text="Upload" disabled={!file || !!error} loading={upload.isPending && !upload.variables?.dryRun} onClick={() => send(false)} />
-      </>} />
+      <DialogFooter
+        actions={
+          <>
+            <Button text="Cancel" onClick={onClose} />
+            <Button text="Check file" disabled={!file} loading={upload.isPending && upload.variables?.dryRun} onClick={() => send(true)} />
+            <Button
+              intent={Intent.PRIMARY}
+              text="Upload"
+              disabled={!file || !!error}
+              loading={upload.isPending && !upload.variables?.dryRun}
+              onClick={() => send(false)}
+            />
+          </>
+        }
+      />
     </Dialog>
   );
 }

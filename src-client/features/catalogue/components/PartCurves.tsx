@@ -19,36 +19,90 @@ export function PartCurves({ part, overlays }: PartCurvesProps) {
   const efficiency = useMeasurementPoints(part.id, current('efficiency'));
   const peak = useMeasurementPoints(part.id, current('peak-gain'));
   const average = useMeasurementPoints(part.id, current('average-gain'));
-  const sameGrid = peak.data && average.data && peak.data.frequenciesHz.length === average.data.frequenciesHz.length && peak.data.frequenciesHz.every((f, i) => f === average.data!.frequenciesHz[i]);
-  const vswrSeries = useMemo(() => (s11.data ? [
-    { label: 'VSWR', unit: '', values: s11.data.vswr!.map((v) => Math.min(v, 10)), range: [1, 6] as [number, number], axisLabel: 'VSWR' },
-    { label: 'Return loss', unit: 'dB', values: s11.data.returnLossDb!, inverted: true, axisLabel: 'Return loss (dB)' },
-  ] : []), [s11.data]);
+  const sameGrid =
+    peak.data &&
+    average.data &&
+    peak.data.frequenciesHz.length === average.data.frequenciesHz.length &&
+    peak.data.frequenciesHz.every((f, i) => f === average.data!.frequenciesHz[i]);
+  const vswrSeries = useMemo(
+    () =>
+      s11.data
+        ? [
+            { label: 'VSWR', unit: '', values: s11.data.vswr!.map((v) => Math.min(v, 10)), range: [1, 6] as [number, number], axisLabel: 'VSWR' },
+            { label: 'Return loss', unit: 'dB', values: s11.data.returnLossDb!, inverted: true, axisLabel: 'Return loss (dB)' },
+          ]
+        : [],
+    [s11.data],
+  );
 
   return (
     <>
       <ScreeningCaution compact />
       {s11.data ? (
-        <FrequencyChart title="Match: VSWR and return loss" frequencyHz={s11.data.frequenciesHz} series={vswrSeries} ranges={overlays} threshold={{ value: 2, unit: '', label: 'VSWR 2' }} />
-      ) : <Callout className="bw-gap">No S11 measurement; search and checks use the datasheet bands.</Callout>}
+        <FrequencyChart
+          title="Match: VSWR and return loss"
+          frequencyHz={s11.data.frequenciesHz}
+          series={vswrSeries}
+          ranges={overlays}
+          threshold={{ value: 2, unit: '', label: 'VSWR 2' }}
+        />
+      ) : (
+        <Callout className="bw-gap">No S11 measurement; search and checks use the datasheet bands.</Callout>
+      )}
       {efficiency.data && (
-        <FrequencyChart title="Radiation efficiency" frequencyHz={efficiency.data.frequenciesHz} series={[{ label: 'Efficiency', unit: '%', values: efficiency.data.values, range: [0, 100] }]} ranges={overlays} height={220} />
+        <FrequencyChart
+          title="Radiation efficiency"
+          frequencyHz={efficiency.data.frequenciesHz}
+          series={[{ label: 'Efficiency', unit: '%', values: efficiency.data.values, range: [0, 100] }]}
+          ranges={overlays}
+          height={220}
+        />
       )}
       {peak.data && (
-        <FrequencyChart title="Gain" frequencyHz={peak.data.frequenciesHz} height={220} ranges={overlays}
-          series={[{ label: 'Peak gain', unit: 'dBi', values: peak.data.values }, ...(sameGrid ? [{ label: 'Average gain', unit: 'dBi', values: average.data!.values }] : [])]} />
+        <FrequencyChart
+          title="Gain"
+          frequencyHz={peak.data.frequenciesHz}
+          height={220}
+          ranges={overlays}
+          series={[
+            { label: 'Peak gain', unit: 'dBi', values: peak.data.values },
+            ...(sameGrid ? [{ label: 'Average gain', unit: 'dBi', values: average.data!.values }] : []),
+          ]}
+        />
       )}
       <h3>Figures per range</h3>
       <HTMLTable compact striped className="bw-figures" data-testid="range-figures">
         <thead>
-          <tr><th>Range (MHz)</th><th>Match from</th><th>Share at VSWR ≤ 2</th><th>Worst VSWR</th><th>at MHz</th><th>Min RL (dB)</th><th>Efficiency from</th><th>Min eff. (%)</th><th>Avg eff. (%)</th><th>Peak gain (dBi)</th><th>Notes</th></tr>
+          <tr>
+            <th>Range (MHz)</th>
+            <th>Match from</th>
+            <th>Share at VSWR ≤ 2</th>
+            <th>Worst VSWR</th>
+            <th>at MHz</th>
+            <th>Min RL (dB)</th>
+            <th>Efficiency from</th>
+            <th>Min eff. (%)</th>
+            <th>Avg eff. (%)</th>
+            <th>Peak gain (dBi)</th>
+            <th>Notes</th>
+          </tr>
         </thead>
         <tbody>
           {part.figures.map((f, i) => (
             <tr key={i}>
-              <td>{f.fromMhz}–{f.toMhz}</td><td>{f.matchSource}</td><td>{f.coveredFractionVswr2 === null ? '—' : `${fmt(f.coveredFractionVswr2 * 100, 0)} %`}</td>
-              <td>{fmt(f.worstVswr)}</td><td>{fmt(f.worstVswrAtMhz, 1)}</td><td>{fmt(f.minReturnLossDb, 1)}</td><td>{f.efficiencySource}</td>
-              <td>{fmt(f.minEfficiencyPct, 1)}</td><td>{fmt(f.averageEfficiencyPct, 1)}</td><td>{fmt(f.peakGainDbi, 1)}</td><td className="bw-muted">{f.notes.join('; ')}</td>
+              <td>
+                {f.fromMhz}–{f.toMhz}
+              </td>
+              <td>{f.matchSource}</td>
+              <td>{f.coveredFractionVswr2 === null ? '—' : `${fmt(f.coveredFractionVswr2 * 100, 0)} %`}</td>
+              <td>{fmt(f.worstVswr)}</td>
+              <td>{fmt(f.worstVswrAtMhz, 1)}</td>
+              <td>{fmt(f.minReturnLossDb, 1)}</td>
+              <td>{f.efficiencySource}</td>
+              <td>{fmt(f.minEfficiencyPct, 1)}</td>
+              <td>{fmt(f.averageEfficiencyPct, 1)}</td>
+              <td>{fmt(f.peakGainDbi, 1)}</td>
+              <td className="bw-muted">{f.notes.join('; ')}</td>
             </tr>
           ))}
         </tbody>

@@ -3,7 +3,11 @@ import type { Lifecycle, LibraryBand, ReviewState } from '../types';
 
 /** One colour per state, everywhere in the catalogue. */
 export const REVIEW_STATE_INTENT: Record<ReviewState, Intent> = {
-  draft: Intent.NONE, 'in-review': Intent.PRIMARY, approved: Intent.SUCCESS, restricted: Intent.WARNING, retired: Intent.DANGER,
+  draft: Intent.NONE,
+  'in-review': Intent.PRIMARY,
+  approved: Intent.SUCCESS,
+  restricted: Intent.WARNING,
+  retired: Intent.DANGER,
 };
 
 export const LIFECYCLE_INTENT: Record<Lifecycle, Intent> = { active: Intent.NONE, nrnd: Intent.WARNING, eol: Intent.DANGER };
@@ -15,6 +19,13 @@ export function bandSpan(band: LibraryBand): { fromMhz: number; toMhz: number } 
   return { fromMhz: Math.min(...band.ranges.map((r) => r.fromMhz)), toMhz: Math.max(...band.ranges.map((r) => r.toMhz)) };
 }
 
-export const rangesParam = (bands: LibraryBand[]) => bands.map((b) => { const s = bandSpan(b); return `${s.fromMhz}-${s.toMhz}`; }).join(',');
+export const rangesParam = (bands: LibraryBand[]) =>
+  bands
+    .map((b) => {
+      const s = bandSpan(b);
+      return `${s.fromMhz}-${s.toMhz}`;
+    })
+    .join(',');
 
-export const fmt = (value: number | null | undefined, digits = 2) => (value === null || value === undefined || !Number.isFinite(value) ? '—' : Number(value.toFixed(digits)).toString());
+export const fmt = (value: number | null | undefined, digits = 2) =>
+  value === null || value === undefined || !Number.isFinite(value) ? '—' : Number(value.toFixed(digits)).toString();

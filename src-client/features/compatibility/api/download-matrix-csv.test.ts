@@ -19,7 +19,10 @@ describe(downloadMatrixCsv.name, () => {
   });
 
   it('passes a refusal on as an error', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify({ code: 'PRODUCT_NOT_FOUND', message: 'product 7 was not found' }), { status: 404 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => new Response(JSON.stringify({ code: 'PRODUCT_NOT_FOUND', message: 'product 7 was not found' }), { status: 404 })),
+    );
     await expect(downloadMatrixCsv(7, 'x')).rejects.toMatchObject({ code: 'PRODUCT_NOT_FOUND' });
   });
 });

@@ -3,7 +3,8 @@ import { candidateKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
 import type { Candidates } from '../types';
 
-export const getCandidates = (productId: number, radioId: number) => apiRequest<Candidates>(`/products/${productId}/radios/${radioId}/candidates`, { query: { limit: 30 } });
+export const getCandidates = (productId: number, radioId: number) =>
+  apiRequest<Candidates>(`/products/${productId}/radios/${radioId}/candidates`, { query: { limit: 30 } });
 
 export const getCandidatesQueryOptions = (productId: number, radioId: number) =>
   queryOptions({ queryKey: candidateKeys.radio(productId, radioId), queryFn: () => getCandidates(productId, radioId) });

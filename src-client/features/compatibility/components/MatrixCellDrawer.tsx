@@ -14,7 +14,12 @@ export interface MatrixCellDrawerProps {
   onFindCandidates: (radioId: number) => void;
 }
 
-const FINDING_INTENT: Record<Finding['severity'], Intent> = { fail: STATUS_LOOK.fail.intent, marginal: STATUS_LOOK.marginal.intent, 'no-data': STATUS_LOOK['no-data'].intent, info: Intent.PRIMARY };
+const FINDING_INTENT: Record<Finding['severity'], Intent> = {
+  fail: STATUS_LOOK.fail.intent,
+  marginal: STATUS_LOOK.marginal.intent,
+  'no-data': STATUS_LOOK['no-data'].intent,
+  info: Intent.PRIMARY,
+};
 
 /** Why a cell has its state: the findings with their numbers, and the part's curves over the band. */
 export function MatrixCellDrawer({ matrix, cell, onClose, onFindCandidates }: MatrixCellDrawerProps) {
@@ -22,14 +27,26 @@ export function MatrixCellDrawer({ matrix, cell, onClose, onFindCandidates }: Ma
   const column = cell ? matrix.columns[cell.column] : null;
   const look = cell ? STATUS_LOOK[cell.status] : null;
   return (
-    <Drawer isOpen={cell !== null} onClose={onClose} size={DrawerSize.STANDARD} icon={look?.icon} title={row && column ? `${row.designation} (${row.radioName}) × ${column.mpn}` : ''}>
+    <Drawer
+      isOpen={cell !== null}
+      onClose={onClose}
+      size={DrawerSize.STANDARD}
+      icon={look?.icon}
+      title={row && column ? `${row.designation} (${row.radioName}) × ${column.mpn}` : ''}
+    >
       {cell && row && column && look && (
         <div className="bp6-drawer-body" style={{ padding: 16 }} data-testid="cell-detail">
           <p>
-            <Tag intent={look.intent} icon={look.icon} large>{look.label}</Tag>{' '}
+            <Tag intent={look.intent} icon={look.icon} large>
+              {look.label}
+            </Tag>{' '}
             {column.manufacturer} {column.title}; band {row.ranges.map((r) => `${r.fromMhz}–${r.toMhz} MHz ${r.role}`).join(', ')}
           </p>
-          {cell.findings.length === 0 && <Callout intent={Intent.SUCCESS} icon="tick-circle">Every rule that applies is met.</Callout>}
+          {cell.findings.length === 0 && (
+            <Callout intent={Intent.SUCCESS} icon="tick-circle">
+              Every rule that applies is met.
+            </Callout>
+          )}
           {cell.findings.map((f) => (
             <Callout key={f.ruleId + f.code} intent={FINDING_INTENT[f.severity]} className="bw-matrix__finding" title={f.code} data-testid="finding">
               {f.message}
@@ -61,11 +78,37 @@ function BandCurves({ partId, row }: BandCurvesProps) {
   const window = { fromHz: lowHz - span * 0.6, toHz: highHz + span * 0.6 };
   const bands = row.ranges.map((r) => ({ fromHz: r.fromMhz * 1e6, toHz: r.toMhz * 1e6, label: `${row.designation} ${r.role}` }));
   if (part.isPending) return null;
-  if (!current('s11') && !current('efficiency')) return <Callout icon="info-sign" className="bw-matrix__finding">No measured curves: this part is judged from its datasheet spec bands.</Callout>;
+  if (!current('s11') && !current('efficiency'))
+    return (
+      <Callout icon="info-sign" className="bw-matrix__finding">
+        No measured curves: this part is judged from its datasheet spec bands.
+      </Callout>
+    );
   return (
     <>
-      {s11.data?.vswr && <Curve title="VSWR over the band" points={s11.data} values={s11.data.vswr} unit="" label="VSWR" window={window} ranges={bands} threshold={{ value: 2, unit: '', label: 'VSWR 2' }} />}
-      {efficiency.data && <Curve title="Radiation efficiency over the band" points={efficiency.data} values={efficiency.data.values} unit="%" label="Efficiency" window={window} ranges={bands} />}
+      {s11.data?.vswr && (
+        <Curve
+          title="VSWR over the band"
+          points={s11.data}
+          values={s11.data.vswr}
+          unit=""
+          label="VSWR"
+          window={window}
+          ranges={bands}
+          threshold={{ value: 2, unit: '', label: 'VSWR 2' }}
+        />
+      )}
+      {efficiency.data && (
+        <Curve
+          title="Radiation efficiency over the band"
+          points={efficiency.data}
+          values={efficiency.data.values}
+          unit="%"
+          label="Efficiency"
+          window={window}
+          ranges={bands}
+        />
+      )}
     </>
   );
 }
@@ -83,7 +126,12 @@ interface CurveProps {
 
 function Curve({ title, points, values, unit, label, window, ranges, threshold }: CurveProps) {
   const keep = points.frequenciesHz.map((f, i) => [f, values[i]] as const).filter(([f]) => f >= window.fromHz && f <= window.toHz);
-  if (keep.length < 2) return <Callout icon="info-sign" className="bw-matrix__finding">{title}: the measurement does not reach this band (no data).</Callout>;
+  if (keep.length < 2)
+    return (
+      <Callout icon="info-sign" className="bw-matrix__finding">
+        {title}: the measurement does not reach this band (no data).
+      </Callout>
+    );
   return (
     <FrequencyChart
       title={title}

@@ -13,7 +13,7 @@ export const STATUS_LOOK: Record<CellStatus, { intent: Intent; icon: IconName; l
 /** The finding that decides the cell's state, for the short code shown in the cell. */
 export function decidingFinding(cell: MatrixCell) {
   const wanted = cell.status === 'pass' ? null : cell.status;
-  return wanted ? cell.findings.find((f) => f.severity === wanted) ?? null : null;
+  return wanted ? (cell.findings.find((f) => f.severity === wanted) ?? null) : null;
 }
 
 /** "EFFICIENCY_BELOW_FLOOR" → "EFFICIENCY BELOW FLOOR", short enough for a cell. */

@@ -33,16 +33,32 @@ export function ProductDialog({ product, onClose, onSaved }: ProductDialogProps)
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const input = {
-      name, code, owner, targetRegions: regions, notes: notes.trim() ? notes : null,
-      groundPlaneLengthMm: numberOrNull(length) as number, groundPlaneWidthMm: numberOrNull(width) as number,
+      name,
+      code,
+      owner,
+      targetRegions: regions,
+      notes: notes.trim() ? notes : null,
+      groundPlaneLengthMm: numberOrNull(length) as number,
+      groundPlaneWidthMm: numberOrNull(width) as number,
     };
-    const done = { onSuccess: (saved: ProductDetail) => { onSaved?.(saved); onClose(); } };
+    const done = {
+      onSuccess: (saved: ProductDetail) => {
+        onSaved?.(saved);
+        onClose();
+      },
+    };
     if (product) update.mutate({ id: product.id, version: product.version, ...input }, done);
     else create.mutate(input, done);
   };
   const text = (id: string, label: string, value: string, onChange: (v: string) => void, key: string, rightText?: string) => (
     <FormGroup label={label} labelFor={id} intent={fe[key] ? Intent.DANGER : Intent.NONE} helperText={fe[key]}>
-      <InputGroup id={id} value={value} onValueChange={onChange} intent={fe[key] ? Intent.DANGER : Intent.NONE} rightElement={rightText ? <span className="bw-unit">{rightText}</span> : undefined} />
+      <InputGroup
+        id={id}
+        value={value}
+        onValueChange={onChange}
+        intent={fe[key] ? Intent.DANGER : Intent.NONE}
+        rightElement={rightText ? <span className="bw-unit">{rightText}</span> : undefined}
+      />
     </FormGroup>
   );
 
@@ -50,8 +66,16 @@ export function ProductDialog({ product, onClose, onSaved }: ProductDialogProps)
     <Dialog isOpen onClose={onClose} title={product ? `Edit ${product.name}` : 'New product'} icon="box" style={{ width: 600 }}>
       <form onSubmit={submit}>
         <DialogBody>
-          {conflict && <Callout intent={Intent.WARNING} className="bw-gap" title="Changed by someone else">{error!.message}</Callout>}
-          {error && !conflict && !Object.keys(fe).length && <Callout intent={Intent.DANGER} className="bw-gap">{error.message}</Callout>}
+          {conflict && (
+            <Callout intent={Intent.WARNING} className="bw-gap" title="Changed by someone else">
+              {error!.message}
+            </Callout>
+          )}
+          {error && !conflict && !Object.keys(fe).length && (
+            <Callout intent={Intent.DANGER} className="bw-gap">
+              {error.message}
+            </Callout>
+          )}
           {text('product-name', 'Product name', name, setName, 'name')}
           <div className="bw-form-grid">
             {text('product-code', 'Code', code, setCode, 'code')}
@@ -61,14 +85,27 @@ export function ProductDialog({ product, onClose, onSaved }: ProductDialogProps)
           </div>
           <FormGroup label="Target regions" intent={fe.targetRegions ? Intent.DANGER : Intent.NONE} helperText={fe.targetRegions}>
             {REGIONS.map((r) => (
-              <Checkbox key={r} inline label={r} checked={regions.includes(r)} onChange={() => setRegions((cur) => (cur.includes(r) ? cur.filter((x) => x !== r) : [...cur, r]))} />
+              <Checkbox
+                key={r}
+                inline
+                label={r}
+                checked={regions.includes(r)}
+                onChange={() => setRegions((cur) => (cur.includes(r) ? cur.filter((x) => x !== r) : [...cur, r]))}
+              />
             ))}
           </FormGroup>
           <FormGroup label="Notes" labelFor="product-notes" intent={fe.notes ? Intent.DANGER : Intent.NONE} helperText={fe.notes}>
             <TextArea id="product-notes" value={notes} onChange={(e) => setNotes(e.currentTarget.value)} fill rows={3} />
           </FormGroup>
         </DialogBody>
-        <DialogFooter actions={<><Button text="Cancel" onClick={onClose} /><Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text={product ? 'Save product' : 'Create product'} /></>} />
+        <DialogFooter
+          actions={
+            <>
+              <Button text="Cancel" onClick={onClose} />
+              <Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text={product ? 'Save product' : 'Create product'} />
+            </>
+          }
+        />
       </form>
     </Dialog>
   );

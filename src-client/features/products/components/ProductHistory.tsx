@@ -7,8 +7,12 @@ export interface ProductHistoryProps {
 }
 
 const ACTION_TEXT: Record<string, string> = {
-  created: 'Created the product', updated: 'Edited the product', deleted: 'Deleted the product',
-  'radio-created': 'Added a radio', 'radio-updated': 'Edited a radio', 'radio-deleted': 'Removed a radio',
+  created: 'Created the product',
+  updated: 'Edited the product',
+  deleted: 'Deleted the product',
+  'radio-created': 'Added a radio',
+  'radio-updated': 'Edited a radio',
+  'radio-deleted': 'Removed a radio',
 };
 
 const show = (v: unknown) => (Array.isArray(v) ? v.join(', ') : v === null || v === undefined || v === '' ? '—' : String(v));
@@ -30,7 +34,14 @@ export function ProductHistory({ productId }: ProductHistoryProps) {
       <SectionCard padded={false}>
         <QueryState isPending={history.isPending} error={history.error}>
           <HTMLTable compact striped className="bw-history-table" data-testid="product-history">
-            <thead><tr><th>When (UTC)</th><th>Who</th><th>What</th><th>Changes</th></tr></thead>
+            <thead>
+              <tr>
+                <th>When (UTC)</th>
+                <th>Who</th>
+                <th>What</th>
+                <th>Changes</th>
+              </tr>
+            </thead>
             <tbody>
               {(history.data?.items ?? []).map((e) => (
                 <tr key={e.id}>

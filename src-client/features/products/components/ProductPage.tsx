@@ -47,15 +47,18 @@ export function ProductPage({ extensions }: ProductPageProps) {
             title={p.name}
             subtitle={
               <span className="bw-facts" data-testid="product-facts">
-                <Tag minimal>{p.code}</Tag> Owner {p.owner} · created by {p.createdBy?.name ?? 'unknown'} · ground plane {p.groundPlaneLengthMm} × {p.groundPlaneWidthMm} mm · markets {p.targetRegions.join(', ')} · version {p.version}
+                <Tag minimal>{p.code}</Tag> Owner {p.owner} · created by {p.createdBy?.name ?? 'unknown'} · ground plane {p.groundPlaneLengthMm} ×{' '}
+                {p.groundPlaneWidthMm} mm · markets {p.targetRegions.join(', ')} · version {p.version}
               </span>
             }
-            actions={canEdit && (
-              <>
-                <Button icon="edit" text="Edit product" onClick={() => setEditing(true)} />
-                {canDelete && <Button icon="trash" intent={Intent.DANGER} variant="outlined" text="Delete" onClick={() => setDeleting(true)} />}
-              </>
-            )}
+            actions={
+              canEdit && (
+                <>
+                  <Button icon="edit" text="Edit product" onClick={() => setEditing(true)} />
+                  {canDelete && <Button icon="trash" intent={Intent.DANGER} variant="outlined" text="Delete" onClick={() => setDeleting(true)} />}
+                </>
+              )
+            }
           />
           {p.notes && <p className="bw-muted bw-notes">{p.notes}</p>}
           <ProductStrip product={p} />
@@ -72,13 +75,19 @@ export function ProductPage({ extensions }: ProductPageProps) {
             cancelButtonText="Keep it"
             loading={remove.isPending}
             onCancel={() => setDeleting(false)}
-            onConfirm={() => remove.mutate({ id: p.id, version: p.version }, {
-              onSuccess: () => navigate(paths.products),
-              onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
-              onSettled: () => setDeleting(false),
-            })}
+            onConfirm={() =>
+              remove.mutate(
+                { id: p.id, version: p.version },
+                {
+                  onSuccess: () => navigate(paths.products),
+                  onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })),
+                  onSettled: () => setDeleting(false),
+                },
+              )
+            }
           >
-            Delete <b>{p.name}</b> and its {p.radios.length} radios? It leaves the product list and the matrix; an admin can restore it with its radios and part choices. The history stays in the audit log.
+            Delete <b>{p.name}</b> and its {p.radios.length} radios? It leaves the product list and the matrix; an admin can restore it with its radios and part
+            choices. The history stays in the audit log.
           </Alert>
         </>
       )}

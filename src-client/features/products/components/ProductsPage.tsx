@@ -17,7 +17,12 @@ const COLUMNS: { id: string; name: string; width: number; value: (p: ProductSumm
   { id: 'owner', name: 'Owner', width: 150, value: (p) => p.owner },
   { id: 'ground', name: 'Ground plane (mm)', width: 150, value: (p) => `${p.groundPlaneLengthMm} × ${p.groundPlaneWidthMm}` },
   { id: 'regions', name: 'Markets', width: 130, value: (p) => p.targetRegions.join(', ') },
-  { id: 'radios', name: 'Radios', width: 260, value: (p) => `${p.radioCount}${p.technologies.length ? ` (${p.technologies.map((t) => TECHNOLOGY_SHORT_LABELS[t] ?? t).join(', ')})` : ''}` },
+  {
+    id: 'radios',
+    name: 'Radios',
+    width: 260,
+    value: (p) => `${p.radioCount}${p.technologies.length ? ` (${p.technologies.map((t) => TECHNOLOGY_SHORT_LABELS[t] ?? t).join(', ')})` : ''}`,
+  },
   { id: 'updated', name: 'Updated (UTC)', width: 150, value: (p) => p.updatedAt.replace('T', ' ').slice(0, 16) },
 ];
 
@@ -33,9 +38,20 @@ function DeletedProducts() {
   return (
     <QueryState isPending={deleted.isPending} error={deleted.error}>
       <H5 className="bw-gap">Deleted products</H5>
-      {rows.length === 0 ? <NonIdealState icon="trash" title="No deleted products" /> : (
+      {rows.length === 0 ? (
+        <NonIdealState icon="trash" title="No deleted products" />
+      ) : (
         <HTMLTable compact striped className="bw-gap" data-testid="deleted-products">
-          <thead><tr><th>Product</th><th>Code</th><th>Radios</th><th>Deleted (UTC)</th><th>Deleted by</th><th /></tr></thead>
+          <thead>
+            <tr>
+              <th>Product</th>
+              <th>Code</th>
+              <th>Radios</th>
+              <th>Deleted (UTC)</th>
+              <th>Deleted by</th>
+              <th />
+            </tr>
+          </thead>
           <tbody>
             {rows.map((p) => (
               <tr key={p.id}>
@@ -45,8 +61,13 @@ function DeletedProducts() {
                 <td>{whenUtc(p.deletedAt)}</td>
                 <td>{p.deletedBy?.name ?? 'unknown'}</td>
                 <td>
-                  <Button size="small" icon="undo" text="Restore" loading={restore.isPending && restore.variables === p.id}
-                    onClick={() => restore.mutate(p.id, { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) })} />
+                  <Button
+                    size="small"
+                    icon="undo"
+                    text="Restore"
+                    loading={restore.isPending && restore.variables === p.id}
+                    onClick={() => restore.mutate(p.id, { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) })}
+                  />
                 </td>
               </tr>
             ))}
@@ -64,22 +85,32 @@ export function ProductsPage() {
   // In the URL, so that the choice survives reload and Back.
   const [searchParams, setSearchParams] = useSearchParams();
   const showDeleted = searchParams.get('deleted') === '1';
-  const setShowDeleted = (on: boolean) => setSearchParams((prev) => {
-    const next = new URLSearchParams(prev);
-    if (on) next.set('deleted', '1'); else next.delete('deleted');
-    return next;
-  });
+  const setShowDeleted = (on: boolean) =>
+    setSearchParams((prev) => {
+      const next = new URLSearchParams(prev);
+      if (on) next.set('deleted', '1');
+      else next.delete('deleted');
+      return next;
+    });
   const products = useProducts();
   const navigate = useNavigate();
   const rows = useMemo(() => products.data ?? [], [products.data]);
   const [creating, setCreating] = useState(false);
   const getCellData = useCallback((row: number, col: number) => COLUMNS[col].value(rows[row]), [rows]);
   const renderers = useMemo(
-    () => COLUMNS.map((c, col) => (row: number) => (
-      c.id === 'name'
-        ? <Cell interactive><Link to={paths.product(rows[row].id)}>{getCellData(row, col)}</Link></Cell>
-        : <Cell><TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat></Cell>
-    )),
+    () =>
+      COLUMNS.map(
+        (c, col) => (row: number) =>
+          c.id === 'name' ? (
+            <Cell interactive>
+              <Link to={paths.product(rows[row].id)}>{getCellData(row, col)}</Link>
+            </Cell>
+          ) : (
+            <Cell>
+              <TruncatedFormat detectTruncation>{getCellData(row, col)}</TruncatedFormat>
+            </Cell>
+          ),
+      ),
     [getCellData, rows],
   );
 
@@ -88,20 +119,26 @@ export function ProductsPage() {
       <PageHeader
         title="Products"
         subtitle="Devices under design: their ground plane, markets and radios."
-        actions={(isAdmin || canEdit) && (
-          <>
-            {isAdmin && <Switch inline label="Show deleted" checked={showDeleted} onChange={(e) => setShowDeleted(e.currentTarget.checked)} />}
-            {canEdit && <Button icon="add" intent={Intent.PRIMARY} text="New product" onClick={() => setCreating(true)} />}
-          </>
-        )}
+        actions={
+          (isAdmin || canEdit) && (
+            <>
+              {isAdmin && <Switch inline label="Show deleted" checked={showDeleted} onChange={(e) => setShowDeleted(e.currentTarget.checked)} />}
+              {canEdit && <Button icon="add" intent={Intent.PRIMARY} text="New product" onClick={() => setCreating(true)} />}
+            </>
+          )
+        }
       />
       {isAdmin && showDeleted && <DeletedProducts />}
       {isAdmin && showDeleted && <H5 className="bw-gap">Current products</H5>}
       <QueryState isPending={products.isPending} error={products.error}>
-        {rows.length === 0 ? <NonIdealState icon="box" title="No products yet" /> : (
+        {rows.length === 0 ? (
+          <NonIdealState icon="box" title="No products yet" />
+        ) : (
           <div className="bw-table-wrap" data-testid="products-table">
             <Table numRows={rows.length} defaultRowHeight={32} columnWidths={COLUMNS.map((c) => c.width)} getCellClipboardData={getCellData}>
-              {COLUMNS.map((c, i) => <Column key={c.id} id={c.id} name={c.name} cellRenderer={renderers[i]} />)}
+              {COLUMNS.map((c, i) => (
+                <Column key={c.id} id={c.id} name={c.name} cellRenderer={renderers[i]} />
+              ))}
             </Table>
           </div>
         )}

@@ -4,7 +4,17 @@ import { ApiError } from '../../../lib/api-client';
 import { useBandChoices } from '../api/get-band-choices';
 import { useCreateRadio } from '../api/create-radio';
 import { useUpdateRadio } from '../api/update-radio';
-import { type BandChoice, CONNECTOR_LABELS, type Connector, type Polarization, POLARIZATIONS, type Radio, RECEIVE_ONLY, type Technology, TECHNOLOGY_LABELS } from '../types';
+import {
+  type BandChoice,
+  CONNECTOR_LABELS,
+  type Connector,
+  type Polarization,
+  POLARIZATIONS,
+  type Radio,
+  RECEIVE_ONLY,
+  type Technology,
+  TECHNOLOGY_LABELS,
+} from '../types';
 import { numberOrNull, textOf } from './form-values';
 
 export interface RadioEditorDialogProps {
@@ -47,7 +57,8 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
   const ofTechnology = useMemo(() => (choices.data?.bands ?? []).filter((b) => b.technology === technology), [choices.data, technology]);
   const usableSets = useMemo(() => (choices.data?.sets ?? []).filter((s) => s.bands.some((b) => b.technology === technology)), [choices.data, technology]);
 
-  const addBands = (ids: number[]) => setRows((cur) => [...cur, ...ids.filter((id) => !cur.some((r) => r.bandId === id)).map((bandId) => ({ bandId, gain: '' }))]);
+  const addBands = (ids: number[]) =>
+    setRows((cur) => [...cur, ...ids.filter((id) => !cur.some((r) => r.bandId === id)).map((bandId) => ({ bandId, gain: '' }))]);
   const changeTechnology = (next: Technology) => {
     setTechnology(next);
     // Bands of another technology would be refused; drop them, and the power of a receive-only radio.
@@ -59,7 +70,12 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const input = {
-      name, technology, module, polarization, connector, notes: notes.trim() ? notes : null,
+      name,
+      technology,
+      module,
+      polarization,
+      connector,
+      notes: notes.trim() ? notes : null,
       transmitPowerDbm: receiveOnly ? null : numberOrNull(power),
       feedLossDb: numberOrNull(feedLoss) ?? 0,
       bands: rows.map((r) => ({ bandId: r.bandId, certifiedMaxGainDbi: receiveOnly ? null : numberOrNull(r.gain) })),
@@ -68,10 +84,23 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
     else create.mutate({ productId, ...input }, { onSuccess: onClose });
   };
 
-  const field = (id: string, label: string, key: string, value: string, onChange: (v: string) => void, opts: { unit?: string; disabled?: boolean; helper?: string } = {}) => (
+  const field = (
+    id: string,
+    label: string,
+    key: string,
+    value: string,
+    onChange: (v: string) => void,
+    opts: { unit?: string; disabled?: boolean; helper?: string } = {},
+  ) => (
     <FormGroup label={label} labelFor={id} intent={fe[key] ? Intent.DANGER : Intent.NONE} helperText={fe[key] ?? opts.helper} disabled={opts.disabled}>
-      <InputGroup id={id} value={value} onValueChange={onChange} disabled={opts.disabled} intent={fe[key] ? Intent.DANGER : Intent.NONE}
-        rightElement={opts.unit ? <span className="bw-unit">{opts.unit}</span> : undefined} />
+      <InputGroup
+        id={id}
+        value={value}
+        onValueChange={onChange}
+        disabled={opts.disabled}
+        intent={fe[key] ? Intent.DANGER : Intent.NONE}
+        rightElement={opts.unit ? <span className="bw-unit">{opts.unit}</span> : undefined}
+      />
     </FormGroup>
   );
 
@@ -79,38 +108,99 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
     <Dialog isOpen onClose={onClose} title={radio ? `Edit radio ${radio.name}` : 'Add a radio'} icon="satellite" style={{ width: 720 }}>
       <form onSubmit={submit}>
         <DialogBody>
-          {conflict && <Callout intent={Intent.WARNING} className="bw-gap" title="Changed by someone else">{error!.message} Close this editor and open it again to see their version.</Callout>}
-          {error && !conflict && !Object.keys(fe).length && <Callout intent={Intent.DANGER} className="bw-gap">{error.message}</Callout>}
+          {conflict && (
+            <Callout intent={Intent.WARNING} className="bw-gap" title="Changed by someone else">
+              {error!.message} Close this editor and open it again to see their version.
+            </Callout>
+          )}
+          {error && !conflict && !Object.keys(fe).length && (
+            <Callout intent={Intent.DANGER} className="bw-gap">
+              {error.message}
+            </Callout>
+          )}
           <div className="bw-form-grid">
             {field('radio-name', 'Radio name', 'name', name, setName)}
             <FormGroup label="Technology" labelFor="radio-technology" intent={fe.technology ? Intent.DANGER : Intent.NONE} helperText={fe.technology}>
-              <HTMLSelect id="radio-technology" value={technology} onChange={(e) => changeTechnology(e.currentTarget.value as Technology)}
-                options={(Object.keys(TECHNOLOGY_LABELS) as Technology[]).map((t) => ({ value: t, label: TECHNOLOGY_LABELS[t] }))} />
+              <HTMLSelect
+                id="radio-technology"
+                value={technology}
+                onChange={(e) => changeTechnology(e.currentTarget.value as Technology)}
+                options={(Object.keys(TECHNOLOGY_LABELS) as Technology[]).map((t) => ({ value: t, label: TECHNOLOGY_LABELS[t] }))}
+              />
             </FormGroup>
             {field('radio-module', 'Module', 'module', module, setModule, { helper: 'Free text: maker and model' })}
-            {field('radio-power', 'Transmit power', 'transmitPowerDbm', power, setPower, { unit: 'dBm', disabled: receiveOnly, helper: receiveOnly ? 'Receive-only radio: no transmit power' : 'Conducted, at the module pin' })}
-            <FormGroup label="Required polarization" labelFor="radio-polarization" helperText={technology === 'gnss' ? 'Satellites transmit RHCP; a linear antenna loses about 3 dB' : undefined}>
-              <HTMLSelect id="radio-polarization" value={polarization} onChange={(e) => setPolarization(e.currentTarget.value as Polarization)} options={POLARIZATIONS} />
+            {field('radio-power', 'Transmit power', 'transmitPowerDbm', power, setPower, {
+              unit: 'dBm',
+              disabled: receiveOnly,
+              helper: receiveOnly ? 'Receive-only radio: no transmit power' : 'Conducted, at the module pin',
+            })}
+            <FormGroup
+              label="Required polarization"
+              labelFor="radio-polarization"
+              helperText={technology === 'gnss' ? 'Satellites transmit RHCP; a linear antenna loses about 3 dB' : undefined}
+            >
+              <HTMLSelect
+                id="radio-polarization"
+                value={polarization}
+                onChange={(e) => setPolarization(e.currentTarget.value as Polarization)}
+                options={POLARIZATIONS}
+              />
             </FormGroup>
             <FormGroup label="Feed / connector" labelFor="radio-connector">
-              <HTMLSelect id="radio-connector" value={connector} onChange={(e) => setConnector(e.currentTarget.value as Connector)}
-                options={Object.entries(CONNECTOR_LABELS).map(([value, label]) => ({ value, label }))} />
+              <HTMLSelect
+                id="radio-connector"
+                value={connector}
+                onChange={(e) => setConnector(e.currentTarget.value as Connector)}
+                options={Object.entries(CONNECTOR_LABELS).map(([value, label]) => ({ value, label }))}
+              />
             </FormGroup>
             {field('radio-feed-loss', 'Feed loss', 'feedLossDb', feedLoss, setFeedLoss, { unit: 'dB', helper: 'Cable, connector and trace loss' })}
           </div>
 
-          <FormGroup label="Bands" intent={fe.bands ? Intent.DANGER : Intent.NONE} helperText={fe.bands ?? `Only ${TECHNOLOGY_LABELS[technology]} bands fit this radio.`}>
+          <FormGroup
+            label="Bands"
+            intent={fe.bands ? Intent.DANGER : Intent.NONE}
+            helperText={fe.bands ?? `Only ${TECHNOLOGY_LABELS[technology]} bands fit this radio.`}
+          >
             <div className="bw-row bw-gap">
-              <HTMLSelect aria-label="Band set" value={setPick} onChange={(e) => setSetPick(e.currentTarget.value)}
-                options={[{ value: '', label: usableSets.length ? 'Choose a band set…' : 'No band set for this technology' }, ...usableSets.map((s) => ({ value: String(s.id), label: s.name }))]} />
-              <Button icon="layers" text="Add bands from set" disabled={!setPick}
+              <HTMLSelect
+                aria-label="Band set"
+                value={setPick}
+                onChange={(e) => setSetPick(e.currentTarget.value)}
+                options={[
+                  { value: '', label: usableSets.length ? 'Choose a band set…' : 'No band set for this technology' },
+                  ...usableSets.map((s) => ({ value: String(s.id), label: s.name })),
+                ]}
+              />
+              <Button
+                icon="layers"
+                text="Add bands from set"
+                disabled={!setPick}
                 onClick={() => {
                   const chosen = usableSets.find((s) => String(s.id) === setPick);
                   if (chosen) addBands(chosen.bands.filter((b) => b.technology === technology).map((b) => b.id));
-                }} />
-              <HTMLSelect aria-label="Band" value={bandPick} onChange={(e) => setBandPick(e.currentTarget.value)}
-                options={[{ value: '', label: 'Choose a band…' }, ...ofTechnology.filter((b) => !rows.some((r) => r.bandId === b.id)).map((b) => ({ value: String(b.id), label: `${b.designation} — ${describe(b)}` }))]} />
-              <Button icon="add" text="Add band" disabled={!bandPick} onClick={() => { addBands([Number(bandPick)]); setBandPick(''); }} />
+                }}
+              />
+              <HTMLSelect
+                aria-label="Band"
+                value={bandPick}
+                onChange={(e) => setBandPick(e.currentTarget.value)}
+                options={[
+                  { value: '', label: 'Choose a band…' },
+                  ...ofTechnology
+                    .filter((b) => !rows.some((r) => r.bandId === b.id))
+                    .map((b) => ({ value: String(b.id), label: `${b.designation} — ${describe(b)}` })),
+                ]}
+              />
+              <Button
+                icon="add"
+                text="Add band"
+                disabled={!bandPick}
+                onClick={() => {
+                  addBands([Number(bandPick)]);
+                  setBandPick('');
+                }}
+              />
             </div>
             {usableSets.find((s) => String(s.id) === setPick) && (
               <p className="bw-muted bw-small">{usableSets.find((s) => String(s.id) === setPick)!.description}</p>
@@ -123,29 +213,61 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
                   const gainError = fe[`bands.${i}.certifiedMaxGainDbi`];
                   return (
                     <tr key={row.bandId}>
-                      <td><Tag minimal intent={bandError ? Intent.DANGER : Intent.NONE}>{band?.designation ?? `#${row.bandId}`}</Tag></td>
-                      <td className="bw-muted">{band ? describe(band) : ''}{bandError && <div className="bw-error-text">{bandError}</div>}</td>
+                      <td>
+                        <Tag minimal intent={bandError ? Intent.DANGER : Intent.NONE}>
+                          {band?.designation ?? `#${row.bandId}`}
+                        </Tag>
+                      </td>
+                      <td className="bw-muted">
+                        {band ? describe(band) : ''}
+                        {bandError && <div className="bw-error-text">{bandError}</div>}
+                      </td>
                       <td>
                         {!receiveOnly && (
-                          <InputGroup size="small" aria-label={`Certified max gain for ${band?.designation ?? row.bandId}`} placeholder="max gain" value={row.gain}
-                            intent={gainError ? Intent.DANGER : Intent.NONE} rightElement={<span className="bw-unit">dBi</span>}
-                            onValueChange={(v) => setRows((cur) => cur.map((r, j) => (j === i ? { ...r, gain: v } : r)))} />
+                          <InputGroup
+                            size="small"
+                            aria-label={`Certified max gain for ${band?.designation ?? row.bandId}`}
+                            placeholder="max gain"
+                            value={row.gain}
+                            intent={gainError ? Intent.DANGER : Intent.NONE}
+                            rightElement={<span className="bw-unit">dBi</span>}
+                            onValueChange={(v) => setRows((cur) => cur.map((r, j) => (j === i ? { ...r, gain: v } : r)))}
+                          />
                         )}
                         {gainError && <div className="bw-error-text">{gainError}</div>}
                       </td>
-                      <td><Button size="small" variant="minimal" icon="cross" aria-label={`Remove ${band?.designation ?? row.bandId}`} onClick={() => setRows((cur) => cur.filter((_, j) => j !== i))} /></td>
+                      <td>
+                        <Button
+                          size="small"
+                          variant="minimal"
+                          icon="cross"
+                          aria-label={`Remove ${band?.designation ?? row.bandId}`}
+                          onClick={() => setRows((cur) => cur.filter((_, j) => j !== i))}
+                        />
+                      </td>
                     </tr>
                   );
                 })}
               </tbody>
             </table>
-            {!receiveOnly && rows.length > 0 && <p className="bw-muted bw-small">Certified max gain: the antenna gain the module&apos;s certification allows in that band (dBi), from its grant.</p>}
+            {!receiveOnly && rows.length > 0 && (
+              <p className="bw-muted bw-small">
+                Certified max gain: the antenna gain the module&apos;s certification allows in that band (dBi), from its grant.
+              </p>
+            )}
           </FormGroup>
           <FormGroup label="Notes" labelFor="radio-notes">
             <TextArea id="radio-notes" value={notes} onChange={(e) => setNotes(e.currentTarget.value)} fill rows={2} />
           </FormGroup>
         </DialogBody>
-        <DialogFooter actions={<><Button text="Cancel" onClick={onClose} /><Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text="Save radio" /></>} />
+        <DialogFooter
+          actions={
+            <>
+              <Button text="Cancel" onClick={onClose} />
+              <Button type="submit" intent={Intent.PRIMARY} loading={mutation.isPending} text="Save radio" />
+            </>
+          }
+        />
       </form>
     </Dialog>
   );

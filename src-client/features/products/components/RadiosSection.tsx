@@ -28,25 +28,55 @@ export function RadiosSection({ product, canEdit }: RadiosSectionProps) {
       className="bw-gap"
     >
       <SectionCard padded={product.radios.length === 0}>
-        {product.radios.length === 0 ? <NonIdealState icon="satellite" title="No radios yet" description="Add the product's cellular modem, GNSS receiver, Wi-Fi, BLE or LoRa radios." /> : (
+        {product.radios.length === 0 ? (
+          <NonIdealState icon="satellite" title="No radios yet" description="Add the product's cellular modem, GNSS receiver, Wi-Fi, BLE or LoRa radios." />
+        ) : (
           <HTMLTable compact striped className="bw-radios-table" data-testid="radios-table">
             <thead>
-              <tr><th>Radio</th><th>Technology</th><th>Module</th><th>Tx power</th><th>Polarization</th><th>Feed</th><th>Bands (certified max gain)</th>{canEdit && <th />}</tr>
+              <tr>
+                <th>Radio</th>
+                <th>Technology</th>
+                <th>Module</th>
+                <th>Tx power</th>
+                <th>Polarization</th>
+                <th>Feed</th>
+                <th>Bands (certified max gain)</th>
+                {canEdit && <th />}
+              </tr>
             </thead>
             <tbody>
               {product.radios.map((radio) => (
                 <tr key={radio.id} data-testid="radio-row">
-                  <td><b>{radio.name}</b></td>
+                  <td>
+                    <b>{radio.name}</b>
+                  </td>
                   <td>{TECHNOLOGY_LABELS[radio.technology]}</td>
                   <td>{radio.module}</td>
                   <td>{radio.receiveOnly ? <Tag minimal>receive only</Tag> : `${radio.transmitPowerDbm} dBm`}</td>
                   <td>{radio.polarization}</td>
-                  <td>{CONNECTOR_LABELS[radio.connector]}, {radio.feedLossDb} dB</td>
-                  <td><div className="bw-tags">{radio.bands.map((b) => <Tag key={b.band.id} minimal title={b.band.name}>{bandText(b)}</Tag>)}</div></td>
+                  <td>
+                    {CONNECTOR_LABELS[radio.connector]}, {radio.feedLossDb} dB
+                  </td>
+                  <td>
+                    <div className="bw-tags">
+                      {radio.bands.map((b) => (
+                        <Tag key={b.band.id} minimal title={b.band.name}>
+                          {bandText(b)}
+                        </Tag>
+                      ))}
+                    </div>
+                  </td>
                   {canEdit && (
                     <td className="bw-nowrap">
                       <Button size="small" variant="minimal" icon="edit" aria-label={`Edit ${radio.name}`} onClick={() => setEditing(radio)} />
-                      <Button size="small" variant="minimal" icon="trash" intent={Intent.DANGER} aria-label={`Delete ${radio.name}`} onClick={() => setDeleting(radio)} />
+                      <Button
+                        size="small"
+                        variant="minimal"
+                        icon="trash"
+                        intent={Intent.DANGER}
+                        aria-label={`Delete ${radio.name}`}
+                        onClick={() => setDeleting(radio)}
+                      />
                     </td>
                   )}
                 </tr>
@@ -64,10 +94,19 @@ export function RadiosSection({ product, canEdit }: RadiosSectionProps) {
         cancelButtonText="Keep it"
         loading={remove.isPending}
         onCancel={() => setDeleting(null)}
-        onConfirm={() => deleting && remove.mutate({ productId: product.id, radioId: deleting.id, version: deleting.version }, {
-          onSuccess: () => setDeleting(null),
-          onError: (e) => { setDeleting(null); toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })); },
-        })}
+        onConfirm={() =>
+          deleting &&
+          remove.mutate(
+            { productId: product.id, radioId: deleting.id, version: deleting.version },
+            {
+              onSuccess: () => setDeleting(null),
+              onError: (e) => {
+                setDeleting(null);
+                toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message }));
+              },
+            },
+          )
+        }
       >
         Remove the radio <b>{deleting?.name}</b> from {product.name}?
       </Alert>

@@ -8,5 +8,8 @@ export const createRule = (definition: unknown) => apiRequest<RuleDetail>('/rule
 
 export const useCreateRule = () => {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createRule, onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ruleKeys.all }), invalidateVerdicts(queryClient)]) });
+  return useMutation({
+    mutationFn: createRule,
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ruleKeys.all }), invalidateVerdicts(queryClient)]),
+  });
 };

@@ -11,4 +11,5 @@ export const getRule = (id: string) => apiRequest<RuleDetail>(`/rules/${id}`);
 export const useRule = (id: string | null) => useQuery({ queryKey: ruleKeys.detail(id ?? ''), queryFn: () => getRule(id!), enabled: id !== null });
 
 export const getRuleVersions = (id: string) => apiRequest<RuleVersion[]>(`/rules/${id}/versions`);
-export const useRuleVersions = (id: string | null) => useQuery({ queryKey: ruleKeys.versions(id ?? ''), queryFn: () => getRuleVersions(id!), enabled: id !== null });
+export const useRuleVersions = (id: string | null) =>
+  useQuery({ queryKey: ruleKeys.versions(id ?? ''), queryFn: () => getRuleVersions(id!), enabled: id !== null });

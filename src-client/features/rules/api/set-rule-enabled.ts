@@ -9,5 +9,8 @@ export const setRuleEnabled = ({ id, enabled, version }: { id: string; enabled: 
 
 export const useSetRuleEnabled = () => {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: setRuleEnabled, onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ruleKeys.all }), invalidateVerdicts(queryClient)]) });
+  return useMutation({
+    mutationFn: setRuleEnabled,
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ruleKeys.all }), invalidateVerdicts(queryClient)]),
+  });
 };

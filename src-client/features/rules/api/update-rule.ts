@@ -9,5 +9,8 @@ export const updateRule = ({ id, definition, version }: { id: string; definition
 
 export const useUpdateRule = () => {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateRule, onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ruleKeys.all }), invalidateVerdicts(queryClient)]) });
+  return useMutation({
+    mutationFn: updateRule,
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: ruleKeys.all }), invalidateVerdicts(queryClient)]),
+  });
 };

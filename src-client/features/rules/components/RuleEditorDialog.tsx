@@ -61,7 +61,16 @@ export function RuleEditorDialog({ ruleId, onClose }: RuleEditorDialogProps) {
     setProblems(fields.length > 0 ? fields : [{ path: '', message: error.message }]);
   };
   const onValidate = () => withParsed((value) => validate.mutate(value, { onSuccess: (r) => setProblems(r.problems), onError: showError }));
-  const onPreview = () => withParsed((value) => previewRule.mutate(value, { onSuccess: (p) => { setPreview(p); setProblems([]); }, onError: showError }));
+  const onPreview = () =>
+    withParsed((value) =>
+      previewRule.mutate(value, {
+        onSuccess: (p) => {
+          setPreview(p);
+          setProblems([]);
+        },
+        onError: showError,
+      }),
+    );
   const onSave = () =>
     withParsed((value) => {
       if (ruleId === null) create.mutate(value, { onSuccess: onClose, onError: showError });
@@ -73,23 +82,69 @@ export function RuleEditorDialog({ ruleId, onClose }: RuleEditorDialogProps) {
       <DialogBody>
         <p className="bw-muted">
           The rule is json-rules-engine JSON over Bandwright&apos;s facts. A value written as {'{"param": "name"}'} takes a parameter; a table parameter needs
-          {' {"param": "name", "key": "technology"}'} and a &quot;default&quot; entry. Placeholders such as {'{worstVswr}'} in the message are filled with the numbers.
+          {' {"param": "name", "key": "technology"}'} and a &quot;default&quot; entry. Placeholders such as {'{worstVswr}'} in the message are filled with the
+          numbers.
         </p>
-        <TextArea fill value={text} onChange={(e) => setText(e.target.value)} rows={22} style={{ fontFamily: 'monospace', fontSize: 12 }} aria-label="Rule JSON" />
-        {problems !== null && problems.length === 0 && !preview && <Callout intent={Intent.SUCCESS} icon="tick" className="bw-gap">The rule is valid.</Callout>}
+        <TextArea
+          fill
+          value={text}
+          onChange={(e) => setText(e.target.value)}
+          rows={22}
+          style={{ fontFamily: 'monospace', fontSize: 12 }}
+          aria-label="Rule JSON"
+        />
+        {problems !== null && problems.length === 0 && !preview && (
+          <Callout intent={Intent.SUCCESS} icon="tick" className="bw-gap">
+            The rule is valid.
+          </Callout>
+        )}
         {problems !== null && problems.length > 0 && (
           <Callout intent={Intent.DANGER} icon="error" title="The rule cannot be saved" className="bw-gap" data-testid="rule-problems">
-            <ul>{problems.map((p) => <li key={p.path + p.message}><code>{p.path || 'rule'}</code>: {p.message}</li>)}</ul>
+            <ul>
+              {problems.map((p) => (
+                <li key={p.path + p.message}>
+                  <code>{p.path || 'rule'}</code>: {p.message}
+                </li>
+              ))}
+            </ul>
           </Callout>
         )}
         {preview && (
-          <Callout intent={preview.changes.length ? Intent.WARNING : Intent.NONE} icon="eye-open" title={`${preview.changes.length} of ${preview.cellsCompared} matrix cells would change`} className="bw-gap" data-testid="rule-preview">
+          <Callout
+            intent={preview.changes.length ? Intent.WARNING : Intent.NONE}
+            icon="eye-open"
+            title={`${preview.changes.length} of ${preview.cellsCompared} matrix cells would change`}
+            className="bw-gap"
+            data-testid="rule-preview"
+          >
             {preview.changes.length > 0 && (
               <HTMLTable compact>
-                <thead><tr><th>Product</th><th>Radio band</th><th>Part</th><th>Now</th><th>After</th><th>Finding</th></tr></thead>
+                <thead>
+                  <tr>
+                    <th>Product</th>
+                    <th>Radio band</th>
+                    <th>Part</th>
+                    <th>Now</th>
+                    <th>After</th>
+                    <th>Finding</th>
+                  </tr>
+                </thead>
                 <tbody>
                   {preview.changes.slice(0, 50).map((c) => (
-                    <tr key={`${c.productId}-${c.designation}-${c.mpn}-${c.radioName}`}><td>{c.productName}</td><td>{c.designation} · {c.radioName}</td><td>{c.mpn}</td><td><Tag minimal>{c.before}</Tag></td><td><Tag minimal>{c.after}</Tag></td><td>{c.findings.join('; ')}</td></tr>
+                    <tr key={`${c.productId}-${c.designation}-${c.mpn}-${c.radioName}`}>
+                      <td>{c.productName}</td>
+                      <td>
+                        {c.designation} · {c.radioName}
+                      </td>
+                      <td>{c.mpn}</td>
+                      <td>
+                        <Tag minimal>{c.before}</Tag>
+                      </td>
+                      <td>
+                        <Tag minimal>{c.after}</Tag>
+                      </td>
+                      <td>{c.findings.join('; ')}</td>
+                    </tr>
                   ))}
                 </tbody>
               </HTMLTable>
@@ -97,16 +152,23 @@ export function RuleEditorDialog({ ruleId, onClose }: RuleEditorDialogProps) {
           </Callout>
         )}
         {versions.data && versions.data.length > 0 && (
-          <p className="bw-muted">History: {versions.data.map((v) => `v${v.version} ${v.action}${v.changedBy ? ` by ${v.changedBy}` : ''}${v.at ? ` ${new Date(v.at).toLocaleString()}` : ''}`).join(' · ')}</p>
+          <p className="bw-muted">
+            History:{' '}
+            {versions.data
+              .map((v) => `v${v.version} ${v.action}${v.changedBy ? ` by ${v.changedBy}` : ''}${v.at ? ` ${new Date(v.at).toLocaleString()}` : ''}`)
+              .join(' · ')}
+          </p>
         )}
       </DialogBody>
-      <DialogFooter actions={(
-        <>
-          <Button text="Validate" icon="tick" loading={validate.isPending} onClick={onValidate} />
-          <Button text="Preview impact" icon="eye-open" loading={previewRule.isPending} onClick={onPreview} />
-          <Button text="Save" icon="floppy-disk" intent={Intent.PRIMARY} loading={create.isPending || update.isPending} onClick={onSave} />
-        </>
-      )} />
+      <DialogFooter
+        actions={
+          <>
+            <Button text="Validate" icon="tick" loading={validate.isPending} onClick={onValidate} />
+            <Button text="Preview impact" icon="eye-open" loading={previewRule.isPending} onClick={onPreview} />
+            <Button text="Save" icon="floppy-disk" intent={Intent.PRIMARY} loading={create.isPending || update.isPending} onClick={onSave} />
+          </>
+        }
+      />
     </Dialog>
   );
 }

@@ -30,12 +30,29 @@ export function RulesPage() {
       <ScreeningCaution compact />
       <QueryState isPending={rules.isPending} error={rules.error}>
         <HTMLTable compact striped interactive style={{ width: '100%' }} data-testid="rules">
-          <thead><tr><th>Rule</th><th>Severity</th><th>Threshold source</th><th>Origin</th><th>Version</th><th>Enabled</th>{isAdmin && <th />}</tr></thead>
+          <thead>
+            <tr>
+              <th>Rule</th>
+              <th>Severity</th>
+              <th>Threshold source</th>
+              <th>Origin</th>
+              <th>Version</th>
+              <th>Enabled</th>
+              {isAdmin && <th />}
+            </tr>
+          </thead>
           <tbody>
             {(rules.data ?? []).map((rule) => (
               <tr key={rule.id} data-testid={`rule-${rule.id}`}>
-                <td><b>{rule.title}</b><div className="bw-muted">{rule.id} · {rule.description}</div></td>
-                <td><Tag intent={SEVERITY_INTENT[rule.severity]}>{rule.severity}</Tag></td>
+                <td>
+                  <b>{rule.title}</b>
+                  <div className="bw-muted">
+                    {rule.id} · {rule.description}
+                  </div>
+                </td>
+                <td>
+                  <Tag intent={SEVERITY_INTENT[rule.severity]}>{rule.severity}</Tag>
+                </td>
                 <td className="bw-muted">{rule.source}</td>
                 <td>{ORIGIN_LABEL[rule.origin]}</td>
                 <td>{rule.version}</td>
@@ -44,10 +61,19 @@ export function RulesPage() {
                     checked={rule.enabled}
                     disabled={!isAdmin || setEnabled.isPending}
                     aria-label={`${rule.enabled ? 'Disable' : 'Enable'} ${rule.title}`}
-                    onChange={() => setEnabled.mutate({ id: rule.id, enabled: !rule.enabled, version: rule.version }, { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) })}
+                    onChange={() =>
+                      setEnabled.mutate(
+                        { id: rule.id, enabled: !rule.enabled, version: rule.version },
+                        { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) },
+                      )
+                    }
                   />
                 </td>
-                {isAdmin && <td><Button small icon="edit" text="Edit" onClick={() => setEditing(rule.id)} /></td>}
+                {isAdmin && (
+                  <td>
+                    <Button small icon="edit" text="Edit" onClick={() => setEditing(rule.id)} />
+                  </td>
+                )}
               </tr>
             ))}
           </tbody>

@@ -4,7 +4,16 @@ import { BUILT_IN_BANDS, overlayFromLibrary } from './get-overlay-bands';
 describe(overlayFromLibrary.name, () => {
   it('spans a duplex band from its lowest to its highest edge', () => {
     // 3GPP TS 36.101 Table 5.5-1: B20 UL 832–862, DL 791–821 MHz (UL above DL), span 791–862 MHz.
-    const overlay = overlayFromLibrary({ id: 7, designation: 'B20', name: 'E-UTRA 20', technology: 'lte', ranges: [{ fromMhz: 832, toMhz: 862 }, { fromMhz: 791, toMhz: 821 }] });
+    const overlay = overlayFromLibrary({
+      id: 7,
+      designation: 'B20',
+      name: 'E-UTRA 20',
+      technology: 'lte',
+      ranges: [
+        { fromMhz: 832, toMhz: 862 },
+        { fromMhz: 791, toMhz: 821 },
+      ],
+    });
     expect(overlay).toEqual({ key: 'band-7', label: 'B20', fromHz: 791e6, toHz: 862e6 });
   });
 

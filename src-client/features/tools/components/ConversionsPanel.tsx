@@ -13,7 +13,11 @@ const REFLECTION_INPUTS: Array<{ value: ReflectionInput; label: string }> = [
 ];
 
 function ConversionError({ error }: { error: Error | null }) {
-  return error ? <Callout intent={Intent.DANGER} compact>{error.message}</Callout> : null;
+  return error ? (
+    <Callout intent={Intent.DANGER} compact>
+      {error.message}
+    </Callout>
+  ) : null;
 }
 
 function ReflectionCard() {
@@ -28,7 +32,12 @@ function ReflectionCard() {
       <H4>Reflection</H4>
       <div className="bw-row">
         <FormGroup label="Known quantity" labelFor="conv-reflection-kind">
-          <HTMLSelect id="conv-reflection-kind" value={quantity} options={REFLECTION_INPUTS} onChange={(e) => setQuantity(e.currentTarget.value as ReflectionInput)} />
+          <HTMLSelect
+            id="conv-reflection-kind"
+            value={quantity}
+            options={REFLECTION_INPUTS}
+            onChange={(e) => setQuantity(e.currentTarget.value as ReflectionInput)}
+          />
         </FormGroup>
         <FormGroup label="Value" labelFor="conv-reflection-value">
           <InputGroup id="conv-reflection-value" value={text} onValueChange={setText} inputMode="decimal" />
@@ -124,7 +133,15 @@ function PowerCard() {
       <H4>Power</H4>
       <div className="bw-row">
         <FormGroup label="Unit" labelFor="conv-power-unit">
-          <HTMLSelect id="conv-power-unit" value={unit} options={[{ value: 'dbm', label: 'dBm' }, { value: 'mw', label: 'mW' }]} onChange={(e) => setUnit(e.currentTarget.value as 'dbm' | 'mw')} />
+          <HTMLSelect
+            id="conv-power-unit"
+            value={unit}
+            options={[
+              { value: 'dbm', label: 'dBm' },
+              { value: 'mw', label: 'mW' },
+            ]}
+            onChange={(e) => setUnit(e.currentTarget.value as 'dbm' | 'mw')}
+          />
         </FormGroup>
         <FormGroup label="Value" labelFor="conv-power-value">
           <InputGroup id="conv-power-value" value={text} onValueChange={setText} inputMode="decimal" />
@@ -158,7 +175,10 @@ function EfficiencyCard() {
           <HTMLSelect
             id="conv-eff-unit"
             value={unit}
-            options={[{ value: 'efficiencyPct', label: '%' }, { value: 'efficiencyDb', label: 'dB' }]}
+            options={[
+              { value: 'efficiencyPct', label: '%' },
+              { value: 'efficiencyDb', label: 'dB' },
+            ]}
             onChange={(e) => setUnit(e.currentTarget.value as 'efficiencyPct' | 'efficiencyDb')}
           />
         </FormGroup>

@@ -58,7 +58,9 @@ export function LSectionSchematic({ exact, snapped, series, z0Ohms, loadLabel }:
               <div className="bw-lsec__node" />
               <div className="bw-lsec__drop" />
               <ElementBlock exact={exact[i]} snapped={snapped[i]} series={series} />
-              <div className="bw-lsec__ground" aria-hidden="true">⏚</div>
+              <div className="bw-lsec__ground" aria-hidden="true">
+                ⏚
+              </div>
             </div>
           )}
           <div className="bw-lsec__wire" />

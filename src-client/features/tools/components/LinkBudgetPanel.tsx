@@ -15,7 +15,15 @@ const FIELDS: Array<{ key: Field; label: string }> = [
   { key: 'lossesDb', label: 'Other losses (dB)' },
   { key: 'rxSensitivityDbm', label: 'Receiver sensitivity (dBm)' },
 ];
-const START: Record<Field, string> = { frequencyMhz: '868', distanceM: '1000', txPowerDbm: '14', txGainDbi: '0', rxGainDbi: '2', lossesDb: '6', rxSensitivityDbm: '-120' };
+const START: Record<Field, string> = {
+  frequencyMhz: '868',
+  distanceM: '1000',
+  txPowerDbm: '14',
+  txGainDbi: '0',
+  rxGainDbi: '2',
+  lossesDb: '6',
+  rxSensitivityDbm: '-120',
+};
 
 function toRequest(values: Record<Field, string>): LinkBudgetRequest | null {
   const n = Object.fromEntries(FIELDS.map(({ key }) => [key, parseNumber(values[key])])) as Record<Field, number | null>;
@@ -40,11 +48,19 @@ export function LinkBudgetPanel() {
             </FormGroup>
           ))}
         </div>
-        {!request && <Callout intent={Intent.WARNING} compact>Fill in every field with a number.</Callout>}
+        {!request && (
+          <Callout intent={Intent.WARNING} compact>
+            Fill in every field with a number.
+          </Callout>
+        )}
       </section>
       <section className="bw-panel" aria-label="Link budget result">
         <H4>Budget</H4>
-        {error && <Callout intent={Intent.DANGER} compact>{error.message}</Callout>}
+        {error && (
+          <Callout intent={Intent.DANGER} compact>
+            {error.message}
+          </Callout>
+        )}
         {data && (
           <>
             <ResultList
@@ -63,8 +79,8 @@ export function LinkBudgetPanel() {
               ]}
             />
             <p className="bw-muted bw-tool-note">
-              Every 6 dB of margin lost halves the free-space range (× {significant(data.rangeRatioFor6DbLess, 3)}); every 6 dB gained doubles it. Real
-              links lose more to walls, bodies and the ground: treat this as the best case.
+              Every 6 dB of margin lost halves the free-space range (× {significant(data.rangeRatioFor6DbLess, 3)}); every 6 dB gained doubles it. Real links
+              lose more to walls, bodies and the ground: treat this as the best case.
             </p>
           </>
         )}

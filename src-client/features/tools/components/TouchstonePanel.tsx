@@ -32,7 +32,15 @@ function FileProblem({ error }: { error: Error }) {
   );
 }
 
-function AnalysisView({ analysis, overlayLabel, overlay }: { analysis: TouchstoneAnalysis; overlayLabel?: string; overlay?: { fromHz: number; toHz: number } }) {
+function AnalysisView({
+  analysis,
+  overlayLabel,
+  overlay,
+}: {
+  analysis: TouchstoneAnalysis;
+  overlayLabel?: string;
+  overlay?: { fromHz: number; toHz: number };
+}) {
   const frequencyHz = useMemo(() => analysis.curve.map((p) => p.frequencyHz), [analysis]);
   const series = useMemo<FrequencySeries[]>(
     () => [
@@ -55,7 +63,8 @@ function AnalysisView({ analysis, overlayLabel, overlay }: { analysis: Touchston
         : { value: analysis.thresholdReturnLossDb, unit: 'dB', label: `RL ${significant(analysis.thresholdReturnLossDb, 3)} dB` },
     [analysis],
   );
-  const criterionText = analysis.criterion === 'vswr' ? `VSWR ≤ ${significant(analysis.thresholdVswr, 3)}` : `return loss ≥ ${significant(analysis.thresholdReturnLossDb, 3)} dB`;
+  const criterionText =
+    analysis.criterion === 'vswr' ? `VSWR ≤ ${significant(analysis.thresholdVswr, 3)}` : `return loss ≥ ${significant(analysis.thresholdReturnLossDb, 3)} dB`;
   return (
     <>
       <FrequencyChart
@@ -85,7 +94,8 @@ function AnalysisView({ analysis, overlayLabel, overlay }: { analysis: Touchston
           )}
           {analysis.matchedRangeCount > analysis.matchedRanges.length && (
             <p className="bw-muted">
-              The first {analysis.matchedRanges.length} of {analysis.matchedRangeCount} matched ranges are listed; a curve that crosses the limit this often is usually noisy.
+              The first {analysis.matchedRanges.length} of {analysis.matchedRangeCount} matched ranges are listed; a curve that crosses the limit this often is
+              usually noisy.
             </p>
           )}
         </div>
@@ -95,7 +105,10 @@ function AnalysisView({ analysis, overlayLabel, overlay }: { analysis: Touchston
             ['Reference', analysis.referenceOhms.map((r) => `${significant(r, 4)} Ω`).join(', ')],
             ['Points', `${analysis.points}${analysis.resampled ? ` (plot resampled to ${analysis.curve.length})` : ''}`],
             ['Measured', `${mhz(analysis.minFrequencyHz)} – ${mhz(analysis.maxFrequencyHz)}`],
-            ['Best match', `${mhz(analysis.bestMatch.frequencyHz)}: VSWR ${fixed(analysis.bestMatch.vswr, 2)}, RL ${fixed(analysis.bestMatch.returnLossDb, 1, 'dB')}`],
+            [
+              'Best match',
+              `${mhz(analysis.bestMatch.frequencyHz)}: VSWR ${fixed(analysis.bestMatch.vswr, 2)}, RL ${fixed(analysis.bestMatch.returnLossDb, 1, 'dB')}`,
+            ],
           ]}
         />
       </div>
@@ -179,7 +192,10 @@ export function TouchstonePanel() {
             <HTMLSelect
               id="ts-port"
               value={port}
-              options={[{ value: 1, label: 'Port 1 (S11)' }, { value: 2, label: 'Port 2 (S22)' }]}
+              options={[
+                { value: 1, label: 'Port 1 (S11)' },
+                { value: 2, label: 'Port 2 (S22)' },
+              ]}
               onChange={(e) => {
                 const next = Number(e.currentTarget.value);
                 setPort(next);
@@ -192,7 +208,10 @@ export function TouchstonePanel() {
           <HTMLSelect
             id="ts-band"
             value={bandKey}
-            options={[{ value: '', label: 'None' }, ...bandList.map((b) => ({ value: b.key, label: `${b.label} (${significant(b.fromHz / 1e6, 6)}–${significant(b.toHz / 1e6, 6)} MHz)` }))]}
+            options={[
+              { value: '', label: 'None' },
+              ...bandList.map((b) => ({ value: b.key, label: `${b.label} (${significant(b.fromHz / 1e6, 6)}–${significant(b.toHz / 1e6, 6)} MHz)` })),
+            ]}
             onChange={(e) => setBandKey(e.currentTarget.value)}
           />
         </FormGroup>

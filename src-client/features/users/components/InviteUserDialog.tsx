@@ -39,7 +39,9 @@ export function InviteUserDialog({ isOpen, onClose, onInvited }: InviteUserDialo
       <form onSubmit={submit}>
         <DialogBody>
           {invite.error instanceof ApiError && !Object.keys(fieldErrors).length && (
-            <Callout intent={Intent.DANGER} className="bw-gap">{invite.error.message}</Callout>
+            <Callout intent={Intent.DANGER} className="bw-gap">
+              {invite.error.message}
+            </Callout>
           )}
           <FormGroup label="E-mail" labelFor="invite-email" intent={fieldErrors.email ? Intent.DANGER : Intent.NONE} helperText={fieldErrors.email}>
             <InputGroup id="invite-email" type="email" value={email} onValueChange={setEmail} required />
@@ -52,7 +54,14 @@ export function InviteUserDialog({ isOpen, onClose, onInvited }: InviteUserDialo
           </FormGroup>
           <p className="bw-muted">They get an e-mail with a link that sets their password. The link works once, for 72 hours.</p>
         </DialogBody>
-        <DialogFooter actions={<><Button text="Cancel" onClick={onClose} /><Button type="submit" intent={Intent.PRIMARY} loading={invite.isPending} text="Send invitation" /></>} />
+        <DialogFooter
+          actions={
+            <>
+              <Button text="Cancel" onClick={onClose} />
+              <Button type="submit" intent={Intent.PRIMARY} loading={invite.isPending} text="Send invitation" />
+            </>
+          }
+        />
       </form>
     </Dialog>
   );

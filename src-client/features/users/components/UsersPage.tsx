@@ -50,7 +50,9 @@ export function UsersPage() {
   const statusCell = useCallback(
     (row: number) => (
       <Cell>
-        <Tag minimal intent={STATUS_INTENT[rows[row].status]}>{rows[row].status}</Tag>
+        <Tag minimal intent={STATUS_INTENT[rows[row].status]}>
+          {rows[row].status}
+        </Tag>
       </Cell>
     ),
     [rows],
@@ -86,7 +88,12 @@ export function UsersPage() {
       />
       <QueryState isPending={users.isPending} error={users.error}>
         <div className="bw-table-wrap" data-testid="users-table">
-          <Table numRows={rows.length} defaultRowHeight={34} columnWidths={[200, 280, 160, 130, 140]} getCellClipboardData={(r, c) => getCellData(r, (['name', 'email', 'role', 'status', 'id'] as const)[c])}>
+          <Table
+            numRows={rows.length}
+            defaultRowHeight={34}
+            columnWidths={[200, 280, 160, 130, 140]}
+            getCellClipboardData={(r, c) => getCellData(r, (['name', 'email', 'role', 'status', 'id'] as const)[c])}
+          >
             <Column id="name" name="Name" cellRenderer={textCell('name')} />
             <Column id="email" name="E-mail" cellRenderer={textCell('email')} />
             <Column id="role" name="Role" cellRenderer={roleCell} />

@@ -1,24 +1,60 @@
 import fc from 'fast-check';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../../rf/mismatch';
-import { CatalogueIndex, type CoverageQuery, type IndexedPart, binsInside, coverageScreen, extremeInRange, meetsCoverage, screenLevels, screenRejects } from './catalogue-index';
+import {
+  CatalogueIndex,
+  type CoverageQuery,
+  type IndexedPart,
+  binsInside,
+  coverageScreen,
+  extremeInRange,
+  meetsCoverage,
+  screenLevels,
+  screenRejects,
+} from './catalogue-index';
 
 const MHZ = 1e6;
 
 function part(id: number, overrides: Partial<IndexedPart> = {}): IndexedPart {
   return {
-    id, manufacturer: 'Unit Maker', mpn: `U-${id}`, title: 'unit part', formFactor: 'chip', connector: 'solder-pad', polarization: 'linear',
-    lifecycle: 'active', reviewState: 'approved', searchText: `unit maker u-${id}`, lowestPrices: new Map(), measuredKinds: [], updatedAtMs: id,
-    gamma: null, efficiency: null, specBands: [], ...overrides,
+    id,
+    manufacturer: 'Unit Maker',
+    mpn: `U-${id}`,
+    title: 'unit part',
+    formFactor: 'chip',
+    connector: 'solder-pad',
+    polarization: 'linear',
+    lifecycle: 'active',
+    reviewState: 'approved',
+    searchText: `unit maker u-${id}`,
+    lowestPrices: new Map(),
+    measuredKinds: [],
+    updatedAtMs: id,
+    gamma: null,
+    efficiency: null,
+    specBands: [],
+    ...overrides,
   };
 }
 
 const curve = (points: [number, number][]) => ({ frequenciesHz: points.map(([f]) => f * MHZ), values: points.map(([, v]) => v) });
-const band = (fromMhz: number, toMhz: number, maxVswr: number | null, efficiencyPct: number | null = null, minReturnLossDb: number | null = null) =>
-  ({ fromHz: fromMhz * MHZ, toHz: toMhz * MHZ, maxVswr, minReturnLossDb, efficiencyPct, peakGainDbi: null, averageGainDbi: null });
+const band = (fromMhz: number, toMhz: number, maxVswr: number | null, efficiencyPct: number | null = null, minReturnLossDb: number | null = null) => ({
+  fromHz: fromMhz * MHZ,
+  toHz: toMhz * MHZ,
+  maxVswr,
+  minReturnLossDb,
+  efficiencyPct,
+  peakGainDbi: null,
+  averageGainDbi: null,
+});
 
 describe(extremeInRange.name, () => {
   it('takes interpolated edges and interior samples, and says no data outside the sweep', () => {
-    const c = curve([[780, 0.5], [820, 0.2], [900, 0.2], [1000, 0.5]]);
+    const c = curve([
+      [780, 0.5],
+      [820, 0.2],
+      [900, 0.2],
+      [1000, 0.5],
+    ]);
     expect(extremeInRange(c, { fromHz: 800 * MHZ, toHz: 900 * MHZ }, 'max')).toBeCloseTo(0.35, 12);
     expect(extremeInRange(c, { fromHz: 820 * MHZ, toHz: 900 * MHZ }, 'max')).toBeCloseTo(0.2, 12);
     expect(extremeInRange(c, { fromHz: 800 * MHZ, toHz: 1000 * MHZ }, 'min')).toBeCloseTo(0.2, 12);
@@ -28,7 +64,15 @@ describe(extremeInRange.name, () => {
 
 describe(meetsCoverage.name, () => {
   // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3).
-  const atLimit = part(1, { gamma: curve([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6]]) });
+  const atLimit = part(1, {
+    gamma: curve([
+      [700, 0.6],
+      [800, 0.2],
+      [850, 1 / 3],
+      [900, 0.2],
+      [1000, 0.6],
+    ]),
+  });
   const range = { fromHz: 800 * MHZ, toHz: 900 * MHZ };
 
   it('passes at the limit, fails just below it, and ANDs every range', () => {
@@ -38,7 +82,13 @@ describe(meetsCoverage.name, () => {
   });
 
   it('falls back to spec bands where the curve does not reach, with return loss read as VSWR (RL 10 dB = VSWR 1.925, Pozar 4th ed. §2.3)', () => {
-    const mixed = part(2, { gamma: curve([[800, 0.1], [900, 0.1]]), specBands: [band(1700, 1900, 2), band(600, 800, 3)] });
+    const mixed = part(2, {
+      gamma: curve([
+        [800, 0.1],
+        [900, 0.1],
+      ]),
+      specBands: [band(1700, 1900, 2), band(600, 800, 3)],
+    });
     expect(meetsCoverage(mixed, { ranges: [range, { fromHz: 1710 * MHZ, toHz: 1880 * MHZ }], vswrMax: 2 })).toBe(true);
     expect(meetsCoverage(mixed, { ranges: [{ fromHz: 650 * MHZ, toHz: 750 * MHZ }], vswrMax: 2 })).toBe(false);
     const rl = part(3, { specBands: [band(791, 862, null, null, 10)] });
@@ -47,7 +97,17 @@ describe(meetsCoverage.name, () => {
   });
 
   it('applies the efficiency floor to the minimum over the range, curve first, spec second', () => {
-    const p = part(4, { gamma: curve([[700, 0.1], [1000, 0.1]]), efficiency: curve([[700, 50], [850, 40], [1000, 50]]) });
+    const p = part(4, {
+      gamma: curve([
+        [700, 0.1],
+        [1000, 0.1],
+      ]),
+      efficiency: curve([
+        [700, 50],
+        [850, 40],
+        [1000, 50],
+      ]),
+    });
     expect(meetsCoverage(p, { ranges: [range], vswrMax: 2, minEfficiencyPct: 40 })).toBe(true);
     expect(meetsCoverage(p, { ranges: [range], vswrMax: 2, minEfficiencyPct: 40.01 })).toBe(false);
     const spec = part(5, { specBands: [band(791, 862, 2, 45), band(862, 960, 2, 50)] });
@@ -88,10 +148,19 @@ describe(screenRejects.name, () => {
       const f = [...mhz].sort((a, b) => a - b);
       return fc.array(value, { minLength: f.length, maxLength: f.length }).map((values) => ({ frequenciesHz: f.map((x) => x * MHZ), values }));
     });
-  const specBand = fc.tuple(fc.integer({ min: 550, max: 1050 }), fc.integer({ min: 0, max: 200 }), fc.option(fc.constantFrom(1.5, 2, 3), { nil: null }), fc.option(fc.constantFrom(30, 40, 50, 60), { nil: null }))
+  const specBand = fc
+    .tuple(
+      fc.integer({ min: 550, max: 1050 }),
+      fc.integer({ min: 0, max: 200 }),
+      fc.option(fc.constantFrom(1.5, 2, 3), { nil: null }),
+      fc.option(fc.constantFrom(30, 40, 50, 60), { nil: null }),
+    )
     .map(([from, width, vswr, efficiency]) => band(from, from + width, vswr, efficiency));
   const edge = fc.oneof(fc.integer({ min: 550, max: 1050 }), fc.double({ min: 550, max: 1050, noNaN: true }));
-  const range = fc.tuple(edge, edge).filter(([a, b]) => a !== b).map(([a, b]) => ({ fromHz: Math.min(a, b) * MHZ, toHz: Math.max(a, b) * MHZ }));
+  const range = fc
+    .tuple(edge, edge)
+    .filter(([a, b]) => a !== b)
+    .map(([a, b]) => ({ fromHz: Math.min(a, b) * MHZ, toHz: Math.max(a, b) * MHZ }));
   const query: fc.Arbitrary<CoverageQuery> = fc.record({
     ranges: fc.array(range, { minLength: 1, maxLength: 3 }),
     vswrMax: fc.oneof(fc.constantFrom(1.5, 1.925, 2, 2.5, 3, 4, 6), fc.double({ min: 1, max: 8, noNaN: true })),
@@ -100,14 +169,20 @@ describe(screenRejects.name, () => {
 
   it('rejects only parts the exact check fails, so the search equals the exact filter (fast-check)', () => {
     fc.assert(
-      fc.property(fc.option(sampled(gammaValue), { nil: null }), fc.option(sampled(efficiencyValue), { nil: null }), fc.array(specBand, { maxLength: 3 }), query, (gamma, efficiency, specBands, q) => {
-        const p = part(1, { gamma, efficiency, specBands: [...specBands].sort((a, b) => a.fromHz - b.fromHz) });
-        const exact = meetsCoverage(p, q);
-        if (screenRejects(coverageScreen(p), screenLevels(q), q)) expect(exact).toBe(false);
-        const index = new CatalogueIndex();
-        index.upsert([p]);
-        expect(index.search({ currency: 'USD', sort: 'mpn', order: 'asc', offset: 0, limit: 0, coverage: q }).total).toBe(exact ? 1 : 0);
-      }),
+      fc.property(
+        fc.option(sampled(gammaValue), { nil: null }),
+        fc.option(sampled(efficiencyValue), { nil: null }),
+        fc.array(specBand, { maxLength: 3 }),
+        query,
+        (gamma, efficiency, specBands, q) => {
+          const p = part(1, { gamma, efficiency, specBands: [...specBands].sort((a, b) => a.fromHz - b.fromHz) });
+          const exact = meetsCoverage(p, q);
+          if (screenRejects(coverageScreen(p), screenLevels(q), q)) expect(exact).toBe(false);
+          const index = new CatalogueIndex();
+          index.upsert([p]);
+          expect(index.search({ currency: 'USD', sort: 'mpn', order: 'asc', offset: 0, limit: 0, coverage: q }).total).toBe(exact ? 1 : 0);
+        },
+      ),
       { numRuns: 3000 },
     );
   });
@@ -118,7 +193,16 @@ describe(screenRejects.name, () => {
     expect(Array.from(binsInside({ fromHz: 800 * MHZ, toHz: 810 * MHZ }))).toEqual([2, 1 << 16]);
     expect(Array.from(binsInside({ fromHz: 801 * MHZ, toHz: 809 * MHZ }))).toEqual([]);
     // |Γ| 0.9 at 792 MHz and 901 MHz, 0.1 from 795 to 900 MHz: B-range 795-900 passes at VSWR 2.
-    const p = part(1, { gamma: curve([[700, 0.9], [792, 0.9], [795, 0.1], [900, 0.1], [901, 0.9], [1000, 0.9]]) });
+    const p = part(1, {
+      gamma: curve([
+        [700, 0.9],
+        [792, 0.9],
+        [795, 0.1],
+        [900, 0.1],
+        [901, 0.9],
+        [1000, 0.9],
+      ]),
+    });
     const q: CoverageQuery = { ranges: [{ fromHz: 795 * MHZ, toHz: 900 * MHZ }], vswrMax: 2 };
     expect(screenRejects(coverageScreen(p), screenLevels(q), q)).toBe(false);
     expect(meetsCoverage(p, q)).toBe(true);
@@ -128,7 +212,15 @@ describe(screenRejects.name, () => {
 
   it('turns a part away on a sample over the limit, and leaves one on the limit to the exact check', () => {
     // |Γ| = 1/3 is VSWR 2 exactly (Pozar 4th ed. §2.3).
-    const p = part(1, { gamma: curve([[700, 0.6], [800, 0.2], [850, 1 / 3], [900, 0.2], [1000, 0.6]]) });
+    const p = part(1, {
+      gamma: curve([
+        [700, 0.6],
+        [800, 0.2],
+        [850, 1 / 3],
+        [900, 0.2],
+        [1000, 0.6],
+      ]),
+    });
     const at = (vswrMax: number): CoverageQuery => ({ ranges: [{ fromHz: 800 * MHZ, toHz: 900 * MHZ }], vswrMax });
     expect(screenRejects(coverageScreen(p), screenLevels(at(2)), at(2))).toBe(false);
     expect(screenRejects(coverageScreen(p), screenLevels(at(1.5)), at(1.5))).toBe(true);

@@ -82,7 +82,12 @@ export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean 
     const worstGamma = part.gamma ? extremeInRange(part.gamma, range, 'max') : undefined;
     if (worstGamma !== undefined) {
       if (worstGamma > gammaLimit) return false;
-    } else if (!specBandsCover(part.specBands, range, (b) => { const v = claimedMaxVswr(b); return v !== null && v <= query.vswrMax; })) {
+    } else if (
+      !specBandsCover(part.specBands, range, (b) => {
+        const v = claimedMaxVswr(b);
+        return v !== null && v <= query.vswrMax;
+      })
+    ) {
       return false;
     }
     if (query.minEfficiencyPct !== undefined) {
@@ -101,7 +106,9 @@ export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean 
  * VSWR limits the screen is built for: common datasheet figures, with RL 10 dB (VSWR ≈ 1.925,
  * Pozar 4th ed. §2.3) among them. A query uses the tightest one still at or above its own limit.
  */
-const SCREEN_GAMMA_LIMITS: readonly number[] = [...[1.5, 2, 2.5, 3, 4, 6].map(gammaMagnitudeFromVswr), gammaMagnitudeFromReturnLossDb(10)].sort((a, b) => a - b);
+const SCREEN_GAMMA_LIMITS: readonly number[] = [...[1.5, 2, 2.5, 3, 4, 6].map(gammaMagnitudeFromVswr), gammaMagnitudeFromReturnLossDb(10)].sort(
+  (a, b) => a - b,
+);
 /** The same levels as VSWR, for spec bands, which claimedMaxVswr states as VSWR. */
 const SCREEN_SPEC_VSWR: readonly number[] = [1.5, 2, 2.5, 3, 4, 6, vswrFromReturnLossDb(10)].sort((a, b) => a - b);
 /** Efficiency floors in % the screen is built for; a query uses the highest one at or below its own floor. */
@@ -232,13 +239,17 @@ function specHull(bands: readonly SpecBandClaim[], levels: readonly number[], me
 }
 
 /** Level -1 (a query looser than every level): nothing is turned away here. */
-const outsideHull = (hull: Float64Array, level: number, range: FrequencyRange) => level >= 0 && (range.fromHz < hull[level * 2] || range.toHz > hull[level * 2 + 1]);
+const outsideHull = (hull: Float64Array, level: number, range: FrequencyRange) =>
+  level >= 0 && (range.fromHz < hull[level * 2] || range.toHz > hull[level * 2 + 1]);
 
 export function coverageScreen(part: IndexedPart): CoverageScreen {
   return {
     gamma: part.gamma ? curveScreen(part.gamma, SCREEN_GAMMA_LIMITS, (value, limit) => value > limit) : null,
     efficiency: part.efficiency ? curveScreen(part.efficiency, SCREEN_EFFICIENCY_FLOORS, (value, floor) => value < floor) : null,
-    specVswrHull: specHull(part.specBands, SCREEN_SPEC_VSWR, (band, level) => { const v = claimedMaxVswr(band); return v !== null && v <= level; }),
+    specVswrHull: specHull(part.specBands, SCREEN_SPEC_VSWR, (band, level) => {
+      const v = claimedMaxVswr(band);
+      return v !== null && v <= level;
+    }),
     specEfficiencyHull: specHull(part.specBands, SCREEN_EFFICIENCY_FLOORS, (band, floor) => band.efficiencyPct !== null && band.efficiencyPct >= floor),
   };
 }
@@ -327,14 +338,22 @@ export class CatalogueIndex {
     if (!list) {
       const text = (p: IndexedPart): string => {
         switch (sort) {
-          case 'manufacturer': return `${p.manufacturer.toLowerCase()}\u0000${p.mpn.toLowerCase()}`;
-          case 'title': return p.title.toLowerCase();
-          case 'formFactor': return p.formFactor;
-          case 'connector': return p.connector;
-          case 'polarization': return p.polarization;
-          case 'lifecycle': return p.lifecycle;
-          case 'reviewState': return p.reviewState;
-          default: return p.mpn.toLowerCase();
+          case 'manufacturer':
+            return `${p.manufacturer.toLowerCase()}\u0000${p.mpn.toLowerCase()}`;
+          case 'title':
+            return p.title.toLowerCase();
+          case 'formFactor':
+            return p.formFactor;
+          case 'connector':
+            return p.connector;
+          case 'polarization':
+            return p.polarization;
+          case 'lifecycle':
+            return p.lifecycle;
+          case 'reviewState':
+            return p.reviewState;
+          default:
+            return p.mpn.toLowerCase();
         }
       };
       const all = [...this.parts.values()];
@@ -366,7 +385,10 @@ export class CatalogueIndex {
 
   /** One pass over the parts in sort order, collecting every match. */
   private matchAll(query: CatalogueQuery): IndexedPart[] {
-    const tokens = (query.q ?? '').toLowerCase().split(/\s+/).filter((t) => t.length > 0);
+    const tokens = (query.q ?? '')
+      .toLowerCase()
+      .split(/\s+/)
+      .filter((t) => t.length > 0);
     const sets = {
       formFactor: query.formFactor?.length ? new Set<string>(query.formFactor) : null,
       connector: query.connector?.length ? new Set<string>(query.connector) : null,

@@ -22,7 +22,8 @@ export function parseCovers(covers: string, field = 'covers'): FrequencyRange[] 
   return covers.split(',').map((text, i) => {
     const [from, to] = text.split('-').map((v) => Number(v.trim()));
     if (!(to <= MAX_RANGE_MHZ)) throw new ValidationFailedError([{ field, message: `range ${i + 1} must end at or below ${MAX_RANGE_MHZ} MHz` }]);
-    if (!(from < to)) throw new ValidationFailedError([{ field, message: `range ${i + 1} (${text.trim().slice(0, 40)}) must go from a lower to a higher frequency` }]);
+    if (!(from < to))
+      throw new ValidationFailedError([{ field, message: `range ${i + 1} (${text.trim().slice(0, 40)}) must go from a lower to a higher frequency` }]);
     return { fromHz: from * 1e6, toHz: to * 1e6 };
   });
 }
@@ -41,8 +42,16 @@ export function summaryOf(part: IndexedPart): PartSummaryDto {
 
 function writeSummary(part: IndexedPart): PartSummaryDto {
   return {
-    id: part.id, manufacturer: part.manufacturer, mpn: part.mpn, title: part.title, formFactor: part.formFactor, connector: part.connector,
-    polarization: part.polarization, lifecycle: part.lifecycle, reviewState: part.reviewState, measuredKinds: [...part.measuredKinds],
+    id: part.id,
+    manufacturer: part.manufacturer,
+    mpn: part.mpn,
+    title: part.title,
+    formFactor: part.formFactor,
+    connector: part.connector,
+    polarization: part.polarization,
+    lifecycle: part.lifecycle,
+    reviewState: part.reviewState,
+    measuredKinds: [...part.measuredKinds],
     lowestPrices: [...part.lowestPrices].map(([currency, price]) => ({ currency, unitPrice: price.toFixed(4) })),
     updatedAt: new Date(part.updatedAtMs).toISOString(),
   };
@@ -100,11 +109,20 @@ export class CatalogueSearchService {
       throw new ValidationFailedError([{ field: dto.vswrMax !== undefined ? 'vswrMax' : 'minEfficiencyPct', message: 'needs covers= ranges to apply to' }]);
     }
     return {
-      q: dto.q, formFactor: dto.formFactor, connector: dto.connector, polarization: dto.polarization, lifecycle: dto.lifecycle,
+      q: dto.q,
+      formFactor: dto.formFactor,
+      connector: dto.connector,
+      polarization: dto.polarization,
+      lifecycle: dto.lifecycle,
       // Procurement buys approved parts; it sees other states only when it asks for them.
       status: dto.status?.length ? dto.status : actor.role === 'procurement' ? ['approved'] : undefined,
-      priceMax: dto.priceMax, currency: dto.currency ?? 'USD', coverage, sort: dto.sort ?? 'mpn', order: dto.order ?? 'asc',
-      offset: dto.offset ?? 0, limit,
+      priceMax: dto.priceMax,
+      currency: dto.currency ?? 'USD',
+      coverage,
+      sort: dto.sort ?? 'mpn',
+      order: dto.order ?? 'asc',
+      offset: dto.offset ?? 0,
+      limit,
     };
   }
 
@@ -126,10 +144,20 @@ export class CatalogueSearchService {
     const [rows, prices, bands, kinds, curves] = await Promise.all([
       manager.query(
         `SELECT p.id, m.name AS manufacturer, p.mpn, p.title, p.form_factor, p.connector, p.polarization, p.lifecycle, p.review_state, p.search_text, p.updated_at
-           FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id WHERE p.revision > ?`, [since]) as Promise<PartRow[]>,
-      manager.query(`SELECT part_id, currency, MIN(min_unit_price) AS price FROM part_offers WHERE part_id IN (${changed}) AND min_unit_price IS NOT NULL GROUP BY part_id, currency`, [since]) as Promise<{ part_id: number; currency: string; price: string }[]>,
-      manager.query(`SELECT part_id, from_mhz AS fromMhz, to_mhz AS toMhz, max_vswr AS maxVswr, min_return_loss_db AS minReturnLossDb, efficiency_pct AS efficiencyPct, peak_gain_dbi AS peakGainDbi, average_gain_dbi AS averageGainDbi FROM part_spec_bands WHERE part_id IN (${changed})`, [since]),
-      manager.query(`SELECT DISTINCT part_id, kind FROM part_measurements WHERE part_id IN (${changed})`, [since]) as Promise<{ part_id: number; kind: MeasurementKind }[]>,
+           FROM parts p JOIN manufacturers m ON m.id = p.manufacturer_id WHERE p.revision > ?`,
+        [since],
+      ) as Promise<PartRow[]>,
+      manager.query(
+        `SELECT part_id, currency, MIN(min_unit_price) AS price FROM part_offers WHERE part_id IN (${changed}) AND min_unit_price IS NOT NULL GROUP BY part_id, currency`,
+        [since],
+      ) as Promise<{ part_id: number; currency: string; price: string }[]>,
+      manager.query(
+        `SELECT part_id, from_mhz AS fromMhz, to_mhz AS toMhz, max_vswr AS maxVswr, min_return_loss_db AS minReturnLossDb, efficiency_pct AS efficiencyPct, peak_gain_dbi AS peakGainDbi, average_gain_dbi AS averageGainDbi FROM part_spec_bands WHERE part_id IN (${changed})`,
+        [since],
+      ),
+      manager.query(`SELECT DISTINCT part_id, kind FROM part_measurements WHERE part_id IN (${changed})`, [since]) as Promise<
+        { part_id: number; kind: MeasurementKind }[]
+      >,
       loadCurrentCurves(manager, { sql: changed, params: [since] }, ['s11', 'efficiency']),
     ]);
     const group = <T extends { part_id: number }>(list: T[]) => {
@@ -140,20 +168,30 @@ export class CatalogueSearchService {
     const pricesBy = group(prices);
     const bandsBy = group(bands as (SpecBandClaimRow & { part_id: number })[]);
     const kindsBy = group(kinds);
-    this.index.upsert(rows.map((row): IndexedPart => {
-      const current = curves.get(row.id);
-      const s11 = current?.s11?.curve;
-      return {
-        id: row.id, manufacturer: row.manufacturer, mpn: row.mpn, title: row.title, formFactor: row.form_factor, connector: row.connector,
-        polarization: row.polarization, lifecycle: row.lifecycle, reviewState: row.review_state, searchText: row.search_text.toLowerCase(),
-        lowestPrices: new Map((pricesBy.get(row.id) ?? []).map((p) => [p.currency, Number(p.price)])),
-        measuredKinds: (kindsBy.get(row.id) ?? []).map((k) => k.kind).sort(),
-        updatedAtMs: new Date(row.updated_at).getTime(),
-        gamma: s11 ? { frequenciesHz: s11.frequenciesHz, values: s11.gammaMagnitude } : null,
-        efficiency: current?.efficiency?.curve ?? null,
-        specBands: (bandsBy.get(row.id) ?? []).map((b): SpecBandClaim => specBandClaim(b)).sort((a, b) => a.fromHz - b.fromHz),
-      };
-    }));
+    this.index.upsert(
+      rows.map((row): IndexedPart => {
+        const current = curves.get(row.id);
+        const s11 = current?.s11?.curve;
+        return {
+          id: row.id,
+          manufacturer: row.manufacturer,
+          mpn: row.mpn,
+          title: row.title,
+          formFactor: row.form_factor,
+          connector: row.connector,
+          polarization: row.polarization,
+          lifecycle: row.lifecycle,
+          reviewState: row.review_state,
+          searchText: row.search_text.toLowerCase(),
+          lowestPrices: new Map((pricesBy.get(row.id) ?? []).map((p) => [p.currency, Number(p.price)])),
+          measuredKinds: (kindsBy.get(row.id) ?? []).map((k) => k.kind).sort(),
+          updatedAtMs: new Date(row.updated_at).getTime(),
+          gamma: s11 ? { frequenciesHz: s11.frequenciesHz, values: s11.gammaMagnitude } : null,
+          efficiency: current?.efficiency?.curve ?? null,
+          specBands: (bandsBy.get(row.id) ?? []).map((b): SpecBandClaim => specBandClaim(b)).sort((a, b) => a.fromHz - b.fromHz),
+        };
+      }),
+    );
     this.loadedRevision = Math.max(this.loadedRevision, targetRevision);
     if (rows.length > 100) this.logger.log(`search index: ${rows.length} parts loaded in ${Date.now() - started} ms (${this.index.size} in all)`);
   }
