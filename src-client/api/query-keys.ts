@@ -3,7 +3,7 @@ import type { Query } from '../lib/api-client';
 /**
  * One key factory per server resource that more than one feature reads or changes: every feature
  * caches a resource under the same key, so one invalidation refreshes it on every page at once.
- * Resources only one feature touches (rules, users, audit, limits, tools) keep their keys there.
+ * Resources only one feature touches (rules, users, audit, regulatory limits, rf-tools) keep their keys there.
  */
 
 /** GET /bands (the band library), with or without a filter. */

@@ -5,17 +5,17 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { candidateKeys, matrixKeys } from '../api/query-keys';
 import { useBands } from '../features/bands/api/get-bands';
 import { usePartCoverage } from '../features/bands/api/get-part-coverage';
-import { useLibraryBands } from '../features/catalogue/api/get-library-bands';
-import { usePart } from '../features/catalogue/api/get-part';
-import { useParts } from '../features/catalogue/api/get-parts';
-import { useReviewPart } from '../features/catalogue/api/review-part';
+import { useLibraryBands } from '../features/parts/api/get-library-bands';
+import { usePart } from '../features/parts/api/get-part';
+import { useParts } from '../features/parts/api/get-parts';
+import { useReviewPart } from '../features/parts/api/review-part';
 import { useCandidates } from '../features/compatibility/api/get-candidates';
 import { useMatrix } from '../features/compatibility/api/get-matrix';
 import { usePartMeasurements } from '../features/compatibility/api/get-part-measurements';
 import { useBandChoices } from '../features/products/api/get-band-choices';
 import { useProduct } from '../features/products/api/get-product';
 import { useUpdateRadio } from '../features/products/api/update-radio';
-import { useOverlayBands } from '../features/tools/api/get-overlay-bands';
+import { useOverlayBands } from '../features/rf-tools/api/get-overlay-bands';
 
 // Several features on one page read the same server resources; these tests hold them to one cache entry each.
 

@@ -20,12 +20,6 @@ export interface BandSetInput {
   bandIds: number[];
 }
 
-export type LimitKind = Schemas['LimitKind'];
-
-export type RegulatoryLimit = Schemas['RegulatoryLimitDto'];
-
-export type RegulatoryLimitInput = Omit<RegulatoryLimit, 'id' | 'updatedAt'>;
-
 export const TECHNOLOGY_LABELS: Record<Technology, string> = {
   lte: 'LTE (incl. LTE-M, NB-IoT)',
   nr: '5G NR',
@@ -35,12 +29,4 @@ export const TECHNOLOGY_LABELS: Record<Technology, string> = {
   ism: 'Sub-GHz ISM / LoRaWAN',
   uwb: 'UWB',
   other: 'Other',
-};
-
-export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
-
-export const LIMIT_KIND_LABELS: Record<LimitKind, string> = {
-  eirp: 'EIRP',
-  erp: 'ERP',
-  'conducted-gain-rule': 'Conducted power with antenna-gain rule',
 };

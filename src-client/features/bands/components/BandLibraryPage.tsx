@@ -6,7 +6,7 @@ import { QueryState } from '../../../components/QueryState';
 import { FrequencyStrip } from '../../../components/FrequencyStrip';
 import { useBands } from '../api/get-bands';
 import { type Band, type BandFilter, type Technology, TECHNOLOGY_LABELS } from '../types';
-import { BandsNav } from './BandsNav';
+import { BandsNav } from '../../../components/BandsNav';
 import { PartOverlayPicker } from './PartOverlayPicker';
 import { usePartCoverage, type PartCoverage } from '../api/get-part-coverage';
 import { describeRanges, describeSource } from './band-format';

@@ -1,8 +1,8 @@
 import { Tab, Tabs } from '@blueprintjs/core';
 import { useLocation, useNavigate } from 'react-router-dom';
-import { paths } from '../../../app/routes/paths';
+import { paths } from '../app/routes/paths';
 
-/** Switches between the three reference pages of the band library. */
+/** Switches between the three reference pages of the band library (bands and band sets, regulatory limits). */
 export function BandsNav() {
   const location = useLocation();
   const navigate = useNavigate();

@@ -8,7 +8,7 @@ import { useHasRole } from '../../../lib/session';
 import { useRegulatoryLimits } from '../api/get-regulatory-limits';
 import { useDeleteRegulatoryLimit } from '../api/delete-regulatory-limit';
 import { LIMIT_KIND_LABELS, type RegulatoryLimit } from '../types';
-import { BandsNav } from './BandsNav';
+import { BandsNav } from '../../../components/BandsNav';
 import { RegulatoryLimitDialog } from './RegulatoryLimitDialog';
 
 const toaster = OverlayToaster.createAsync({ position: Position.TOP });
