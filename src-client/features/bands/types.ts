@@ -1,3 +1,4 @@
+import type { BandFilter } from '../../api/bands';
 import type { components } from '../../lib/api-types';
 
 type Schemas = components['schemas'];
@@ -6,19 +7,19 @@ export type RangeRole = Schemas['RangeRole'];
 
 export type Band = Schemas['BandDto'];
 
-export interface BandFilter {
-  technology?: Technology;
-  fromMhz?: number;
-  toMhz?: number;
-}
+export type { BandFilter };
 
 export type BandSet = Schemas['BandSetDto'];
 
-export interface BandSetInput {
-  name: string;
-  description: string;
-  bandIds: number[];
-}
+export type BandSetInput = Schemas['CreateBandSetDto'];
+
+export type BandSetUpdate = Schemas['UpdateBandSetDto'];
+
+/** Of a part's detail, what the band strip draws. */
+export type PartCoverage = Pick<Schemas['PartDetailDto'], 'id' | 'manufacturer' | 'mpn' | 'coveredRanges'>;
+
+/** A part found by text, for the band strip's "compare a part" picker. */
+export type PartMatch = Schemas['PartSummaryDto'];
 
 export const TECHNOLOGY_LABELS: Record<Technology, string> = {
   lte: 'LTE (incl. LTE-M, NB-IoT)',

@@ -1,4 +1,4 @@
-import type { components } from '../../lib/api-types';
+import type { components, operations } from '../../lib/api-types';
 
 type Schemas = components['schemas'];
 export const FORM_FACTORS = [
@@ -22,44 +22,32 @@ export type Polarization = Schemas['PartPolarization'];
 export type Lifecycle = Schemas['Lifecycle'];
 export type ReviewState = Schemas['ReviewState'];
 export type MeasurementKind = Schemas['MeasurementKind'];
+export type DocumentKind = Schemas['DocumentKind'];
+export type AlternateKind = Schemas['AlternateKind'];
 
-export interface Price {
-  currency: string;
-  unitPrice: string;
-}
+export const DOCUMENT_KINDS = ['datasheet', 'drawing', 'other'] as const satisfies readonly DocumentKind[];
+
+export type Price = Schemas['PriceDto'];
 
 export type PartSummary = Schemas['PartSummaryDto'];
 
-export interface PartList {
-  items: PartSummary[];
-  total: number;
-}
+export type PartList = Schemas['PartListDto'];
 
-export type SortKey = 'mpn' | 'manufacturer' | 'title' | 'formFactor' | 'connector' | 'polarization' | 'lifecycle' | 'reviewState' | 'updatedAt' | 'price';
+/** GET /parts's query as the server documents it (lists there are comma-separated strings). */
+type PartSearchQuery = NonNullable<operations['PartsController_list']['parameters']['query']>;
 
-export interface PartFilters {
-  q?: string;
+export type SortKey = NonNullable<PartSearchQuery['sort']>;
+
+/** The search's filters as the catalogue page holds them: lists as typed arrays, which the request joins with commas. */
+export type PartFilters = Omit<PartSearchQuery, 'formFactor' | 'connector' | 'polarization' | 'status' | 'lifecycle'> & {
   formFactor?: FormFactor[];
   connector?: Connector[];
   polarization?: Polarization[];
   status?: ReviewState[];
   lifecycle?: Lifecycle[];
-  priceMax?: number;
-  currency?: string;
-  /** "791-862,880-960" in MHz. */
-  covers?: string;
-  vswrMax?: number;
-  minEfficiencyPct?: number;
-  sort?: SortKey;
-  order?: 'asc' | 'desc';
-  limit?: number;
-  offset?: number;
-}
+};
 
-export interface UserRef {
-  id: number;
-  name: string;
-}
+export type UserRef = Schemas['UserRefDto'];
 
 export type SpecBand = Schemas['SpecBandDto'];
 
@@ -67,87 +55,29 @@ export type Measurement = Schemas['MeasurementDto'];
 
 export type RangeFigures = Schemas['RangeFiguresDto'];
 
-export interface PartDocument {
-  id: number;
-  kind: 'datasheet' | 'drawing' | 'other';
-  title: string;
-  fileName: string;
-  contentType: string;
-  sizeBytes: number;
-  sha256: string;
-  uploadedBy: UserRef | null;
-  createdAt: string;
-}
+export type PartDocument = Schemas['DocumentDto'];
 
-export interface Offer {
-  id: number;
-  supplier: string;
-  sku: string | null;
-  currency: string;
-  priceBreaks: { quantity: number; unitPrice: string }[];
-  moq: number | null;
-  leadTimeDays: number | null;
-  lastCheckedOn: string | null;
-  version: number;
-}
+export type Offer = Schemas['OfferDto'];
 
-export interface Alternate {
-  partId: number;
-  manufacturer: string;
-  mpn: string;
-  reviewState: ReviewState;
-  kind: 'alternate' | 'second-source';
-  note: string | null;
-}
+export type OfferInput = Schemas['CreateOfferDto'];
+
+export type Alternate = Schemas['AlternateDto'];
 
 export type PartDetail = Schemas['PartDetailDto'];
 
-export interface MeasurementPoints {
-  id: number;
-  kind: MeasurementKind;
-  frequenciesHz: number[];
-  values: number[];
-  vswr?: number[];
-  returnLossDb?: number[];
-}
+export type PartInput = Schemas['CreatePartDto'];
 
-export interface CurvePreview {
-  kind: MeasurementKind;
-  sourceFormat: string;
-  pointCount: number;
-  fromMhz: number;
-  toMhz: number;
-  referenceOhms: number | null;
-  valueLabel: string;
-  frequenciesMhz: number[];
-  values: number[];
-}
+export type PartUpdate = Schemas['UpdatePartDto'];
 
-export interface ReviewQueueItem {
-  id: number;
-  manufacturer: string;
-  mpn: string;
-  title: string;
-  version: number;
-  submittedBy: UserRef | null;
-  submittedAt: string | null;
-  measuredKinds: MeasurementKind[];
-  documentCount: number;
-}
+export type ReviewDecision = Schemas['ReviewActionDto'];
 
-export interface HistoryEntry {
-  id: string;
-  action: string;
-  user: { id: number; name: string } | null;
-  changes: Record<string, unknown>;
-  at: string;
-}
+export type MeasurementPoints = Schemas['MeasurementPointsDto'];
+
+export type CurvePreview = Schemas['CurvePreviewDto'];
+
+export type MeasurementUploadResult = Schemas['UploadMeasurementResultDto'];
+
+export type ReviewQueueItem = Schemas['ReviewQueueItemDto'];
 
 /** A band of the band library, as GET /api/bands returns it. */
-export interface LibraryBand {
-  id: number;
-  technology: string;
-  designation: string;
-  name: string;
-  ranges: { role: string; fromMhz: number; toMhz: number }[];
-}
+export type LibraryBand = Schemas['BandDto'];

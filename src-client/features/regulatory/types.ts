@@ -1,4 +1,5 @@
 import type { components } from '../../lib/api-types';
+import type { AsTyped } from '../../lib/form-input';
 
 type Schemas = components['schemas'];
 export type Region = Schemas['Region'];
@@ -6,7 +7,9 @@ export type LimitKind = Schemas['LimitKind'];
 
 export type RegulatoryLimit = Schemas['RegulatoryLimitDto'];
 
-export type RegulatoryLimitInput = Omit<RegulatoryLimit, 'id' | 'updatedAt'>;
+export type RegulatoryLimitInput = AsTyped<Schemas['CreateRegulatoryLimitDto']>;
+
+export type RegulatoryLimitUpdate = AsTyped<Schemas['UpdateRegulatoryLimitDto']>;
 
 export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const satisfies readonly Region[];
 

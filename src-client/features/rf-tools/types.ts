@@ -1,134 +1,40 @@
-/** Shapes of the /api/rf answers (src-server/rf-tools/dto). */
+import type { components } from '../../lib/api-types';
 
-export interface FrequencyRange {
-  fromHz: number;
-  toHz: number;
-}
+/** Shapes of the /api/rf answers, from the server's OpenAPI document (src-server/rf-tools/dto). */
+type Schemas = components['schemas'];
 
-export interface CurvePoint {
-  frequencyHz: number;
-  gammaMagnitude: number;
-  /** null where infinite. */
-  vswr: number | null;
-  /** Positive dB; null where infinite. */
-  returnLossDb: number | null;
-}
+export type FrequencyRange = Schemas['FrequencyRangeDto'];
 
-export type MatchCriterionName = 'vswr' | 'return-loss-10db';
+export type CurvePoint = Schemas['CurvePointDto'];
 
-export interface TouchstoneAnalysis {
-  version: string;
-  ports: number;
-  parameter: string;
-  format: string;
-  referenceOhms: number[];
-  points: number;
-  minFrequencyHz: number;
-  maxFrequencyHz: number;
-  port: number;
-  criterion: MatchCriterionName;
-  thresholdVswr: number;
-  thresholdReturnLossDb: number;
-  matchedRanges: FrequencyRange[];
-  /** All ranges meeting the criterion; matchedRanges holds the first 100. */
-  matchedRangeCount: number;
-  bestMatch: { frequencyHz: number; gammaMagnitude: number; vswr: number; returnLossDb: number };
-  resampled: boolean;
-  curve: CurvePoint[];
-}
+export type MatchCriterionName = Schemas['MatchCriterion'];
 
-export interface MatchingElement {
-  connection: 'series' | 'shunt';
-  position: 'load-side' | 'source-side';
-  kind: 'inductor' | 'capacitor' | 'none';
-  inductanceNh: number | null;
-  capacitancePf: number | null;
-}
+export type TouchstoneAnalysis = Schemas['TouchstoneAnalysisDto'];
 
-export interface SweepPoint {
-  frequencyHz: number;
-  returnLossDb: number | null;
-  vswr: number | null;
-}
+export type MatchingElement = Schemas['MatchingElementDto'];
 
-export interface MatchingNetwork {
-  elements: [MatchingElement, MatchingElement];
-  sweep: SweepPoint[];
-}
+export type SweepPoint = Schemas['SweepPointDto'];
 
-export interface MatchingSolution {
-  topology: 'shunt-at-load' | 'series-at-load';
-  exact: MatchingNetwork;
-  snapped: MatchingNetwork;
-  snappedReturnLossDb: number | null;
-}
+export type MatchingNetwork = Schemas['NetworkDto'];
 
-export interface MatchingRequest {
-  frequencyHz: number;
-  loadOhms: { re: number; im: number };
-  z0Ohms: number;
-  series: 'E12' | 'E24';
-  sweep?: { fromHz: number; toHz: number; points?: number };
-}
+export type MatchingSolution = Schemas['MatchingSolutionDto'];
 
-export interface MatchingResponse {
-  frequencyHz: number;
-  z0Ohms: number;
-  series: string;
-  solutions: MatchingSolution[];
-}
+export type MatchingRequest = Schemas['MatchingRequestDto'];
 
-export interface LinkBudgetRequest {
-  frequencyHz: number;
-  distanceM: number;
-  txPowerDbm: number;
-  txGainDbi: number;
-  rxGainDbi: number;
-  lossesDb: number;
-  rxSensitivityDbm: number;
-}
+export type MatchingResponse = Schemas['MatchingResponseDto'];
 
-export interface LinkBudgetResponse {
-  eirpDbm: number;
-  erpDbm: number;
-  pathLossDb: number;
-  receivedDbm: number;
-  marginDb: number;
-  maxRangeM: number;
-  rangeRatioFor6DbLess: number;
-}
+export type LinkBudgetRequest = Schemas['LinkBudgetRequestDto'];
 
-/** Exactly one known quantity. */
-export type ConversionRequest =
-  | { vswr: number }
-  | { returnLossDb: number }
-  | { gammaMagnitude: number }
-  | { impedanceOhms: { re: number; im: number }; z0Ohms?: number }
-  | { frequencyHz: number }
-  | { dbm: number }
-  | { mw: number }
-  | { efficiencyPct: number }
-  | { efficiencyDb: number };
+export type LinkBudgetResponse = Schemas['LinkBudgetResponseDto'];
 
-export interface Reflection {
-  gammaMagnitude: number;
-  vswr: number | null;
-  returnLossDb: number | null;
-  mismatchLossDb: number | null;
-  transmittedPercent: number;
-  reflectedPercent: number;
-}
+/** Exactly one known quantity (z0Ohms only beside impedanceOhms); the server refuses more. */
+export type ConversionRequest = Schemas['ConversionRequestDto'];
 
-export interface ConversionResponse {
-  input: string;
-  reflection?: Reflection;
-  gamma?: { re: number; im: number; magnitude: number; angleDeg: number };
-  wavelength?: { frequencyHz: number; wavelengthMm: number; halfWaveMm: number; quarterWaveMm: number };
-  power?: { dbm: number; mw: number; watts: number };
-  efficiency?: { percent: number; db: number };
-}
+export type Reflection = Schemas['ReflectionDto'];
 
-/** A band to overlay on a plot. */
+export type ConversionResponse = Schemas['ConversionResponseDto'];
+
+/** A band to overlay on a plot (client view: a library band spanned from its lowest to its highest edge). */
 export interface OverlayBand {
   key: string;
   label: string;

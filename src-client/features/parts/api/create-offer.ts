@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidatePart } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { Offer } from '../types';
-
-export type OfferInput = Omit<Offer, 'id' | 'version'>;
+import type { Offer, OfferInput } from '../types';
 
 export const createOffer = ({ id, ...offer }: OfferInput & { id: number }) => apiRequest<Offer>(`/parts/${id}/offers`, { method: 'POST', body: offer });
 

@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidatePart } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { PartDetail, SpecBand } from '../types';
-
-export type PartInput = Partial<Omit<PartDetail, 'specBands'>> & { specBands?: Omit<SpecBand, 'id'>[] };
+import type { PartDetail, PartInput } from '../types';
 
 export const createPart = (input: PartInput) => apiRequest<PartDetail>('/parts', { method: 'POST', body: input });
 

@@ -1,7 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
 import { getPartSearchQueryOptions } from '../../../api/parts';
-import type { PartFilters, PartList } from '../types';
+import type { PartFilters } from '../types';
 
-export const getPartsQueryOptions = (filters: PartFilters) => getPartSearchQueryOptions<PartList>({ ...filters });
-
-export const useParts = (filters: PartFilters) => useQuery(getPartsQueryOptions(filters));
+export const useParts = (filters: PartFilters) => useQuery(getPartSearchQueryOptions({ ...filters }));

@@ -1,12 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidatePart } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { PartDocument } from '../types';
+import type { DocumentKind, PartDocument } from '../types';
 
+/** The multipart form of POST /parts/:id/documents, with the browser's File. */
 export interface DocumentUpload {
   id: number;
   file: File;
-  kind: string;
+  kind: DocumentKind;
   title?: string;
   onProgress?: (fraction: number) => void;
 }

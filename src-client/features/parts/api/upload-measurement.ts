@@ -1,8 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidatePart } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { CurvePreview, Measurement, MeasurementKind } from '../types';
+import type { MeasurementKind, MeasurementUploadResult } from '../types';
 
+/** The multipart form of POST /parts/:id/measurements, with the browser's File and the fields as typed. */
 export interface MeasurementUpload {
   id: number;
   file: File;
@@ -22,7 +23,7 @@ export const uploadMeasurement = ({ id, file, onProgress, dryRun, ...fields }: M
   for (const [key, value] of Object.entries(fields)) if (value && key !== 'kind') form.set(key, String(value));
   if (dryRun) form.set('dryRun', 'true');
   form.set('file', file);
-  return apiRequest<{ measurement: Measurement | null; preview: CurvePreview }>(`/parts/${id}/measurements`, {
+  return apiRequest<MeasurementUploadResult>(`/parts/${id}/measurements`, {
     method: 'POST',
     form,
     onUploadProgress: onProgress ?? (() => {}),

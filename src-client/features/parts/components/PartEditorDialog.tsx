@@ -1,9 +1,9 @@
 import { useEffect, useState } from 'react';
 import { Button, Callout, Classes, Dialog, DialogBody, DialogFooter, FormGroup, HTMLSelect, InputGroup, Intent, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
-import { type PartInput, useCreatePart } from '../api/create-part';
+import { useCreatePart } from '../api/create-part';
 import { useUpdatePart } from '../api/update-part';
-import { CONNECTORS, FORM_FACTORS, LIFECYCLES, POLARIZATIONS, type PartDetail, type SpecBand } from '../types';
+import { CONNECTORS, FORM_FACTORS, LIFECYCLES, POLARIZATIONS, type PartDetail, type PartInput, type SpecBand } from '../types';
 
 export interface PartEditorDialogProps {
   isOpen: boolean;
@@ -60,9 +60,11 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
 
   const field = (name: string) => error?.fieldErrors[name];
   const save = () => {
-    const body: PartInput = {
-      ...Object.fromEntries(TEXT_FIELDS.map((f) => [f, values[f]?.trim() || (f === 'mounting' || f === 'notes' ? null : undefined)])),
+    const text = (f: (typeof TEXT_FIELDS)[number]) => values[f]?.trim() ?? '';
+    const fields: Omit<PartInput, 'manufacturer' | 'mpn' | 'title'> = {
       ...Object.fromEntries(NUMBER_FIELDS.map((f) => [f, num(values[f] ?? '')])),
+      mounting: text('mounting') || null,
+      notes: text('notes') || null,
       formFactor: values.formFactor as PartDetail['formFactor'],
       connector: values.connector as PartDetail['connector'],
       polarization: values.polarization as PartDetail['polarization'],
@@ -77,7 +79,8 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
         averageGainDbi: null,
       })),
     };
-    if (body.nominalImpedanceOhms === null) delete body.nominalImpedanceOhms;
+    if (fields.nominalImpedanceOhms === null) delete fields.nominalImpedanceOhms;
+    const names = { manufacturer: text('manufacturer'), mpn: text('mpn'), title: text('title') };
     const done = {
       onSuccess: (p: PartDetail) => {
         onSaved(p.id);
@@ -85,8 +88,9 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
       },
       onError: (e: Error) => setError(e as ApiError),
     };
-    if (part) update.mutate({ ...body, id: part.id, version: part.version }, done);
-    else create.mutate(body, done);
+    // A new part sends every name, so the server names a blank one; an edit leaves a blanked name as it was.
+    if (part) update.mutate({ ...fields, ...Object.fromEntries(Object.entries(names).filter(([, v]) => v !== '')), id: part.id, version: part.version }, done);
+    else create.mutate({ ...fields, ...names }, done);
   };
 
   const input = (name: string, label: string) => (

@@ -29,7 +29,7 @@ import { downloadPartFile } from '../api/download-part-file';
 import { usePart } from '../api/get-part';
 import { usePartHistory } from '../api/get-part-history';
 import { useUploadDocument } from '../api/upload-document';
-import type { LibraryBand, PartDetail } from '../types';
+import { DOCUMENT_KINDS, type DocumentKind, type LibraryBand, type PartDetail } from '../types';
 import { BandPicker } from './BandPicker';
 import { MeasurementUploadDialog } from './MeasurementUploadDialog';
 import { PartCurves } from './PartCurves';
@@ -153,7 +153,7 @@ function Overview({ part }: { part: PartDetail }) {
 function Documents({ part }: { part: PartDetail }) {
   const upload = useUploadDocument();
   const [file, setFile] = useState<File | null>(null);
-  const [kind, setKind] = useState('datasheet');
+  const [kind, setKind] = useState<DocumentKind>('datasheet');
   const [progress, setProgress] = useState<number | null>(null);
   return (
     <section className="bw-panel">
@@ -187,7 +187,7 @@ function Documents({ part }: { part: PartDetail }) {
       )}
       {part.permissions.uploadData && (
         <div className="bw-row bw-gap">
-          <HTMLSelect aria-label="Document kind" value={kind} options={['datasheet', 'drawing', 'other']} onChange={(e) => setKind(e.currentTarget.value)} />
+          <HTMLSelect aria-label="Document kind" value={kind} options={[...DOCUMENT_KINDS]} onChange={(e) => setKind(e.currentTarget.value as DocumentKind)} />
           <FileInput
             text={file?.name ?? 'PDF, PNG, SVG or DXF…'}
             hasSelection={!!file}

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import type { RegulatoryLimit, RegulatoryLimitInput } from '../types';
+import type { RegulatoryLimit, RegulatoryLimitUpdate } from '../types';
 import { limitKeys } from './limit-keys';
 
-export const updateRegulatoryLimit = ({ id, ...input }: RegulatoryLimitInput & { id: number }) =>
+export const updateRegulatoryLimit = ({ id, ...input }: RegulatoryLimitUpdate & { id: number }) =>
   apiRequest<RegulatoryLimit>(`/regulatory-limits/${id}`, { method: 'PATCH', body: input });
 
 export const useUpdateRegulatoryLimit = () => {

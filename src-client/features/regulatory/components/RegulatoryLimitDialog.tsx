@@ -3,7 +3,7 @@ import { Button, Callout, Dialog, DialogBody, DialogFooter, FormGroup, HTMLSelec
 import { ApiError } from '../../../lib/api-client';
 import { useCreateRegulatoryLimit } from '../api/create-regulatory-limit';
 import { useUpdateRegulatoryLimit } from '../api/update-regulatory-limit';
-import { LIMIT_KIND_LABELS, type LimitKind, REGIONS, type RegulatoryLimit, type RegulatoryLimitInput } from '../types';
+import { LIMIT_KIND_LABELS, type LimitKind, type Region, REGIONS, type RegulatoryLimit, type RegulatoryLimitInput } from '../types';
 
 export interface RegulatoryLimitDialogProps {
   /** The limit to edit; a new limit when null. */
@@ -50,8 +50,8 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const body = {
-      region: draft.region,
+    const body: RegulatoryLimitInput = {
+      region: draft.region as Region,
       title: draft.title,
       kind: draft.kind as LimitKind,
       valueText: draft.valueText,
@@ -63,7 +63,7 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
       reductionDbPerDb: gainRule ? num(draft.reductionDbPerDb) : null,
       conditions: draft.conditions || null,
       note: draft.note || null,
-    } as unknown as RegulatoryLimitInput;
+    };
     const done = { onSuccess: onClose };
     if (limit) update.mutate({ id: limit.id, ...body }, done);
     else create.mutate(body, done);

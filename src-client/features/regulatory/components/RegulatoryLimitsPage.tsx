@@ -23,7 +23,7 @@ const COLUMNS: { id: string; name: string; width: number; value: (l: RegulatoryL
     id: 'rule',
     name: 'Gain rule',
     width: 170,
-    value: (l) => (l.gainThresholdDbi === null ? '' : `−${l.reductionDbPerDb} dB per dB above ${l.gainThresholdDbi} dBi`),
+    value: (l) => (typeof l.gainThresholdDbi !== 'number' ? '' : `−${l.reductionDbPerDb} dB per dB above ${l.gainThresholdDbi} dBi`),
   },
   { id: 'conditions', name: 'Conditions', width: 360, value: (l) => l.conditions ?? '' },
   { id: 'source', name: 'Source', width: 300, value: (l) => l.source },

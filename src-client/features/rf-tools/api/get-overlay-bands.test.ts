@@ -7,8 +7,6 @@ describe(overlayFromLibrary.name, () => {
     const overlay = overlayFromLibrary({
       id: 7,
       designation: 'B20',
-      name: 'E-UTRA 20',
-      technology: 'lte',
       ranges: [
         { fromMhz: 832, toMhz: 862 },
         { fromMhz: 791, toMhz: 821 },
@@ -18,7 +16,7 @@ describe(overlayFromLibrary.name, () => {
   });
 
   it('skips a band without ranges', () => {
-    expect(overlayFromLibrary({ id: 1, designation: 'X', name: 'X', technology: 'other', ranges: [] })).toBeNull();
+    expect(overlayFromLibrary({ id: 1, designation: 'X', ranges: [] })).toBeNull();
   });
 });
 

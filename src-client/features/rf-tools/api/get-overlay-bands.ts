@@ -1,15 +1,14 @@
 import { useMemo } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { getBandsQueryOptions } from '../../../api/bands';
+import type { components } from '../../../lib/api-types';
 import type { OverlayBand } from '../types';
 
-interface LibraryBand {
-  id: number;
-  designation: string;
-  name: string;
-  technology: string;
-  ranges: { fromMhz: number; toMhz: number }[];
-}
+type Band = components['schemas']['BandDto'];
+type BandRange = components['schemas']['BandRangeDto'];
+
+/** Of a library band, what an overlay needs. */
+type LibraryBand = Pick<Band, 'id' | 'designation'> & { ranges: Pick<BandRange, 'fromMhz' | 'toMhz'>[] };
 
 /**
  * The short built-in list, used when the band library cannot be read.
@@ -43,7 +42,7 @@ export function overlaysFromLibrary(library: LibraryBand[] | undefined): { bands
 
 /** The same cache the band pages use; undefined only during the first attempt to load it (a failure falls back at once). */
 export function useOverlayBands() {
-  const library = useQuery(getBandsQueryOptions<LibraryBand>());
+  const library = useQuery(getBandsQueryOptions());
   const loading = library.data === undefined && library.isFetching && library.failureCount === 0;
   const data = useMemo(() => (loading ? undefined : overlaysFromLibrary(library.data)), [loading, library.data]);
   return { data };

@@ -4,9 +4,9 @@ import { significant } from './format';
 
 export interface LSectionSchematicProps {
   /** Exact elements, load-side first (as the API returns them). */
-  exact: [MatchingElement, MatchingElement];
-  /** The same elements snapped to the preferred series. */
-  snapped: [MatchingElement, MatchingElement];
+  exact: MatchingElement[];
+  /** The same elements snapped to the preferred series, in the same order. */
+  snapped: MatchingElement[];
   series: string;
   z0Ohms: number;
   loadLabel: string;
@@ -41,7 +41,7 @@ function ElementBlock({ exact, snapped, series }: { exact: MatchingElement; snap
  */
 export function LSectionSchematic({ exact, snapped, series, z0Ohms, loadLabel }: LSectionSchematicProps) {
   // The API lists the load side first; the drawing reads from the source.
-  const order = [1, 0] as const;
+  const order = exact.map((_, i) => exact.length - 1 - i);
   return (
     <div className="bw-lsec" role="group" aria-label="L-section schematic, source on the left">
       <div className="bw-lsec__end">
@@ -52,12 +52,12 @@ export function LSectionSchematic({ exact, snapped, series, z0Ohms, loadLabel }:
         <div key={i} className="bw-lsec__slot">
           <div className="bw-lsec__wire" />
           {exact[i].connection === 'series' ? (
-            <ElementBlock exact={exact[i]} snapped={snapped[i]} series={series} />
+            <ElementBlock exact={exact[i]} snapped={snapped[i] ?? exact[i]} series={series} />
           ) : (
             <div className="bw-lsec__shunt">
               <div className="bw-lsec__node" />
               <div className="bw-lsec__drop" />
-              <ElementBlock exact={exact[i]} snapped={snapped[i]} series={series} />
+              <ElementBlock exact={exact[i]} snapped={snapped[i] ?? exact[i]} series={series} />
               <div className="bw-lsec__ground" aria-hidden="true">
                 ⏚
               </div>

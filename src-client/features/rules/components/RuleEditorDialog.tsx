@@ -131,7 +131,7 @@ export function RuleEditorDialog({ ruleId, onClose }: RuleEditorDialogProps) {
                 </thead>
                 <tbody>
                   {preview.changes.slice(0, 50).map((c) => (
-                    <tr key={`${c.productId}-${c.designation}-${c.mpn}-${c.radioName}`}>
+                    <tr key={`${c.productId}-${c.radioId}-${c.bandId}-${c.partId}`}>
                       <td>{c.productName}</td>
                       <td>
                         {c.designation} · {c.radioName}

@@ -1,14 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import type { Role } from '../../../lib/session';
-import type { UserRow } from '../types';
+import type { InviteInput, UserRow } from '../types';
 import { userKeys } from './user-keys';
-
-export interface InviteInput {
-  email: string;
-  name: string;
-  role: Role;
-}
 
 export const inviteUser = (input: InviteInput) => apiRequest<UserRow>('/users/invitations', { method: 'POST', body: input });
 
