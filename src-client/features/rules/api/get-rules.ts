@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { ruleKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
 import type { RuleDetail, RuleSummary, RuleVersion } from '../types';
-import { ruleKeys } from './rule-keys';
 
 export const getRules = () => apiRequest<RuleSummary[]>('/rules');
 export const getRulesQueryOptions = () => queryOptions({ queryKey: ruleKeys.list(), queryFn: getRules });
