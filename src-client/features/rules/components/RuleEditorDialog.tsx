@@ -1,7 +1,8 @@
 import { useEffect, useState } from 'react';
 import { Button, Callout, Dialog, DialogBody, DialogFooter, HTMLTable, Intent, Tag, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
-import { useRule, useRuleVersions } from '../api/get-rules';
+import { useRule } from '../api/get-rule';
+import { useRuleVersions } from '../api/get-rule-versions';
 import { useCreateRule } from '../api/create-rule';
 import { usePreviewRule } from '../api/preview-rule';
 import { useUpdateRule } from '../api/update-rule';
