@@ -1,17 +1,22 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
-import { apiRequest, type Query } from '../lib/api-client';
+import { apiRequest } from '../lib/api-client';
+import type { components, operations } from '../lib/api-types';
 import { bandKeys, bandSetKeys } from './query-keys';
 
-// Each feature names the view of a band it reads (TBand), until the client's API types are generated.
+type Band = components['schemas']['BandDto'];
+type BandSet = components['schemas']['BandSetDto'];
+export type BandFilter = NonNullable<operations['BandsController_list']['parameters']['query']>;
 
 /** The band library changes only with a release, so it stays fresh for minutes. */
 const LIBRARY_STALE_MS = 5 * 60_000;
 
-export const getBands = <TBand>(filter: Query = {}) => apiRequest<TBand[]>('/bands', { query: filter });
+/** GET /bands: the band library, every feature's one fetcher for it. */
+export const getBands = (filter: BandFilter = {}) => apiRequest<Band[]>('/bands', { query: { ...filter } });
 
-export const getBandsQueryOptions = <TBand>(filter: Query = {}) =>
-  queryOptions({ queryKey: bandKeys.list(filter), queryFn: () => getBands<TBand>(filter), placeholderData: keepPreviousData, staleTime: LIBRARY_STALE_MS });
+export const getBandsQueryOptions = (filter: BandFilter = {}) =>
+  queryOptions({ queryKey: bandKeys.list({ ...filter }), queryFn: () => getBands(filter), placeholderData: keepPreviousData, staleTime: LIBRARY_STALE_MS });
 
-export const getBandSets = <TBandSet>() => apiRequest<TBandSet[]>('/band-sets');
+/** GET /band-sets. */
+export const getBandSets = () => apiRequest<BandSet[]>('/band-sets');
 
-export const getBandSetsQueryOptions = <TBandSet>() => queryOptions({ queryKey: bandSetKeys.list(), queryFn: () => getBandSets<TBandSet>() });
+export const getBandSetsQueryOptions = () => queryOptions({ queryKey: bandSetKeys.list(), queryFn: getBandSets });

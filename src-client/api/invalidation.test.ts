@@ -1,7 +1,15 @@
 import { QueryClient } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
-import { invalidateAssignment, invalidatePart, invalidateRadio, invalidateVerdicts } from './invalidation';
-import { bandKeys, candidateKeys, matrixKeys, partKeys, productKeys } from './query-keys';
+import {
+  invalidateAssignment,
+  invalidatePart,
+  invalidateRadio,
+  invalidateRegulatoryLimits,
+  invalidateRules,
+  invalidateUsers,
+  invalidateVerdicts,
+} from './invalidation';
+import { bandKeys, candidateKeys, matrixKeys, partKeys, productKeys, regulatoryLimitKeys, ruleKeys, userKeys } from './query-keys';
 
 /** A cache holding one entry under each key a page may show, all fresh. */
 function filledCache() {
@@ -22,6 +30,10 @@ function filledCache() {
     search: partKeys.search({ q: 'chip' }),
     queue: partKeys.reviewQueue(),
     bands: bandKeys.list(),
+    limits: regulatoryLimitKeys.list(),
+    rules: ruleKeys.list(),
+    rule: ruleKeys.detail('vswr-in-band'),
+    users: userKeys.list(),
   };
   for (const key of Object.values(keys)) queryClient.setQueryData(key, { cached: true });
   const stale = () =>
@@ -61,5 +73,29 @@ describe(invalidateVerdicts.name, () => {
     const { queryClient, stale } = filledCache();
     await invalidateVerdicts(queryClient);
     expect(stale()).toEqual(['candidates7', 'candidates8', 'matrix7', 'matrix8']);
+  });
+});
+
+describe(invalidateRules.name, () => {
+  it('marks stale the rules and every verdict', async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidateRules(queryClient);
+    expect(stale()).toEqual(['candidates7', 'candidates8', 'matrix7', 'matrix8', 'rule', 'rules']);
+  });
+});
+
+describe(invalidateRegulatoryLimits.name, () => {
+  it('marks stale the limits and every verdict, since the EIRP rules compare against them', async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidateRegulatoryLimits(queryClient);
+    expect(stale()).toEqual(['candidates7', 'candidates8', 'limits', 'matrix7', 'matrix8']);
+  });
+});
+
+describe(invalidateUsers.name, () => {
+  it('marks stale the user list only', async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidateUsers(queryClient);
+    expect(stale()).toEqual(['users']);
   });
 });

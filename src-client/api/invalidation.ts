@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { bandSetKeys, candidateKeys, matrixKeys, partKeys, productKeys } from './query-keys';
+import { bandSetKeys, candidateKeys, matrixKeys, partKeys, productKeys, regulatoryLimitKeys, ruleKeys, userKeys } from './query-keys';
 
 /**
  * What a write changes, in one place: each mutation calls the function for the resource it wrote,
@@ -38,8 +38,18 @@ export const invalidatePart = (queryClient: QueryClient, partId?: number) =>
 export const invalidateAssignment = (queryClient: QueryClient, productId: number) =>
   invalidateAll(queryClient, [matrixKeys.product(productId), candidateKeys.product(productId)]);
 
-/** A rule created, edited, switched on or off: every verdict. */
+/** Every verdict: every matrix and candidate list. */
 export const invalidateVerdicts = (queryClient: QueryClient) => invalidateAll(queryClient, [matrixKeys.all, candidateKeys.all]);
+
+/** A rule created, edited, switched on or off: the rules and every verdict. */
+export const invalidateRules = (queryClient: QueryClient) => invalidateAll(queryClient, [ruleKeys.all, matrixKeys.all, candidateKeys.all]);
+
+/** A regulatory limit created, corrected or deleted: the limits, and every verdict (the EIRP rules compare against them). */
+export const invalidateRegulatoryLimits = (queryClient: QueryClient) =>
+  invalidateAll(queryClient, [regulatoryLimitKeys.all, matrixKeys.all, candidateKeys.all]);
+
+/** A user invited, given another role, deactivated or reactivated. */
+export const invalidateUsers = (queryClient: QueryClient) => invalidateAll(queryClient, [userKeys.all]);
 
 /** A band set created, edited or deleted. */
 export const invalidateBandSets = (queryClient: QueryClient) => invalidateAll(queryClient, [bandSetKeys.all]);

@@ -1,9 +1,11 @@
 import type { Query } from '../lib/api-client';
+import type { components, operations } from '../lib/api-types';
+
+type Schemas = components['schemas'];
 
 /**
- * One key factory per server resource that more than one feature reads or changes: every feature
- * caches a resource under the same key, so one invalidation refreshes it on every page at once.
- * Resources only one feature touches (rules, users, audit, limits, tools) keep their keys there.
+ * One key factory per server resource, for every feature: each resource is cached under one key, so one
+ * invalidation (invalidation.ts) refreshes it on every page at once.
  */
 
 /** GET /bands (the band library), with or without a filter. */
@@ -50,4 +52,38 @@ export const candidateKeys = {
   all: ['candidates'] as const,
   product: (productId: number) => [...candidateKeys.all, productId] as const,
   radio: (productId: number, radioId: number) => [...candidateKeys.product(productId), radioId] as const,
+};
+
+/** GET /regulatory-limits: the published power limits the matrix's EIRP rules compare against. */
+export const regulatoryLimitKeys = {
+  all: ['regulatory-limits'] as const,
+  list: () => [...regulatoryLimitKeys.all, 'list'] as const,
+};
+
+/** GET /rules, /rules/:id and its versions. */
+export const ruleKeys = {
+  all: ['rules'] as const,
+  list: () => [...ruleKeys.all, 'list'] as const,
+  detail: (id: string) => [...ruleKeys.all, 'detail', id] as const,
+  versions: (id: string) => [...ruleKeys.all, 'versions', id] as const,
+};
+
+/** GET /users. */
+export const userKeys = {
+  all: ['users'] as const,
+  list: () => [...userKeys.all, 'list'] as const,
+};
+
+/** GET /audit, one page of it. */
+export const auditKeys = {
+  all: ['audit'] as const,
+  list: (filter: NonNullable<operations['AuditController_list']['parameters']['query']>) => [...auditKeys.all, 'list', filter] as const,
+};
+
+/** POST /rf/…: the calculators are pure computations, so an answer is cached by its input for good. */
+export const rfToolKeys = {
+  all: ['rf-tools'] as const,
+  conversion: (input: Schemas['ConversionRequestDto']) => [...rfToolKeys.all, 'conversion', input] as const,
+  linkBudget: (input: Schemas['LinkBudgetRequestDto']) => [...rfToolKeys.all, 'link-budget', input] as const,
+  matching: (input: Schemas['MatchingRequestDto']) => [...rfToolKeys.all, 'matching', input] as const,
 };

@@ -5,17 +5,19 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { candidateKeys, matrixKeys } from '../api/query-keys';
 import { useBands } from '../features/bands/api/get-bands';
 import { usePartCoverage } from '../features/bands/api/get-part-coverage';
-import { useLibraryBands } from '../features/catalogue/api/get-library-bands';
-import { usePart } from '../features/catalogue/api/get-part';
-import { useParts } from '../features/catalogue/api/get-parts';
-import { useReviewPart } from '../features/catalogue/api/review-part';
+import { useLibraryBands } from '../features/parts/api/get-library-bands';
+import { usePart } from '../features/parts/api/get-part';
+import { useParts } from '../features/parts/api/get-parts';
+import { useReviewPart } from '../features/parts/api/review-part';
 import { useCandidates } from '../features/compatibility/api/get-candidates';
 import { useMatrix } from '../features/compatibility/api/get-matrix';
 import { usePartMeasurements } from '../features/compatibility/api/get-part-measurements';
 import { useBandChoices } from '../features/products/api/get-band-choices';
 import { useProduct } from '../features/products/api/get-product';
 import { useUpdateRadio } from '../features/products/api/update-radio';
-import { useOverlayBands } from '../features/tools/api/get-overlay-bands';
+import { useOverlayBands } from '../features/rf-tools/api/get-overlay-bands';
+import { useUpdateRegulatoryLimit } from '../features/regulatory/api/update-regulatory-limit';
+import { useRegulatoryLimits } from '../features/regulatory/api/get-regulatory-limits';
 
 // Several features on one page read the same server resources; these tests hold them to one cache entry each.
 
@@ -30,6 +32,8 @@ const answers: Record<string, unknown> = {
   'GET /api/products/7': { id: 7, name: 'Tracker', radios: [] },
   'PATCH /api/products/7/radios/70': { id: 70 },
   'GET /api/products/7/matrix': { productId: 7, productName: 'Tracker', rows: [], columns: [], cells: [], rules: '' },
+  'GET /api/regulatory-limits': [],
+  'PATCH /api/regulatory-limits/3': { id: 3 },
   'GET /api/products/7/radios/70/candidates': { productId: 7, radioId: 70, radioName: 'LTE', evaluated: 0, candidates: [] },
 };
 
@@ -100,5 +104,18 @@ describe('shared resources', () => {
     await waitFor(() => expect(count('GET /api/products/7/matrix')).toBe(2));
     expect(count('GET /api/parts/5')).toBe(2);
     expect(count('GET /api/parts')).toBe(2);
+  });
+
+  it('refreshes the matrix and candidates on the same page when a regulatory limit is corrected', async () => {
+    const { wrapper } = setup();
+    const { result } = renderHook(
+      () => ({ limits: useRegulatoryLimits(), matrix: useMatrix(7), candidates: useCandidates(7, 70), update: useUpdateRegulatoryLimit() }),
+      { wrapper },
+    );
+    await waitFor(() => expect(result.current.limits.data && result.current.matrix.data && result.current.candidates.data).toBeTruthy());
+    await result.current.update.mutateAsync({ id: 3, valueDbm: 14 });
+    await waitFor(() => expect(count('GET /api/products/7/matrix')).toBe(2));
+    expect(count('GET /api/products/7/radios/70/candidates')).toBe(2);
+    expect(count('GET /api/regulatory-limits')).toBe(2);
   });
 });

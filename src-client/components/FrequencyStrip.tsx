@@ -1,10 +1,11 @@
 import { type RefObject, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { Classes } from '@blueprintjs/core';
+import type { components } from '../lib/api-types';
 import { type FrequencyAxis, formatMhz, logAxis, mergeIntervals, piecewiseAxis } from './frequency-axis';
 import './FrequencyStrip.css';
 
 /** The role of a required range; each role has its own fill pattern, not only its own shade. */
-export type StripRole = 'uplink' | 'downlink' | 'tdd' | 'receive' | 'transmit-receive';
+export type StripRole = components['schemas']['RangeRole'];
 
 export interface StripRange {
   fromMhz: number;

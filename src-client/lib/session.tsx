@@ -1,15 +1,12 @@
 import { createContext, ReactNode, useCallback, useContext, useEffect, useMemo, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import { apiRequest, ApiError, SESSION_ENDED_EVENT, tokenStore } from './api-client';
+import type { components } from './api-types';
 
-export type Role = 'procurement' | 'engineer' | 'admin';
+export type Role = components['schemas']['Role'];
 
-export interface SessionUser {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-}
+/** The signed-in user, as GET /auth/me answers. */
+export type SessionUser = components['schemas']['MeDto'];
 
 interface SessionState {
   user: SessionUser | null;

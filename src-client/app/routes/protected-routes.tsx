@@ -39,7 +39,7 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.regulatoryLimits,
     lazy: async () => {
-      const { RegulatoryLimitsPage } = await import('../../features/bands/components/RegulatoryLimitsPage');
+      const { RegulatoryLimitsPage } = await import('../../features/regulatory/components/RegulatoryLimitsPage');
       return { element: <RegulatoryLimitsPage /> };
     },
   },
@@ -85,7 +85,7 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.tools,
     lazy: async () => {
-      const { ToolsPage } = await import('../../features/tools/components/ToolsPage');
+      const { ToolsPage } = await import('../../features/rf-tools/components/ToolsPage');
       return {
         element: (
           <RequireAuth>
@@ -98,7 +98,7 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.catalogue,
     lazy: async () => {
-      const { CataloguePage } = await import('../../features/catalogue/components/CataloguePage');
+      const { CataloguePage } = await import('../../features/parts/components/CataloguePage');
       return {
         element: (
           <RequireAuth>
@@ -111,7 +111,7 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.reviewQueue,
     lazy: async () => {
-      const { ReviewQueuePage } = await import('../../features/catalogue/components/ReviewQueuePage');
+      const { ReviewQueuePage } = await import('../../features/parts/components/ReviewQueuePage');
       return {
         element: (
           <RequireAuth roles={['admin']}>
@@ -124,7 +124,7 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.part(':id'),
     lazy: async () => {
-      const { PartPage } = await import('../../features/catalogue/components/PartPage');
+      const { PartPage } = await import('../../features/parts/components/PartPage');
       return {
         element: (
           <RequireAuth>

@@ -1,3 +1,4 @@
+import type { BandFilter } from '../../api/bands';
 import type { components } from '../../lib/api-types';
 
 type Schemas = components['schemas'];
@@ -6,25 +7,19 @@ export type RangeRole = Schemas['RangeRole'];
 
 export type Band = Schemas['BandDto'];
 
-export interface BandFilter {
-  technology?: Technology;
-  fromMhz?: number;
-  toMhz?: number;
-}
+export type { BandFilter };
 
 export type BandSet = Schemas['BandSetDto'];
 
-export interface BandSetInput {
-  name: string;
-  description: string;
-  bandIds: number[];
-}
+export type BandSetInput = Schemas['CreateBandSetDto'];
 
-export type LimitKind = Schemas['LimitKind'];
+export type BandSetUpdate = Schemas['UpdateBandSetDto'];
 
-export type RegulatoryLimit = Schemas['RegulatoryLimitDto'];
+/** Of a part's detail, what the band strip draws. */
+export type PartCoverage = Pick<Schemas['PartDetailDto'], 'id' | 'manufacturer' | 'mpn' | 'coveredRanges'>;
 
-export type RegulatoryLimitInput = Omit<RegulatoryLimit, 'id' | 'updatedAt'>;
+/** A part found by text, for the band strip's "compare a part" picker. */
+export type PartMatch = Schemas['PartSummaryDto'];
 
 export const TECHNOLOGY_LABELS: Record<Technology, string> = {
   lte: 'LTE (incl. LTE-M, NB-IoT)',
@@ -35,12 +30,4 @@ export const TECHNOLOGY_LABELS: Record<Technology, string> = {
   ism: 'Sub-GHz ISM / LoRaWAN',
   uwb: 'UWB',
   other: 'Other',
-};
-
-export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
-
-export const LIMIT_KIND_LABELS: Record<LimitKind, string> = {
-  eirp: 'EIRP',
-  erp: 'ERP',
-  'conducted-gain-rule': 'Conducted power with antenna-gain rule',
 };

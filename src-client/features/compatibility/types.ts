@@ -13,59 +13,20 @@ export type MatrixCell = Schemas['MatrixCellDto'];
 
 export type Matrix = Schemas['MatrixDto'];
 
-export interface DecidingFigure {
-  ruleId: string;
-  ruleTitle: string;
-  designation: string;
-  fact: string;
-  value: number;
-  threshold: number;
-  marginDb: number;
-  text: string;
-}
+export type DecidingFigure = Schemas['DecidingFigureDto'];
 
-export interface Candidate {
-  partId: number;
-  mpn: string;
-  title: string;
-  manufacturer: string;
-  status: CellStatus;
-  marginDb: number | null;
-  deciding: DecidingFigure | null;
-  assignment: 'shortlisted' | 'chosen' | null;
-  bands: { bandId: number; designation: string; status: CellStatus; findings: Finding[] }[];
-}
+export type CandidateBand = Schemas['CandidateBandDto'];
 
-export interface Candidates {
-  productId: number;
-  radioId: number;
-  radioName: string;
-  evaluated: number;
-  candidates: Candidate[];
-}
+export type Candidate = Schemas['CandidateDto'];
 
-export interface Assignment {
-  id: number;
-  productId: number;
-  radioId: number;
-  partId: number;
-  mpn: string;
-  title: string;
-  state: 'shortlisted' | 'chosen';
-  note: string | null;
-  updatedAt: string;
-}
+export type Candidates = Schemas['CandidatesDto'];
+
+export type Assignment = Schemas['AssignmentDto'];
+
+/** A part for one radio of one product (shortlist, choice); the path names product and radio, the body the part. */
+export type AssignmentTarget = { productId: number; radioId: number } & Schemas['ChoosePartDto'];
 
 /** Of a part's detail, what the curve in the cell panel needs. */
-export interface PartMeasurements {
-  id: number;
-  measurements: { id: number; kind: 's11' | 'efficiency' | 'peak-gain' | 'average-gain'; current: boolean }[];
-}
+export type PartMeasurements = Pick<Schemas['PartDetailDto'], 'id' | 'measurements'>;
 
-export interface MeasurementPoints {
-  id: number;
-  kind: string;
-  frequenciesHz: number[];
-  values: number[];
-  vswr?: number[];
-}
+export type MeasurementPoints = Schemas['MeasurementPointsDto'];

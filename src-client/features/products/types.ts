@@ -1,28 +1,18 @@
 import type { components } from '../../lib/api-types';
+import type { AsTyped } from '../../lib/form-input';
 
 type Schemas = components['schemas'];
 export type Technology = Schemas['Technology'];
 export type RangeRole = Schemas['RangeRole'];
 export type Polarization = Schemas['RadioPolarization'];
 export type Connector = Schemas['Connector'];
+export type Region = Schemas['Region'];
 
-/** The band as the products feature needs it (its own copy: features do not import each other). */
-export interface BandChoice {
-  id: number;
-  technology: Technology;
-  designation: string;
-  name: string;
-  ranges: { role: RangeRole; fromMhz: number; toMhz: number }[];
-  duplex: string;
-}
+/** A band of the library, to pick for a radio. */
+export type BandChoice = Schemas['BandDto'];
 
-export interface BandSetChoice {
-  id: number;
-  name: string;
-  description: string;
-  bandIds: number[];
-  bands: { id: number; technology: Technology; designation: string }[];
-}
+/** A band set, to add its bands to a radio at once. */
+export type BandSetChoice = Schemas['BandSetDto'];
 
 export type ProductSummary = Schemas['ProductSummaryDto'];
 
@@ -30,35 +20,13 @@ export type Radio = Schemas['RadioDto'];
 
 export type ProductDetail = Schemas['ProductDetailDto'];
 
-export interface ProductInput {
-  name: string;
-  code: string;
-  owner: string;
-  groundPlaneLengthMm: number | string;
-  groundPlaneWidthMm: number | string;
-  targetRegions: string[];
-  notes: string | null;
-}
+export type ProductInput = AsTyped<Schemas['CreateProductDto']>;
 
-export interface RadioInput {
-  name: string;
-  technology: Technology;
-  module: string;
-  transmitPowerDbm: number | string | null;
-  polarization: Polarization;
-  connector: Connector;
-  feedLossDb: number | string;
-  notes: string | null;
-  bands: { bandId: number; certifiedMaxGainDbi: number | string | null }[];
-}
+export type ProductUpdate = AsTyped<Schemas['UpdateProductDto']>;
 
-export interface HistoryEntry {
-  id: string;
-  action: string;
-  user: { id: number; name: string } | null;
-  changes: Record<string, unknown>;
-  at: string;
-}
+export type RadioInput = AsTyped<Schemas['CreateRadioDto']>;
+
+export type RadioUpdate = AsTyped<Schemas['UpdateRadioDto']>;
 
 export const TECHNOLOGY_LABELS: Record<Technology, string> = {
   lte: 'LTE (LTE-M, NB-IoT, Cat-1)',
@@ -82,7 +50,7 @@ export const TECHNOLOGY_SHORT_LABELS: Record<Technology, string> = {
   other: 'Other',
 };
 export const RECEIVE_ONLY: Technology[] = ['gnss'];
-export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
+export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const satisfies readonly Region[];
 export const POLARIZATIONS: Polarization[] = ['linear', 'RHCP', 'LHCP', 'any'];
 export const CONNECTOR_LABELS: Record<Connector, string> = {
   'solder-pad': 'Solder pad',

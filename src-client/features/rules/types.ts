@@ -1,45 +1,18 @@
-export interface RuleSummary {
-  id: string;
-  title: string;
-  description: string;
-  severity: 'fail' | 'marginal' | 'info';
-  enabled: boolean;
-  version: number;
-  source: string;
-  origin: 'file' | 'file-edited' | 'admin';
-  updatedAt: string | null;
-}
+import type { components } from '../../lib/api-types';
 
-export interface RuleDetail extends RuleSummary {
-  definition: Record<string, unknown>;
-}
+type Schemas = components['schemas'];
+export type Severity = Schemas['Severity'];
 
-export interface RuleProblem {
-  path: string;
-  message: string;
-}
+export type RuleSummary = Schemas['RuleSummaryDto'];
 
-export interface RuleVersion {
-  version: number;
-  action: string;
-  changedBy: string | null;
-  at: string | null;
-}
+export type RuleDetail = Schemas['RuleDetailDto'];
 
-export interface CellChange {
-  productId: number;
-  productName: string;
-  radioName: string;
-  designation: string;
-  mpn: string;
-  before: string;
-  after: string;
-  findings: string[];
-}
+export type RuleProblem = Schemas['RuleProblemDto'];
 
-export interface RulePreview {
-  ruleId: string;
-  cellsCompared: number;
-  productsCompared: number;
-  changes: CellChange[];
-}
+export type RuleValidation = Schemas['RuleValidationDto'];
+
+export type RuleVersion = Schemas['RuleVersionDto'];
+
+export type CellChange = Schemas['CellChangeDto'];
+
+export type RulePreview = Schemas['RulePreviewDto'];

@@ -1,10 +1,8 @@
-import type { Role } from '../../lib/session';
+import type { components } from '../../lib/api-types';
 
-export interface UserRow {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  status: 'invited' | 'active' | 'deactivated';
-  createdAt: string;
-}
+type Schemas = components['schemas'];
+export type UserRow = Schemas['UserResponseDto'];
+
+export type InviteInput = Schemas['InviteUserDto'];
+
+export type ChangeRoleInput = Schemas['ChangeRoleDto'];

@@ -3,7 +3,8 @@ import { Button, ButtonGroup, InputGroup } from '@blueprintjs/core';
 import { Cell, Column, Table, TruncatedFormat } from '@blueprintjs/table';
 import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
-import { useAuditLog, type AuditEntry } from '../api/get-audit-log';
+import type { AuditEntry } from '../../../api/audit-entries';
+import { useAuditLog } from '../api/get-audit-log';
 
 const PAGE = 50;
 

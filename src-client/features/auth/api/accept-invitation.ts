@@ -1,12 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import type { LoginResult } from './login';
-
-export interface SetPasswordInput {
-  token: string;
-  password: string;
-  name?: string;
-}
+import type { LoginResult, SetPasswordInput } from '../types';
 
 /** Accepting an invitation sets a password (and a name) with the e-mailed token. */
 export const acceptInvitation = (input: SetPasswordInput) => apiRequest<LoginResult>('/auth/accept-invitation', { method: 'POST', body: input });

@@ -1,17 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import type { SessionUser } from '../../../lib/session';
-
-export interface LoginInput {
-  email: string;
-  password: string;
-}
-
-export interface LoginResult {
-  accessToken: string;
-  expiresIn: number;
-  user: SessionUser;
-}
+import type { LoginInput, LoginResult } from '../types';
 
 export const login = (input: LoginInput) => apiRequest<LoginResult>('/auth/login', { method: 'POST', body: input });
 

@@ -1,7 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import type { SetPasswordInput } from './accept-invitation';
-import type { LoginResult } from './login';
+import type { LoginResult, SetPasswordInput } from '../types';
 
 /** Finishing a reset sets a password with the e-mailed token. */
 export const resetPassword = (input: SetPasswordInput) =>

@@ -1,7 +1,4 @@
 import { useQuery } from '@tanstack/react-query';
-import { getBandSetsQueryOptions as getSharedBandSetsQueryOptions } from '../../../api/bands';
-import type { BandSet } from '../types';
-
-export const getBandSetsQueryOptions = () => getSharedBandSetsQueryOptions<BandSet>();
+import { getBandSetsQueryOptions } from '../../../api/bands';
 
 export const useBandSets = () => useQuery(getBandSetsQueryOptions());

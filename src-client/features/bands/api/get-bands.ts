@@ -1,7 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { getBandsQueryOptions as getSharedBandsQueryOptions } from '../../../api/bands';
-import type { Band, BandFilter } from '../types';
-
-export const getBandsQueryOptions = (filter: BandFilter = {}) => getSharedBandsQueryOptions<Band>({ ...filter });
+import { getBandsQueryOptions } from '../../../api/bands';
+import type { BandFilter } from '../types';
 
 export const useBands = (filter: BandFilter = {}) => useQuery(getBandsQueryOptions(filter));

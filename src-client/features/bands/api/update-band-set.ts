@@ -1,10 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidateBandSets } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { BandSet, BandSetInput } from '../types';
+import type { BandSet, BandSetUpdate } from '../types';
 
-export const updateBandSet = ({ id, ...input }: BandSetInput & { id: number; version: number }) =>
-  apiRequest<BandSet>(`/band-sets/${id}`, { method: 'PATCH', body: input });
+export const updateBandSet = ({ id, ...input }: BandSetUpdate & { id: number }) => apiRequest<BandSet>(`/band-sets/${id}`, { method: 'PATCH', body: input });
 
 export const useUpdateBandSet = () => {
   const queryClient = useQueryClient();

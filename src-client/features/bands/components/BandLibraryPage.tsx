@@ -5,10 +5,10 @@ import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
 import { FrequencyStrip } from '../../../components/FrequencyStrip';
 import { useBands } from '../api/get-bands';
-import { type Band, type BandFilter, type Technology, TECHNOLOGY_LABELS } from '../types';
-import { BandsNav } from './BandsNav';
+import { type Band, type BandFilter, type PartCoverage, type Technology, TECHNOLOGY_LABELS } from '../types';
+import { BandsNav } from '../../../components/BandsNav';
 import { PartOverlayPicker } from './PartOverlayPicker';
-import { usePartCoverage, type PartCoverage } from '../api/get-part-coverage';
+import { usePartCoverage } from '../api/get-part-coverage';
 import { describeRanges, describeSource } from './band-format';
 
 const TECH_ORDER = Object.keys(TECHNOLOGY_LABELS) as Technology[];

@@ -6,7 +6,7 @@ import { useHasRole } from '../../../lib/session';
 import { useBandSets } from '../api/get-band-sets';
 import { useDeleteBandSet } from '../api/delete-band-set';
 import type { BandSet } from '../types';
-import { BandsNav } from './BandsNav';
+import { BandsNav } from '../../../components/BandsNav';
 import { BandSetDialog } from './BandSetDialog';
 
 const toaster = OverlayToaster.createAsync({ position: Position.TOP });

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button, FormGroup, InputGroup, Menu, MenuItem, Popover, Tag } from '@blueprintjs/core';
-import type { PartCoverage } from '../api/get-part-coverage';
+import type { PartCoverage } from '../types';
 import { usePartMatches } from '../api/search-parts';
 
 export interface PartOverlayPickerProps {

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidateAssignment } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { Assignment } from '../types';
-import type { AssignmentTarget } from './shortlist-part';
+import type { Assignment, AssignmentTarget } from '../types';
 
 export const removeFromShortlist = ({ productId, radioId, partId }: AssignmentTarget) =>
   apiRequest<Assignment[]>(`/products/${productId}/radios/${radioId}/shortlist/${partId}`, { method: 'DELETE' });

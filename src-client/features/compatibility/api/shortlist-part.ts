@@ -1,14 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidateAssignment } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { Assignment } from '../types';
-
-/** A part for one radio of one product. */
-export interface AssignmentTarget {
-  productId: number;
-  radioId: number;
-  partId: number;
-}
+import type { Assignment, AssignmentTarget } from '../types';
 
 export const shortlistPart = ({ productId, radioId, partId }: AssignmentTarget) =>
   apiRequest<Assignment[]>(`/products/${productId}/radios/${radioId}/shortlist`, { method: 'POST', body: { partId } });

@@ -90,7 +90,7 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
                               </Tag>
                             ) : (
                               <>
-                                {candidate.assignment === null && (
+                                {!candidate.assignment && (
                                   <Button
                                     small
                                     text="Shortlist"

@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { AuditPage } from '../../../api/audit-entries';
 import { productKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
-import type { HistoryEntry } from '../types';
 
-export const getProductHistory = (id: number) => apiRequest<{ items: HistoryEntry[]; total: number }>(`/products/${id}/history`);
+export const getProductHistory = (id: number) => apiRequest<AuditPage>(`/products/${id}/history`);
 
 export const getProductHistoryQueryOptions = (id: number) => queryOptions({ queryKey: productKeys.history(id), queryFn: () => getProductHistory(id) });
 

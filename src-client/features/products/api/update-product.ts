@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidateProduct } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { ProductDetail, ProductInput } from '../types';
+import type { ProductDetail, ProductUpdate } from '../types';
 
-export const updateProduct = ({ id, ...input }: Partial<ProductInput> & { id: number; version: number }) =>
+export const updateProduct = ({ id, ...input }: ProductUpdate & { id: number }) =>
   apiRequest<ProductDetail>(`/products/${id}`, { method: 'PATCH', body: input });
 
 export const useUpdateProduct = () => {

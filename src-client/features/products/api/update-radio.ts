@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidateRadio } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { Radio, RadioInput } from '../types';
+import type { Radio, RadioUpdate } from '../types';
 
-export const updateRadio = ({ productId, radioId, ...input }: Partial<RadioInput> & { productId: number; radioId: number; version: number }) =>
+export const updateRadio = ({ productId, radioId, ...input }: RadioUpdate & { productId: number; radioId: number }) =>
   apiRequest<Radio>(`/products/${productId}/radios/${radioId}`, { method: 'PATCH', body: input });
 
 /** The product's matrix and candidates are computed from its radios, so they refresh with it. */

@@ -3,7 +3,7 @@ import { Button, Callout, Checkbox, Dialog, DialogBody, DialogFooter, FormGroup,
 import { ApiError } from '../../../lib/api-client';
 import { useCreateProduct } from '../api/create-product';
 import { useUpdateProduct } from '../api/update-product';
-import { type ProductDetail, type ProductSummary, REGIONS } from '../types';
+import { type ProductDetail, type ProductSummary, type Region, REGIONS } from '../types';
 import { numberOrNull, textOf } from './form-values';
 
 export interface ProductDialogProps {
@@ -23,7 +23,7 @@ export function ProductDialog({ product, onClose, onSaved }: ProductDialogProps)
   const [owner, setOwner] = useState(product?.owner ?? '');
   const [length, setLength] = useState(textOf(product?.groundPlaneLengthMm));
   const [width, setWidth] = useState(textOf(product?.groundPlaneWidthMm));
-  const [regions, setRegions] = useState<string[]>(product?.targetRegions ?? ['EU']);
+  const [regions, setRegions] = useState<Region[]>(product?.targetRegions ?? ['EU']);
   const [notes, setNotes] = useState(product?.notes ?? '');
   const error = mutation.error instanceof ApiError ? mutation.error : null;
   // A 409 on a unique field (PRODUCT_CODE_TAKEN) names its field too: show it inline like a 400.
@@ -38,8 +38,8 @@ export function ProductDialog({ product, onClose, onSaved }: ProductDialogProps)
       owner,
       targetRegions: regions,
       notes: notes.trim() ? notes : null,
-      groundPlaneLengthMm: numberOrNull(length) as number,
-      groundPlaneWidthMm: numberOrNull(width) as number,
+      groundPlaneLengthMm: numberOrNull(length),
+      groundPlaneWidthMm: numberOrNull(width),
     };
     const done = {
       onSuccess: (saved: ProductDetail) => {

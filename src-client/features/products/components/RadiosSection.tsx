@@ -11,7 +11,8 @@ export interface RadiosSectionProps {
   canEdit: boolean;
 }
 
-const bandText = (b: Radio['bands'][number]) => (b.certifiedMaxGainDbi === null ? b.band.designation : `${b.band.designation} · ${b.certifiedMaxGainDbi} dBi`);
+const bandText = (b: Radio['bands'][number]) =>
+  typeof b.certifiedMaxGainDbi !== 'number' ? b.band.designation : `${b.band.designation} · ${b.certifiedMaxGainDbi} dBi`;
 
 /** The radios of a product with their bands; engineers add, edit and remove them here. */
 export function RadiosSection({ product, canEdit }: RadiosSectionProps) {
@@ -52,7 +53,7 @@ export function RadiosSection({ product, canEdit }: RadiosSectionProps) {
                   </td>
                   <td>{TECHNOLOGY_LABELS[radio.technology]}</td>
                   <td>{radio.module}</td>
-                  <td>{radio.receiveOnly ? <Tag minimal>receive only</Tag> : `${radio.transmitPowerDbm} dBm`}</td>
+                  <td>{radio.receiveOnly ? <Tag minimal>receive only</Tag> : `${radio.transmitPowerDbm ?? '—'} dBm`}</td>
                   <td>{radio.polarization}</td>
                   <td>
                     {CONNECTOR_LABELS[radio.connector]}, {radio.feedLossDb} dB

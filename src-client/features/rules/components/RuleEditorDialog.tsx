@@ -1,7 +1,8 @@
 import { useEffect, useState } from 'react';
 import { Button, Callout, Dialog, DialogBody, DialogFooter, HTMLTable, Intent, Tag, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
-import { useRule, useRuleVersions } from '../api/get-rules';
+import { useRule } from '../api/get-rule';
+import { useRuleVersions } from '../api/get-rule-versions';
 import { useCreateRule } from '../api/create-rule';
 import { usePreviewRule } from '../api/preview-rule';
 import { useUpdateRule } from '../api/update-rule';
@@ -131,7 +132,7 @@ export function RuleEditorDialog({ ruleId, onClose }: RuleEditorDialogProps) {
                 </thead>
                 <tbody>
                   {preview.changes.slice(0, 50).map((c) => (
-                    <tr key={`${c.productId}-${c.designation}-${c.mpn}-${c.radioName}`}>
+                    <tr key={`${c.productId}-${c.radioId}-${c.bandId}-${c.partId}`}>
                       <td>{c.productName}</td>
                       <td>
                         {c.designation} · {c.radioName}

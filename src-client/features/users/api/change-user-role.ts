@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { invalidateUsers } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { Role } from '../../../lib/session';
-import type { UserRow } from '../types';
-import { userKeys } from './user-keys';
+import type { ChangeRoleInput, UserRow } from '../types';
 
-export const changeUserRole = ({ id, role }: { id: number; role: Role }) => apiRequest<UserRow>(`/users/${id}/role`, { method: 'PATCH', body: { role } });
+export const changeUserRole = ({ id, role }: ChangeRoleInput & { id: number }) =>
+  apiRequest<UserRow>(`/users/${id}/role`, { method: 'PATCH', body: { role } satisfies ChangeRoleInput });
 
 export const useChangeUserRole = () => {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: changeUserRole, onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.all }) });
+  return useMutation({ mutationFn: changeUserRole, onSuccess: () => invalidateUsers(queryClient) });
 };

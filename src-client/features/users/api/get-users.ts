@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { userKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
 import type { UserRow } from '../types';
-import { userKeys } from './user-keys';
 
 export const getUsers = () => apiRequest<UserRow[]>('/users');
 

@@ -1,18 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { invalidateUsers } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { Role } from '../../../lib/session';
-import type { UserRow } from '../types';
-import { userKeys } from './user-keys';
-
-export interface InviteInput {
-  email: string;
-  name: string;
-  role: Role;
-}
+import type { InviteInput, UserRow } from '../types';
 
 export const inviteUser = (input: InviteInput) => apiRequest<UserRow>('/users/invitations', { method: 'POST', body: input });
 
 export const useInviteUser = () => {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: inviteUser, onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.all }) });
+  return useMutation({ mutationFn: inviteUser, onSuccess: () => invalidateUsers(queryClient) });
 };

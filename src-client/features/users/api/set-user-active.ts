@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { invalidateUsers } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
 import type { UserRow } from '../types';
-import { userKeys } from './user-keys';
 
 export const setUserActive = ({ id, active }: { id: number; active: boolean }) =>
   apiRequest<UserRow>(`/users/${id}/${active ? 'reactivation' : 'deactivation'}`, { method: 'POST' });
 
 export const useSetUserActive = () => {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: setUserActive, onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.all }) });
+  return useMutation({ mutationFn: setUserActive, onSuccess: () => invalidateUsers(queryClient) });
 };

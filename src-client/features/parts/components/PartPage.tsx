@@ -1,0 +1,454 @@
+import { useMemo, useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import {
+  Button,
+  Callout,
+  Dialog,
+  DialogBody,
+  DialogFooter,
+  FileInput,
+  FormGroup,
+  HTMLSelect,
+  HTMLTable,
+  InputGroup,
+  Intent,
+  OverlayToaster,
+  Position,
+  ProgressBar,
+  Tab,
+  Tabs,
+  Tag,
+} from '@blueprintjs/core';
+import { PageHeader } from '../../../components/PageHeader';
+import { QueryState } from '../../../components/QueryState';
+import type { ShadedRange } from '../../../components/FrequencyChart';
+import { paths } from '../../../app/routes/paths';
+import { useCreateOffer } from '../api/create-offer';
+import { useDeleteOffer } from '../api/delete-offer';
+import { downloadPartFile } from '../api/download-part-file';
+import { usePart } from '../api/get-part';
+import { usePartHistory } from '../api/get-part-history';
+import { useUploadDocument } from '../api/upload-document';
+import { DOCUMENT_KINDS, type DocumentKind, type LibraryBand, type PartDetail } from '../types';
+import { BandPicker } from './BandPicker';
+import { MeasurementUploadDialog } from './MeasurementUploadDialog';
+import { PartCurves } from './PartCurves';
+import { PartEditorDialog } from './PartEditorDialog';
+import { ReviewActions } from './ReviewActions';
+import { LIFECYCLE_INTENT, LIFECYCLE_LABEL, REVIEW_STATE_INTENT, bandSpan, fmt, rangesParam } from './part-labels';
+
+const toaster = OverlayToaster.createAsync({ position: Position.TOP });
+const fail = (e: Error) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message }));
+const mm = (a: number | null, b: number | null) => (a === null && b === null ? '—' : `${fmt(a, 1)} × ${fmt(b, 1)} mm`);
+
+function Overview({ part }: { part: PartDetail }) {
+  const rows: [string, string][] = [
+    ['Manufacturer', part.manufacturer],
+    ['MPN', part.mpn],
+    ['Form factor', part.formFactor],
+    ['Mounting', part.mounting ?? '—'],
+    ['Feed / connector', part.connector],
+    ['Polarization', part.polarization],
+    ['Nominal impedance', `${part.nominalImpedanceOhms} Ω`],
+    ['Size', `${fmt(part.lengthMm, 1)} × ${fmt(part.widthMm, 1)} × ${fmt(part.heightMm, 1)} mm`],
+    ['Evaluation ground plane', mm(part.evalGroundLengthMm, part.evalGroundWidthMm)],
+    ['Operating temperature', part.tempMinC === null ? '—' : `${part.tempMinC} … ${part.tempMaxC} °C`],
+    ['Created by', part.createdBy?.name ?? '—'],
+    ['Submitted', part.submittedBy ? `${part.submittedBy.name}, ${new Date(part.submittedAt!).toLocaleDateString()}` : '—'],
+    ['Reviewed', part.reviewedBy ? `${part.reviewedBy.name}, ${new Date(part.reviewedAt!).toLocaleDateString()}` : '—'],
+    ['Version', String(part.version)],
+  ];
+  return (
+    <div className="bw-grid-2">
+      <section className="bw-panel">
+        <HTMLTable compact className="bw-properties">
+          <tbody>
+            {rows.map(([k, v]) => (
+              <tr key={k}>
+                <th>{k}</th>
+                <td>{v}</td>
+              </tr>
+            ))}
+          </tbody>
+        </HTMLTable>
+        {part.notes && <p className="bw-gap">{part.notes}</p>}
+      </section>
+      <section className="bw-panel">
+        <h3>Datasheet bands</h3>
+        {part.specBands.length === 0 ? (
+          <p className="bw-muted">None.</p>
+        ) : (
+          <HTMLTable compact striped>
+            <thead>
+              <tr>
+                <th>MHz</th>
+                <th>Max VSWR</th>
+                <th>Min RL (dB)</th>
+                <th>Efficiency (%)</th>
+                <th>Peak (dBi)</th>
+                <th>Average (dBi)</th>
+              </tr>
+            </thead>
+            <tbody>
+              {part.specBands.map((b) => (
+                <tr key={b.id}>
+                  <td>
+                    {b.fromMhz}–{b.toMhz}
+                  </td>
+                  <td>{fmt(b.maxVswr)}</td>
+                  <td>{fmt(b.minReturnLossDb, 1)}</td>
+                  <td>{fmt(b.efficiencyPct, 0)}</td>
+                  <td>{fmt(b.peakGainDbi, 1)}</td>
+                  <td>{fmt(b.averageGainDbi, 1)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </HTMLTable>
+        )}
+        <h3>Measurements</h3>
+        {part.measurements.length === 0 ? (
+          <p className="bw-muted">None uploaded.</p>
+        ) : (
+          <HTMLTable compact striped data-testid="measurements">
+            <thead>
+              <tr>
+                <th>Kind</th>
+                <th>File</th>
+                <th>Points</th>
+                <th>MHz</th>
+                <th>Ground plane</th>
+                <th />
+              </tr>
+            </thead>
+            <tbody>
+              {part.measurements.map((m) => (
+                <tr key={m.id}>
+                  <td>
+                    {m.kind}{' '}
+                    {m.current && (
+                      <Tag minimal intent={Intent.PRIMARY}>
+                        current
+                      </Tag>
+                    )}
+                  </td>
+                  <td>
+                    <a onClick={() => downloadPartFile(part.id, 'measurements', m.id, m.fileName).catch(fail)}>{m.fileName}</a>
+                  </td>
+                  <td>{m.pointCount}</td>
+                  <td>
+                    {fmt(m.fromMhz, 1)}–{fmt(m.toMhz, 1)}
+                  </td>
+                  <td>{mm(m.groundLengthMm, m.groundWidthMm)}</td>
+                  <td className="bw-muted">{m.sourceFormat}</td>
+                </tr>
+              ))}
+            </tbody>
+          </HTMLTable>
+        )}
+      </section>
+    </div>
+  );
+}
+
+function Documents({ part }: { part: PartDetail }) {
+  const upload = useUploadDocument();
+  const [file, setFile] = useState<File | null>(null);
+  const [kind, setKind] = useState<DocumentKind>('datasheet');
+  const [progress, setProgress] = useState<number | null>(null);
+  return (
+    <section className="bw-panel">
+      {part.documents.length === 0 ? (
+        <p className="bw-muted">No documents.</p>
+      ) : (
+        <HTMLTable compact striped>
+          <thead>
+            <tr>
+              <th>Title</th>
+              <th>Kind</th>
+              <th>Type</th>
+              <th>Size</th>
+              <th>SHA-256</th>
+            </tr>
+          </thead>
+          <tbody>
+            {part.documents.map((d) => (
+              <tr key={d.id}>
+                <td>
+                  <a onClick={() => downloadPartFile(part.id, 'documents', d.id, d.fileName).catch(fail)}>{d.title}</a>
+                </td>
+                <td>{d.kind}</td>
+                <td>{d.contentType}</td>
+                <td>{(d.sizeBytes / 1024).toFixed(1)} KiB</td>
+                <td className="bw-mono">{d.sha256.slice(0, 16)}…</td>
+              </tr>
+            ))}
+          </tbody>
+        </HTMLTable>
+      )}
+      {part.permissions.uploadData && (
+        <div className="bw-row bw-gap">
+          <HTMLSelect aria-label="Document kind" value={kind} options={[...DOCUMENT_KINDS]} onChange={(e) => setKind(e.currentTarget.value as DocumentKind)} />
+          <FileInput
+            text={file?.name ?? 'PDF, PNG, SVG or DXF…'}
+            hasSelection={!!file}
+            inputProps={{ 'aria-label': 'Document file' }}
+            onInputChange={(e) => setFile((e.target as HTMLInputElement).files?.[0] ?? null)}
+          />
+          <Button
+            icon="upload"
+            text="Attach"
+            disabled={!file}
+            loading={upload.isPending}
+            onClick={() =>
+              file &&
+              upload.mutate(
+                { id: part.id, file, kind, onProgress: setProgress },
+                {
+                  onSuccess: () => {
+                    setFile(null);
+                    setProgress(null);
+                  },
+                  onError: (e) => {
+                    setProgress(null);
+                    fail(e);
+                  },
+                },
+              )
+            }
+          />
+          {progress !== null && <ProgressBar value={progress} className="bw-progress-inline" />}
+        </div>
+      )}
+    </section>
+  );
+}
+
+function Sourcing({ part }: { part: PartDetail }) {
+  const create = useCreateOffer();
+  const remove = useDeleteOffer();
+  const [adding, setAdding] = useState(false);
+  const [offer, setOffer] = useState({ supplier: '', sku: '', currency: 'USD', quantity: '1', unitPrice: '', leadTimeDays: '', moq: '' });
+  const save = () =>
+    create.mutate(
+      {
+        id: part.id,
+        supplier: offer.supplier,
+        sku: offer.sku || null,
+        currency: offer.currency,
+        priceBreaks: [{ quantity: Number(offer.quantity), unitPrice: offer.unitPrice }],
+        leadTimeDays: offer.leadTimeDays ? Number(offer.leadTimeDays) : null,
+        moq: offer.moq ? Number(offer.moq) : null,
+        lastCheckedOn: new Date().toISOString().slice(0, 10),
+      },
+      { onSuccess: () => setAdding(false), onError: fail },
+    );
+  return (
+    <section className="bw-panel">
+      <HTMLTable compact striped data-testid="offers">
+        <thead>
+          <tr>
+            <th>Supplier</th>
+            <th>SKU</th>
+            <th>Price breaks</th>
+            <th>MOQ</th>
+            <th>Lead time</th>
+            <th>Checked</th>
+            {part.permissions.editSourcing && <th />}
+          </tr>
+        </thead>
+        <tbody>
+          {part.offers.map((o) => (
+            <tr key={o.id}>
+              <td>{o.supplier}</td>
+              <td>{o.sku ?? '—'}</td>
+              <td>{o.priceBreaks.map((b) => `${b.quantity}+: ${b.unitPrice} ${o.currency}`).join(' · ')}</td>
+              <td>{o.moq ?? '—'}</td>
+              <td>{o.leadTimeDays === null ? '—' : `${o.leadTimeDays} days`}</td>
+              <td>{o.lastCheckedOn ?? '—'}</td>
+              {part.permissions.editSourcing && (
+                <td>
+                  <Button
+                    size="small"
+                    variant="minimal"
+                    icon="trash"
+                    aria-label={`Remove offer from ${o.supplier}`}
+                    onClick={() => remove.mutate({ id: part.id, offerId: o.id }, { onError: fail })}
+                  />
+                </td>
+              )}
+            </tr>
+          ))}
+        </tbody>
+      </HTMLTable>
+      {part.permissions.editSourcing && <Button className="bw-gap" icon="add" text="Add offer" onClick={() => setAdding(true)} />}
+      <h3>Alternates and second sources</h3>
+      {part.alternates.length === 0 ? (
+        <p className="bw-muted">None linked.</p>
+      ) : (
+        <ul>
+          {part.alternates.map((a) => (
+            <li key={a.partId}>
+              <Link to={paths.part(a.partId)}>
+                {a.manufacturer} {a.mpn}
+              </Link>{' '}
+              <Tag minimal>{a.kind}</Tag>{' '}
+              <Tag minimal intent={REVIEW_STATE_INTENT[a.reviewState]}>
+                {a.reviewState}
+              </Tag>{' '}
+              {a.note}
+            </li>
+          ))}
+        </ul>
+      )}
+      <Dialog isOpen={adding} onClose={() => setAdding(false)} title="Add supplier offer">
+        <DialogBody>
+          {(['supplier', 'sku', 'currency', 'quantity', 'unitPrice', 'moq', 'leadTimeDays'] as const).map((k) => (
+            <FormGroup
+              key={k}
+              label={
+                {
+                  supplier: 'Supplier',
+                  sku: 'SKU',
+                  currency: 'Currency',
+                  quantity: 'Break quantity',
+                  unitPrice: 'Unit price',
+                  moq: 'MOQ',
+                  leadTimeDays: 'Lead time (days)',
+                }[k]
+              }
+              labelFor={`offer-${k}`}
+            >
+              <InputGroup
+                id={`offer-${k}`}
+                value={offer[k]}
+                onChange={(e) => {
+                  const value = e.currentTarget.value;
+                  setOffer((o) => ({ ...o, [k]: value }));
+                }}
+              />
+            </FormGroup>
+          ))}
+        </DialogBody>
+        <DialogFooter
+          actions={
+            <>
+              <Button text="Cancel" onClick={() => setAdding(false)} />
+              <Button intent={Intent.PRIMARY} text="Add" loading={create.isPending} onClick={save} />
+            </>
+          }
+        />
+      </Dialog>
+    </section>
+  );
+}
+
+function History({ partId }: { partId: number }) {
+  const history = usePartHistory(partId);
+  return (
+    <QueryState isPending={history.isPending} error={history.error}>
+      <section className="bw-panel">
+        <HTMLTable compact striped data-testid="history">
+          <thead>
+            <tr>
+              <th>When</th>
+              <th>Who</th>
+              <th>What</th>
+              <th>Changes</th>
+            </tr>
+          </thead>
+          <tbody>
+            {(history.data?.items ?? []).map((e) => (
+              <tr key={e.id}>
+                <td>{new Date(e.at).toLocaleString()}</td>
+                <td>{e.user?.name ?? 'system'}</td>
+                <td>{e.action}</td>
+                <td className="bw-history-changes">{Object.keys(e.changes).join(', ')}</td>
+              </tr>
+            ))}
+          </tbody>
+        </HTMLTable>
+      </section>
+    </QueryState>
+  );
+}
+
+/** One part: overview, curves with band overlays and per-range figures, documents, sourcing, history. */
+export function PartPage() {
+  const id = Number(useParams().id);
+  const [picked, setPicked] = useState<LibraryBand[]>([]);
+  const ranges = picked.length ? rangesParam(picked) : undefined;
+  const part = usePart(id, ranges);
+  const [editing, setEditing] = useState(false);
+  const [uploading, setUploading] = useState(false);
+  const [tab, setTab] = useState('overview');
+  const overlays = useMemo<ShadedRange[]>(
+    () => [
+      ...(part.data?.specBands ?? []).map((b) => ({ fromHz: b.fromMhz * 1e6, toHz: b.toMhz * 1e6, label: 'spec' })),
+      ...picked.map((b) => {
+        const s = bandSpan(b);
+        return { fromHz: s.fromMhz * 1e6, toHz: s.toMhz * 1e6, label: b.designation };
+      }),
+    ],
+    [part.data?.specBands, picked],
+  );
+  const p = part.data;
+  return (
+    <QueryState isPending={part.isPending} error={part.error}>
+      {p && (
+        <>
+          <PageHeader
+            title={`${p.manufacturer} ${p.mpn}`}
+            subtitle={
+              <>
+                {p.title}{' '}
+                <Tag minimal intent={REVIEW_STATE_INTENT[p.reviewState]} data-testid="review-state">
+                  {p.reviewState}
+                </Tag>{' '}
+                <Tag minimal intent={LIFECYCLE_INTENT[p.lifecycle]}>
+                  {LIFECYCLE_LABEL[p.lifecycle]}
+                </Tag>
+              </>
+            }
+            actions={
+              <>
+                {p.permissions.uploadData && <Button icon="upload" text="Upload data" onClick={() => setUploading(true)} />}
+                {p.permissions.edit && <Button icon="edit" text="Edit" onClick={() => setEditing(true)} />}
+                <ReviewActions part={p} />
+              </>
+            }
+          />
+          {p.reviewComment && (
+            <Callout intent={p.reviewState === 'draft' ? Intent.DANGER : Intent.WARNING} title="Review comment" className="bw-gap">
+              {p.reviewComment}
+            </Callout>
+          )}
+          <Tabs id="part-tabs" selectedTabId={tab} onChange={(t) => setTab(String(t))} renderActiveTabPanelOnly>
+            <Tab id="overview" title="Overview" panel={<Overview part={p} />} />
+            <Tab
+              id="curves"
+              title="Curves and figures"
+              panel={
+                <>
+                  <FormGroup label="Show bands" inline>
+                    <BandPicker selected={picked} onChange={setPicked} label="Overlay band" />
+                  </FormGroup>
+                  <PartCurves part={p} overlays={overlays} />
+                </>
+              }
+            />
+            <Tab id="documents" title={`Documents (${p.documents.length})`} panel={<Documents part={p} />} />
+            <Tab id="sourcing" title={`Sourcing (${p.offers.length})`} panel={<Sourcing part={p} />} />
+            <Tab id="history" title="History" panel={<History partId={p.id} />} />
+          </Tabs>
+          <PartEditorDialog isOpen={editing} part={p} onClose={() => setEditing(false)} onSaved={() => setEditing(false)} />
+          <MeasurementUploadDialog
+            partId={p.id}
+            isOpen={uploading}
+            onClose={() => setUploading(false)}
+            defaultGround={{ lengthMm: p.evalGroundLengthMm, widthMm: p.evalGroundWidthMm }}
+          />
+        </>
+      )}
+    </QueryState>
+  );
+}

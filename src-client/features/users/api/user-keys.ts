@@ -1,4 +1,0 @@
-export const userKeys = {
-  all: ['users'] as const,
-  list: () => [...userKeys.all, 'list'] as const,
-};
