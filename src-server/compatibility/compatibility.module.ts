@@ -10,11 +10,12 @@ import { MatrixService } from './matrix.service';
 import { RulePreviewService } from './rule-preview.service';
 import { RulesController } from './rules.controller';
 import { RulesService } from './rules.service';
+import { OffersReader } from './sourcing/offers-reader.service';
 
 @Module({
   imports: [PartsModule, ProductsModule, RegulatoryModule],
   controllers: [RulesController, CompatibilityController],
-  providers: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService],
+  providers: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService, OffersReader],
   exports: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService],
 })
 export class CompatibilityModule {}
