@@ -7,6 +7,9 @@ import { ParseIdPipe } from '../common/parse-id.pipe';
 import { AssignmentsService } from './assignments.service';
 import { CandidatesService } from './candidates.service';
 import { MatrixService, type MatrixSelection } from './matrix.service';
+import { EvaluationService } from './evaluation.service';
+import { BillOfMaterialsService } from './bill-of-materials.service';
+import { BillOfMaterialsDto, BillOfMaterialsQueryDto, ProductEvaluationDto } from './dto/evaluation.dto';
 import { matrixCsvFileName, matrixToCsv } from './matrix-csv';
 import { AssignmentDto, CandidatesDto, CandidatesQueryDto, ChoosePartDto, MatrixDto, MatrixQueryDto, ShortlistDto } from './dto/matrix.dto';
 
@@ -22,7 +25,31 @@ export class CompatibilityController {
     private readonly matrices: MatrixService,
     private readonly ranking: CandidatesService,
     private readonly partAssignments: AssignmentsService,
+    private readonly evaluations: EvaluationService,
+    private readonly bom: BillOfMaterialsService,
   ) {}
+
+  @Get('evaluation')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({
+    summary:
+      "The product's verdict and, per radio, its verdict from its chosen part: each band's verdict, deciding finding and facts. Worst first: fail, then no-data (a radio not checked cannot pass), then marginal, then pass",
+  })
+  @ApiOkResponse({ type: ProductEvaluationDto })
+  evaluation(@Param('id', ParseIdPipe) id: number): Promise<ProductEvaluationDto> {
+    return this.evaluations.evaluate(id);
+  }
+
+  @Get('bill-of-materials')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({
+    summary:
+      "The chosen parts with the unit price at the build quantity (from the offers' price breaks), lead time, and the antenna cost per product (one total per currency when mixed)",
+  })
+  @ApiOkResponse({ type: BillOfMaterialsDto })
+  billOfMaterials(@Param('id', ParseIdPipe) id: number, @Query() query: BillOfMaterialsQueryDto): Promise<BillOfMaterialsDto> {
+    return this.bom.billOfMaterials(id, query.quantity, query.currency);
+  }
 
   @Get('matrix')
   @Roles(...ALL_ROLES)
