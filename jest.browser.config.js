@@ -4,5 +4,5 @@ module.exports = {
   ...base,
   displayName: 'browser',
   testMatch: ['<rootDir>/test/browser/**/*.browser-spec.ts'],
-  testTimeout: 60000,
+  testTimeout: 120000,
 };

@@ -38,6 +38,7 @@ ensure_debian_packages() {
     case "$extra" in
       chromium) command -v chromium >/dev/null 2>&1 || want+=(chromium) ;;
       skrf) python3 -c 'import skrf' >/dev/null 2>&1 || /usr/bin/python3 -c 'import skrf' >/dev/null 2>&1 || want+=(python3-scikit-rf) ;;
+      pdftotext) command -v pdftotext >/dev/null 2>&1 || want+=(poppler-utils) ;;
     esac
   done
   if [ ${#want[@]} -gt 0 ]; then apt_install "${want[@]}"; fi

@@ -10,7 +10,7 @@ BROWSER_PORT="${BROWSER_PORT:-3100}"
 RESULTS="$RUN_DIR/results"; rm -rf "$RESULTS"; mkdir -p "$RESULTS"
 
 ensure_node_modules
-ensure_debian_packages chromium skrf
+ensure_debian_packages chromium skrf pdftotext
 DB_WAS_RUNNING=0; db_ping && DB_WAS_RUNNING=1
 db_start
 for db in bandwright_test bandwright_browser; do db_drop "$db"; db_create "$db"; done

@@ -1217,7 +1217,7 @@ export interface components {
              */
             vswrMax?: number;
             /**
-             * @description Port whose reflection (S11 or S22) is analysed
+             * @description Port whose reflection (S11, S22, …) is analysed
              * @example 1
              */
             port?: number;
@@ -1225,7 +1225,7 @@ export interface components {
             criterion?: components["schemas"]["MatchCriterion"];
             /**
              * Format: binary
-             * @description A Touchstone file (.s1p, .s2p or version 2 .ts), at most 32 MiB
+             * @description A Touchstone file (.s1p … .s64p, or version 2 .ts), at most 32 MiB
              */
             file: string;
         };
@@ -1251,8 +1251,8 @@ export interface components {
         TouchstoneAnalysisDto: {
             /** @example 1.0 */
             version: string;
-            /** @enum {number} */
-            ports: 1 | 2;
+            /** @description Ports in the file, 1 to 64 */
+            ports: number;
             /**
              * @description Parameter as written in the file; the analysis always uses S
              * @enum {string}
@@ -1266,8 +1266,8 @@ export interface components {
             points: number;
             minFrequencyHz: number;
             maxFrequencyHz: number;
-            /** @enum {number} */
-            port: 1 | 2;
+            /** @description The port analysed */
+            port: number;
             criterion: components["schemas"]["MatchCriterion"];
             /** @description The criterion as a VSWR limit */
             thresholdVswr: number;

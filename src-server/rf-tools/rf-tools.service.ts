@@ -61,7 +61,7 @@ export class RfToolsService {
         : options.vswrMax !== undefined
           ? { kind: 'vswr', maxVswr: options.vswrMax }
           : DEFAULT_MATCH_CRITERION;
-    const curve = reflectionCurveFromNetwork(network, port as 1 | 2);
+    const curve = reflectionCurveFromNetwork(network, port);
     const gammaLimit = gammaLimitOf(criterion);
     const best = bestMatch(curve);
     const points = curve.frequenciesHz.length;

@@ -8,7 +8,7 @@ import { type TouchstoneNetwork, sParameter } from './touchstone';
  * frequency; VSWR and return loss are derived from that |Γ|, so every criterion sees the same curve.
  */
 export interface ReflectionCurve {
-  readonly port: 1 | 2;
+  readonly port: number;
   readonly referenceOhms: number;
   readonly frequenciesHz: Float64Array;
   readonly gammaRe: Float64Array;
@@ -21,7 +21,7 @@ export function reflectionCurveFromGamma(
   gammaRe: Float64Array,
   gammaIm: Float64Array,
   referenceOhms = 50,
-  port: 1 | 2 = 1,
+  port = 1,
 ): ReflectionCurve {
   const gammaMagnitude = new Float64Array(frequenciesHz.length);
   // sqrt of the sum of squares: Math.hypot is several times slower and |Γ| ≤ 1 cannot overflow.
@@ -29,8 +29,8 @@ export function reflectionCurveFromGamma(
   return { port, referenceOhms, frequenciesHz, gammaRe, gammaIm, gammaMagnitude };
 }
 
-/** S11 or S22 of a file, with the other port terminated in its reference impedance. */
-export function reflectionCurveFromNetwork(network: TouchstoneNetwork, port: 1 | 2 = 1): ReflectionCurve {
+/** Spp of a file (S11, S22, …), with every other port terminated in its reference impedance. */
+export function reflectionCurveFromNetwork(network: TouchstoneNetwork, port = 1): ReflectionCurve {
   const series = sParameter(network, port, port);
   return reflectionCurveFromGamma(network.frequenciesHz, series.re, series.im, network.referenceOhms[port - 1], port);
 }

@@ -258,7 +258,9 @@ trailing text after [End] is ignored`;
       ['decreasing 1-port', '# MHz S RI\n868 0.1 0\n800 0.1 0\n', 'TOUCHSTONE_FREQUENCY_NOT_INCREASING', 3],
       ['missing [End]', EXAMPLE_C.replace('[End]\n', ''), 'TOUCHSTONE_MISSING_END', 9],
       ['count mismatch', EXAMPLE_C.replace('[Number of Frequencies] 2', '[Number of Frequencies] 3'), 'TOUCHSTONE_FREQUENCY_COUNT_MISMATCH', 10],
-      ['3 ports', '[Version] 2.0\n# MHz S RI\n[Number of Ports] 3\n', 'TOUCHSTONE_WRONG_PORT_COUNT', 3],
+      ['65 ports (above the limit of 64)', '[Version] 2.0\n# MHz S RI\n[Number of Ports] 65\n', 'TOUCHSTONE_WRONG_PORT_COUNT', 3],
+      ['mixed-mode data', '[Version] 2.0\n# MHz S RI\n[Number of Ports] 4\n[Mixed-Mode Order] D2,3 D1,4 C2,3 C1,4\n', 'TOUCHSTONE_UNSUPPORTED', 4],
+      ['Z data of 3 ports', '[Version] 2.0\n# MHz Z RI\n[Number of Ports] 3\n[Number of Frequencies] 1\n[Network Data]\n', 'TOUCHSTONE_UNSUPPORTED', 2],
       ['no data order', EXAMPLE_C.replace('[Two-Port Data Order] 12_21\n', ''), 'TOUCHSTONE_MISSING_KEYWORD', 5],
       ['unsupported version', '[Version] 3.0\n', 'TOUCHSTONE_UNSUPPORTED_VERSION', 1],
       ['unknown keyword', EXAMPLE_C.replace('[Network Data]', '[Frobnicate]'), 'TOUCHSTONE_UNKNOWN_KEYWORD', 6],
@@ -313,6 +315,113 @@ trailing text after [End] is ignored`;
     const values = ['0.1', '1e-300', '123456789012345678901234', '-.5', '+5.', '1.7976931348623157e308', '4.9e-324', '0.30000000000000004'];
     const network = readTouchstone(`# Hz S RI\n${values.map((v, i) => `${i + 1} ${v} ${v}`).join('\n')}\n`);
     values.forEach((v, i) => expect(network.s[0].re[i]).toBe(Number(v)));
+  });
+});
+
+describe('more than 2 ports (Touchstone 1.1 and 2.0, Network Data and [Matrix Format])', () => {
+  // The layout of Touchstone 1.1's 4-port example (from memory: each matrix row on its own line, the frequency on the first).
+  const FOUR_PORT_V1 = `! 4-port S-parameter data, one frequency
+# GHz S MA R 50
+5.00000 0.60 161.24 0.40 -42.20 0.42 -66.58 0.53 -79.34 !row 1
+        0.40 -42.20 0.60 161.20 0.53 -79.34 0.42 -66.58 !row 2
+        0.42 -66.58 0.53 -79.34 0.60 161.24 0.40 -42.20 !row 3
+        0.53 -79.34 0.42 -66.58 0.40 -42.20 0.60 161.24 !row 4
+`;
+
+  it('reads a version-1 4-port point written one row per line, row-major (S12 is the second pair)', () => {
+    const network = readTouchstone(FOUR_PORT_V1, { expectedPorts: 4 });
+    expect(network.ports).toBe(4);
+    expect(network.frequenciesHz[0]).toBe(5e9);
+    expect(magnitudeAt(network, 1, 2, 0)).toBeCloseTo(0.4, 12);
+    expect(angleAt(network, 1, 2, 0)).toBeCloseTo(-42.2, 10);
+    expect(angleAt(network, 2, 2, 0)).toBeCloseTo(161.2, 10);
+    expect(magnitudeAt(network, 4, 1, 0)).toBeCloseTo(0.53, 12);
+    expect(angleAt(network, 3, 4, 0)).toBeCloseTo(-42.2, 10);
+  });
+
+  it('needs the file name to know more than 2 ports in version 1, and refuses a point that runs into the next', () => {
+    // Without the name the first line looks like a 2-port point (9 numbers), and the next line is then too short.
+    expect(errorOf(() => readTouchstone(FOUR_PORT_V1)).code).toBe('TOUCHSTONE_DATA_LINE_LENGTH');
+    const spilled = FOUR_PORT_V1.replace('!row 4', '5.1 0.1 0 !the next point on the same line');
+    const error = errorOf(() => readTouchstone(spilled, { expectedPorts: 4 }));
+    expect([error.code, error.line]).toEqual(['TOUCHSTONE_DATA_LINE_LENGTH', 3]);
+    const cut = FOUR_PORT_V1.split('\n').slice(0, 5).join('\n') + '\n';
+    const truncated = errorOf(() => readTouchstone(cut, { expectedPorts: 4 }));
+    expect([truncated.code, truncated.line]).toEqual(['TOUCHSTONE_DATA_LINE_LENGTH', 3]);
+  });
+
+  it('reads a version-1 5-port row wrapped after 4 pairs', () => {
+    const row = (r: number) => Array.from({ length: 5 }, (_, c) => `${(r * 10 + c) / 100} ${r + c}`);
+    const lines = ['# MHz S RI R 50'];
+    for (let r = 1; r <= 5; r++) {
+      const pairs = row(r);
+      lines.push(`${r === 1 ? '100' : '   '} ${pairs.slice(0, 4).join(' ')}`, `    ${pairs[4]}`);
+    }
+    const network = readTouchstone(lines.join('\n') + '\n', { expectedPorts: 5 });
+    expect(network.ports).toBe(5);
+    expect(at(network, 3, 5, 0)).toEqual(complex(0.34, 7));
+    expect(at(network, 5, 1, 0)).toEqual(complex(0.5, 5));
+  });
+
+  it('fills a symmetric matrix from [Matrix Format] Lower and Upper of a 3-port file', () => {
+    const lower = `[Version] 2.0
+# MHz S RI R 50
+[Number of Ports] 3
+[Number of Frequencies] 1
+[Matrix Format] Lower
+[Network Data]
+868 0.11 0.01
+    0.21 0.02 0.22 0.03
+    0.31 0.04 0.32 0.05 0.33 0.06
+[End]
+`;
+    const upper = lower
+      .replace('Lower', 'Upper')
+      .replace(
+        '868 0.11 0.01\n    0.21 0.02 0.22 0.03\n    0.31 0.04 0.32 0.05 0.33 0.06',
+        '868 0.11 0.01 0.21 0.02 0.31 0.04\n    0.22 0.03 0.32 0.05\n    0.33 0.06',
+      );
+    for (const text of [lower, upper]) {
+      const network = readTouchstone(text);
+      expect(network.matrixFormat === 'Lower' || network.matrixFormat === 'Upper').toBe(true);
+      expect(at(network, 1, 2, 0)).toEqual(complex(0.21, 0.02));
+      expect(at(network, 2, 1, 0)).toEqual(complex(0.21, 0.02));
+      expect(at(network, 1, 3, 0)).toEqual(complex(0.31, 0.04));
+      expect(at(network, 3, 2, 0)).toEqual(complex(0.32, 0.05));
+      expect(at(network, 3, 3, 0)).toEqual(complex(0.33, 0.06));
+    }
+  });
+
+  it('reads back what the writer writes for 3 to 12 ports, version 1 and version 2 Full, Lower and Upper', () => {
+    for (const ports of [3, 4, 5, 8, 12]) {
+      const frequenciesHz = Float64Array.from({ length: 7 }, (_, i) => 1e9 + i * 1e6);
+      // Symmetric (reciprocal) data, so that half a matrix describes the whole.
+      const value = (element: number, i: number) => {
+        const row = Math.floor(element / ports);
+        const column = element % ports;
+        const key = Math.min(row, column) * 100 + Math.max(row, column);
+        return complex(((key * 7 + i) % 97) / 100, 0 - ((key * 3 + i) % 89) / 100); // 0 - x: never a -0, which text cannot carry
+      };
+      const data = Array.from({ length: ports * ports }, (_, e) => ({
+        re: Float64Array.from(frequenciesHz, (_, i) => value(e, i).re),
+        im: Float64Array.from(frequenciesHz, (_, i) => value(e, i).im),
+      }));
+      const variants = [
+        { version: 1 as const, matrixFormat: 'Full' as const },
+        { version: 2 as const, matrixFormat: 'Full' as const },
+        { version: 2 as const, matrixFormat: 'Lower' as const },
+        { version: 2 as const, matrixFormat: 'Upper' as const },
+      ];
+      for (const variant of variants) {
+        const text = writeTouchstone({ ...variant, ports, frequenciesHz, data, format: 'RI', frequencyUnit: 'Hz' });
+        const network = readTouchstone(text, { expectedPorts: ports });
+        expect(network.ports).toBe(ports);
+        for (let e = 0; e < ports * ports; e++) {
+          expect([...network.s[e].re]).toEqual([...data[e].re]);
+          expect([...network.s[e].im]).toEqual([...data[e].im]);
+        }
+      }
+    }
   });
 });
 

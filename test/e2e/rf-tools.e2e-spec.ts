@@ -77,6 +77,28 @@ describe('RF tools (API)', () => {
       expect(fieldsOf((await analyze(EXAMPLE_A, 'a.s1p', { port: '2' }).expect(400)).body)).toEqual(['port']);
     });
 
+    it('analyses any port of a multi-port file (the reflection Spp of port 3 of a version-1 .s4p) and refuses port 65', async () => {
+      // Touchstone 1.1: above 2 ports each matrix row starts a new line; S33 is the third pair of the third row.
+      const fourPort = `# MHz S MA R 50
+868 0.9 0  0.1 0  0.1 0  0.1 0
+    0.1 0  0.9 0  0.1 0  0.1 0
+    0.1 0  0.1 0  0.2 0  0.1 0
+    0.1 0  0.1 0  0.1 0  0.9 0
+915 0.9 0  0.1 0  0.1 0  0.1 0
+    0.1 0  0.9 0  0.1 0  0.1 0
+    0.1 0  0.1 0  0.5 0  0.1 0
+    0.1 0  0.1 0  0.1 0  0.9 0
+`;
+      const res = await analyze(fourPort, 'assembly.s4p', { port: '3' }).expect(200);
+      expect(res.body.ports).toBe(4);
+      expect(res.body.port).toBe(3);
+      // |Γ| = 0.2 → VSWR = (1 + 0.2) / (1 − 0.2) = 1.5 (Pozar, Microwave Engineering §2.3).
+      expect(res.body.curve[0].gammaMagnitude).toBeCloseTo(0.2, 12);
+      expect(res.body.curve[0].vswr).toBeCloseTo(1.5, 12);
+      expect(fieldsOf((await analyze(fourPort, 'assembly.s4p', { port: '65' }).expect(400)).body)).toEqual(['port']);
+      expect(fieldsOf((await analyze(fourPort, 'assembly.s4p', { port: '5' }).expect(400)).body)).toEqual(['port']);
+    });
+
     it('answers 422 with the line number and the reason for a broken data line', async () => {
       const broken = EXAMPLE_A.replace('868   0.2000   0.0000', '868   0.2000');
       const res = await analyze(broken, 'broken.s1p').expect(422);

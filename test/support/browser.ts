@@ -35,7 +35,7 @@ export async function openBrowser(): Promise<BrowserSession> {
   // Invitations, resets and hand-typed sign-ins of one test file share an address of their own (see signIn).
   await context.setExtraHTTPHeaders({ 'X-Forwarded-For': testClientAddress() });
   const page = context.pages()[0] ?? (await context.newPage());
-  page.setDefaultTimeout(15000);
+  page.setDefaultTimeout(30000); // a loaded 2-core machine can take longer than 15 s to render a page with its data
   return {
     context,
     page,

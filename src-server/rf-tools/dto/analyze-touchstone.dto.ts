@@ -1,5 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { EnumField, IntField, NumberField } from '../../common/dto-fields';
+import { TOUCHSTONE_MAX_PORTS } from '../../rf/touchstone';
 
 export const MATCH_CRITERIA = ['vswr', 'return-loss-10db'] as const;
 export type MatchCriterionName = (typeof MATCH_CRITERIA)[number];
@@ -9,7 +10,7 @@ export class AnalyzeTouchstoneDto {
   @NumberField({ optional: true, min: 1.01, max: 100, description: 'VSWR limit for the matched ranges when criterion is "vswr"', example: 2 })
   vswrMax?: number;
 
-  @IntField({ optional: true, min: 1, max: 2, description: 'Port whose reflection (S11 or S22) is analysed', example: 1 })
+  @IntField({ optional: true, min: 1, max: TOUCHSTONE_MAX_PORTS, description: 'Port whose reflection (S11, S22, …) is analysed', example: 1 })
   port?: number;
 
   @EnumField(MATCH_CRITERIA, {
@@ -22,7 +23,7 @@ export class AnalyzeTouchstoneDto {
 
 /** Swagger's view of the whole multipart body. */
 export class AnalyzeTouchstoneFormDto extends AnalyzeTouchstoneDto {
-  @ApiProperty({ type: 'string', format: 'binary', description: 'A Touchstone file (.s1p, .s2p or version 2 .ts), at most 32 MiB' })
+  @ApiProperty({ type: 'string', format: 'binary', description: 'A Touchstone file (.s1p … .s64p, or version 2 .ts), at most 32 MiB' })
   file: unknown;
 }
 
@@ -47,14 +48,14 @@ export class CurvePointDto {
 
 export class TouchstoneAnalysisDto {
   @ApiProperty({ example: '1.0' }) version: string;
-  @ApiProperty({ enum: [1, 2] }) ports: number;
+  @ApiProperty({ description: 'Ports in the file, 1 to 64' }) ports: number;
   @ApiProperty({ description: 'Parameter as written in the file; the analysis always uses S', enum: ['S', 'Y', 'Z', 'H', 'G'] }) parameter: string;
   @ApiProperty({ enum: ['DB', 'MA', 'RI'] }) format: string;
   @ApiProperty({ type: [Number], description: 'Reference resistance per port, ohms' }) referenceOhms: number[];
   @ApiProperty({ description: 'Frequency points in the file' }) points: number;
   @ApiProperty() minFrequencyHz: number;
   @ApiProperty() maxFrequencyHz: number;
-  @ApiProperty({ enum: [1, 2] }) port: number;
+  @ApiProperty({ description: 'The port analysed' }) port: number;
   @ApiProperty({ enum: MATCH_CRITERIA, enumName: 'MatchCriterion' }) criterion: MatchCriterionName;
   @ApiProperty({ description: 'The criterion as a VSWR limit' }) thresholdVswr: number;
   @ApiProperty({ description: 'The criterion as a minimum return loss, dB' }) thresholdReturnLossDb: number;

@@ -17,7 +17,8 @@ export type TouchstoneErrorCode =
   | 'TOUCHSTONE_BAD_KEYWORD'
   | 'TOUCHSTONE_UNKNOWN_KEYWORD'
   | 'TOUCHSTONE_LINE_TOO_LONG'
-  | 'TOUCHSTONE_TOO_MANY_POINTS';
+  | 'TOUCHSTONE_TOO_MANY_POINTS'
+  | 'TOUCHSTONE_UNSUPPORTED';
 
 /**
  * What kind of refusal: `too-large` is about the file's size, `malformed` about its content.

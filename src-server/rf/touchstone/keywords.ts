@@ -8,7 +8,7 @@ export interface ReaderState {
   version: string;
   isVersion2: boolean;
   option: OptionLine | null;
-  ports: 1 | 2 | null;
+  ports: number | null;
   twoPortDataOrder: TwoPortDataOrder | null;
   matrixFormat: MatrixFormat;
   frequencyCount: number | null;
@@ -47,7 +47,7 @@ export interface KeywordReader {
   readonly state: ReaderState;
   readonly pointCount: number;
   checkPorts(ports: number, lineNumber: number, how: string): void;
-  startNetworkData(lineNumber: number, ports: 1 | 2): void;
+  startNetworkData(lineNumber: number, ports: number): void;
   /** Refuses a point left incomplete when a keyword ends the data. */
   flushPending(lineNumber: number): void;
 }
@@ -114,7 +114,7 @@ export function readKeyword(reader: KeywordReader, text: string, lineNumber: num
       headerOnly();
       const ports = positiveInteger(keyword.argument, '[Number of Ports]', lineNumber);
       reader.checkPorts(ports, lineNumber, '[Number of Ports] says');
-      state.ports = ports as 1 | 2;
+      state.ports = ports;
       return;
     }
     case 'two-port data order': {
@@ -191,6 +191,12 @@ export function readKeyword(reader: KeywordReader, text: string, lineNumber: num
       }
       state.section = 'ended';
       return;
+    case 'mixed-mode order':
+      throw new TouchstoneError(
+        'TOUCHSTONE_UNSUPPORTED',
+        lineNumber,
+        `[Mixed-Mode Order] (differential and common-mode data) is not supported; export single-ended S-parameters`,
+      );
     default:
       throw new TouchstoneError('TOUCHSTONE_UNKNOWN_KEYWORD', lineNumber, `unknown or unsupported keyword [${keyword.name}]`);
   }

@@ -7,12 +7,24 @@ import { FREQUENCY_UNIT_HZ } from './types';
 
 const DEG_TO_RAD = Math.PI / 180;
 
-/** Where each complex pair of a data point goes in the row-major matrix; mirrored pairs fill symmetric cells. */
-function pairLayout(ports: 1 | 2, order: TwoPortDataOrder, matrixFormat: MatrixFormat): { targets: number[]; mirrors: [number, number][] } {
-  if (ports === 1) return { targets: [0], mirrors: [] };
-  if (matrixFormat === 'Lower') return { targets: [0, 2, 3], mirrors: [[2, 1]] };
-  if (matrixFormat === 'Upper') return { targets: [0, 1, 3], mirrors: [[1, 2]] };
-  return { targets: order === '21_12' ? [0, 2, 1, 3] : [0, 1, 2, 3], mirrors: [] };
+/**
+ * Where each complex pair of a data point goes in the row-major matrix; mirrored pairs fill symmetric cells.
+ * Full data are row-major except version-1 style 2-port data (21_12); Lower holds columns 1..i of row i and
+ * Upper columns i..N (Touchstone 2.0, [Matrix Format]).
+ */
+export function pairLayout(ports: number, order: TwoPortDataOrder, matrixFormat: MatrixFormat): { targets: number[]; mirrors: [number, number][] } {
+  if (ports === 2 && matrixFormat === 'Full' && order === '21_12') return { targets: [0, 2, 1, 3], mirrors: [] };
+  const targets: number[] = [];
+  const mirrors: [number, number][] = [];
+  for (let row = 0; row < ports; row++) {
+    const first = matrixFormat === 'Upper' ? row : 0;
+    const last = matrixFormat === 'Lower' ? row : ports - 1;
+    for (let column = first; column <= last; column++) {
+      targets.push(row * ports + column);
+      if (column !== row && matrixFormat !== 'Full') mirrors.push([row * ports + column, column * ports + row]);
+    }
+  }
+  return { targets, mirrors };
 }
 
 class PointStore {
@@ -82,7 +94,7 @@ function multiply2(a: Matrix2, b: Matrix2): Matrix2 {
  * Converts one point of normalised Z, Y, H or G data to S (Pozar, Microwave Engineering 4th ed.,
  * §4.3 and Table 4.2): S = (z − I)(z + I)⁻¹, S = (I − y)(I + y)⁻¹; H and G through the hybrid formulas.
  */
-function normalisedToS(parameter: NetworkParameter, ports: 1 | 2, n: Complex[]): Complex[] {
+function normalisedToS(parameter: NetworkParameter, ports: number, n: Complex[]): Complex[] {
   if (ports === 1) {
     if (parameter === 'Z') return [div(sub(n[0], ONE), add(n[0], ONE))];
     return [div(sub(ONE, n[0]), add(ONE, n[0]))];
@@ -115,7 +127,7 @@ function scaleBy(a: Complex, factor: number): Complex {
  * Factors that normalise each row-major element. v1 data are already normalised to R; v2 Z and Y are in
  * ohms and siemens (Touchstone 2.0, Option Line), H and G mix both (h11 Ω, h22 S, h12/h21 unitless).
  */
-function normalisationFactors(parameter: NetworkParameter, ports: 1 | 2, referenceOhms: readonly number[], version1: boolean): number[] {
+function normalisationFactors(parameter: NetworkParameter, ports: number, referenceOhms: readonly number[], version1: boolean): number[] {
   const count = ports * ports;
   if (version1 || parameter === 'S') return new Array<number>(count).fill(1);
   const r = (port: number) => referenceOhms[port];
@@ -127,7 +139,8 @@ function normalisationFactors(parameter: NetworkParameter, ports: 1 | 2, referen
 }
 
 export interface NetworkShape {
-  readonly ports: 1 | 2;
+  /** Z and Y above 2 ports, and H and G other than 2 ports, are refused before a network is built. */
+  readonly ports: number;
   readonly parameter: NetworkParameter;
   readonly format: DataFormat;
   readonly frequencyUnit: FrequencyUnit;
@@ -159,8 +172,8 @@ export class NetworkBuilder {
     this.valuesPerPoint = 1 + 2 * layout.targets.length;
     this.frequencyMultiplier = FREQUENCY_UNIT_HZ[shape.frequencyUnit];
     this.normalisation = normalisationFactors(shape.parameter, shape.ports, shape.referenceOhms, shape.version1);
-    // Sized from the file (about 24 bytes a 1-port point), never beyond the point limit.
-    this.store = new PointStore(shape.ports * shape.ports, Math.min(maxPoints, Math.ceil(fileBytes / (shape.ports === 1 ? 24 : 72))));
+    // Sized from the file (about 24 bytes a 1-port point, 16 more per complex value), never beyond the point limit.
+    this.store = new PointStore(shape.ports * shape.ports, Math.min(maxPoints, Math.ceil(fileBytes / (8 + 16 * layout.targets.length))));
   }
 
   get pointCount(): number {

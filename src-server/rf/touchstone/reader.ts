@@ -19,12 +19,20 @@ import { TouchstoneError } from './errors';
 import { type KeywordReader, type ReaderState, initialReaderState, readKeyword, readReferenceValues, readVersionLine } from './keywords';
 import { NetworkBuilder } from './network';
 import { type OptionLine, parseOptionLine } from './option-line';
-import { TOUCHSTONE_MAX_BYTES, TOUCHSTONE_MAX_LINE_BYTES, TOUCHSTONE_MAX_POINTS, type TouchstoneNetwork, type TouchstoneReadOptions } from './types';
+import {
+  TOUCHSTONE_MAX_BYTES,
+  TOUCHSTONE_MAX_LINE_BYTES,
+  TOUCHSTONE_MAX_POINTS,
+  TOUCHSTONE_MAX_PORTS,
+  type TouchstoneNetwork,
+  type TouchstoneReadOptions,
+} from './types';
 
 /**
- * Touchstone reader for versions 1.x and 2.x, 1- and 2-port (IBIS Touchstone File Format Specification
+ * Touchstone reader for versions 1.x and 2.x, any number of ports up to TOUCHSTONE_MAX_PORTS (IBIS Touchstone File Format Specification
  * Rev 1.1 (2002), Version 2.0 (2009), Version 2.1 (2024)). Data of any parameter (S, Y, Z, H, G) are
- * returned as S-parameters against the file's reference resistances.
+ * returned as S-parameters against the file's reference resistances; Z and Y files of more than 2 ports,
+ * and mixed-mode data, are refused with TOUCHSTONE_UNSUPPORTED.
  */
 export function readTouchstone(input: string | Uint8Array, options: TouchstoneReadOptions = {}): TouchstoneNetwork {
   const maxBytes = options.maxBytes ?? TOUCHSTONE_MAX_BYTES;
@@ -41,11 +49,11 @@ class TouchstoneReader implements KeywordReader {
   readonly state: ReaderState = initialReaderState();
   private readonly maxPoints: number;
   private readonly maxLineBytes: number;
-  private readonly numbers = new LineNumbers(16);
+  private readonly numbers: LineNumbers;
   private network: NetworkBuilder | null = null;
   private sawContent = false;
-  // A version-2 point may wrap over several lines; these hold the partial point.
-  private readonly pending = new Float64Array(1 + 2 * 4);
+  // A point may wrap over several lines (version 2, and version 1 above 2 ports); these hold the partial point.
+  private pending = new Float64Array(0);
   private pendingCount = 0;
   private pendingLine = 0;
 
@@ -55,6 +63,8 @@ class TouchstoneReader implements KeywordReader {
   ) {
     this.maxPoints = options.maxPoints ?? TOUCHSTONE_MAX_POINTS;
     this.maxLineBytes = options.maxLineBytes ?? TOUCHSTONE_MAX_LINE_BYTES;
+    // A number takes at least two bytes with its separator, so a line never holds more than this.
+    this.numbers = new LineNumbers(Math.ceil(this.maxLineBytes / 2) + 1);
   }
 
   get pointCount(): number {
@@ -148,7 +158,7 @@ class TouchstoneReader implements KeywordReader {
     else this.readVersion1Data(lineNumber);
   }
 
-  startNetworkData(lineNumber: number, ports: 1 | 2): void {
+  startNetworkData(lineNumber: number, ports: number): void {
     const state = this.state;
     const option = state.option;
     if (!option)
@@ -158,6 +168,13 @@ class TouchstoneReader implements KeywordReader {
         'TOUCHSTONE_BAD_OPTION_LINE',
         option.lineNumber,
         `${option.parameter} parameters describe 2-port networks; this file has ${ports} port`,
+      );
+    }
+    if ((option.parameter === 'Z' || option.parameter === 'Y') && ports > 2) {
+      throw new TouchstoneError(
+        'TOUCHSTONE_UNSUPPORTED',
+        option.lineNumber,
+        `${option.parameter} parameters are read for 1- and 2-port files only; export the ${ports}-port data as S-parameters`,
       );
     }
     const references = state.referenceOhms ?? option.referenceOhms;
@@ -185,6 +202,7 @@ class TouchstoneReader implements KeywordReader {
       this.maxPoints,
       this.bytes.length,
     );
+    this.pending = new Float64Array(this.network.valuesPerPoint);
   }
 
   checkPorts(ports: number, lineNumber: number, how: string): void {
@@ -196,8 +214,8 @@ class TouchstoneReader implements KeywordReader {
         `the file name says ${expected} port${expected === 1 ? '' : 's'} but ${how} ${ports}`,
       );
     }
-    if (ports !== 1 && ports !== 2) {
-      throw new TouchstoneError('TOUCHSTONE_WRONG_PORT_COUNT', lineNumber, `only 1- and 2-port files are supported, ${how} ${ports}`);
+    if (ports > TOUCHSTONE_MAX_PORTS) {
+      throw new TouchstoneError('TOUCHSTONE_WRONG_PORT_COUNT', lineNumber, `at most ${TOUCHSTONE_MAX_PORTS} ports are read, ${how} ${ports}`);
     }
   }
 
@@ -221,7 +239,9 @@ class TouchstoneReader implements KeywordReader {
       // Version 1 has no port keyword: the file name, or else the first data line, says how many.
       const root = Math.round(Math.sqrt((count - 1) / 2));
       const impliedPorts = root >= 1 && 1 + 2 * root * root === count ? root : undefined;
-      if (options.expectedPorts !== undefined && impliedPorts !== undefined && impliedPorts !== options.expectedPorts) {
+      // Above 2 ports a line holds one row (or 4 pairs of it), so only 1- and 2-port names can be contradicted here.
+      const nameSaysFewPorts = options.expectedPorts !== undefined && options.expectedPorts <= 2;
+      if (nameSaysFewPorts && impliedPorts !== undefined && impliedPorts !== options.expectedPorts) {
         this.checkPorts(impliedPorts, lineNumber, 'this line holds data for');
       }
       const ports = options.expectedPorts ?? impliedPorts;
@@ -229,12 +249,17 @@ class TouchstoneReader implements KeywordReader {
         throw new TouchstoneError('TOUCHSTONE_DATA_LINE_LENGTH', lineNumber, `a data line needs 3 numbers (1-port) or 9 (2-port), found ${count}`);
       }
       this.checkPorts(ports, lineNumber, 'the data are for');
-      this.startNetworkData(lineNumber, ports as 1 | 2);
+      this.startNetworkData(lineNumber, ports);
     }
     const ports = state.ports!;
     const network = this.network!;
     if (state.section === 'noise') {
       this.addNoisePoint(numbers.values, count, lineNumber);
+      return;
+    }
+    // Above 2 ports each matrix row starts a new line and wraps after 4 pairs (Touchstone 1.1, Network Data).
+    if (ports > 2) {
+      this.accumulate(lineNumber);
       return;
     }
     if (count === network.valuesPerPoint) {
@@ -265,15 +290,21 @@ class TouchstoneReader implements KeywordReader {
   }
 
   private readVersion2Data(lineNumber: number): void {
-    const { state, numbers, pending } = this;
-    const count = numbers.count;
+    const state = this.state;
     if (state.section === 'noise') {
-      this.addNoisePoint(numbers.values, count, lineNumber);
+      this.addNoisePoint(this.numbers.values, this.numbers.count, lineNumber);
       return;
     }
     if (state.section !== 'network') {
       throw new TouchstoneError('TOUCHSTONE_MISSING_KEYWORD', lineNumber, `data outside [Network Data] / [Noise Data]`);
     }
+    this.accumulate(lineNumber);
+  }
+
+  /** Adds a line's numbers to the point being read; a point is complete at valuesPerPoint and never spills over. */
+  private accumulate(lineNumber: number): void {
+    const { state, numbers, pending } = this;
+    const count = numbers.count;
     const network = this.network!;
     const valuesPerPoint = network.valuesPerPoint;
     if (this.pendingCount === 0 && count === valuesPerPoint) {
@@ -304,6 +335,7 @@ class TouchstoneReader implements KeywordReader {
     }
     if (!state.option)
       throw new TouchstoneError('TOUCHSTONE_MISSING_OPTION_LINE', null, `the file has no option line (# <unit> <parameter> <format> R <ohms>)`);
+    if (!state.isVersion2) this.flushPending(Math.max(lastLine, 1));
     if (!this.network || this.network.pointCount === 0) throw new TouchstoneError('TOUCHSTONE_EMPTY', null, `the file holds no data points`);
     const option: OptionLine = state.option;
     return {

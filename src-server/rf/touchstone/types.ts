@@ -6,6 +6,8 @@ export const TOUCHSTONE_MAX_BYTES = 32 * 1024 * 1024;
 export const TOUCHSTONE_MAX_POINTS = 250_000;
 /** Longest line: a 2-port data line is under 200 bytes; a longer line is not Touchstone. */
 export const TOUCHSTONE_MAX_LINE_BYTES = 8192;
+/** Most ports read: more than any assembly of antennas; with the byte cap it bounds a point's memory. */
+export const TOUCHSTONE_MAX_PORTS = 64;
 
 export type FrequencyUnit = 'Hz' | 'kHz' | 'MHz' | 'GHz';
 export type NetworkParameter = 'S' | 'Y' | 'Z' | 'H' | 'G';
@@ -24,7 +26,8 @@ export interface ComplexSeries {
 export interface TouchstoneNetwork {
   /** '1.0', '1.1' (v1 syntax with one R per port), '2.0' or '2.1'. */
   readonly version: string;
-  readonly ports: 1 | 2;
+  /** 1 to TOUCHSTONE_MAX_PORTS. */
+  readonly ports: number;
   /** The parameter the file was written in; `s` below is always S. */
   readonly parameter: NetworkParameter;
   readonly format: DataFormat;
