@@ -37,7 +37,7 @@ function benchmarkCatalogue(count: number): PartEvaluationData[] {
       averageGainDbi: null,
     })),
     evaluationGroundPlane: null,
-    polarization: p.polarization.toLowerCase() as Polarization,
+    polarization: p.polarization as Polarization,
     reviewState: p.reviewState as ReviewState,
     lifecycle: p.lifecycle as PartEvaluationData['lifecycle'],
   }));
@@ -78,7 +78,7 @@ function plainStatus(f: Facts): CellStatus {
   if (f.radioTransmits === true && f.certifiedMaxGainDbi !== null) check([f.gainOverCertifiedDb], () => (f.gainOverCertifiedDb as number) > 0, 'fail');
   if ((f.regionalLimitCount as number) > 0) check([f.regionalLimitMarginDb], () => (f.regionalLimitMarginDb as number) < 0, 'fail');
   check([f.groundPlaneVsQuarterWavePct], () => (f.groundPlaneVsQuarterWavePct as number) < 100, 'marginal');
-  if (f.requiredPolarization === 'rhcp' || f.requiredPolarization === 'lhcp') {
+  if (f.requiredPolarization === 'RHCP' || f.requiredPolarization === 'LHCP') {
     check([f.polarizationLossDb], () => (f.polarizationLossDb as number) > 1, 'marginal');
     check([f.polarizationLossDb], () => (f.polarizationLossDb as number) > 10, 'fail');
   }

@@ -40,7 +40,7 @@ export function benchmarkProductRequirements(): RadioBandRequirement[] {
     technology: Technology;
     tx: number | null;
     bands: [string, BandRange[]][];
-    polarization?: 'rhcp';
+    polarization?: 'RHCP';
     limits?: RadioBandRequirement['regulatoryLimits'];
   }[] = [
     { name: 'cellular A', technology: 'lte', tx: 23, bands: LTE.slice(0, 9) },
@@ -58,7 +58,7 @@ export function benchmarkProductRequirements(): RadioBandRequirement[] {
       name: 'GNSS',
       technology: 'gnss',
       tx: null,
-      polarization: 'rhcp',
+      polarization: 'RHCP',
       bands: [
         ['GPS L1', single(1574.397, 1576.443, 'receive')],
         ['GPS L5', single(1164.45, 1188.45, 'receive')],

@@ -10,7 +10,7 @@ import type { Connector, FormFactor } from '../parts/part.types';
 import { RegulatoryLimitsService } from '../regulatory/regulatory-limits.service';
 import { PartAssignment } from './compatibility.entities';
 import { FactsCache } from './engine/matrix';
-import type { Polarization, PartEvaluationData, RadioBandRequirement, RegulatoryLimit, Technology } from './engine/types';
+import type { PartEvaluationData, RadioBandRequirement, RegulatoryLimit, Technology } from './engine/types';
 
 const MHZ = 1e6;
 
@@ -45,7 +45,7 @@ function toEvaluationData(part: CataloguePart): PartColumn {
         averageGainDbi: b.averageGainDbi,
       })),
       evaluationGroundPlane: board && board.lengthMm !== null && board.widthMm !== null ? { lengthMm: board.lengthMm, widthMm: board.widthMm } : null,
-      polarization: part.polarization.toLowerCase() as Polarization,
+      polarization: part.polarization,
       reviewState: part.reviewState,
       lifecycle: part.lifecycle,
     },
@@ -67,7 +67,7 @@ function requirementsOf(product: ProductDetailDto, limits: readonly RegulatoryLi
       txPowerDbm: radio.receiveOnly ? null : radio.transmitPowerDbm,
       certifiedMaxGainDbi: rb.certifiedMaxGainDbi,
       feedLossDb: radio.feedLossDb,
-      requiredPolarization: radio.polarization === 'any' ? null : (radio.polarization.toLowerCase() as Polarization),
+      requiredPolarization: radio.polarization === 'any' ? null : radio.polarization,
       productGroundPlane: { lengthMm: product.groundPlaneLengthMm, widthMm: product.groundPlaneWidthMm },
       regulatoryLimits: applicable,
     })),

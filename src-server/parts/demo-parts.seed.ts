@@ -4,6 +4,7 @@ import { join, resolve } from 'node:path';
 import type { AppConfig } from '../config/app-config';
 import { AuditService } from '../audit/audit.service';
 import { StorageService } from '../storage/storage.service';
+import { StoredFiles } from '../storage/stored-files.service';
 import { UploadLedger } from '../storage/upload-ledger.service';
 import { DocumentsService } from './documents/documents.service';
 import { MeasurementsService } from './measurements/measurements.service';
@@ -43,8 +44,9 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
   const storage = new StorageService(config);
   await storage.ensureBucket();
   const ledger = new UploadLedger(config, dataSource, storage);
-  const measurements = new MeasurementsService(dataSource, storage, ledger, parts, audit);
-  const documents = new DocumentsService(dataSource, storage, ledger, parts, audit);
+  const files = new StoredFiles(dataSource, storage, ledger);
+  const measurements = new MeasurementsService(dataSource, files, parts, audit);
+  const documents = new DocumentsService(dataSource, files, parts, audit);
   const sourcing = new SourcingService(dataSource, parts, audit);
   // The demo engineer drafts and submits, the demo admin reviews; nobody when the demo accounts were not created.
   const [engineerId, adminId] = await Promise.all([demoAccountId(dataSource, 'engineer'), demoAccountId(dataSource, 'admin')]);

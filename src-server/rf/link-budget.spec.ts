@@ -110,9 +110,9 @@ describe(rangeRatioFromDbDifference.name, () => {
 
 describe(polarizationLossDb.name, () => {
   it('linear antenna for an RHCP signal ≈ 3 dB (Balanis 4th ed. §2.12)', () => {
-    expect(polarizationLossDb('linear', 'rhcp')).toBeCloseTo(3.01, 2);
-    expect(polarizationLossDb('rhcp', 'rhcp')).toBe(0);
-    expect(polarizationLossDb('lhcp', 'rhcp')).toBe(Infinity);
+    expect(polarizationLossDb('linear', 'RHCP')).toBeCloseTo(3.01, 2);
+    expect(polarizationLossDb('RHCP', 'RHCP')).toBe(0);
+    expect(polarizationLossDb('LHCP', 'RHCP')).toBe(Infinity);
     expect(polarizationLossDb('linear', 'linear', 45)).toBeCloseTo(3.01, 2);
   });
 });

@@ -50,7 +50,9 @@ export function rangeRatioFromDbDifference(differenceDb: number): number {
   return 10 ** (differenceDb / 20);
 }
 
-export type Polarization = 'linear' | 'rhcp' | 'lhcp';
+/** As the API and the database spell them (parts and radios). */
+export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP'] as const;
+export type Polarization = (typeof POLARIZATIONS)[number];
 
 /**
  * Polarization loss for a matched-direction link (Balanis 4th ed. §2.12): linear↔circular 3.01 dB,

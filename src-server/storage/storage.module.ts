@@ -1,9 +1,10 @@
 import { Global, Module, OnApplicationBootstrap, Logger } from '@nestjs/common';
 import { StorageService } from './storage.service';
+import { StoredFiles } from './stored-files.service';
 import { UploadLedger } from './upload-ledger.service';
 
 @Global()
-@Module({ providers: [StorageService, UploadLedger], exports: [StorageService, UploadLedger] })
+@Module({ providers: [StorageService, UploadLedger, StoredFiles], exports: [StorageService, UploadLedger, StoredFiles] })
 export class StorageModule implements OnApplicationBootstrap {
   constructor(private readonly storage: StorageService) {}
 

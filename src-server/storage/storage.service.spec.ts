@@ -1,5 +1,5 @@
 import { objectKey } from './storage.service';
-import { safeFileName } from '../parts/measurements/measurements.service';
+import { safeFileName } from './uploaded-file';
 import { looksBinary } from './limited-file-upload';
 
 describe(objectKey.name, () => {

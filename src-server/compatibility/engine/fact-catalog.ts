@@ -26,7 +26,7 @@ export const FACT_CATALOG = {
   txPowerDbm: row('number', 'dbm', 'transmit power of the radio at its antenna port'),
   feedLossDb: row('number', 'db', 'cable or feed loss between radio and antenna'),
   certifiedMaxGainDbi: row('number', 'dbi', "maximum antenna gain of the module's certification for this band"),
-  requiredPolarization: row('string', 'none', 'polarization the radio needs (rhcp for GNSS)'),
+  requiredPolarization: row('string', 'none', 'polarization the radio needs: linear, RHCP (GNSS) or LHCP'),
   productGroundPlaneLengthMm: row('number', 'mm', "longer side of the product's ground plane"),
   productGroundPlaneWidthMm: row('number', 'mm', "shorter side of the product's ground plane"),
   quarterWaveMm: row('number', 'mm', 'λ/4 at the lowest frequency of the band'),
@@ -34,7 +34,7 @@ export const FACT_CATALOG = {
 
   reviewState: pair('string', 'none', 'review state of the part: draft, in-review, approved, restricted, retired'),
   lifecycle: pair('string', 'none', 'lifecycle of the part: active, nrnd, eol'),
-  partPolarization: pair('string', 'none', 'polarization of the part: linear, rhcp, lhcp'),
+  partPolarization: pair('string', 'none', 'polarization of the part: linear, RHCP, LHCP'),
   dataSource: pair('string', 'none', 'where the band facts come from: measured, spec, mixed, none'),
   dataCompletenessPct: pair('number', 'percent', 'share of match, efficiency and gain that are known over the whole band'),
   missingData: pair('string', 'none', 'what is missing for this band, in words'),

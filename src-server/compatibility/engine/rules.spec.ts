@@ -319,7 +319,7 @@ describe('gnss-polarization and polarization-opposite-sense', () => {
     designation: 'GPS L1',
     ranges: [rangeMhz(1574.397, 1576.443, 'receive')],
     txPowerDbm: null,
-    requiredPolarization: 'rhcp',
+    requiredPolarization: 'RHCP',
   });
   const withPolarization = (polarization: PartEvaluationData['polarization']) => constructedPart({}, { polarization });
 
@@ -338,9 +338,9 @@ describe('gnss-polarization and polarization-opposite-sense', () => {
   });
 
   it('passes an RHCP part, fails an LHCP part, and reports no data for an unknown polarization', async () => {
-    expect((await check('gnss-polarization', gnss, withPolarization('rhcp'))).finding).toBeUndefined();
-    expect((await check('polarization-opposite-sense', gnss, withPolarization('rhcp'))).finding).toBeUndefined();
-    expect((await check('polarization-opposite-sense', gnss, withPolarization('lhcp'))).finding).toMatchObject({
+    expect((await check('gnss-polarization', gnss, withPolarization('RHCP'))).finding).toBeUndefined();
+    expect((await check('polarization-opposite-sense', gnss, withPolarization('RHCP'))).finding).toBeUndefined();
+    expect((await check('polarization-opposite-sense', gnss, withPolarization('LHCP'))).finding).toMatchObject({
       severity: 'fail',
       code: 'POLARIZATION_OPPOSITE',
     });

@@ -1,8 +1,8 @@
 import type { SampledCurve } from '../../rf/curves';
 import type { ReflectionCurve } from '../../rf/reflection';
-import type { Polarization } from '../../rf/link-budget';
+import { POLARIZATIONS, type Polarization } from '../../rf/link-budget';
 
-export type { Polarization };
+export { POLARIZATIONS, type Polarization };
 
 export const TECHNOLOGIES = ['lte', 'nr', 'gnss', 'wifi', 'ble', 'ism', 'uwb', 'other'] as const;
 export type Technology = (typeof TECHNOLOGIES)[number];

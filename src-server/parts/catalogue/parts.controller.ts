@@ -6,7 +6,7 @@ import { ALL_ROLES } from '../../common/roles';
 import { ParseIdPipe } from '../../common/parse-id.pipe';
 import { CatalogueSearchService, parseCovers } from './catalogue-index/catalogue-search.service';
 import { LimitedFileUpload } from '../../storage/limited-file-upload';
-import type { UploadedFile } from '../measurements/measurements.service';
+import type { UploadedFile } from '../../storage/uploaded-file';
 import { PART_IMPORT_MAX_BYTES, PartCsvService } from '../import-export/part-csv.service';
 import { PartsService } from './parts.service';
 import { CreatePartDto, UpdatePartDto } from '../dto/part-input.dto';

@@ -1,10 +1,11 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
+import { StoredFileRecord } from '../../storage/stored-file-record';
 import { User } from '../../users/user.entity';
 import { Part } from '../part.entity';
 import { DOCUMENT_KINDS, type DocumentKind } from '../part.types';
 
 @Entity({ name: 'part_documents' })
-export class PartDocument {
+export class PartDocument extends StoredFileRecord {
   @PrimaryGeneratedColumn({ unsigned: true })
   id: number;
 
@@ -17,11 +18,6 @@ export class PartDocument {
 
   @Column({ type: 'enum', enum: DOCUMENT_KINDS }) kind: DocumentKind;
   @Column({ type: 'varchar', length: 200 }) title: string;
-  @Column({ name: 'file_name', type: 'varchar', length: 200 }) fileName: string;
-  @Column({ name: 'content_type', type: 'varchar', length: 100 }) contentType: string;
-  @Column({ name: 'object_key', type: 'varchar', length: 300 }) objectKey: string;
-  @Column({ name: 'size_bytes', type: 'int', unsigned: true }) sizeBytes: number;
-  @Column({ type: 'char', length: 64 }) sha256: string;
 
   @Column({ name: 'uploaded_by_id', type: 'int', unsigned: true, nullable: true })
   uploadedById: number | null;

@@ -18,8 +18,8 @@ import { ParseIdPipe } from '../../common/parse-id.pipe';
 import { DocumentsService } from './documents.service';
 import { LimitedFileUpload } from '../../storage/limited-file-upload';
 import { DOCUMENT_MAX_BYTES } from './document-type';
-import { downloadOf } from '../file-response';
-import type { UploadedFile } from '../measurements/measurements.service';
+import { downloadOf } from '../../storage/file-response';
+import type { UploadedFile } from '../../storage/uploaded-file';
 import { UploadDocumentDto } from '../dto/upload.dto';
 import { DocumentDto } from '../dto/part-response.dto';
 

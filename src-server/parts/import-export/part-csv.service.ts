@@ -5,7 +5,7 @@ import type { AuthUser } from '../../common/auth.decorators';
 import { DomainError } from '../../common/domain-error';
 import { CatalogueSearchService } from '../catalogue/catalogue-index/catalogue-search.service';
 import { looksBinary } from '../../storage/limited-file-upload';
-import { type UploadedFile, requireFile } from '../measurements/measurements.service';
+import { type UploadedFile, requireFile } from '../../storage/uploaded-file';
 import { Part } from '../part.entity';
 import { type ImportProblem, PART_CSV_COLUMNS, formatSpecBands, parsePartCsv } from './part-csv';
 import { writeCsv } from '../../common/csv-writer';

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
+import { StoredFileRecord } from '../../storage/stored-file-record';
 import { User } from '../../users/user.entity';
 import { Part } from '../part.entity';
 import { MEASUREMENT_KINDS, type MeasurementKind } from '../part.types';
@@ -8,7 +9,7 @@ import { MEASUREMENT_KINDS, type MeasurementKind } from '../part.types';
  * hold Re/Im of Γ against reference_ohms; for the others values_a holds % (efficiency) or dBi (gain).
  */
 @Entity({ name: 'part_measurements' })
-export class Measurement {
+export class Measurement extends StoredFileRecord {
   @PrimaryGeneratedColumn({ unsigned: true })
   id: number;
 
@@ -25,11 +26,6 @@ export class Measurement {
   @Column({ name: 'ground_length_mm', type: 'double', nullable: true }) groundLengthMm: number | null;
   @Column({ name: 'ground_width_mm', type: 'double', nullable: true }) groundWidthMm: number | null;
   @Column({ type: 'varchar', length: 500, nullable: true }) conditions: string | null;
-  @Column({ name: 'file_name', type: 'varchar', length: 200 }) fileName: string;
-  @Column({ name: 'content_type', type: 'varchar', length: 100 }) contentType: string;
-  @Column({ name: 'object_key', type: 'varchar', length: 300 }) objectKey: string;
-  @Column({ name: 'size_bytes', type: 'int', unsigned: true }) sizeBytes: number;
-  @Column({ type: 'char', length: 64 }) sha256: string;
   /** e.g. "Touchstone 1.0 S RI" or "CSV %". */
   @Column({ name: 'source_format', type: 'varchar', length: 60 }) sourceFormat: string;
   @Column({ name: 'reference_ohms', type: 'double', nullable: true }) referenceOhms: number | null;

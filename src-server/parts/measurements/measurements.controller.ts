@@ -16,8 +16,9 @@ import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators'
 import { ALL_ROLES } from '../../common/roles';
 import { ParseIdPipe } from '../../common/parse-id.pipe';
 import { LimitedFileUpload } from '../../storage/limited-file-upload';
-import { downloadOf } from '../file-response';
-import { MEASUREMENT_MAX_BYTES, MeasurementsService, type UploadedFile } from './measurements.service';
+import { downloadOf } from '../../storage/file-response';
+import type { UploadedFile } from '../../storage/uploaded-file';
+import { MEASUREMENT_MAX_BYTES, MeasurementsService } from './measurements.service';
 import { UploadMeasurementDto, UploadMeasurementResultDto } from '../dto/upload.dto';
 import { MeasurementPointsDto } from '../dto/part-response.dto';
 

@@ -1,16 +1,14 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
-import { createHash, randomUUID } from 'node:crypto';
 import type { AuthUser } from '../../common/auth.decorators';
 import { DomainError, NotFoundError } from '../../common/domain-error';
 import { AuditService } from '../../audit/audit.service';
 import { looksBinary } from '../../storage/limited-file-upload';
-import { StorageService, objectKey } from '../../storage/storage.service';
-import { UploadLedger } from '../../storage/upload-ledger.service';
+import { StoredFiles, type StoredOriginal } from '../../storage/stored-files.service';
+import { type UploadedFile, requireFile } from '../../storage/uploaded-file';
 import { reflectionCurveFromGamma, returnLossDbSeries, vswrSeries } from '../../rf/reflection';
 import { touchPart } from '../catalogue-revision';
-import { storedFileName } from '../file-response';
 import { Measurement } from './measurement.entity';
 import { type ParsedCurve, checkStorableCurve, parseCurveCsv, parseTouchstoneS11 } from './measurement-parsers';
 import { Part } from '../part.entity';
@@ -21,45 +19,13 @@ import type { CurvePreviewDto, UploadMeasurementDto, UploadMeasurementResultDto 
 import type { MeasurementPointsDto } from '../dto/part-response.dto';
 import type { MeasurementKind } from '../part.types';
 
-export interface UploadedFile {
-  originalname: string;
-  mimetype: string;
-  size: number;
-  buffer: Buffer;
-}
-
 const PREVIEW_POINTS = 400;
 /** 100,000 points of a two-port Touchstone file in RI stay well under this. */
 export const MEASUREMENT_MAX_BYTES = 16 * 1024 * 1024;
 
-/** A storable file name: the original's safe characters, never a path. */
-export function safeFileName(name: string): string {
-  const base = name.split(/[\\/]/).pop() ?? 'file';
-  // Runs of dots collapse to one: objectKey refuses ".." anywhere, and "rev..2.pdf" must still upload.
-  const cleaned = base
-    .replace(/[^\w.-]+/g, '_')
-    .replace(/\.{2,}/g, '.')
-    .replace(/^[._-]+/, '')
-    .slice(0, 80);
-  return cleaned || 'file';
-}
-
 /** Served and stored by the measurement's kind (Touchstone for s11, CSV for the others), never as the uploader declared. */
 export function measurementContentType(kind: MeasurementKind): string {
   return kind === 's11' ? 'text/plain' : 'text/csv';
-}
-
-export function sha256Hex(bytes: Buffer): string {
-  return createHash('sha256').update(bytes).digest('hex');
-}
-
-export function requireFile(file: UploadedFile | undefined): UploadedFile {
-  if (!file || file.size === 0) {
-    throw new DomainError('VALIDATION_FAILED', 'file: attach a non-empty file in the multipart field "file"', 400, {
-      fields: [{ field: 'file', message: 'is required and must not be empty' }],
-    });
-  }
-  return file;
 }
 
 function previewOf(curve: ParsedCurve): CurvePreviewDto {
@@ -88,8 +54,7 @@ function previewOf(curve: ParsedCurve): CurvePreviewDto {
 export class MeasurementsService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
-    private readonly storage: StorageService,
-    private readonly ledger: UploadLedger,
+    private readonly files: StoredFiles,
     private readonly parts: PartsService,
     private readonly audit: AuditService,
   ) {}
@@ -116,10 +81,7 @@ export class MeasurementsService {
     return checkStorableCurve(curve);
   }
 
-  /**
-   * Parse first (a bad file stores nothing), then the object under a pending note, then the row and the
-   * note's removal in one transaction; a failed or killed upload leaves only a note the sweeper cleans up.
-   */
+  /** Parse first (a bad file stores nothing), then the original and its row together through StoredFiles. */
   async upload(partId: number, maybeFile: UploadedFile | undefined, input: UploadMeasurementDto, actor: AuthUser): Promise<UploadMeasurementResultDto> {
     const part = await this.dataSource.getRepository(Part).findOneBy({ id: partId });
     if (!part) throw new NotFoundError('part', partId);
@@ -140,59 +102,47 @@ export class MeasurementsService {
     curve: ParsedCurve,
     actor: AuthUser | null,
   ): Promise<Measurement> {
-    const key = objectKey('parts', partId, 'measurements', `${randomUUID()}-${safeFileName(file.originalname)}`);
     const contentType = measurementContentType(curve.kind);
-    await this.ledger.putPending(key, file.buffer, contentType);
-    try {
-      const id = await this.dataSource.transaction(async (manager) => {
-        const locked = await this.parts.lockPart(manager, partId);
-        if (actor) assertCanEdit(actor, locked, 'upload data to');
-        const n = curve.frequenciesHz.length;
-        const inserted = await manager.insert(Measurement, {
-          partId,
+    const id = await this.files.store({ keyPrefix: ['parts', partId, 'measurements'], file, contentType }, async (manager, stored) => {
+      const locked = await this.parts.lockPart(manager, partId);
+      if (actor) assertCanEdit(actor, locked, 'upload data to');
+      const n = curve.frequenciesHz.length;
+      const inserted = await manager.insert(Measurement, {
+        ...stored,
+        partId,
+        kind: curve.kind,
+        groundLengthMm: input.groundLengthMm ?? null,
+        groundWidthMm: input.groundWidthMm ?? null,
+        conditions: input.conditions ?? null,
+        sourceFormat: curve.sourceFormat,
+        referenceOhms: curve.referenceOhms,
+        pointCount: n,
+        fromHz: curve.frequenciesHz[0],
+        toHz: curve.frequenciesHz[n - 1],
+        frequenciesHz: packFloat64(curve.frequenciesHz),
+        valuesA: packFloat64(curve.valuesA),
+        valuesB: curve.valuesB ? packFloat64(curve.valuesB) : null,
+        uploadedById: actor?.id ?? null,
+      });
+      const measurementId: number = inserted.identifiers[0].id;
+      await touchPart(manager, partId);
+      await this.audit.record(manager, {
+        entityType: 'part',
+        entityId: partId,
+        action: 'measurement-uploaded',
+        userId: actor?.id ?? null,
+        changes: {
+          measurementId,
           kind: curve.kind,
+          fileName: file.originalname,
+          points: n,
           groundLengthMm: input.groundLengthMm ?? null,
           groundWidthMm: input.groundWidthMm ?? null,
-          conditions: input.conditions ?? null,
-          fileName: storedFileName(file.originalname),
-          contentType,
-          objectKey: key,
-          sizeBytes: file.size,
-          sha256: sha256Hex(file.buffer),
-          sourceFormat: curve.sourceFormat,
-          referenceOhms: curve.referenceOhms,
-          pointCount: n,
-          fromHz: curve.frequenciesHz[0],
-          toHz: curve.frequenciesHz[n - 1],
-          frequenciesHz: packFloat64(curve.frequenciesHz),
-          valuesA: packFloat64(curve.valuesA),
-          valuesB: curve.valuesB ? packFloat64(curve.valuesB) : null,
-          uploadedById: actor?.id ?? null,
-        });
-        const measurementId: number = inserted.identifiers[0].id;
-        await this.ledger.settle(manager, key);
-        await touchPart(manager, partId);
-        await this.audit.record(manager, {
-          entityType: 'part',
-          entityId: partId,
-          action: 'measurement-uploaded',
-          userId: actor?.id ?? null,
-          changes: {
-            measurementId,
-            kind: curve.kind,
-            fileName: file.originalname,
-            points: n,
-            groundLengthMm: input.groundLengthMm ?? null,
-            groundWidthMm: input.groundWidthMm ?? null,
-          },
-        });
-        return measurementId;
+        },
       });
-      return this.dataSource.getRepository(Measurement).findOneOrFail({ where: { id }, relations: { uploadedBy: true } });
-    } catch (error) {
-      await this.ledger.abandon(key);
-      throw error;
-    }
+      return measurementId;
+    });
+    return this.dataSource.getRepository(Measurement).findOneOrFail({ where: { id }, relations: { uploadedBy: true } });
   }
 
   async points(partId: number, measurementId: number): Promise<MeasurementPointsDto> {
@@ -217,20 +167,18 @@ export class MeasurementsService {
     };
   }
 
-  async file(partId: number, measurementId: number): Promise<{ body: Buffer; fileName: string; contentType: string }> {
-    const row = await this.dataSource.getRepository(Measurement).findOneBy({ id: measurementId, partId });
-    if (!row) throw new NotFoundError('measurement', measurementId);
-    return { body: await this.storage.get(row.objectKey), fileName: row.fileName, contentType: measurementContentType(row.kind) };
+  /** Served with the content type stored for its kind (see measurementContentType). */
+  file(partId: number, measurementId: number): Promise<StoredOriginal> {
+    return this.files.original(Measurement, { id: measurementId, partId }, 'measurement', measurementId);
   }
 
   async remove(partId: number, measurementId: number, actor: AuthUser): Promise<void> {
-    const key = await this.dataSource.transaction(async (manager) => {
+    await this.files.removeWithin(async (manager, drop) => {
       const part = await this.parts.lockPart(manager, partId);
       assertCanEdit(actor, part, 'delete data of');
       const row = await manager.findOneBy(Measurement, { id: measurementId, partId });
       if (!row) throw new NotFoundError('measurement', measurementId);
-      await manager.delete(Measurement, { id: measurementId });
-      await this.ledger.release(manager, row.objectKey);
+      await drop(Measurement, row);
       await touchPart(manager, partId);
       await this.audit.record(manager, {
         entityType: 'part',
@@ -239,9 +187,6 @@ export class MeasurementsService {
         userId: actor.id,
         changes: { measurementId, kind: row.kind, fileName: row.fileName },
       });
-      return row.objectKey;
     });
-    // The row is gone, so the object is unreachable; a crash before this leaves a note the sweeper finishes.
-    await this.ledger.abandon(key);
   }
 }
