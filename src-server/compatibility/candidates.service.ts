@@ -48,7 +48,7 @@ export class CandidatesService {
         (!query.feed || query.feed.includes(c.connector)) &&
         (!filtering || prices.get(c.data.partId) !== null),
     );
-    const required = radio.polarization === 'any' ? null : (radio.polarization.toLowerCase() as Polarization);
+    const required = radio.polarization === 'any' ? null : (radio.polarization as Polarization);
     const columns = new Map(eligible.map((c) => [c.data.partId, c]));
     const fitOf = (partId: number) => {
       const column = columns.get(partId)!;

@@ -28,6 +28,6 @@ import { BillOfMaterialsService } from './bill-of-materials.service';
     EvaluationService,
     BillOfMaterialsService,
   ],
-  exports: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService],
+  exports: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService, EvaluationService],
 })
 export class CompatibilityModule {}

@@ -30,6 +30,8 @@ export interface ReportEvaluation {
     name: string;
     technology: string;
     verdict: ReportVerdict;
+    /** The radio's deciding reason in words, as the evaluation gives it. */
+    reason?: string;
     chosen: Array<{ partId: number; mpn: string; manufacturer?: string | null; title?: string | null }>;
     bands: Array<{ bandId: number; designation: string; verdict: ReportVerdict; decidingFinding: ReportFinding | null; facts: ReportBandFacts }>;
   }>;
@@ -362,6 +364,7 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
 /** The radio's deciding reason in words: its worst band's finding, or why nothing could be checked. */
 function radioReason(radio: ReportEvaluation['radios'][number], evaluation: ReportEvaluation): string {
   if (radio.chosen.length === 0) return 'No antenna chosen for this radio.';
+  if (radio.reason) return radio.reason.charAt(0).toUpperCase() + radio.reason.slice(1);
   const order: ReportVerdict[] = ['fail', 'no-data', 'marginal'];
   for (const verdict of order) {
     const band = radio.bands.find((b) => b.verdict === verdict && b.decidingFinding);

@@ -15,12 +15,12 @@ describe(feedFit.name, () => {
 describe(polarizationFit.name, () => {
   // Balanis, Antenna Theory 4th ed. §2.12: linear against circular loses 3.01 dB; the opposite circular sense rejects.
   it('matches the same sense, loses about 3 dB linear against circular, and rejects the opposite sense', () => {
-    expect(polarizationFit('rhcp', 'rhcp')).toBe('matched');
-    expect(polarizationFit('rhcp', 'linear')).toBe('loss');
-    expect(polarizationFit('linear', 'rhcp')).toBe('loss');
-    expect(polarizationFit('rhcp', 'lhcp')).toBe('opposite');
-    expect(polarizationFit(null, 'lhcp')).toBe('matched');
-    expect(polarizationFit('rhcp', null)).toBe('unknown');
+    expect(polarizationFit('RHCP', 'RHCP')).toBe('matched');
+    expect(polarizationFit('RHCP', 'linear')).toBe('loss');
+    expect(polarizationFit('linear', 'RHCP')).toBe('loss');
+    expect(polarizationFit('RHCP', 'LHCP')).toBe('opposite');
+    expect(polarizationFit(null, 'LHCP')).toBe('matched');
+    expect(polarizationFit('RHCP', null)).toBe('unknown');
   });
 });
 
