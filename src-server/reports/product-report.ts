@@ -87,7 +87,14 @@ const FONTS = { regular: join(FONT_DIR, 'noto-sans-latin-400-normal.woff'), bold
 
 /** The shipped font covers Latin only; the few mathematical signs the product uses are spelled out. */
 export function printable(text: string): string {
-  return text.replace(/≤/g, '<=').replace(/≥/g, '>=').replace(/Γ/g, 'Gamma').replace(/≈/g, '~').replace(/→/g, '->');
+  return text
+    .replace(/≤/g, '<=')
+    .replace(/≥/g, '>=')
+    .replace(/Γ/g, 'Gamma')
+    .replace(/λ/g, 'lambda')
+    .replace(/η/g, 'eta')
+    .replace(/≈/g, '~')
+    .replace(/→/g, '->');
 }
 
 const fixed = (value: number | null | undefined, digits: number) =>
@@ -249,9 +256,9 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
     }
     table(
       [
-        { header: 'Band', width: 11 },
-        { header: 'Verdict', width: 9 },
-        { header: 'Reason', width: 24 },
+        { header: 'Band', width: 10 },
+        { header: 'Verdict', width: 11 },
+        { header: 'Reason', width: 23 },
         { header: 'Covered (%)', width: 9, align: 'right' },
         { header: 'Worst VSWR', width: 8, align: 'right' },
         { header: 'Lowest total efficiency (%)', width: 11, align: 'right' },
@@ -306,8 +313,8 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
   }
 
   // Sign-off: three roles, each with name, signature and date lines, kept together on one page.
+  ensureRoom(230); // the heading and the three boxes stay on one page
   heading('Review and sign-off');
-  ensureRoom(170);
   const roles = ['Prepared by', 'Reviewed by (RF)', 'Approved by'];
   const boxWidth = (contentWidth - 24) / 3;
   const top = doc.y + 4;

@@ -44,6 +44,7 @@ describe('product report PDF (API)', () => {
     expect(res.headers['content-type']).toBe('application/pdf');
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="bandwright-report-DEMO-LT1-\d{4}-\d{2}-\d{2}\.pdf"/);
     const pdf = res.body as Buffer;
+    if (process.env.REPORT_SAMPLE) writeFileSync(process.env.REPORT_SAMPLE, pdf); // for looking at it
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     const text = pdfText(pdf);
     expect(text).toContain('Antenna compatibility report');
