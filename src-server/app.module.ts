@@ -25,6 +25,7 @@ import { RegulatoryModule } from './regulatory/regulatory.module';
 import { ProductsModule } from './products/products.module';
 import { PartsModule } from './parts/parts.module';
 import { CompatibilityModule } from './compatibility/compatibility.module';
+import { ReportsModule } from './reports/reports.module';
 
 @Module({
   imports: [
@@ -55,6 +56,7 @@ import { CompatibilityModule } from './compatibility/compatibility.module';
     ProductsModule,
     PartsModule,
     CompatibilityModule,
+    ReportsModule,
   ],
   providers: [
     { provide: APP_PIPE, useFactory: createValidationPipe },

@@ -6,9 +6,17 @@ import { type AuthUser, CurrentUser, Roles } from '../common/auth.decorators';
 import { ParseIdPipe } from '../common/parse-id.pipe';
 import { AssignmentsService } from './assignments.service';
 import { CandidatesService } from './candidates.service';
-import { MatrixService } from './matrix.service';
+import { MatrixService, type MatrixSelection } from './matrix.service';
+import { EvaluationService } from './evaluation.service';
+import { BillOfMaterialsService } from './bill-of-materials.service';
+import { BillOfMaterialsDto, BillOfMaterialsQueryDto, ProductEvaluationDto } from './dto/evaluation.dto';
 import { matrixCsvFileName, matrixToCsv } from './matrix-csv';
 import { AssignmentDto, CandidatesDto, CandidatesQueryDto, ChoosePartDto, MatrixDto, MatrixQueryDto, ShortlistDto } from './dto/matrix.dto';
+
+const matrixSelection = (query: MatrixQueryDto): MatrixSelection => ({
+  partIds: query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined,
+  chosenOnly: query.chosenOnly,
+});
 
 @ApiTags('compatibility')
 @Controller('products/:id')
@@ -17,14 +25,41 @@ export class CompatibilityController {
     private readonly matrices: MatrixService,
     private readonly ranking: CandidatesService,
     private readonly partAssignments: AssignmentsService,
+    private readonly evaluations: EvaluationService,
+    private readonly bom: BillOfMaterialsService,
   ) {}
+
+  @Get('evaluation')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({
+    summary:
+      "The product's verdict and, per radio, its verdict from its chosen part: each band's verdict, deciding finding and facts. Worst first: fail, then no-data (a radio not checked cannot pass), then marginal, then pass",
+  })
+  @ApiOkResponse({ type: ProductEvaluationDto })
+  evaluation(@Param('id', ParseIdPipe) id: number): Promise<ProductEvaluationDto> {
+    return this.evaluations.evaluate(id);
+  }
+
+  @Get('bill-of-materials')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({
+    summary:
+      "The chosen parts with the unit price at the build quantity (from the offers' price breaks), lead time, and the antenna cost per product (one total per currency when mixed)",
+  })
+  @ApiOkResponse({ type: BillOfMaterialsDto })
+  billOfMaterials(@Param('id', ParseIdPipe) id: number, @Query() query: BillOfMaterialsQueryDto): Promise<BillOfMaterialsDto> {
+    return this.bom.billOfMaterials(id, query.quantity, query.currency);
+  }
 
   @Get('matrix')
   @Roles(...ALL_ROLES)
-  @ApiOperation({ summary: "Every radio band of the product against parts (default: its chosen and shortlisted parts), with each cell's findings" })
+  @ApiOperation({
+    summary:
+      "Each radio's bands against that radio's own chosen and shortlisted parts (chosenOnly: its chosen part; parts: the asked parts on every band), with each cell's findings",
+  })
   @ApiOkResponse({ type: MatrixDto })
   matrix(@Param('id', ParseIdPipe) id: number, @Query() query: MatrixQueryDto): Promise<MatrixDto> {
-    return this.matrices.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
+    return this.matrices.matrix(id, matrixSelection(query));
   }
 
   @Get('matrix.csv')
@@ -32,7 +67,7 @@ export class CompatibilityController {
   @ApiProduces('text/csv')
   @ApiOperation({ summary: 'The same matrix as CSV: one line per radio band and part, with the screening caution first' })
   async matrixCsv(@Param('id', ParseIdPipe) id: number, @Query() query: MatrixQueryDto, @Res({ passthrough: true }) response: Response): Promise<string> {
-    const matrix = await this.matrices.matrix(id, query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined);
+    const matrix = await this.matrices.matrix(id, matrixSelection(query));
     const text = matrixToCsv(matrix);
     // Set only once the file exists: an error before it must still answer as JSON.
     response.setHeader('Content-Type', 'text/csv; charset=utf-8');
@@ -42,10 +77,13 @@ export class CompatibilityController {
 
   @Get('radios/:radioId/candidates')
   @Roles(...ALL_ROLES)
-  @ApiOperation({ summary: 'Approved parts for one radio, ranked by status and by the margin to their nearest limit' })
+  @ApiOperation({
+    summary:
+      "Approved parts for one radio, ranked by status, then by fit to the radio's feed and polarization, then by the margin to their nearest limit; each explained by the finding that decides its rank, with its price at the build quantity and lead time",
+  })
   @ApiOkResponse({ type: CandidatesDto })
   candidates(@Param('id', ParseIdPipe) id: number, @Param('radioId', ParseIdPipe) radioId: number, @Query() query: CandidatesQueryDto): Promise<CandidatesDto> {
-    return this.ranking.candidates(id, radioId, query.limit);
+    return this.ranking.candidates(id, radioId, query);
   }
 
   @Get('assignments')

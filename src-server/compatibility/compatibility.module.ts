@@ -10,11 +10,24 @@ import { MatrixService } from './matrix.service';
 import { RulePreviewService } from './rule-preview.service';
 import { RulesController } from './rules.controller';
 import { RulesService } from './rules.service';
+import { OffersReader } from './sourcing/offers-reader.service';
+import { EvaluationService } from './evaluation.service';
+import { BillOfMaterialsService } from './bill-of-materials.service';
 
 @Module({
   imports: [PartsModule, ProductsModule, RegulatoryModule],
   controllers: [RulesController, CompatibilityController],
-  providers: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService],
-  exports: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService],
+  providers: [
+    RulesService,
+    EvaluationInputsService,
+    MatrixService,
+    CandidatesService,
+    RulePreviewService,
+    AssignmentsService,
+    OffersReader,
+    EvaluationService,
+    BillOfMaterialsService,
+  ],
+  exports: [RulesService, EvaluationInputsService, MatrixService, CandidatesService, RulePreviewService, AssignmentsService, EvaluationService],
 })
 export class CompatibilityModule {}

@@ -9,6 +9,7 @@ import { CompiledRuleSet } from './engine/compiled-evaluator';
 import type { RuleDefinition } from './engine/rule-definition';
 import { loadRuleFiles } from './rule-files';
 import type { RulesService } from './rules.service';
+import type { OffersReader } from './sourcing/offers-reader.service';
 
 /**
  * Two requests on one server interleaved by hand: A read catalogue revision 1 and is still loading part
@@ -63,6 +64,7 @@ const product = {
       receiveOnly: false,
       transmitPowerDbm: 8,
       polarization: 'linear',
+      connector: 'solder-pad',
       feedLossDb: 0,
       bands: [{ band: { id: 3, designation: 'BLE 2.4 GHz', ranges: [{ fromMhz: 2400, toMhz: 2483.5, role: 'tdd' }] }, certifiedMaxGainDbi: null }],
     },
@@ -102,7 +104,7 @@ function harness() {
   );
   // The services share one EvaluationInputsService, as under Nest, so they share its caches.
   const matrices = new MatrixService(dataSource, rulesService, productsService, inputs);
-  const ranking = new CandidatesService(dataSource, rulesService, productsService, inputs);
+  const ranking = new CandidatesService(dataSource, rulesService, productsService, inputs, { allAt: async () => new Map() } as unknown as OffersReader);
   const service = { matrix: matrices.matrix.bind(matrices), candidates: ranking.candidates.bind(ranking) };
   return { service, state, partLoads, catalogueLoads, rules };
 }
@@ -110,26 +112,26 @@ function harness() {
 describe('Compatibility caches across a catalogue write', () => {
   it('a matrix column loaded before the write is not served after it', async () => {
     const { service, state, partLoads, rules } = harness();
-    const before = service.matrix(PRODUCT, [PART], rules as RuleDefinition[]);
+    const before = service.matrix(PRODUCT, { partIds: [PART] }, rules as RuleDefinition[]);
     await settle();
     state.revision = 2;
-    const after = service.matrix(PRODUCT, [PART], rules as RuleDefinition[]);
+    const after = service.matrix(PRODUCT, { partIds: [PART] }, rules as RuleDefinition[]);
     await settle();
     partLoads[1].resolve([part('new')]);
     expect((await after).columns[0].mpn).toBe('MPN-new');
     partLoads[0].resolve([part('old')]);
     expect((await before).columns[0].mpn).toBe('MPN-old');
 
-    const later = await service.matrix(PRODUCT, [PART], rules as RuleDefinition[]);
+    const later = await service.matrix(PRODUCT, { partIds: [PART] }, rules as RuleDefinition[]);
     expect(later.columns[0]).toMatchObject({ mpn: 'MPN-new', reviewState: 'approved' });
   });
 
   it('facts computed from data before the write are not used by a request that read the new revision', async () => {
     const { service, state, partLoads, rules } = harness();
-    const before = service.matrix(PRODUCT, [PART], rules as RuleDefinition[]);
+    const before = service.matrix(PRODUCT, { partIds: [PART] }, rules as RuleDefinition[]);
     await settle();
     state.revision = 2;
-    const after = service.matrix(PRODUCT, [PART], rules as RuleDefinition[]);
+    const after = service.matrix(PRODUCT, { partIds: [PART] }, rules as RuleDefinition[]);
     await settle();
     // A finishes first and evaluates its old data; B evaluates afterwards.
     partLoads[0].resolve([part('old')]);
@@ -139,7 +141,7 @@ describe('Compatibility caches across a catalogue write', () => {
 
     const reference = harness();
     reference.state.revision = 2;
-    const expected = reference.service.matrix(PRODUCT, [PART], reference.rules as RuleDefinition[]);
+    const expected = reference.service.matrix(PRODUCT, { partIds: [PART] }, reference.rules as RuleDefinition[]);
     await settle();
     reference.partLoads[0].resolve([part('new')]);
     const truth = await expected;

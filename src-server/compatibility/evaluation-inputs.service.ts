@@ -6,6 +6,7 @@ import { catalogueRevisionReader } from '../parts/catalogue-revision';
 import { DomainError } from '../common/domain-error';
 import { type PartEvaluationData as CataloguePart, PartDataService } from '../parts/part-data.service';
 import type { ProductDetailDto } from '../products/dto/product.dto';
+import type { Connector, FormFactor } from '../parts/part.types';
 import { RegulatoryLimitsService } from '../regulatory/regulatory-limits.service';
 import { PartAssignment } from './compatibility.entities';
 import { FactsCache } from './engine/matrix';
@@ -16,12 +17,16 @@ const MHZ = 1e6;
 export interface PartColumn {
   readonly data: PartEvaluationData;
   readonly manufacturer: string;
+  readonly formFactor: FormFactor;
+  readonly connector: Connector;
 }
 
 function toEvaluationData(part: CataloguePart): PartColumn {
   const board = part.evalGroundPlane;
   return {
     manufacturer: part.manufacturer,
+    formFactor: part.formFactor,
+    connector: part.connector,
     data: {
       partId: part.id,
       mpn: part.mpn,

@@ -20,13 +20,14 @@ export const MATRIX_CSV_HEADER = [
 const STATUS_WORDS: Record<string, string> = { pass: 'pass', marginal: 'marginal', fail: 'fail', 'no-data': 'not checked (no data)' };
 const SEVERITY_WORDS: Record<string, string> = { fail: 'fail', marginal: 'marginal', info: 'note', 'no-data': 'not checked' };
 
-/** One line per (radio band × part) with its state and findings in words; the caution comes first. */
+/** One line per evaluated (radio band × part) pair with its state and findings in words; the caution comes first. */
 export function matrixToCsv(matrix: MatrixDto): string {
   const rows = matrix.cells.map((cell) => {
     const row = matrix.rows[cell.row];
     const column = matrix.columns[cell.column];
     const ranges = row.ranges.map((r) => `${r.fromMhz}–${r.toMhz} ${r.role}`).join(' / ');
-    const findings = cell.findings.map((f) => `${SEVERITY_WORDS[f.severity] ?? f.severity}: ${f.message}`).join(' | ');
+    // The short title for people, the code beside it for whoever filters the export.
+    const findings = cell.findings.map((f) => `${SEVERITY_WORDS[f.severity] ?? f.severity}: ${f.title} [${f.code}]: ${f.message}`).join(' | ');
     return [
       matrix.productName,
       row.radioName,

@@ -2,17 +2,33 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { RevisionCache } from '../common/revision-cache';
-import { NotFoundError } from '../common/domain-error';
+import { NotFoundError, ValidationFailedError } from '../common/domain-error';
 import { ProductsService } from '../products/products.service';
 import { PartAssignment } from './compatibility.entities';
 import type { RuleDefinition } from './engine/rule-definition';
 import type { CompiledRuleSet } from './engine/compiled-evaluator';
 import { evaluateMatrix } from './engine/matrix';
-import type { MatrixColumnDto, MatrixDto } from './dto/matrix.dto';
+import { decidingFindingOf } from './engine/deciding';
+import type { MatrixColumnDto, MatrixDto, MatrixView } from './dto/matrix.dto';
+import { findingView, ruleTitlesOf } from './finding-view';
 import { EvaluationInputsService } from './evaluation-inputs.service';
 import { RulesService } from './rules.service';
 
 const MATRIX_CACHE_SIZE = 200;
+
+/** Which parts a matrix shows: the asked ones on every row, or each radio's own assigned (or chosen) parts on its rows. */
+export interface MatrixSelection {
+  readonly partIds?: readonly number[];
+  readonly chosenOnly?: boolean;
+}
+
+function viewOf(selection: MatrixSelection): MatrixView {
+  if (selection.partIds) {
+    if (selection.chosenOnly) throw new ValidationFailedError([{ field: 'chosenOnly', message: 'cannot be combined with parts' }]);
+    return 'parts';
+  }
+  return selection.chosenOnly ? 'chosen' : 'assigned';
+}
 
 /** The compatibility matrix of a product: its radio bands against parts under the rules. */
 @Injectable()
@@ -51,35 +67,47 @@ export class MatrixService {
   }
 
   /** The matrix of a product; answers are reused until the fingerprint, the catalogue revision or the rules change. */
-  async matrix(productId: number, partIds?: number[], rules?: RuleDefinition[]): Promise<MatrixDto> {
-    if (rules) return this.computeMatrix(productId, partIds, { compiled: this.rules.compile(rules), signature: '' }, await this.inputs.currentRevision());
+  async matrix(productId: number, selection: MatrixSelection = {}, rules?: RuleDefinition[]): Promise<MatrixDto> {
+    const view = viewOf(selection);
+    const partIds = selection.partIds ? [...selection.partIds] : undefined;
+    if (rules) return this.computeMatrix(productId, view, partIds, { compiled: this.rules.compile(rules), signature: '' }, await this.inputs.currentRevision());
     const ruleSet = await this.rules.currentRuleSet();
     const { fingerprint, revision } = await this.matrixFingerprint(productId);
-    const key = `${productId}|${partIds?.join(',') ?? '*'}|${ruleSet.signature}|${fingerprint}`;
-    return this.matrices.getOrLoad(key, revision, () => this.computeMatrix(productId, partIds, ruleSet, revision));
+    const key = `${productId}|${view}|${partIds?.join(',') ?? '*'}|${ruleSet.signature}|${fingerprint}`;
+    return this.matrices.getOrLoad(key, revision, () => this.computeMatrix(productId, view, partIds, ruleSet, revision));
   }
 
   /** Everything read here is read after `revision` was, so the matrix is at least that new. */
   private async computeMatrix(
     productId: number,
+    view: MatrixView,
     partIds: number[] | undefined,
     ruleSet: { compiled: CompiledRuleSet; signature: string },
     revision: number,
   ): Promise<MatrixDto> {
     const product = await this.products.getWithRadios(productId);
-    const ids = partIds ?? (await this.inputs.assignedPartIds(productId));
+    const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { productId } });
+    const shown = view === 'chosen' ? assignments.filter((a) => a.state === 'chosen') : assignments;
+    const ids = partIds ?? (await this.inputs.assignedPartIds(productId)).filter((id) => shown.some((a) => a.partId === id));
     const columns = await this.inputs.partColumns(ids, revision);
     const requirements = await this.inputs.requirements(product);
+    // A radio's rows are judged against that radio's own parts only: a BLE chip is no answer for an LTE band.
+    const columnsFor =
+      view === 'parts'
+        ? undefined
+        : (row: { radioId: number }) =>
+            columns.flatMap((c, index) => (shown.some((a) => a.radioId === row.radioId && a.partId === c.data.partId) ? [index] : []));
     const matrix = evaluateMatrix(
       requirements,
       columns.map((c) => c.data),
       ruleSet.compiled,
-      { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey },
+      { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey, columnsFor },
     );
-    const assignments = await this.dataSource.getRepository(PartAssignment).find({ where: { productId } });
+    const titles = ruleTitlesOf(ruleSet.compiled);
     return {
       productId,
       productName: product.name,
+      view,
       rows: matrix.rows.map((r) => ({ ...r, ranges: r.ranges.map((x) => ({ ...x })) })),
       columns: columns.map((c): MatrixColumnDto => ({
         partId: c.data.partId,
@@ -90,7 +118,16 @@ export class MatrixService {
         lifecycle: c.data.lifecycle,
         assignments: assignments.filter((a) => a.partId === c.data.partId).map((a) => ({ radioId: a.radioId, state: a.state })),
       })),
-      cells: matrix.cells.map((c) => ({ ...c, findings: [...c.findings] })),
+      cells: matrix.cells.map((c) => {
+        const deciding = decidingFindingOf(c.status, c.findings);
+        return {
+          row: c.row,
+          column: c.column,
+          status: c.status,
+          findings: c.findings.map((f) => findingView(f, titles)),
+          decidingFinding: deciding ? findingView(deciding, titles) : null,
+        };
+      }),
       rules: ruleSet.signature,
     };
   }

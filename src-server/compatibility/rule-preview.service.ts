@@ -26,7 +26,8 @@ export class RulePreviewService {
     for (const summary of products) {
       const ids = await this.inputs.assignedPartIds(summary.id);
       if (ids.length === 0) continue;
-      const [old, next] = [await this.matrices.matrix(summary.id, ids, before), await this.matrices.matrix(summary.id, ids, after)];
+      // The matrices as engineers see them: each radio against its own parts.
+      const [old, next] = [await this.matrices.matrix(summary.id, {}, before), await this.matrices.matrix(summary.id, {}, after)];
       cellsCompared += old.cells.length;
       old.cells.forEach((cell, i) => {
         const changed = next.cells[i];

@@ -92,6 +92,6 @@ describe('product report PDF', () => {
   });
 
   it('spells out the signs the shipped Latin font lacks', () => {
-    expect(printable('VSWR ≤ 2, |Γ| ≈ 0.33')).toBe('VSWR <= 2, |Gamma| ~ 0.33');
+    expect(printable('VSWR ≤ 2, |Γ| ≈ 0.33, below λ/4')).toBe('VSWR <= 2, |Gamma| ~ 0.33, below lambda/4');
   });
 });

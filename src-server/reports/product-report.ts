@@ -30,6 +30,8 @@ export interface ReportEvaluation {
     name: string;
     technology: string;
     verdict: ReportVerdict;
+    /** The radio's deciding reason in words, as the evaluation gives it. */
+    reason?: string;
     chosen: Array<{ partId: number; mpn: string; manufacturer?: string | null; title?: string | null }>;
     bands: Array<{ bandId: number; designation: string; verdict: ReportVerdict; decidingFinding: ReportFinding | null; facts: ReportBandFacts }>;
   }>;
@@ -85,7 +87,14 @@ const FONTS = { regular: join(FONT_DIR, 'noto-sans-latin-400-normal.woff'), bold
 
 /** The shipped font covers Latin only; the few mathematical signs the product uses are spelled out. */
 export function printable(text: string): string {
-  return text.replace(/≤/g, '<=').replace(/≥/g, '>=').replace(/Γ/g, 'Gamma').replace(/≈/g, '~').replace(/→/g, '->');
+  return text
+    .replace(/≤/g, '<=')
+    .replace(/≥/g, '>=')
+    .replace(/Γ/g, 'Gamma')
+    .replace(/λ/g, 'lambda')
+    .replace(/η/g, 'eta')
+    .replace(/≈/g, '~')
+    .replace(/→/g, '->');
 }
 
 const fixed = (value: number | null | undefined, digits: number) =>
@@ -247,9 +256,9 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
     }
     table(
       [
-        { header: 'Band', width: 11 },
-        { header: 'Verdict', width: 9 },
-        { header: 'Reason', width: 24 },
+        { header: 'Band', width: 10 },
+        { header: 'Verdict', width: 11 },
+        { header: 'Reason', width: 23 },
         { header: 'Covered (%)', width: 9, align: 'right' },
         { header: 'Worst VSWR', width: 8, align: 'right' },
         { header: 'Lowest total efficiency (%)', width: 11, align: 'right' },
@@ -304,8 +313,8 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
   }
 
   // Sign-off: three roles, each with name, signature and date lines, kept together on one page.
+  ensureRoom(230); // the heading and the three boxes stay on one page
   heading('Review and sign-off');
-  ensureRoom(170);
   const roles = ['Prepared by', 'Reviewed by (RF)', 'Approved by'];
   const boxWidth = (contentWidth - 24) / 3;
   const top = doc.y + 4;
@@ -362,6 +371,7 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
 /** The radio's deciding reason in words: its worst band's finding, or why nothing could be checked. */
 function radioReason(radio: ReportEvaluation['radios'][number], evaluation: ReportEvaluation): string {
   if (radio.chosen.length === 0) return 'No antenna chosen for this radio.';
+  if (radio.reason) return radio.reason.charAt(0).toUpperCase() + radio.reason.slice(1);
   const order: ReportVerdict[] = ['fail', 'no-data', 'marginal'];
   for (const verdict of order) {
     const band = radio.bands.find((b) => b.verdict === verdict && b.decidingFinding);

@@ -19,7 +19,7 @@ interface Cell {
 }
 interface Matrix {
   rows: { radioId: number; bandId: number; designation: string; ranges: unknown[] }[];
-  columns: { partId: number; mpn: string; title: string }[];
+  columns: { partId: number; mpn: string; title: string; assignments: { radioId: number }[] }[];
   cells: Cell[];
 }
 
@@ -111,7 +111,10 @@ describe('compatibility (API)', () => {
       const matrix: Matrix = res.body;
       expect(matrix.rows.map((r) => r.designation)).toEqual(expect.arrayContaining(['B12', 'GPS L1', 'BLE 2.4 GHz']));
       expect(matrix.columns.map((c) => c.partId)).toEqual(expect.arrayContaining([1001, LINEAR_GNSS_CHIP, LOW_EFFICIENCY_CHIP]));
-      expect(matrix.cells).toHaveLength(matrix.rows.length * matrix.columns.length);
+      // Each radio's rows against that radio's own parts only.
+      expect(matrix.cells).toHaveLength(
+        matrix.rows.reduce((n, row) => n + matrix.columns.filter((c) => c.assignments.some((a) => a.radioId === row.radioId)).length, 0),
+      );
       const [ble] = cellsOf(matrix, TRACKER_BLE, LOW_EFFICIENCY_CHIP);
       expect(ble.status).toBe('fail');
       const floor = ble.findings.find((f) => f.code === 'EFFICIENCY_BELOW_FLOOR')!;
@@ -163,14 +166,23 @@ describe('compatibility (API)', () => {
       await http().get(`/api/products/${TRACKER}/radios/${TRACKER_BLE}/candidates`).query({ limit: 0 }).set(as('engineer')).expect(400);
     });
 
-    it('ranks approved parts for the tracker BLE radio: passes first by margin, each with its deciding figure', async () => {
+    it('ranks approved parts for the tracker BLE radio: passes first, by fit, then by margin, each with its deciding figure', async () => {
       const res = await http().get(`/api/products/${TRACKER}/radios/${TRACKER_BLE}/candidates`).query({ limit: 200 }).set(as('procurement')).expect(200);
-      const candidates: { partId: number; status: string; marginDb: number | null; deciding: { text: string } | null; assignment: string | null }[] =
-        res.body.candidates;
+      const candidates: {
+        partId: number;
+        status: string;
+        fit: { rank: number };
+        marginDb: number | null;
+        deciding: { text: string } | null;
+        assignment: string | null;
+      }[] = res.body.candidates;
       const order = { pass: 0, marginal: 1, 'no-data': 2, fail: 3 } as Record<string, number>;
       for (let i = 1; i < candidates.length; i++) expect(order[candidates[i].status]).toBeGreaterThanOrEqual(order[candidates[i - 1].status]);
       const passes = candidates.filter((c) => c.status === 'pass');
-      for (let i = 1; i < passes.length; i++) expect(passes[i].marginDb ?? -Infinity).toBeLessThanOrEqual(passes[i - 1].marginDb ?? Infinity);
+      for (let i = 1; i < passes.length; i++) {
+        expect(passes[i].fit.rank).toBeGreaterThanOrEqual(passes[i - 1].fit.rank);
+        if (passes[i].fit.rank === passes[i - 1].fit.rank) expect(passes[i].marginDb ?? -Infinity).toBeLessThanOrEqual(passes[i - 1].marginDb ?? Infinity);
+      }
       const good = candidates.find((c) => c.partId === GOOD_BLE_CHIP)!;
       expect(good.status).toBe('pass');
       expect(good.deciding!.text).toMatch(/dB inside\)$/);

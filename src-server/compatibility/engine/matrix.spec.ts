@@ -1,6 +1,6 @@
 import { loadRuleFiles } from '../rule-files';
 import { CompiledRuleSet } from './compiled-evaluator';
-import { constructedPart, constructedRequirement } from './fixtures';
+import { constructedPart, constructedRequirement, rangeMhz, reflectionFromVswr } from './fixtures';
 import { FactsCache, evaluateMatrix, rankCandidates } from './matrix';
 import { statusRank } from './rule-binding';
 
@@ -85,5 +85,53 @@ describe(evaluateMatrix.name, () => {
     const second = evaluateMatrix(requirements, parts, RULES, { cache, partKey: (p) => String(p.partId) });
     expect(second).toEqual(first);
     expect(cache.size).toBe(4);
+  });
+});
+
+describe(`${rankCandidates.name} explanations`, () => {
+  const b12 = constructedRequirement();
+  // 3GPP TS 36.101 Table 5.5-1: band 3 UL 1710–1785, DL 1805–1880 MHz.
+  const b3 = constructedRequirement({ bandId: 3, designation: 'B3', ranges: [rangeMhz(1710, 1785, 'uplink'), rangeMhz(1805, 1880, 'downlink')] });
+  const failingTitles = ['Band not covered', 'Efficiency below floor', 'Efficiency below target', 'VSWR above target'];
+
+  it('heads a failing part with the finding that fails it, the band match before the efficiency that follows from it', () => {
+    // VSWR 8 everywhere: nothing is matched at 3:1, and 5 % efficiency is also under the floor.
+    const [part] = rankCandidates([b12], [constructedPart({ vswr: 8, efficiencyPercent: 5 })], RULES);
+    expect(part.status).toBe('fail');
+    expect(part.bands[0].findings.map((f) => f.code)).toEqual(expect.arrayContaining(['BAND_NOT_COVERED', 'EFFICIENCY_BELOW_FLOOR']));
+    expect(part.explanation).toMatchObject({ status: 'fail', title: 'Band not covered', designation: 'B12', finding: { code: 'BAND_NOT_COVERED' } });
+    expect(part.explanation.text).toMatch(/^B12: VSWR ≤ 3:1 covers only 0 % of B12/);
+  });
+
+  it('names the band furthest from being covered: 0 % of B3 before a partly covered B12', () => {
+    // Matched (VSWR 1.5) up to 720 MHz, VSWR 8 above: B12 (699–746 MHz) is partly covered, B3 not at all.
+    const reflection = reflectionFromVswr([600e6, 720e6, 721e6, 3000e6], [1.5, 1.5, 8, 8]);
+    const [part] = rankCandidates([b12, b3], [constructedPart({}, { reflection })], RULES);
+    expect(part.bands.map((b) => b.decidingFinding?.code)).toEqual(['BAND_NOT_COVERED', 'BAND_NOT_COVERED']);
+    expect(part.explanation).toMatchObject({ title: 'Band not covered', designation: 'B3', bandId: 3 });
+    expect(part.explanation.finding!.message).toContain('covers only 0 % of B3');
+  });
+
+  it('heads a passing part with its nearest limit, never with a failing-sounding title', () => {
+    const [part] = rankCandidates([b12], [constructedPart({ vswr: 1.9 })], RULES);
+    expect(part.status).toBe('pass');
+    expect(part.explanation).toMatchObject({ status: 'pass', title: 'Nearest limit', finding: null, designation: 'B12' });
+    expect(failingTitles).not.toContain(part.explanation.title);
+    expect(part.explanation.text).toMatch(/^B12: highest VSWR in the band 1\.9 against the limit 2 \([\d.]+ dB inside\)$/);
+    for (const band of part.bands) expect(band.decidingFinding).toBeNull();
+  });
+
+  it('ranks by fit after status and before margin: a worse-fitting part with more margin comes second', () => {
+    const wide = constructedPart({ vswr: 1.2 }, { partId: 1, mpn: 'WIDE-N-PANEL' });
+    const tight = constructedPart({ vswr: 1.9 }, { partId: 2, mpn: 'TIGHT-SOLDER' });
+    const failing = constructedPart({ vswr: 8 }, { partId: 3, mpn: 'FAILING-SOLDER' });
+    const fit = (p: { partId: number }) => (p.partId === 1 ? 2 : 0);
+    expect(rankCandidates([b12], [wide, tight, failing], RULES).map((c) => c.mpn)).toEqual(['WIDE-N-PANEL', 'TIGHT-SOLDER', 'FAILING-SOLDER']);
+    const ranked = rankCandidates([b12], [wide, tight, failing], RULES, { fitRank: fit });
+    expect(ranked.map((c) => [c.mpn, c.fitRank])).toEqual([
+      ['TIGHT-SOLDER', 0],
+      ['WIDE-N-PANEL', 2],
+      ['FAILING-SOLDER', 0],
+    ]);
   });
 });

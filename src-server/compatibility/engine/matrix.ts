@@ -1,5 +1,6 @@
 import { FACT_CATALOG, isFactName } from './fact-catalog';
-import { CompiledRuleSet } from './compiled-evaluator';
+import { CompiledRuleSet, type CompiledRow } from './compiled-evaluator';
+import { type DecidedCell, decidingCellOf, decidingFindingOf, findingTitle } from './deciding';
 import { computeFacts, computeRowFacts } from './compute-facts';
 import { formatValue, statusRank, worseStatus } from './rule-binding';
 import type { BoundRule } from './rule-binding';
@@ -80,13 +81,13 @@ export function requirementKey(requirement: RadioBandRequirement): string {
   return JSON.stringify(requirement);
 }
 
-interface PreparedRow {
+export interface PreparedRow {
   readonly requirement: RadioBandRequirement;
   readonly rowFacts: Facts;
   readonly cached: Map<string, Facts> | null;
 }
 
-function prepare(requirements: readonly RadioBandRequirement[], cache: FactsCache | undefined): PreparedRow[] {
+export function prepare(requirements: readonly RadioBandRequirement[], cache: FactsCache | undefined): PreparedRow[] {
   return requirements.map((requirement) => ({
     requirement,
     rowFacts: computeRowFacts(requirement),
@@ -94,7 +95,12 @@ function prepare(requirements: readonly RadioBandRequirement[], cache: FactsCach
   }));
 }
 
-function pairFacts(row: PreparedRow, part: PartEvaluationData, cache: FactsCache | undefined, partKey: (part: PartEvaluationData) => string | null): Facts {
+export function pairFacts(
+  row: PreparedRow,
+  part: PartEvaluationData,
+  cache: FactsCache | undefined,
+  partKey: (part: PartEvaluationData) => string | null,
+): Facts {
   const compute = () => computeFacts(row.requirement, part, row.rowFacts as Record<string, never>);
   const key = cache ? partKey(part) : null;
   return key === null ? compute() : cache!.getOrCompute(row.cached!, key, compute);
@@ -102,6 +108,8 @@ function pairFacts(row: PreparedRow, part: PartEvaluationData, cache: FactsCache
 
 export interface EvaluationOptions {
   readonly cache?: FactsCache;
+  /** The columns (part indices) each row is evaluated against; default every part. */
+  readonly columnsFor?: (requirement: RadioBandRequirement, row: number) => readonly number[];
   /** A key that changes whenever the part's data changes (e.g. id and catalogue revision); null disables caching for the part. */
   readonly partKey?: (part: PartEvaluationData) => string | null;
 }
@@ -130,10 +138,11 @@ export function evaluateMatrix(
   const cells: MatrixCell[] = [];
   rows.forEach((row, r) => {
     const compiled = rules.forRow(row.rowFacts);
-    parts.forEach((part, c) => {
-      const verdict: CellVerdict = compiled.evaluate(pairFacts(row, part, options.cache, options.partKey ?? defaultPartKey));
+    const columns = options.columnsFor ? options.columnsFor(row.requirement, r) : parts.map((_, c) => c);
+    for (const c of columns) {
+      const verdict: CellVerdict = compiled.evaluate(pairFacts(row, parts[c], options.cache, options.partKey ?? defaultPartKey));
       cells.push({ row: r, column: c, status: verdict.status, findings: verdict.findings });
-    });
+    }
   });
   return { rows: requirements.map(matrixRow), columns: parts.map((p) => ({ partId: p.partId, mpn: p.mpn, title: p.title })), cells };
 }
@@ -150,22 +159,45 @@ export interface DecidingFigure {
   readonly text: string;
 }
 
+/** Why a candidate stands where it does: the finding that decides its rank, or for a pass the limit it is nearest to. */
+export interface CandidateExplanation {
+  readonly status: CellStatus;
+  /** Short title: the deciding finding's, or "Nearest limit" / "Passes" for a pass (never a failing-sounding title). */
+  readonly title: string;
+  readonly text: string;
+  /** Null for a pass. */
+  readonly finding: Finding | null;
+  readonly bandId: number | null;
+  readonly designation: string | null;
+}
+
+export interface CandidateBand {
+  readonly bandId: number;
+  readonly designation: string;
+  readonly status: CellStatus;
+  readonly findings: readonly Finding[];
+  readonly decidingFinding: Finding | null;
+}
+
 export interface Candidate {
   readonly partId: number;
   readonly mpn: string;
   readonly title: string;
   /** The worst cell over the radio's bands. */
   readonly status: CellStatus;
+  /** How well the part fits the radio's feed and polarization (0 best), from options.fitRank. */
+  readonly fitRank: number;
   /** The smallest margin over every limit and band, in dB; null when no numeric limit applies. */
   readonly marginDb: number | null;
   readonly deciding: DecidingFigure | null;
-  readonly bands: readonly { readonly bandId: number; readonly designation: string; readonly status: CellStatus; readonly findings: readonly Finding[] }[];
+  readonly explanation: CandidateExplanation;
+  readonly bands: readonly CandidateBand[];
 }
 
-function describeDeciding(ruleTitle: string, designation: string, fact: string, value: number, threshold: number, marginDb: number): string {
+function describeDeciding(designation: string, fact: string, value: number, threshold: number, marginDb: number): string {
   const label = isFactName(fact) ? FACT_CATALOG[fact].description : fact;
   const side = marginDb >= 0 ? `${formatValue(marginDb)} dB inside` : `${formatValue(-marginDb)} dB beyond`;
-  return `${ruleTitle} on ${designation}: ${label} ${formatValue(value)} against ${formatValue(threshold)} (${side})`;
+  return `${designation}: ${label} ${formatValue(value)} against the limit ${formatValue(threshold)} (${side})`;
 }
 
 /** Larger margins first; a part with no numeric limit after every part that has one. */
@@ -175,19 +207,64 @@ function byMarginDescending(a: number | null, b: number | null): number {
   return x === y ? 0 : y > x ? 1 : -1;
 }
 
+/** dB by which each fired fail/marginal rule of a cell holds (its margin), by rule id. */
+export function firedMargins(row: CompiledRow, facts: Facts): Map<string, number> {
+  const margins = new Map<string, number>();
+  row.visitMargins(facts, (bound, margin) => {
+    if (margin.distanceDb <= 0) margins.set(bound.rule.id, margin.distanceDb);
+  });
+  return margins;
+}
+
+/** The decided cell's finding and margin, for choosing between cells. */
+export function decidedCell<T>(status: CellStatus, findings: readonly Finding[], margins: ReadonlyMap<string, number>, item: T): DecidedCell<T> {
+  const deciding = decidingFindingOf(status, findings);
+  return { status, deciding, overByDb: deciding ? (margins.get(deciding.ruleId) ?? null) : null, item };
+}
+
+function explain(
+  status: CellStatus,
+  deciding: DecidingFigure | null,
+  bands: readonly (CandidateBand & { readonly margins: ReadonlyMap<string, number> })[],
+  ruleTitles: ReadonlyMap<string, string>,
+): CandidateExplanation {
+  if (status !== 'pass') {
+    const decided = decidingCellOf(bands.map((b) => decidedCell(b.status, b.findings, b.margins, b)));
+    const finding = decided?.deciding ?? null;
+    if (decided && finding) {
+      return {
+        status,
+        title: findingTitle(finding.code, ruleTitles.get(finding.ruleId)),
+        text: `${decided.item.designation}: ${finding.message}`,
+        finding,
+        bandId: decided.item.bandId,
+        designation: decided.item.designation,
+      };
+    }
+  }
+  if (deciding) {
+    const band = bands.find((b) => b.designation === deciding.designation) ?? null;
+    return { status, title: 'Nearest limit', text: deciding.text, finding: null, bandId: band?.bandId ?? null, designation: deciding.designation };
+  }
+  return { status, title: 'Passes', text: 'every band passes every check; no numeric limit applies', finding: null, bandId: null, designation: null };
+}
+
 /**
- * The parts for one radio (all its bands), best first: by worst status over the bands, then by the
- * margin of the limit they are nearest to, the deciding figure. Ties keep the catalogue order.
+ * The parts for one radio (all its bands), best first: by worst status over the bands, then by how well
+ * they fit the radio (feed and polarization, options.fitRank), then by the margin of the limit they are
+ * nearest to, the deciding figure. Ties keep the catalogue order.
  */
 export function rankCandidates(
   requirements: readonly RadioBandRequirement[],
   parts: readonly PartEvaluationData[],
   rules: CompiledRuleSet,
-  options: EvaluationOptions & { readonly limit?: number } = {},
+  options: EvaluationOptions & { readonly limit?: number; readonly fitRank?: (part: PartEvaluationData) => number } = {},
 ): Candidate[] {
   const rows = prepare(requirements, options.cache);
   const compiledRows = rows.map((row) => rules.forRow(row.rowFacts));
   const partKey = options.partKey ?? defaultPartKey;
+  const fitRank = options.fitRank ?? (() => 0);
+  const ruleTitles = new Map(rules.rules.map((r) => [r.id, r.title]));
   // First pass over the whole catalogue: states and margins only, no finding is written. A part that fails a
   // band stops there: fail ranks last, so its margins only matter when fewer than `limit` parts do not fail.
   const limit = options.limit ?? parts.length;
@@ -195,6 +272,7 @@ export function rankCandidates(
     let status: CellStatus = 'pass';
     let deciding: DecidingFigure | null = null;
     let designation = '';
+    const fit = fitRank(part);
     // One visitor per part, not one margins array per band: the ranking keeps only the nearest limit.
     const visit = (bound: BoundRule, margin: Margin) => {
       if (margin.fact === null || margin.value === null || margin.threshold === null || !Number.isFinite(margin.distanceDb)) return;
@@ -217,11 +295,11 @@ export function rankCandidates(
     for (let i = 0; i < rows.length; i++) {
       const facts = pairFacts(rows[i], part, options.cache, partKey);
       status = worseStatus(status, compiledRows[i].status(facts));
-      if (stopAtFail && status === 'fail') return { part, order, status, deciding: null, complete: false };
+      if (stopAtFail && status === 'fail') return { part, order, status, fit, deciding: null, complete: false };
       designation = rows[i].requirement.designation;
       compiledRows[i].visitMargins(facts, visit);
     }
-    return { part, order, status, deciding: deciding as DecidingFigure | null, complete: true };
+    return { part, order, status, fit, deciding: deciding as DecidingFigure | null, complete: true };
   };
   let ranked = parts.map((part, order) => assess(part, order, true));
   if (ranked.filter((r) => r.status !== 'fail').length < limit) {
@@ -229,21 +307,38 @@ export function rankCandidates(
   }
   ranked.sort(
     (a, b) =>
-      statusRank(a.status) - statusRank(b.status) || byMarginDescending(a.deciding?.marginDb ?? null, b.deciding?.marginDb ?? null) || a.order - b.order,
+      statusRank(a.status) - statusRank(b.status) ||
+      a.fit - b.fit ||
+      byMarginDescending(a.deciding?.marginDb ?? null, b.deciding?.marginDb ?? null) ||
+      a.order - b.order,
   );
-  // Second pass for the ones shown: their findings per band and the deciding figure in words.
-  return ranked.slice(0, limit).map(({ part, status, deciding }) => ({
-    partId: part.partId,
-    mpn: part.mpn,
-    title: part.title,
-    status,
-    marginDb: deciding ? deciding.marginDb : null,
-    deciding: deciding
-      ? { ...deciding, text: describeDeciding(deciding.ruleTitle, deciding.designation, deciding.fact, deciding.value, deciding.threshold, deciding.marginDb) }
-      : null,
-    bands: rows.map((row, i) => {
-      const verdict = compiledRows[i].evaluate(pairFacts(row, part, options.cache, partKey));
-      return { bandId: row.requirement.bandId, designation: row.requirement.designation, status: verdict.status, findings: verdict.findings };
-    }),
-  }));
+  // Second pass for the ones shown: their findings per band, the deciding finding and figure in words.
+  return ranked.slice(0, limit).map(({ part, status, fit, deciding }) => {
+    const figure = deciding
+      ? { ...deciding, text: describeDeciding(deciding.designation, deciding.fact, deciding.value, deciding.threshold, deciding.marginDb) }
+      : null;
+    const bands = rows.map((row, i) => {
+      const facts = pairFacts(row, part, options.cache, partKey);
+      const verdict = compiledRows[i].evaluate(facts);
+      return {
+        bandId: row.requirement.bandId,
+        designation: row.requirement.designation,
+        status: verdict.status,
+        findings: verdict.findings,
+        decidingFinding: decidingFindingOf(verdict.status, verdict.findings),
+        margins: verdict.status === 'pass' ? new Map<string, number>() : firedMargins(compiledRows[i], facts),
+      };
+    });
+    return {
+      partId: part.partId,
+      mpn: part.mpn,
+      title: part.title,
+      status,
+      fitRank: fit,
+      marginDb: figure ? figure.marginDb : null,
+      deciding: figure,
+      explanation: explain(status, figure, bands, ruleTitles),
+      bands: bands.map(({ margins: _margins, ...band }) => band),
+    };
+  });
 }

@@ -18,7 +18,7 @@ import {
 } from '../part.types';
 
 /** A comma-separated query list of enum values, e.g. `status=approved,restricted`. */
-function ListField(values: readonly string[], description: string) {
+export function ListField(values: readonly string[], description: string) {
   return applyDecorators(
     ApiPropertyOptional({ description: `${description}; comma-separated: ${values.join(', ')}`, type: String }),
     IsOptional(),

@@ -1,0 +1,138 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsOptional, Matches } from 'class-validator';
+import { IntField } from '../../common/dto-fields';
+import { TECHNOLOGIES, type Technology } from '../../bands/band-domain';
+import { CONNECTORS, type Connector } from '../../parts/part.types';
+import { CELL_STATUSES, type CellStatus, FindingDto, OfferPriceDto } from './matrix.dto';
+
+const VERDICT_DOC =
+  'pass | marginal | fail | no-data. A product or radio takes its worst part: fail, then no-data (what was not checked cannot pass), then marginal, then pass.';
+
+export class EvaluationFindingDto extends FindingDto {
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'The radio the finding is about; null for the product as a whole' }) radioId: number | null;
+}
+
+export class BandFactsDto {
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Share (0–1) of the band width where VSWR ≤ coverageVswr' }) coverageFraction:
+    number | null;
+  @ApiProperty({ description: 'The VSWR the coverage is judged at (the band-coverage rule: 3:1)' }) coverageVswr: number;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Highest VSWR in the band, VSWR = (1 + |Γ|) / (1 − |Γ|)' }) worstVswr: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Lowest total efficiency (mismatch included), %' }) minTotalEfficiencyPct: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Total efficiency averaged over the band (linear power), %' }) avgTotalEfficiencyPct:
+    number | null;
+  @ApiPropertyOptional({
+    type: Number,
+    nullable: true,
+    description: "Lowest efficiency at the radio port: total efficiency × 10^(−feed loss / 10), with the radio's feed loss, %",
+  })
+  minSystemEfficiencyPct: number | null;
+  @ApiProperty({ description: "The radio's feed or cable loss, dB" }) feedLossDb: number;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Highest peak gain in the band, dBi' }) peakGainDbi: number | null;
+  @ApiPropertyOptional({
+    type: Number,
+    nullable: true,
+    description: 'EIRP = transmit power + peak gain on the transmit ranges − feed loss, dBm; null for a receive-only radio',
+  })
+  eirpDbm: number | null;
+}
+
+export class EvaluationBandDto {
+  @ApiProperty() bandId: number;
+  @ApiProperty() designation: string;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus', description: VERDICT_DOC }) verdict: CellStatus;
+  @ApiPropertyOptional({ type: FindingDto, nullable: true, description: 'The finding that decides the verdict; null for a pass' })
+  decidingFinding: FindingDto | null;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'The chosen part the band was judged with; null when none is chosen' }) partId:
+    number | null;
+  @ApiProperty({ type: [FindingDto], description: 'Every finding of the band, notes included' }) findings: FindingDto[];
+  @ApiProperty({ type: BandFactsDto }) facts: BandFactsDto;
+}
+
+export class ChosenPartDto {
+  @ApiProperty() partId: number;
+  @ApiProperty() mpn: string;
+  @ApiProperty() title: string;
+  @ApiProperty() manufacturer: string;
+}
+
+export class EvaluationRadioDto {
+  @ApiProperty() radioId: number;
+  @ApiProperty() name: string;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus', description: VERDICT_DOC }) verdict: CellStatus;
+  @ApiPropertyOptional({ type: FindingDto, nullable: true, description: 'The finding that decides the radio; null for a pass' })
+  decidingFinding: FindingDto | null;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'The band of the deciding finding' }) decidingBandId: number | null;
+  @ApiProperty({ example: 'Efficiency below floor on BLE 2.4 GHz: total efficiency falls to 21 % at 2400 MHz; the floor for ble is 30 %' })
+  reason: string;
+  @ApiProperty({ type: [ChosenPartDto] }) chosen: ChosenPartDto[];
+  @ApiProperty({ type: [EvaluationBandDto] }) bands: EvaluationBandDto[];
+}
+
+export class ProductEvaluationDto {
+  @ApiProperty() productId: number;
+  @ApiProperty() productName: string;
+  @ApiProperty({ enum: CELL_STATUSES, enumName: 'CellStatus', description: VERDICT_DOC }) verdict: CellStatus;
+  @ApiProperty({ description: "The deciding radio's reason in words" }) reason: string;
+  @ApiProperty({ type: [EvaluationRadioDto] }) radios: EvaluationRadioDto[];
+  @ApiProperty({
+    type: [EvaluationFindingDto],
+    description: 'Findings about the product and its radios as a whole (no part chosen …); band findings are on the bands',
+  })
+  findings: EvaluationFindingDto[];
+  @ApiProperty({ description: 'Rule ids and versions the evaluation used' }) rules: string;
+  @ApiProperty({ description: 'When the evaluation was computed (ISO 8601)' }) evaluatedAt: string;
+}
+
+export class BillOfMaterialsQueryDto {
+  @IntField({
+    optional: true,
+    min: 1,
+    max: 100_000_000,
+    description: 'Products to build; price breaks are taken at this times the parts per product (default 1)',
+  })
+  quantity?: number;
+
+  @ApiPropertyOptional({ example: 'USD', description: 'Currency preferred when a part has offers in several (default USD)' })
+  @IsOptional()
+  @Matches(/^[A-Z]{3}$/, { message: 'must be a three-letter currency code such as USD' })
+  currency?: string;
+}
+
+export class BomRadioRefDto {
+  @ApiProperty() radioId: number;
+  @ApiProperty() name: string;
+}
+
+export class BomLineDto {
+  @ApiProperty() partId: number;
+  @ApiProperty() mpn: string;
+  @ApiProperty() title: string;
+  @ApiProperty() manufacturer: string;
+  @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
+  @ApiProperty({ type: [BomRadioRefDto], description: 'The radios the part is chosen for' }) radios: BomRadioRefDto[];
+  @ApiProperty({ description: 'Pieces per product (one per radio it is chosen for)' }) quantityPerUnit: number;
+  @ApiProperty({ description: 'Pieces bought for the build: quantity × quantityPerUnit' }) buyQuantity: number;
+  @ApiPropertyOptional({ type: OfferPriceDto, nullable: true, description: 'The offer bought from; null when no offer can supply buyQuantity' })
+  offer: OfferPriceDto | null;
+  @ApiPropertyOptional({ type: String, nullable: true, example: '0.8422', description: 'unit price × quantityPerUnit, in the offer currency' })
+  costPerUnit: string | null;
+}
+
+export class CurrencyTotalDto {
+  @ApiProperty({ example: 'USD' }) currency: string;
+  @ApiProperty({ example: '1.2633', description: 'Decimal string' }) total: string;
+}
+
+export class BillOfMaterialsDto {
+  @ApiProperty() productId: number;
+  @ApiProperty() productName: string;
+  @ApiProperty() quantity: number;
+  @ApiProperty({ example: 'USD' }) currency: string;
+  @ApiProperty({ type: [BomLineDto] }) lines: BomLineDto[];
+  @ApiProperty({ type: [BomRadioRefDto], description: 'Radios with no chosen part: the cost leaves them out' }) radiosWithoutPart: BomRadioRefDto[];
+  @ApiProperty({ type: [CurrencyTotalDto], description: 'Antenna cost per product, one total per currency when the offers mix them' })
+  totalPerUnit: CurrencyTotalDto[];
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Longest lead time of the offers bought from, days' }) longestLeadTimeDays: number | null;
+  @ApiProperty({ description: 'Every radio has a chosen part and every part an offer at the quantity' }) complete: boolean;
+}

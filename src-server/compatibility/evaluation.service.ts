@@ -1,0 +1,118 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
+import { dbToPowerRatio } from '../rf/units';
+import { ProductsService } from '../products/products.service';
+import { PartAssignment } from './compatibility.entities';
+import { roundFactValue } from './engine/compute-facts';
+import { findingTitle } from './engine/deciding';
+import { evaluateProduct, type BandEvaluation, type RadioEvaluation } from './engine/product-evaluation';
+import type { Facts, Finding } from './engine/types';
+import type { BandFactsDto, EvaluationRadioDto, ProductEvaluationDto } from './dto/evaluation.dto';
+import { EvaluationInputsService } from './evaluation-inputs.service';
+import { findingView, ruleTitlesOf } from './finding-view';
+import { RulesService } from './rules.service';
+
+/** The VSWR the band-coverage rule judges coverage at (rules/band-coverage.json). */
+const COVERAGE_VSWR = 3;
+
+const numberOrNull = (value: unknown): number | null => (typeof value === 'number' && Number.isFinite(value) ? value : null);
+
+/**
+ * The band's facts as the evaluation shows them. System efficiency is the engine's fact when it computes one;
+ * otherwise it is worked out here from total efficiency and the feed loss: η_sys = η_tot × 10^(−L/10).
+ */
+export function bandFacts(facts: Facts | null, feedLossDb: number): BandFactsDto {
+  const coverage = numberOrNull(facts?.coverageAtVswr3Pct);
+  const minTotal = numberOrNull(facts?.minTotalEfficiencyPct);
+  const system = numberOrNull(facts?.minSystemEfficiencyPct) ?? (minTotal === null ? null : roundFactValue(minTotal * dbToPowerRatio(-feedLossDb)));
+  return {
+    coverageFraction: coverage === null ? null : roundFactValue(coverage / 100),
+    coverageVswr: COVERAGE_VSWR,
+    worstVswr: numberOrNull(facts?.worstVswr),
+    minTotalEfficiencyPct: minTotal,
+    avgTotalEfficiencyPct: numberOrNull(facts?.avgTotalEfficiencyPct),
+    minSystemEfficiencyPct: system,
+    feedLossDb,
+    peakGainDbi: numberOrNull(facts?.peakGainDbi),
+    eirpDbm: numberOrNull(facts?.eirpDbm),
+  };
+}
+
+/** "Band not covered on B3: VSWR ≤ 3:1 covers only 0 % of B3 …", or the pass in words. */
+function reasonOf(radio: RadioEvaluation, titles: ReadonlyMap<string, string>): string {
+  if (radio.status === 'pass') return `every band passes with ${radio.chosen.map((p) => p.mpn).join(' and ')}`;
+  const finding = radio.decidingFinding;
+  if (!finding) return 'not checked';
+  const band = radio.bands.find((b) => b.requirement.bandId === radio.decidingBandId);
+  const title = findingTitle(finding.code, titles.get(finding.ruleId));
+  return band ? `${title} on ${band.requirement.designation}: ${finding.message}` : `${title}: ${finding.message}`;
+}
+
+/** One answer per radio and for the product: each radio's bands against the part chosen for it. */
+@Injectable()
+export class EvaluationService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly rules: RulesService,
+    private readonly products: ProductsService,
+    private readonly inputs: EvaluationInputsService,
+  ) {}
+
+  async evaluate(productId: number): Promise<ProductEvaluationDto> {
+    const product = await this.products.getWithRadios(productId);
+    const ruleSet = await this.rules.currentRuleSet();
+    const revision = await this.inputs.currentRevision();
+    const chosen = await this.dataSource.getRepository(PartAssignment).find({ where: { productId, state: 'chosen' }, order: { radioId: 'ASC', id: 'ASC' } });
+    const columns = await this.inputs.partColumns([...new Set(chosen.map((a) => a.partId))], revision);
+    const byPart = new Map(columns.map((c) => [c.data.partId, c]));
+    const requirements = await this.inputs.requirements(product);
+    const evaluation = evaluateProduct(
+      product.radios.map((radio) => ({
+        radioId: radio.id,
+        radioName: radio.name,
+        requirements: requirements.filter((r) => r.radioId === radio.id),
+        chosen: chosen.filter((a) => a.radioId === radio.id).map((a) => byPart.get(a.partId)!.data),
+      })),
+      ruleSet.compiled,
+      { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey },
+    );
+    const titles = ruleTitlesOf(ruleSet.compiled);
+    const view = (f: Finding | null) => (f ? findingView(f, titles) : null);
+    const radios = evaluation.radios.map((r): EvaluationRadioDto => {
+      const radio = product.radios.find((x) => x.id === r.radioId)!;
+      return {
+        radioId: r.radioId,
+        name: r.radioName,
+        technology: radio.technology,
+        verdict: r.status,
+        decidingFinding: view(r.decidingFinding),
+        decidingBandId: r.decidingBandId,
+        reason: reasonOf(r, titles),
+        chosen: r.chosen.map((p) => ({ partId: p.partId, mpn: p.mpn, title: p.title, manufacturer: byPart.get(p.partId)?.manufacturer ?? '' })),
+        bands: r.bands.map((b: BandEvaluation) => ({
+          bandId: b.requirement.bandId,
+          designation: b.requirement.designation,
+          verdict: b.status,
+          decidingFinding: view(b.decidingFinding),
+          partId: b.partId,
+          findings: b.findings.map((f) => findingView(f, titles)),
+          facts: bandFacts(b.facts, radio.feedLossDb),
+        })),
+      };
+    });
+    // The product's reason is its worst radio's (the first of them, in the product's order).
+    const deciding = radios.find((r) => r.verdict === evaluation.status) ?? null;
+    const productFinding = evaluation.findings.find((f) => f.radioId === null)?.finding ?? null;
+    return {
+      productId,
+      productName: product.name,
+      verdict: evaluation.status,
+      reason: deciding ? `${deciding.name}: ${deciding.reason}` : productFinding ? productFinding.message : 'every radio passes',
+      radios,
+      findings: evaluation.findings.map((f) => ({ ...findingView(f.finding, titles), radioId: f.radioId })),
+      rules: ruleSet.signature,
+      evaluatedAt: new Date().toISOString(),
+    };
+  }
+}
