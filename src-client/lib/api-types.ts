@@ -1199,6 +1199,32 @@ export interface paths {
 export type webhooks = Record<string, never>;
 export interface components {
     schemas: {
+        AuditUserDto: {
+            id: number;
+            name: string;
+            /** @description Only in the admins' audit log */
+            email?: string;
+        };
+        AuditEntryDto: {
+            id: string;
+            /** @example part */
+            entityType: string;
+            entityId: string;
+            /** @example updated */
+            action: string;
+            /** @description Who did it; null for the system */
+            user?: components["schemas"]["AuditUserDto"] | null;
+            /** @description Changed fields as { field: [before, after] }, or what was created or removed */
+            changes: {
+                [key: string]: unknown;
+            };
+            /** @description When (ISO 8601) */
+            at: string;
+        };
+        AuditPageDto: {
+            items: components["schemas"]["AuditEntryDto"][];
+            total: number;
+        };
         LoginDto: {
             /**
              * Format: email
@@ -2220,7 +2246,7 @@ export interface components {
             polarization?: components["schemas"]["PartPolarization"];
         };
         CurvePreviewDto: {
-            kind: string;
+            kind: components["schemas"]["MeasurementKind"];
             sourceFormat: string;
             pointCount: number;
             fromMhz: number;
@@ -2314,7 +2340,9 @@ export interface components {
         };
         RuleDefinitionBodyDto: {
             /** @description The rule as JSON (see rules/*.json) */
-            definition: Record<string, never>;
+            definition: {
+                [key: string]: unknown;
+            };
         };
         RuleProblemDto: {
             /** @example conditions.all[0].fact */
@@ -2328,7 +2356,9 @@ export interface components {
         };
         PreviewRuleDto: {
             /** @description The rule as it would be saved (new or edited); its id decides which rule it replaces */
-            definition: Record<string, never>;
+            definition: {
+                [key: string]: unknown;
+            };
         };
         /** @enum {string} */
         CellStatus: "pass" | "marginal" | "fail" | "no-data";
@@ -2368,11 +2398,15 @@ export interface components {
             origin: "file" | "file-edited" | "admin";
             updatedAt?: string | null;
             /** @description The whole rule as JSON: parameters, appliesWhen, conditions (json-rules-engine) and event */
-            definition: Record<string, never>;
+            definition: {
+                [key: string]: unknown;
+            };
         };
         UpdateRuleDto: {
             /** @description The rule as JSON (see rules/*.json) */
-            definition: Record<string, never>;
+            definition: {
+                [key: string]: unknown;
+            };
             /** @description The version you edited; a stale one gets 409 RULE_VERSION_CONFLICT */
             version: number;
         };
@@ -2387,7 +2421,9 @@ export interface components {
             action: "file" | "created" | "edited" | "enabled" | "disabled";
             changedBy?: string | null;
             at?: string | null;
-            definition: Record<string, never>;
+            definition: {
+                [key: string]: unknown;
+            };
         };
         FindingDto: {
             ruleId: string;
@@ -2566,12 +2602,12 @@ export interface components {
         MatrixRangeDto: {
             fromMhz: number;
             toMhz: number;
-            role: string;
+            role: components["schemas"]["RangeRole"];
         };
         MatrixRowDto: {
             radioId: number;
             radioName: string;
-            technology: string;
+            technology: components["schemas"]["Technology"];
             bandId: number;
             designation: string;
             ranges: components["schemas"]["MatrixRangeDto"][];
@@ -2586,8 +2622,8 @@ export interface components {
             mpn: string;
             title: string;
             manufacturer: string;
-            reviewState: string;
-            lifecycle: string;
+            reviewState: components["schemas"]["ReviewState"];
+            lifecycle: components["schemas"]["Lifecycle"];
             assignments: components["schemas"]["ColumnAssignmentDto"][];
         };
         MatrixCellDto: {
@@ -2742,6 +2778,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AuditPageDto"];
+                };
+            };
             /** @description No valid bearer token */
             401: {
                 headers: {
@@ -4044,6 +4088,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AuditPageDto"];
+                };
+            };
             /** @description No valid bearer token */
             401: {
                 headers: {
@@ -4799,6 +4851,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AuditPageDto"];
+                };
+            };
             /** @description No valid bearer token */
             401: {
                 headers: {
@@ -5761,6 +5821,14 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AuditPageDto"];
+                };
+            };
             /** @description No valid bearer token */
             401: {
                 headers: {

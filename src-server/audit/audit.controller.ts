@@ -1,7 +1,8 @@
 import { Controller, Get, Query } from '@nestjs/common';
-import { ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { Roles } from '../common/auth.decorators';
 import { AuditService } from './audit.service';
+import { AuditPageDto } from './dto/audit-page.dto';
 import { AuditQueryDto } from './dto/audit-query.dto';
 
 @ApiTags('audit')
@@ -12,7 +13,8 @@ export class AuditController {
   @Get()
   @Roles('admin')
   @ApiOperation({ summary: 'The audit log, newest first (admin)' })
-  list(@Query() query: AuditQueryDto) {
+  @ApiOkResponse({ type: AuditPageDto })
+  list(@Query() query: AuditQueryDto): Promise<AuditPageDto> {
     return this.audit.list(query, { withEmails: true });
   }
 }

@@ -12,6 +12,7 @@ import { BillOfMaterialsService } from './bill-of-materials.service';
 import { BillOfMaterialsDto, BillOfMaterialsQueryDto, ProductEvaluationDto } from './dto/evaluation.dto';
 import { matrixCsvFileName, matrixToCsv } from './matrix-csv';
 import { AssignmentDto, CandidatesDto, CandidatesQueryDto, ChoosePartDto, MatrixDto, MatrixQueryDto, ShortlistDto } from './dto/matrix.dto';
+import { AuditPageDto } from '../audit/dto/audit-page.dto';
 
 const matrixSelection = (query: MatrixQueryDto): MatrixSelection => ({
   partIds: query.parts ? [...new Set(query.parts.split(',').map(Number))] : undefined,
@@ -97,7 +98,8 @@ export class CompatibilityController {
   @Get('assignments/history')
   @Roles(...ALL_ROLES)
   @ApiOperation({ summary: 'Who shortlisted, chose or removed which part, newest first' })
-  history(@Param('id', ParseIdPipe) id: number) {
+  @ApiOkResponse({ type: AuditPageDto })
+  history(@Param('id', ParseIdPipe) id: number): Promise<AuditPageDto> {
     return this.partAssignments.history(id);
   }
 

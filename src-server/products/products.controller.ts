@@ -7,6 +7,7 @@ import { ParseIdPipe } from '../common/parse-id.pipe';
 import { ProductsService } from './products.service';
 import { CreateProductDto, ProductDetailDto, ProductListQueryDto, ProductSummaryDto, UpdateProductDto, VersionQueryDto } from './dto/product.dto';
 import { CreateRadioDto, RadioDto, UpdateRadioDto } from './dto/radio.dto';
+import { AuditPageDto } from '../audit/dto/audit-page.dto';
 
 @ApiTags('products')
 @Controller('products')
@@ -67,7 +68,8 @@ export class ProductsController {
   @Get(':id/history')
   @Roles(...ALL_ROLES)
   @ApiOperation({ summary: 'Every change to the product and its radios, newest first (admins: also of a deleted product)' })
-  history(@Param('id', ParseIdPipe) id: number, @CurrentUser() actor: AuthUser) {
+  @ApiOkResponse({ type: AuditPageDto })
+  history(@Param('id', ParseIdPipe) id: number, @CurrentUser() actor: AuthUser): Promise<AuditPageDto> {
     return this.products.history(id, actor);
   }
 

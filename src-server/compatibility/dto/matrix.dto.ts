@@ -1,7 +1,8 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsOptional, Matches } from 'class-validator';
 import { ListField } from '../../parts/dto/part-search.dto';
-import { CONNECTORS, type Connector, FORM_FACTORS, type FormFactor } from '../../parts/part.types';
+import { CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, REVIEW_STATES, type ReviewState } from '../../parts/part.types';
+import { RANGE_ROLES, type RangeRole, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { BoolField, IntField, StringField } from '../../common/dto-fields';
 
 export const CELL_STATUSES = ['pass', 'marginal', 'fail', 'no-data'] as const;
@@ -55,13 +56,13 @@ export class FindingDto {
 export class MatrixRangeDto {
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;
-  @ApiProperty() role: string;
+  @ApiProperty({ enum: RANGE_ROLES, enumName: 'RangeRole' }) role: RangeRole;
 }
 
 export class MatrixRowDto {
   @ApiProperty() radioId: number;
   @ApiProperty() radioName: string;
-  @ApiProperty() technology: string;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
   @ApiProperty() bandId: number;
   @ApiProperty() designation: string;
   @ApiProperty({ type: [MatrixRangeDto] }) ranges: MatrixRangeDto[];
@@ -77,8 +78,8 @@ export class MatrixColumnDto {
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
   @ApiProperty() manufacturer: string;
-  @ApiProperty() reviewState: string;
-  @ApiProperty() lifecycle: string;
+  @ApiProperty({ enum: REVIEW_STATES, enumName: 'ReviewState' }) reviewState: ReviewState;
+  @ApiProperty({ enum: LIFECYCLES, enumName: 'Lifecycle' }) lifecycle: Lifecycle;
   @ApiProperty({ type: [ColumnAssignmentDto] }) assignments: ColumnAssignmentDto[];
 }
 

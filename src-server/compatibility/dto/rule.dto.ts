@@ -23,10 +23,12 @@ export class RuleSummaryDto {
 }
 
 export class RuleDetailDto extends RuleSummaryDto {
-  @ApiProperty({ description: 'The whole rule as JSON: parameters, appliesWhen, conditions (json-rules-engine) and event' }) definition: Record<
-    string,
-    unknown
-  >;
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: true,
+    description: 'The whole rule as JSON: parameters, appliesWhen, conditions (json-rules-engine) and event',
+  })
+  definition: Record<string, unknown>;
 }
 
 export class RuleProblemDto {
@@ -41,7 +43,7 @@ export class RuleValidationDto {
 
 /** The rule JSON travels as one document; its shape is checked by validateRuleDefinition, which names every problem. */
 export class RuleDefinitionBodyDto {
-  @ApiProperty({ description: 'The rule as JSON (see rules/*.json)' })
+  @ApiProperty({ type: 'object', additionalProperties: true, description: 'The rule as JSON (see rules/*.json)' })
   @IsObject()
   definition: Record<string, unknown>;
 }
@@ -61,11 +63,15 @@ export class RuleVersionDto {
   @ApiProperty({ enum: ['file', 'created', 'edited', 'enabled', 'disabled'] }) action: string;
   @ApiPropertyOptional({ type: String, nullable: true }) changedBy: string | null;
   @ApiPropertyOptional({ type: String, nullable: true }) at: string | null;
-  @ApiProperty() definition: Record<string, unknown>;
+  @ApiProperty({ type: 'object', additionalProperties: true }) definition: Record<string, unknown>;
 }
 
 export class PreviewRuleDto {
-  @ApiProperty({ description: 'The rule as it would be saved (new or edited); its id decides which rule it replaces' })
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: true,
+    description: 'The rule as it would be saved (new or edited); its id decides which rule it replaces',
+  })
   @IsObject()
   definition: Record<string, unknown>;
 }

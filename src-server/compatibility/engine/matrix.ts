@@ -5,15 +5,15 @@ import { computeFacts, computeRowFacts } from './compute-facts';
 import { formatValue, statusRank, worseStatus } from './rule-binding';
 import type { BoundRule } from './rule-binding';
 import type { Margin } from './margin';
-import type { CellStatus, CellVerdict, Facts, Finding, PartEvaluationData, RadioBandRequirement } from './types';
+import type { CellStatus, CellVerdict, Facts, Finding, PartEvaluationData, RadioBandRequirement, RangeRole, Technology } from './types';
 
 export interface MatrixRow {
   readonly radioId: number;
   readonly radioName: string;
-  readonly technology: string;
+  readonly technology: Technology;
   readonly bandId: number;
   readonly designation: string;
-  readonly ranges: readonly { readonly fromMhz: number; readonly toMhz: number; readonly role: string }[];
+  readonly ranges: readonly { readonly fromMhz: number; readonly toMhz: number; readonly role: RangeRole }[];
 }
 
 export interface MatrixColumn {

@@ -14,6 +14,7 @@ import { PartDetailDto, PartListDto } from '../dto/part-response.dto';
 import { PartSearchDto } from '../dto/part-search.dto';
 import { HistoryQueryDto, PartDetailQueryDto } from '../dto/part-detail-query.dto';
 import { ImportQueryDto, ImportResultDto } from '../dto/import.dto';
+import { AuditPageDto } from '../../audit/dto/audit-page.dto';
 
 @ApiTags('parts')
 @Controller('parts')
@@ -86,7 +87,8 @@ export class PartsController {
   @Get(':id/history')
   @Roles(...ALL_ROLES)
   @ApiOperation({ summary: "The part's audit history, newest first" })
-  history(@Param('id', ParseIdPipe) id: number, @Query() query: HistoryQueryDto) {
+  @ApiOkResponse({ type: AuditPageDto })
+  history(@Param('id', ParseIdPipe) id: number, @Query() query: HistoryQueryDto): Promise<AuditPageDto> {
     return this.parts.history(id, query.limit, query.offset);
   }
 }

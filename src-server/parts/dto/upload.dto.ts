@@ -23,7 +23,7 @@ export class UploadDocumentDto {
 }
 
 export class CurvePreviewDto {
-  @ApiProperty() kind: MeasurementKind;
+  @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind' }) kind: MeasurementKind;
   @ApiProperty() sourceFormat: string;
   @ApiProperty() pointCount: number;
   @ApiProperty() fromMhz: number;
