@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { User } from '../../users/user.entity';
 import { Part } from '../part.entity';
-import { MEASUREMENT_KINDS, type MeasurementKind } from '../part.types';
+import { MEASUREMENT_BASES, MEASUREMENT_KINDS, type MeasurementBasis, type MeasurementKind } from '../part.types';
 
 /**
  * One measured curve. Points are packed float64 arrays (see point-codec.ts): for s11 values_a/values_b
@@ -21,6 +21,10 @@ export class Measurement {
 
   @Column({ type: 'enum', enum: MEASUREMENT_KINDS })
   kind: MeasurementKind;
+
+  /** What the curve includes: radiation or total (efficiency), peak or realized (gains); null for s11. */
+  @Column({ type: 'enum', enum: MEASUREMENT_BASES, nullable: true })
+  basis: MeasurementBasis | null;
 
   @Column({ name: 'ground_length_mm', type: 'double', nullable: true }) groundLengthMm: number | null;
   @Column({ name: 'ground_width_mm', type: 'double', nullable: true }) groundWidthMm: number | null;

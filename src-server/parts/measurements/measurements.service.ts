@@ -3,7 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import { createHash, randomUUID } from 'node:crypto';
 import type { AuthUser } from '../../common/auth.decorators';
-import { DomainError, NotFoundError } from '../../common/domain-error';
+import { DomainError, NotFoundError, ValidationFailedError } from '../../common/domain-error';
 import { AuditService } from '../../audit/audit.service';
 import { looksBinary } from '../../storage/limited-file-upload';
 import { StorageService, objectKey } from '../../storage/storage.service';
@@ -19,7 +19,7 @@ import { packFloat64, unpackFloat64 } from './point-codec';
 import { measurementDto, PartsService } from '../catalogue/parts.service';
 import type { CurvePreviewDto, UploadMeasurementDto, UploadMeasurementResultDto } from '../dto/upload.dto';
 import type { MeasurementPointsDto } from '../dto/part-response.dto';
-import type { MeasurementKind } from '../part.types';
+import { BASES_OF_KIND, type MeasurementBasis, type MeasurementKind } from '../part.types';
 
 export interface UploadedFile {
   originalname: string;
@@ -62,6 +62,18 @@ export function requireFile(file: UploadedFile | undefined): UploadedFile {
   return file;
 }
 
+/** The basis a curve of this kind must state (form field `basis`): efficiency radiation | total, gains peak | realized, none for s11. */
+export function measurementBasisOf(kind: MeasurementKind, basis: MeasurementBasis | undefined): MeasurementBasis | null {
+  const allowed = BASES_OF_KIND[kind];
+  if (allowed.length === 0) {
+    if (basis === undefined) return null;
+    throw new ValidationFailedError([{ field: 'basis', message: `an ${kind} curve has no basis; leave the field out` }]);
+  }
+  if (basis === undefined) throw new ValidationFailedError([{ field: 'basis', message: `is required for ${kind}: one of ${allowed.join(', ')}` }]);
+  if (!allowed.includes(basis)) throw new ValidationFailedError([{ field: 'basis', message: `must be one of ${allowed.join(', ')} for ${kind}` }]);
+  return basis;
+}
+
 function previewOf(curve: ParsedCurve): CurvePreviewDto {
   const n = curve.frequenciesHz.length;
   const step = Math.max(1, Math.ceil(n / PREVIEW_POINTS));
@@ -96,6 +108,7 @@ export class MeasurementsService {
 
   /** The one validation of a measurement file: the dry run ("Check file"), the upload and the demo seeder all call it. */
   parse(file: UploadedFile, input: UploadMeasurementDto): ParsedCurve {
+    measurementBasisOf(input.kind, input.basis);
     if (file.size > MEASUREMENT_MAX_BYTES) {
       throw new DomainError(
         'MEASUREMENT_FILE_TOO_LARGE',
@@ -151,6 +164,7 @@ export class MeasurementsService {
         const inserted = await manager.insert(Measurement, {
           partId,
           kind: curve.kind,
+          basis: measurementBasisOf(curve.kind, input.basis),
           groundLengthMm: input.groundLengthMm ?? null,
           groundWidthMm: input.groundWidthMm ?? null,
           conditions: input.conditions ?? null,
@@ -180,6 +194,7 @@ export class MeasurementsService {
           changes: {
             measurementId,
             kind: curve.kind,
+            basis: input.basis ?? null,
             fileName: file.originalname,
             points: n,
             groundLengthMm: input.groundLengthMm ?? null,
