@@ -1,12 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidatePart } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { CurvePreview, Measurement, MeasurementKind } from '../types';
+import type { CurvePreview, Measurement, MeasurementBasis, MeasurementKind } from '../types';
 
 export interface MeasurementUpload {
   id: number;
   file: File;
   kind: MeasurementKind;
+  /** Efficiency radiation | total, gains peak | realized; none for S11. */
+  basis?: MeasurementBasis;
   groundLengthMm?: string;
   groundWidthMm?: string;
   conditions?: string;

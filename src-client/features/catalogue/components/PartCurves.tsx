@@ -51,7 +51,7 @@ export function PartCurves({ part, overlays }: PartCurvesProps) {
       )}
       {efficiency.data && (
         <FrequencyChart
-          title="Radiation efficiency"
+          title={part.measurements.find((m) => m.kind === 'efficiency' && m.current)?.basis === 'total' ? 'Total efficiency' : 'Radiation efficiency'}
           frequencyHz={efficiency.data.frequenciesHz}
           series={[{ label: 'Efficiency', unit: '%', values: efficiency.data.values, range: [0, 100] }]}
           ranges={overlays}
