@@ -233,6 +233,12 @@ function toBasis(
   return { source: 'spec', curve: null, at, breakpointsHz: () => [...stated.breakpointsHz(), ...gamma.breakpointsHz()] };
 }
 
+/** Whether a datasheet line with an efficiency over this range states only its band average. */
+function statesOnlyAverage(specBands: readonly SpecBand[], range: FrequencyRange): boolean {
+  const { usable } = usableSpecOf(specBands, 'efficiency', efficiencyPercentOf);
+  return usable.some((b) => overlapsRange(b, range) && b.efficiencyStatistic === 'average');
+}
+
 const totalEfficiencyPercent = (efficiencyPercent: number, gammaMagnitude: number) => totalEfficiency(efficiencyPercent / 100, gammaMagnitude) * 100;
 
 const EFFICIENCY_SPEC = {
@@ -609,6 +615,7 @@ export function computeFacts(
   facts.worstVswr = rounded(gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null);
   facts.worstVswrAtMhz = rounded(gammaStats ? mhz(gammaStats.max.atHz) : null);
   facts.worstReturnLossDb = rounded(gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null);
+  facts.efficiencyFromBandAverage = efficiencies.some((s, i) => s !== null && s.source === 'spec' && statesOnlyAverage(part.specBands, ranges[i]));
   facts.minRadiationEfficiencyPct = rounded(radiation ? radiation.min.value : null);
   facts.minRadiationEfficiencyAtMhz = rounded(radiation ? mhz(radiation.min.atHz) : null);
   facts.avgRadiationEfficiencyPct = rounded(radiation ? radiation.average : null);

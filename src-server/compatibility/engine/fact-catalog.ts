@@ -54,6 +54,11 @@ export const FACT_CATALOG = {
   minTotalEfficiencyAtMhz: pair('number', 'mhz', 'frequency of the lowest total efficiency'),
   avgTotalEfficiencyPct: pair('number', 'percent', 'total efficiency averaged over the band (linear power)'),
   avgTotalEfficiencyDb: pair('number', 'db', 'average total efficiency in dB'),
+  efficiencyFromBandAverage: pair(
+    'boolean',
+    'none',
+    "whether some range's efficiency comes from a datasheet figure stated as the band's average: its minimum is then not known, and the average stands for it",
+  ),
   minSystemEfficiencyPct: pair('number', 'percent', 'lowest efficiency at the radio port: total efficiency × 10^(−feed loss/10)'),
   minSystemEfficiencyAtMhz: pair('number', 'mhz', 'frequency of the lowest efficiency at the radio port'),
   avgSystemEfficiencyPct: pair('number', 'percent', 'efficiency at the radio port averaged over the band (linear power)'),

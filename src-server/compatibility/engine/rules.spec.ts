@@ -176,6 +176,17 @@ describe('efficiency-floor', () => {
     expect(total.finding).toBeUndefined();
   });
 
+  it('says when the efficiency is a datasheet band average rather than a minimum', () => {
+    const line = (efficiencyStatistic: 'minimum' | 'average') =>
+      constructedPart(
+        {},
+        { reflection: null, efficiencyPercent: null, specBands: [specBand(690, 760, { maxVswr: 2, efficiencyPercent: 40, efficiencyStatistic })] },
+      );
+    expect(computeFacts(lte(), line('average')).efficiencyFromBandAverage).toBe(true);
+    expect(computeFacts(lte(), line('minimum')).efficiencyFromBandAverage).toBe(false);
+    expect(computeFacts(lte(), constructedPart()).efficiencyFromBandAverage).toBe(false);
+  });
+
   it('reads each datasheet line by its own basis', async () => {
     const line = (efficiencyBasis: 'radiation' | 'total') =>
       constructedPart(
