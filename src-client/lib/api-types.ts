@@ -1975,6 +1975,11 @@ export interface components {
             minReturnLossDb: number | null;
             /** @enum {string} */
             efficiencySource: "measured" | "spec" | "no-data";
+            /**
+             * @description What the efficiency figures include, as the data states it (radiation: mismatch left out; total: included); null without figures
+             * @enum {string|null}
+             */
+            efficiencyBasis: "radiation" | "total" | "mixed" | null;
             minEfficiencyPct: number | null;
             averageEfficiencyPct: number | null;
             averageEfficiencyDb: number | null;

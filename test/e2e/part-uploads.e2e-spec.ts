@@ -268,6 +268,9 @@ describe('part measurements and documents (API)', () => {
       expect(s11.body.measurement.basis).toBeNull();
       const detail = await http().get(`/api/parts/${draft.id}`).set(as('engineer')).expect(200);
       expect(detail.body.measurements.map((m: { basis: string | null }) => m.basis).sort()).toEqual([null, 'radiation', 'realized', 'total'].sort());
+      // The newest efficiency curve is the one figures and checks use, and the figures say what it includes.
+      const figures = await http().get(`/api/parts/${draft.id}`).query({ ranges: '700-800' }).set(as('engineer')).expect(200);
+      expect(figures.body.figures[0]).toMatchObject({ efficiencySource: 'measured', efficiencyBasis: 'total', minEfficiencyPct: 40 });
     });
 
     it('peak and average gain CSV in dBi', async () => {

@@ -294,6 +294,7 @@ export class PartsService {
     const partCurves = {
       s11: curves?.s11?.curve ?? null,
       efficiencyPercent: curves?.efficiency?.curve ?? null,
+      efficiencyBasis: curves?.efficiency?.basis ?? null,
       peakGainDbi: curves?.peakGain?.curve ?? null,
       averageGainDbi: curves?.averageGain?.curve ?? null,
       specBands: specBands.map(specBandClaim),

@@ -123,6 +123,12 @@ export class RangeFiguresDto {
   @ApiProperty({ type: Number, nullable: true }) worstVswrAtMhz: number | null;
   @ApiProperty({ type: Number, nullable: true }) minReturnLossDb: number | null;
   @ApiProperty({ enum: ['measured', 'spec', 'no-data'] }) efficiencySource: 'measured' | 'spec' | 'no-data';
+  @ApiProperty({
+    enum: ['radiation', 'total', 'mixed'],
+    nullable: true,
+    description: 'What the efficiency figures include, as the data states it (radiation: mismatch left out; total: included); null without figures',
+  })
+  efficiencyBasis: EfficiencyBasis | 'mixed' | null;
   @ApiProperty({ type: Number, nullable: true }) minEfficiencyPct: number | null;
   @ApiProperty({ type: Number, nullable: true }) averageEfficiencyPct: number | null;
   @ApiProperty({ type: Number, nullable: true }) averageEfficiencyDb: number | null;

@@ -98,7 +98,10 @@ export function PartCurves({ part, overlays }: PartCurvesProps) {
               <td>{fmt(f.worstVswr)}</td>
               <td>{fmt(f.worstVswrAtMhz, 1)}</td>
               <td>{fmt(f.minReturnLossDb, 1)}</td>
-              <td>{f.efficiencySource}</td>
+              <td>
+                {f.efficiencySource}
+                {f.efficiencyBasis && <span className="bw-muted">{` (${f.efficiencyBasis})`}</span>}
+              </td>
               <td>{fmt(f.minEfficiencyPct, 1)}</td>
               <td>{fmt(f.averageEfficiencyPct, 1)}</td>
               <td>{fmt(f.peakGainDbi, 1)}</td>
