@@ -1983,6 +1983,21 @@ export interface components {
         Lifecycle: "active" | "nrnd" | "eol";
         /** @enum {string} */
         ReviewState: "draft" | "in-review" | "approved" | "restricted" | "retired";
+        /**
+         * @description radiation: mismatch left out; total: mismatch included
+         * @enum {string}
+         */
+        EfficiencyBasis: "radiation" | "total";
+        /**
+         * @description efficiencyPct is the band's minimum or its average
+         * @enum {string}
+         */
+        FigureStatistic: "minimum" | "average";
+        /**
+         * @description peak: the antenna's gain, mismatch left out; realized: mismatch included
+         * @enum {string}
+         */
+        GainBasis: "peak" | "realized";
         SpecBandDto: {
             id: number;
             fromMhz: number;
@@ -1990,12 +2005,25 @@ export interface components {
             maxVswr: number | null;
             minReturnLossDb: number | null;
             efficiencyPct: number | null;
+            /** @description radiation: mismatch left out; total: mismatch included */
+            efficiencyBasis: components["schemas"]["EfficiencyBasis"];
+            /** @description efficiencyPct is the band's minimum or its average */
+            efficiencyStatistic: components["schemas"]["FigureStatistic"];
             peakGainDbi: number | null;
             averageGainDbi: number | null;
+            /** @description peak: the antenna's gain, mismatch left out; realized: mismatch included */
+            gainBasis: components["schemas"]["GainBasis"];
         };
+        /**
+         * @description efficiency: radiation or total; gains: peak or realized; null for s11
+         * @enum {string}
+         */
+        MeasurementBasis: "radiation" | "total" | "peak" | "realized";
         MeasurementDto: {
             id: number;
             kind: components["schemas"]["MeasurementKind"];
+            /** @description efficiency: radiation or total; gains: peak or realized; null for s11 */
+            basis: components["schemas"]["MeasurementBasis"] | null;
             groundLengthMm: number | null;
             groundWidthMm: number | null;
             conditions: string | null;
@@ -2024,6 +2052,11 @@ export interface components {
             minReturnLossDb: number | null;
             /** @enum {string} */
             efficiencySource: "measured" | "spec" | "no-data";
+            /**
+             * @description What the efficiency figures include, as the data states it (radiation: mismatch left out; total: included); null without figures
+             * @enum {string|null}
+             */
+            efficiencyBasis: "radiation" | "total" | "mixed" | null;
             minEfficiencyPct: number | null;
             averageEfficiencyPct: number | null;
             averageEfficiencyDb: number | null;
@@ -2170,10 +2203,16 @@ export interface components {
             minReturnLossDb?: number | null;
             /** @example 45 */
             efficiencyPct?: number | null;
+            /** @description What efficiencyPct includes: radiation (mismatch left out) or total (mismatch included); default total, as most datasheets quote */
+            efficiencyBasis?: components["schemas"]["EfficiencyBasis"];
+            /** @description Whether efficiencyPct is the band's minimum or its average; default average, as most datasheets quote */
+            efficiencyStatistic?: components["schemas"]["FigureStatistic"];
             /** @example 1.5 */
             peakGainDbi?: number | null;
             /** @example -2 */
             averageGainDbi?: number | null;
+            /** @description What the gains include: peak (the antenna's gain, mismatch left out) or realized (mismatch included); default peak */
+            gainBasis?: components["schemas"]["GainBasis"];
         };
         CreatePartDto: {
             /** @example SMD 1.6 mm reflow */
@@ -4891,6 +4930,11 @@ export interface operations {
                     file: string;
                     /** @enum {string} */
                     kind: "s11" | "efficiency" | "peak-gain" | "average-gain";
+                    /**
+                     * @description Required for efficiency (radiation: mismatch left out; total: mismatch included) and gains (peak: the antenna gain; realized: mismatch included); left out for s11. 400 VALIDATION_FAILED naming `basis` when missing or not of the kind
+                     * @enum {string}
+                     */
+                    basis?: "radiation" | "total" | "peak" | "realized";
                     groundLengthMm?: number;
                     groundWidthMm?: number;
                     conditions?: string;

@@ -192,6 +192,7 @@ export async function seedBenchCatalogue(dataSource: DataSource, count = 10_000)
   const measurementColumns = [
     'part_id',
     'kind',
+    'basis',
     'file_name',
     'content_type',
     'object_key',
@@ -217,6 +218,7 @@ export async function seedBenchCatalogue(dataSource: DataSource, count = 10_000)
             [
               p.id,
               's11',
+              null,
               `${p.mpn}.s1p`,
               'text/plain',
               `bench/${p.id}.s1p`,
@@ -245,6 +247,7 @@ export async function seedBenchCatalogue(dataSource: DataSource, count = 10_000)
             [
               p.id,
               'efficiency',
+              'radiation',
               `${p.mpn}-efficiency.csv`,
               'text/csv',
               `bench/${p.id}.csv`,

@@ -13,7 +13,7 @@ import { touchPart } from './catalogue-revision';
 import { PartsService } from './catalogue/parts.service';
 import { SourcingService } from './sourcing/sourcing.service';
 import { demoAccountId } from '../users/demo-users.seed';
-import type { DemoOffer } from './demo/demo-catalogue';
+import { DEMO_CURVE_BASES, DEMO_SPEC_BASES, type DemoOffer } from './demo/demo-catalogue';
 import type { DocumentKind, Lifecycle, MeasurementKind, ReviewState } from './part.types';
 import type { CreatePartDto } from './dto/part-input.dto';
 
@@ -71,7 +71,14 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
       tempMaxC: 85,
       lifecycle: p.lifecycle,
       notes: p.notes,
-      specBands: p.specBands.map(([fromMhz, toMhz, maxVswr, efficiencyPct, peakGainDbi]) => ({ fromMhz, toMhz, maxVswr, efficiencyPct, peakGainDbi })),
+      specBands: p.specBands.map(([fromMhz, toMhz, maxVswr, efficiencyPct, peakGainDbi]) => ({
+        fromMhz,
+        toMhz,
+        maxVswr,
+        efficiencyPct,
+        peakGainDbi,
+        ...DEMO_SPEC_BASES,
+      })),
     };
     await dataSource.transaction(async (manager) => {
       await parts.createIn(manager, input, engineerId, 'seeded', p.id);
@@ -98,6 +105,7 @@ export async function seedDemoParts(dataSource: DataSource, config: AppConfig): 
       // Radiated data is taken on the evaluation board; flex and external parts in free space.
       const input = {
         kind: curve.kind,
+        basis: curve.kind === 's11' ? undefined : DEMO_CURVE_BASES[curve.kind],
         groundLengthMm: p.evalGround?.[0],
         groundWidthMm: p.evalGround?.[1],
         conditions: p.evalGround ? 'Evaluation board, anechoic chamber (invented demo data)' : 'Free space, anechoic chamber (invented demo data)',

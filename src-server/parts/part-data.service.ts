@@ -5,7 +5,7 @@ import type { SampledCurve } from '../rf/curves';
 import type { ReflectionCurve } from '../rf/reflection';
 import { type GroundPlane, loadCurrentCurves } from './measurements/measurement-curves';
 import { specBandClaim } from './part-mapping';
-import type { Connector, FormFactor, Lifecycle, PartPolarization, ReviewState } from './part.types';
+import type { Connector, EfficiencyBasis, FormFactor, GainBasis, Lifecycle, PartPolarization, ReviewState } from './part.types';
 import type { SpecBandClaim } from './spec-coverage';
 
 /** Everything the rules engine needs about one part, curves included (newest measurement of each kind). */
@@ -26,11 +26,11 @@ export interface PartEvaluationData {
   specBands: SpecBandClaim[];
   /** Complex Γ over frequency (RF module's ReflectionCurve, |Γ| included) and the ground plane it was measured on. */
   s11: { measurementId: number; groundPlane: GroundPlane; curve: ReflectionCurve } | null;
-  /** Radiation efficiency in %. */
-  efficiency: { measurementId: number; groundPlane: GroundPlane; curve: SampledCurve } | null;
-  /** dBi. */
-  peakGain: { measurementId: number; groundPlane: GroundPlane; curve: SampledCurve } | null;
-  averageGain: { measurementId: number; groundPlane: GroundPlane; curve: SampledCurve } | null;
+  /** Efficiency in %, radiation or total as `basis` says. */
+  efficiency: { measurementId: number; groundPlane: GroundPlane; curve: SampledCurve; basis: EfficiencyBasis } | null;
+  /** dBi, peak or realized as `basis` says. */
+  peakGain: { measurementId: number; groundPlane: GroundPlane; curve: SampledCurve; basis: GainBasis } | null;
+  averageGain: { measurementId: number; groundPlane: GroundPlane; curve: SampledCurve; basis: GainBasis } | null;
 }
 
 interface Row {
@@ -79,7 +79,7 @@ export class PartDataService {
     const ids = rows.map((r) => r.id);
     const [bands, curves] = await Promise.all([
       manager.query(
-        `SELECT part_id, from_mhz AS fromMhz, to_mhz AS toMhz, max_vswr AS maxVswr, min_return_loss_db AS minReturnLossDb, efficiency_pct AS efficiencyPct,
+        `SELECT part_id, from_mhz AS fromMhz, to_mhz AS toMhz, max_vswr AS maxVswr, min_return_loss_db AS minReturnLossDb, efficiency_pct AS efficiencyPct, efficiency_basis AS efficiencyBasis, efficiency_statistic AS efficiencyStatistic, gain_basis AS gainBasis,
                 peak_gain_dbi AS peakGainDbi, average_gain_dbi AS averageGainDbi FROM part_spec_bands WHERE part_id IN (?) ORDER BY part_id, from_mhz`,
         [ids],
       ),

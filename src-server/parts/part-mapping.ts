@@ -15,20 +15,38 @@ export const specBandDto = (band: SpecBand): SpecBandDto => ({
   maxVswr: band.maxVswr,
   minReturnLossDb: band.minReturnLossDb,
   efficiencyPct: band.efficiencyPct,
+  efficiencyBasis: band.efficiencyBasis,
+  efficiencyStatistic: band.efficiencyStatistic,
   peakGainDbi: band.peakGainDbi,
   averageGainDbi: band.averageGainDbi,
+  gainBasis: band.gainBasis,
 });
 
 export const specBandClaim = (
-  band: Pick<SpecBand, 'fromMhz' | 'toMhz' | 'maxVswr' | 'minReturnLossDb' | 'efficiencyPct' | 'peakGainDbi' | 'averageGainDbi'>,
+  band: Pick<
+    SpecBand,
+    | 'fromMhz'
+    | 'toMhz'
+    | 'maxVswr'
+    | 'minReturnLossDb'
+    | 'efficiencyPct'
+    | 'efficiencyBasis'
+    | 'efficiencyStatistic'
+    | 'peakGainDbi'
+    | 'averageGainDbi'
+    | 'gainBasis'
+  >,
 ): SpecBandClaim => ({
   fromHz: band.fromMhz * 1e6,
   toHz: band.toMhz * 1e6,
   maxVswr: band.maxVswr ?? null,
   minReturnLossDb: band.minReturnLossDb ?? null,
   efficiencyPct: band.efficiencyPct ?? null,
+  efficiencyBasis: band.efficiencyBasis,
+  efficiencyStatistic: band.efficiencyStatistic,
   peakGainDbi: band.peakGainDbi ?? null,
   averageGainDbi: band.averageGainDbi ?? null,
+  gainBasis: band.gainBasis,
 });
 
 /** The text the search matches: manufacturer, MPN, title and notes. */

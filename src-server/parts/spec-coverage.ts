@@ -1,5 +1,6 @@
 import type { FrequencyRange } from '../rf/curves';
 import { vswrFromReturnLossDb } from '../rf/mismatch';
+import type { EfficiencyBasis, FigureStatistic, GainBasis } from '../rf/figure-basis';
 
 /** A datasheet band in Hz, as the search index and the figures use it. */
 export interface SpecBandClaim {
@@ -8,8 +9,11 @@ export interface SpecBandClaim {
   readonly maxVswr: number | null;
   readonly minReturnLossDb: number | null;
   readonly efficiencyPct: number | null;
+  readonly efficiencyBasis: EfficiencyBasis;
+  readonly efficiencyStatistic: FigureStatistic;
   readonly peakGainDbi: number | null;
   readonly averageGainDbi: number | null;
+  readonly gainBasis: GainBasis;
 }
 
 /** The VSWR a spec band promises: its max VSWR, else the one its minimum return loss implies, else unknown. */

@@ -118,7 +118,9 @@ describe('compatibility (API)', () => {
       const [ble] = cellsOf(matrix, TRACKER_BLE, LOW_EFFICIENCY_CHIP);
       expect(ble.status).toBe('fail');
       const floor = ble.findings.find((f) => f.code === 'EFFICIENCY_BELOW_FLOOR')!;
-      expect(floor.message).toMatch(/^total efficiency falls to [\d.]+ % at [\d.]+ MHz; the floor for ble is 30 %$/);
+      expect(floor.message).toMatch(
+        /^efficiency at the radio port falls to [\d.]+ % at [\d.]+ MHz \(antenna total efficiency [\d.]+ %, feed loss [\d.]+ dB\); the floor for ble is 30 %$/,
+      );
       // The linear GNSS chip costs about 3 dB on the RHCP signal (Balanis §2.12): marginal on every GNSS band.
       const gnss = cellsOf(matrix, TRACKER_GNSS, LINEAR_GNSS_CHIP);
       expect(gnss.length).toBeGreaterThan(0);
@@ -187,6 +189,91 @@ describe('compatibility (API)', () => {
       expect(good.status).toBe('pass');
       expect(good.deciding!.text).toMatch(/dB inside\)$/);
       expect(candidates.find((c) => c.partId === LOW_EFFICIENCY_CHIP)).toMatchObject({ status: 'fail', assignment: 'chosen' });
+    });
+  });
+
+  describe('figures that mean what they say', () => {
+    /** A product of our own with one LTE radio on band 8 behind `feedLossDb` of cable. */
+    async function ownB8Product(feedLossDb: number): Promise<number> {
+      const bands = await http().get('/api/bands').query({ designation: 'B8' }).set(as('engineer')).expect(200);
+      const product = await http()
+        .post('/api/products')
+        .set(as('engineer'))
+        .send({
+          name: unique('basis test'),
+          code: unique('BT').slice(0, 40),
+          owner: 'e2e',
+          groundPlaneLengthMm: 120,
+          groundPlaneWidthMm: 60,
+          targetRegions: ['EU'],
+        })
+        .expect(201);
+      await http()
+        .post(`/api/products/${product.body.id}/radios`)
+        .set(as('engineer'))
+        .send({
+          name: 'LTE',
+          technology: 'lte',
+          module: 'test module',
+          transmitPowerDbm: 23,
+          polarization: 'linear',
+          connector: 'SMA',
+          feedLossDb,
+          bands: [{ bandId: bands.body[0].id, certifiedMaxGainDbi: 5 }],
+        })
+        .expect(201);
+      return product.body.id;
+    }
+    const draft = async (specBands: Record<string, unknown>[]) =>
+      (
+        await http()
+          .post('/api/parts')
+          .set(as('engineer'))
+          .send({
+            manufacturer: 'Testbench Antennas',
+            mpn: unique('BASIS'),
+            title: 'basis test part',
+            formFactor: 'chip',
+            connector: 'SMA',
+            polarization: 'linear',
+            specBands,
+          })
+          .expect(201)
+      ).body as { id: number; mpn: string };
+    const findingCodes = async (productId: number, partId: number) => {
+      const matrix: Matrix = (
+        await http()
+          .get(`/api/products/${productId}/matrix`)
+          .query({ parts: String(partId) })
+          .set(as('engineer'))
+          .expect(200)
+      ).body;
+      return matrix.cells.flatMap((c) => c.findings);
+    };
+
+    it('search and matrix agree on a part that covers both B8 ranges but not the duplex gap between them', async () => {
+      // 3GPP TS 36.101 Table 5.5-1: band 8 UL 880–915 MHz, DL 925–960 MHz.
+      const part = await draft([
+        { fromMhz: 880, toMhz: 915, maxVswr: 2, efficiencyPct: 50, efficiencyBasis: 'total' },
+        { fromMhz: 925, toMhz: 960, maxVswr: 2, efficiencyPct: 50, efficiencyBasis: 'total' },
+      ]);
+      const found = await http().get('/api/parts').query({ q: part.mpn, covers: '880-915,925-960', minEfficiencyPct: 50 }).set(as('engineer')).expect(200);
+      expect(found.body.total).toBe(1);
+      const findings = await findingCodes(await ownB8Product(0), part.id);
+      const codes = findings.map((f) => f.code);
+      expect(codes).not.toContain('BAND_NOT_COVERED');
+      expect(codes).not.toContain('VSWR_ABOVE_TARGET');
+      expect(codes).not.toContain('EFFICIENCY_BELOW_FLOOR');
+    });
+
+    it('judges the efficiency floor at the radio port: 21 % total behind 1.5 dB of cable is 14.87 %, under the 15 % LTE floor', async () => {
+      // System efficiency = total × 10^(−L/10) = 21 % × 0.70795 = 14.867 % (definition); floor 15 % for LTE (common practice).
+      const part = await draft([{ fromMhz: 870, toMhz: 970, maxVswr: 1.5, efficiencyPct: 21, efficiencyBasis: 'total', efficiencyStatistic: 'minimum' }]);
+      const fed = (await findingCodes(await ownB8Product(1.5), part.id)).find((f) => f.code === 'EFFICIENCY_BELOW_FLOOR');
+      expect(fed).toMatchObject({ severity: 'fail' });
+      expect(fed!.message).toMatch(/^efficiency at the radio port falls to 14\.87 % at [\d.]+ MHz \(antenna total efficiency 21 %, feed loss 1\.5 dB\)/);
+      const direct = await findingCodes(await ownB8Product(0), part.id);
+      expect(direct.map((f) => f.code)).not.toContain('EFFICIENCY_BELOW_FLOOR');
     });
   });
 

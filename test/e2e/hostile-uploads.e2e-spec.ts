@@ -5,7 +5,7 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { loadConfig } from '../../src-server/config/app-config';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
-import { createDraft, storedFilesOf, csvCurve, s1pWithGamma } from '../support/parts';
+import { basisFields, createDraft, storedFilesOf, csvCurve, s1pWithGamma } from '../support/parts';
 
 jest.setTimeout(120_000);
 
@@ -23,7 +23,7 @@ describe('bounded parsers of uploaded files (API)', () => {
   const storedOf = (partId: number) => storedFilesOf(app, s3, config.s3.bucket, partId);
   const upload = (partId: number, kind: string, name: string, content: string | Buffer, fields: Record<string, string> = {}) => {
     let req = http().post(`/api/parts/${partId}/measurements`).set(auth()).field('kind', kind);
-    for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+    for (const [k, v] of Object.entries({ ...basisFields(kind), ...fields })) req = req.field(k, v);
     return req.attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content), name);
   };
   /** "Check file" and the real upload answer the same for a bad file, and nothing is stored. */

@@ -3,7 +3,7 @@ import { getDataSourceToken } from '@nestjs/typeorm';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { createApiApp, demoTokens, type DemoRole, unique } from '../support/api-app';
-import { createDraft, csvCurve, s1pWithGamma } from '../support/parts';
+import { basisFields, createDraft, csvCurve, s1pWithGamma } from '../support/parts';
 import { BACKFILL_PRODUCT_CREATORS } from '../../src-server/database/migrations/1765310000000-ownership-and-locking';
 
 type Method = 'get' | 'post' | 'patch' | 'delete' | 'put';
@@ -225,7 +225,7 @@ describe('data ownership and edits (API)', () => {
       http()
         .post(`/api/parts/${partId}/measurements`)
         .set('Authorization', `Bearer ${tokens.engineer}`)
-        .field('kind', kind)
+        .field({ kind, ...basisFields(kind) })
         .attach('file', Buffer.from(content), { filename: name, contentType: declaredType });
 
     it('serves a Touchstone file as text/plain and a CSV as text/csv, never as the uploader declared, with nosniff and as an attachment', async () => {

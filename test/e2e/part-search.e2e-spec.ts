@@ -1,7 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
-import { createDraft, csvCurve, s1pWithGamma } from '../support/parts';
+import { basisFields, createDraft, csvCurve, s1pWithGamma } from '../support/parts';
 
 type Role = 'admin' | 'engineer' | 'procurement';
 
@@ -15,7 +15,12 @@ describe('catalogue search, coverage filter and CSV (API)', () => {
   const ids: Record<string, number> = {};
 
   const upload = (id: number, kind: string, name: string, content: string) =>
-    http().post(`/api/parts/${id}/measurements`).set(as('engineer')).field('kind', kind).attach('file', Buffer.from(content), name).expect(201);
+    http()
+      .post(`/api/parts/${id}/measurements`)
+      .set(as('engineer'))
+      .field({ kind, ...basisFields(kind) })
+      .attach('file', Buffer.from(content), name)
+      .expect(201);
   const search = async (query: Record<string, string | number>, role: Role = 'engineer') => {
     const res = await http()
       .get('/api/parts')

@@ -7,7 +7,7 @@ import { getDataSourceToken } from '@nestjs/typeorm';
 import { loadConfig } from '../../src-server/config/app-config';
 import { writeTouchstone } from '../../src-server/rf/touchstone-writer';
 import { createApiApp, demoTokens } from '../support/api-app';
-import { createDraft, csvCurve, s1pWithGamma } from '../support/parts';
+import { basisFields, createDraft, csvCurve, s1pWithGamma } from '../support/parts';
 
 type Role = 'admin' | 'engineer' | 'procurement';
 
@@ -31,7 +31,8 @@ describe('part measurements and documents (API)', () => {
   };
   const upload = (partId: number, role: Role, kind: string, name: string, content: string | Buffer, fields: Record<string, string> = {}) => {
     let req = http().post(`/api/parts/${partId}/measurements`).set(as(role)).field('kind', kind);
-    for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+    // A test that names `basis` (even as '') sends its own; '' sends none.
+    for (const [k, v] of Object.entries({ ...basisFields(kind), ...fields })) if (v !== '') req = req.field(k, v);
     return req.attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content), name);
   };
 
@@ -205,6 +206,71 @@ describe('part measurements and documents (API)', () => {
       ).expect(201);
       expect(ratio.body.preview.values[0]).toBeCloseTo(40, 9);
       expect(ratio.body.preview.values[1]).toBeCloseTo(55, 9);
+    });
+
+    it('refuses an efficiency or gain curve without its basis, or with the basis of the other kind, naming the field basis; nothing is stored', async () => {
+      const draft = await createDraft(app, tokens.engineer);
+      const eff = csvCurve('frequency (MHz),efficiency (%)', [
+        [700, 40],
+        [800, 45],
+      ]);
+      const gain = csvCurve('frequency (MHz),peak gain (dBi)', [
+        [700, 1],
+        [800, 2],
+      ]);
+      const s11 = s1pWithGamma([
+        [800, 0.2],
+        [900, 0.3],
+      ]);
+      const fieldsOf = (body: { fields: { field: string }[] }) => body.fields.map((f) => f.field);
+      for (const [kind, name, content, fields] of [
+        ['efficiency', 'none.csv', eff, { basis: '' }],
+        ['efficiency', 'none-check.csv', eff, { basis: '', dryRun: 'true' }],
+        ['efficiency', 'peak.csv', eff, { basis: 'peak' }],
+        ['efficiency', 'typo.csv', eff, { basis: 'radiated' }],
+        ['peak-gain', 'none.csv', gain, { basis: '' }],
+        ['peak-gain', 'total.csv', gain, { basis: 'total' }],
+        ['average-gain', 'radiation.csv', gain, { basis: 'radiation' }],
+        ['s11', 'basis.s1p', s11, { basis: 'total' }],
+      ] as const) {
+        const res = await upload(draft.id, 'engineer', kind, name, content, fields).expect(400);
+        expect(res.body.code).toBe('VALIDATION_FAILED');
+        expect(fieldsOf(res.body)).toEqual(['basis']);
+      }
+      expect(await rowsOf(draft.id)).toBe(0);
+      expect(await objectsOf(draft.id)).toBe(0);
+    });
+
+    it('stores and shows the basis each curve states: radiation or total efficiency, peak or realized gain', async () => {
+      const draft = await createDraft(app, tokens.engineer);
+      const eff = csvCurve('frequency (MHz),efficiency (%)', [
+        [700, 40],
+        [800, 45],
+      ]);
+      const radiation = await upload(draft.id, 'engineer', 'efficiency', 'r.csv', eff, { basis: 'radiation' }).expect(201);
+      expect(radiation.body.measurement).toMatchObject({ kind: 'efficiency', basis: 'radiation' });
+      const total = await upload(draft.id, 'engineer', 'efficiency', 't.csv', eff, { basis: 'total' }).expect(201);
+      expect(total.body.measurement.basis).toBe('total');
+      const realized = await upload(draft.id, 'engineer', 'peak-gain', 'g.csv', 'frequency (MHz),peak gain (dBi)\n700,1\n800,2\n', {
+        basis: 'realized',
+      }).expect(201);
+      expect(realized.body.measurement).toMatchObject({ kind: 'peak-gain', basis: 'realized' });
+      const s11 = await upload(
+        draft.id,
+        'engineer',
+        's11',
+        'a.s1p',
+        s1pWithGamma([
+          [800, 0.2],
+          [900, 0.3],
+        ]),
+      ).expect(201);
+      expect(s11.body.measurement.basis).toBeNull();
+      const detail = await http().get(`/api/parts/${draft.id}`).set(as('engineer')).expect(200);
+      expect(detail.body.measurements.map((m: { basis: string | null }) => m.basis).sort()).toEqual([null, 'radiation', 'realized', 'total'].sort());
+      // The newest efficiency curve is the one figures and checks use, and the figures say what it includes.
+      const figures = await http().get(`/api/parts/${draft.id}`).query({ ranges: '700-800' }).set(as('engineer')).expect(200);
+      expect(figures.body.figures[0]).toMatchObject({ efficiencySource: 'measured', efficiencyBasis: 'total', minEfficiencyPct: 40 });
     });
 
     it('peak and average gain CSV in dBi', async () => {

@@ -161,6 +161,68 @@ describe('parts: CRUD, lifecycle, permissions (API)', () => {
     });
   });
 
+  describe('PATCH /api/parts/:id spec band bases', () => {
+    it('refuses a basis outside its enumeration, naming the field', async () => {
+      const draft = await createDraft(app, tokens.engineer);
+      for (const [field, value] of [
+        ['efficiencyBasis', 'peak'],
+        ['efficiencyStatistic', 'median'],
+        ['gainBasis', 'total'],
+      ]) {
+        const res = await http()
+          .patch(`/api/parts/${draft.id}`)
+          .set(as('engineer'))
+          .send({ version: 1, specBands: [{ fromMhz: 2400, toMhz: 2483.5, efficiencyPct: 50, [field]: value }] })
+          .expect(400);
+        expect(res.body.fields.map((f: { field: string }) => f.field)).toEqual([`specBands.0.${field}`]);
+      }
+    });
+
+    it('stores the basis each datasheet line states, and the usual one (total, average, peak) where it states none', async () => {
+      const draft = await createDraft(app, tokens.engineer);
+      const res = await http()
+        .patch(`/api/parts/${draft.id}`)
+        .set(as('engineer'))
+        .send({
+          version: 1,
+          specBands: [
+            {
+              fromMhz: 791,
+              toMhz: 862,
+              maxVswr: 3,
+              efficiencyPct: 40,
+              efficiencyBasis: 'radiation',
+              efficiencyStatistic: 'minimum',
+              peakGainDbi: 1,
+              gainBasis: 'realized',
+            },
+            { fromMhz: 880, toMhz: 960, maxVswr: 3, efficiencyPct: 40 },
+          ],
+        })
+        .expect(200);
+      expect(res.body.specBands).toEqual([
+        expect.objectContaining({ fromMhz: 791, efficiencyBasis: 'radiation', efficiencyStatistic: 'minimum', gainBasis: 'realized' }),
+        expect.objectContaining({ fromMhz: 880, efficiencyBasis: 'total', efficiencyStatistic: 'average', gainBasis: 'peak' }),
+      ]);
+      // The part page reads the same figures: 40 % radiation at VSWR 3 is 30 % total, 40 % total stays 40 %
+      // (|Γ| = (VSWR − 1)/(VSWR + 1) = 0.5, 1 − |Γ|² = 0.75; Pozar, Microwave Engineering 4th ed. §2.3).
+      const radiation = await http()
+        .get('/api/parts')
+        .query({ q: draft.mpn, covers: '791-862', vswrMax: 3, minEfficiencyPct: 30 })
+        .set(as('engineer'))
+        .expect(200);
+      expect(radiation.body.total).toBe(1);
+      const under = await http()
+        .get('/api/parts')
+        .query({ q: draft.mpn, covers: '791-862', vswrMax: 3, minEfficiencyPct: 30.01 })
+        .set(as('engineer'))
+        .expect(200);
+      expect(under.body.total).toBe(0);
+      const total = await http().get('/api/parts').query({ q: draft.mpn, covers: '880-960', vswrMax: 3, minEfficiencyPct: 40 }).set(as('engineer')).expect(200);
+      expect(total.body.total).toBe(1);
+    });
+  });
+
   describe('review lifecycle and e-mail', () => {
     it('submit → admins get a mail; approve → the submitter gets a mail; the part leaves the queue', async () => {
       const draft = await createDraft(app, tokens.engineer, { title: 'Lifecycle happy path' });

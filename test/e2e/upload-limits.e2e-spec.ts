@@ -7,7 +7,7 @@ import { loadConfig } from '../../src-server/config/app-config';
 import { MEASUREMENT_MAX_BYTES } from '../../src-server/parts/measurements/measurements.service';
 import { PART_IMPORT_MAX_BYTES } from '../../src-server/parts/import-export/part-csv.service';
 import { createApiApp, demoTokens, unique } from '../support/api-app';
-import { createDraft, storedFilesOf, s1pWithGamma } from '../support/parts';
+import { basisFields, createDraft, storedFilesOf, s1pWithGamma } from '../support/parts';
 
 // PNG file signature (ISO/IEC 15948 §5.2): binary, contains NUL bytes.
 const PNG = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]), Buffer.from('IHDR')]);
@@ -53,7 +53,12 @@ describe('upload size and type limits on every multipart route', () => {
         ['s11', 'disguised.s1p'],
         ['efficiency', 'disguised.csv'],
       ]) {
-        const res = await http().post(`/api/parts/${draft.id}/measurements`).set(auth()).field('kind', kind).attach('file', PNG, name).expect(415);
+        const res = await http()
+          .post(`/api/parts/${draft.id}/measurements`)
+          .set(auth())
+          .field({ kind, ...basisFields(kind) })
+          .attach('file', PNG, name)
+          .expect(415);
         expect(res.body).toMatchObject({ code: 'MEASUREMENT_TYPE_NOT_ALLOWED', field: 'file' });
       }
       expect(await storedOf(draft.id)).toEqual({ rows: 0, objects: 0 });

@@ -50,3 +50,12 @@ export async function storedFilesOf(app: INestApplication, s3: S3Client, bucket:
   const objects = (await s3.send(new ListObjectsV2Command({ Bucket: bucket, Prefix: `parts/${partId}/` }))).KeyCount ?? 0;
   return { rows: Number(m.n) + Number(d.n), objects };
 }
+
+/** The basis an upload of each kind states in the tests unless a test says otherwise: total efficiency, peak gain; none for s11. */
+const TEST_BASIS: Record<string, string | undefined> = { efficiency: 'total', 'peak-gain': 'peak', 'average-gain': 'peak' };
+
+/** The multipart field `basis` for a kind, as the upload form sends it (nothing for s11 or an unknown kind). */
+export function basisFields(kind: string): Record<string, string> {
+  const basis = TEST_BASIS[kind];
+  return basis ? { basis } : {};
+}

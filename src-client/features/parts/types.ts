@@ -22,6 +22,10 @@ export type Polarization = Schemas['PartPolarization'];
 export type Lifecycle = Schemas['Lifecycle'];
 export type ReviewState = Schemas['ReviewState'];
 export type MeasurementKind = Schemas['MeasurementKind'];
+export type MeasurementBasis = Schemas['MeasurementBasis'];
+export type EfficiencyBasis = Schemas['EfficiencyBasis'];
+export type GainBasis = Schemas['GainBasis'];
+export type FigureStatistic = Schemas['FigureStatistic'];
 export type DocumentKind = Schemas['DocumentKind'];
 export type AlternateKind = Schemas['AlternateKind'];
 

@@ -13,7 +13,16 @@ import {
 } from '../../rf/curves';
 import { type ReflectionCurve, matchedRanges } from '../../rf/reflection';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, returnLossDbFromGammaMagnitude, vswrFromGammaMagnitude } from '../../rf/mismatch';
-import { eirpDbm, erpDbmFromEirpDbm, polarizationLossDb, realizedGainDbi, totalEfficiency } from '../../rf/link-budget';
+import { eirpDbm, erpDbmFromEirpDbm, polarizationLossDb, totalEfficiency } from '../../rf/link-budget';
+import {
+  type GainBasis,
+  efficiencyNeedsGamma,
+  gainNeedsGamma,
+  gainOfBasis,
+  realizedGainAtRadioPortDbi,
+  systemEfficiency,
+  totalEfficiencyOfBasis,
+} from '../../rf/figure-basis';
 import { powerRatioToDb, wavelengthFractionMm } from '../../rf/units';
 import { FACT_CATALOG, FACT_NAMES, type FactName } from './fact-catalog';
 import type { BandRange, FactValue, Facts, PartEvaluationData, RadioBandRequirement, SpecBand } from './types';
@@ -74,7 +83,7 @@ function measuredSampler(curve: SampledCurve | null, range: FrequencyRange): Ran
   return new MeasuredSampler(curve, range);
 }
 
-type SpecFigure = 'gamma' | 'efficiency' | 'gain';
+type SpecFigure = 'gamma' | 'efficiency' | 'radiation-efficiency' | 'gain';
 
 interface UsableSpec {
   readonly usable: readonly SpecBand[];
@@ -134,18 +143,148 @@ function specGamma(band: SpecBand): number | null {
 }
 
 const efficiencyPercentOf = (band: SpecBand) => band.efficiencyPercent;
+const radiationEfficiencyPercentOf = (band: SpecBand) => (band.efficiencyBasis === 'radiation' ? band.efficiencyPercent : null);
 const peakGainOf = (band: SpecBand) => band.peakGainDbi;
 
+/** |Γ| over a range: the measured curve where it covers the range, else the spec bands' worst claim. */
+function gammaSamplerOf(gammaCurve: SampledCurve | null, specBands: readonly SpecBand[], range: FrequencyRange): RangeSampler | null {
+  return measuredSampler(gammaCurve, range) ?? specSampler(specBands, range, 'gamma', specGamma, Math.max);
+}
+
 function gammaSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
-  return measuredSampler(part.reflection ? gammaCurveOf(part.reflection) : null, range) ?? specSampler(part.specBands, range, 'gamma', specGamma, Math.max);
+  return gammaSamplerOf(part.reflection ? gammaCurveOf(part.reflection) : null, part.specBands, range);
 }
 
-function efficiencySampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
-  return measuredSampler(part.radiationEfficiencyPercent, range) ?? specSampler(part.specBands, range, 'efficiency', efficiencyPercentOf, Math.min);
+/** What total efficiency is worked out from: the part's efficiency curve with its basis, and its spec bands. */
+export type EfficiencySource = Pick<PartEvaluationData, 'efficiencyPercent' | 'efficiencyBasis' | 'specBands'>;
+
+/** Efficiency in % as stated, of whichever basis the source states: the measured curve, else the spec bands. */
+function statedEfficiencySampler(part: EfficiencySource, range: FrequencyRange): RangeSampler | null {
+  return measuredSampler(part.efficiencyPercent, range) ?? specSampler(part.specBands, range, 'efficiency', efficiencyPercentOf, Math.min);
 }
 
-function gainSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
+/** Radiation efficiency where the data states it; null where it states total efficiency (radiation is then not known). */
+function radiationEfficiencySampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
+  const measured = measuredSampler(part.efficiencyPercent, range);
+  if (measured) return part.efficiencyBasis === 'radiation' ? measured : null;
+  return specSampler(part.specBands, range, 'radiation-efficiency', radiationEfficiencyPercentOf, Math.min);
+}
+
+/** Gain in dBi as stated (peak or realized, as the source says): the measured curve, else the spec bands. */
+function statedGainSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
   return measuredSampler(part.peakGainDbi, range) ?? specSampler(part.specBands, range, 'gain', peakGainOf, Math.max);
+}
+
+/** Another sampler's values changed point by point with |Γ| at the same frequency (e.g. radiation → total efficiency). */
+class GammaAdjustedSampler implements RangeSampler {
+  readonly curve = null;
+  readonly source: Source;
+
+  constructor(
+    readonly base: RangeSampler,
+    readonly gamma: RangeSampler,
+    private readonly adjust: (value: number, gammaMagnitude: number) => number,
+  ) {
+    this.source = base.source;
+  }
+
+  at(frequencyHz: number): number {
+    return this.adjust(this.base.at(frequencyHz), this.gamma.at(frequencyHz));
+  }
+
+  breakpointsHz(): number[] {
+    return [...this.base.breakpointsHz(), ...this.gamma.breakpointsHz()];
+  }
+}
+
+const overlapsRange = (band: SpecBand, range: FrequencyRange) => band.fromHz <= range.toHz && band.toHz >= range.fromHz;
+
+/**
+ * A stated sampler brought to one basis. Data already of that basis is used as it is; data of the other
+ * basis needs |Γ| there, and without it the figure is unknown (null). Spec bands convert each by its own basis.
+ */
+function toBasis(
+  specBands: readonly SpecBand[],
+  stated: RangeSampler | null,
+  range: FrequencyRange,
+  gamma: RangeSampler | null,
+  spec: { figure: SpecFigure; value: (band: SpecBand) => number | null; worse: Worse; needsGamma: (band: SpecBand) => boolean },
+  measuredNeedsGamma: boolean,
+  convert: (value: number, band: SpecBand | null, gammaMagnitude: number) => number,
+): RangeSampler | null {
+  if (!stated) return null;
+  if (stated.source === 'measured') {
+    if (!measuredNeedsGamma) return stated;
+    return gamma ? new GammaAdjustedSampler(stated, gamma, (v, g) => convert(v, null, g)) : null;
+  }
+  const { usable } = usableSpecOf(specBands, spec.figure, spec.value);
+  if (!usable.some((b) => overlapsRange(b, range) && spec.needsGamma(b))) return stated;
+  if (!gamma) return null;
+  const at = (f: number): number => {
+    const g = gamma.at(f);
+    let result = NaN;
+    for (const b of usable) {
+      if (f < b.fromHz || f > b.toHz) continue;
+      const v = convert(spec.value(b)!, b, g);
+      result = Number.isNaN(result) ? v : spec.worse(result, v);
+    }
+    return result;
+  };
+  return { source: 'spec', curve: null, at, breakpointsHz: () => [...stated.breakpointsHz(), ...gamma.breakpointsHz()] };
+}
+
+/** Whether a datasheet line with an efficiency over this range states only its band average. */
+function statesOnlyAverage(specBands: readonly SpecBand[], range: FrequencyRange): boolean {
+  const { usable } = usableSpecOf(specBands, 'efficiency', efficiencyPercentOf);
+  return usable.some((b) => overlapsRange(b, range) && b.efficiencyStatistic === 'average');
+}
+
+const totalEfficiencyPercent = (efficiencyPercent: number, gammaMagnitude: number) => totalEfficiency(efficiencyPercent / 100, gammaMagnitude) * 100;
+
+const EFFICIENCY_SPEC = {
+  figure: 'efficiency' as const,
+  value: efficiencyPercentOf,
+  worse: Math.min,
+  needsGamma: (b: SpecBand) => efficiencyNeedsGamma(b.efficiencyBasis),
+};
+
+/** Total efficiency in % (radiation × (1 − |Γ|²) for radiation data, total data as it is). */
+function totalEfficiencySampler(part: EfficiencySource, stated: RangeSampler | null, range: FrequencyRange, gamma: RangeSampler | null): RangeSampler | null {
+  return toBasis(
+    part.specBands,
+    stated,
+    range,
+    gamma,
+    EFFICIENCY_SPEC,
+    efficiencyNeedsGamma(part.efficiencyBasis),
+    (v, band, g) => totalEfficiencyOfBasis(v / 100, band ? band.efficiencyBasis : part.efficiencyBasis, g) * 100,
+  );
+}
+
+const gainSpec = (wanted: GainBasis) => ({
+  figure: 'gain' as const,
+  value: peakGainOf,
+  worse: Math.max,
+  needsGamma: (b: SpecBand) => gainNeedsGamma(b.gainBasis, wanted),
+});
+const GAIN_SPEC: Record<GainBasis, ReturnType<typeof gainSpec>> = { peak: gainSpec('peak'), realized: gainSpec('realized') };
+
+/** Gain in dBi on the wanted basis: peak (the antenna's gain) or realized (G + 10 log10(1 − |Γ|²)). */
+function gainSamplerAs(
+  part: PartEvaluationData,
+  stated: RangeSampler | null,
+  range: FrequencyRange,
+  gamma: RangeSampler | null,
+  wanted: GainBasis,
+): RangeSampler | null {
+  return toBasis(part.specBands, stated, range, gamma, GAIN_SPEC[wanted], gainNeedsGamma(part.gainBasis, wanted), (v, band, g) =>
+    gainOfBasis(v, band ? band.gainBasis : part.gainBasis, wanted, g),
+  );
+}
+
+/** Peak gain over a range, for EIRP and the certified gain (antenna gain, mismatch not included). */
+function peakGainSampler(part: PartEvaluationData, range: FrequencyRange): RangeSampler | null {
+  return gainSamplerAs(part, statedGainSampler(part, range), range, gammaSampler(part, range), 'peak');
 }
 
 /** The samplers' values, combined point by point, as a curve over the range (edges included). */
@@ -218,8 +357,6 @@ function efficiencyStats(curve: SampledCurve, range: FrequencyRange): RangeStats
   };
 }
 
-const totalEfficiencyPercent = (efficiencyPercent: number, gammaMagnitude: number) => totalEfficiency(efficiencyPercent / 100, gammaMagnitude) * 100;
-
 /** Total efficiency of two measured curves, on the union of their samples, without building the combined curve. */
 function measuredTotalEfficiencyStats(efficiency: SampledCurve, gamma: SampledCurve, range: FrequencyRange): RangeStats {
   const stats = combinedBandStatistics(efficiency, gamma, range, totalEfficiencyPercent);
@@ -230,6 +367,25 @@ function measuredTotalEfficiencyStats(efficiency: SampledCurve, gamma: SampledCu
     average: stats.average,
     widthHz: range.toHz - range.fromHz,
   };
+}
+
+/** Statistics of a total-efficiency sampler; two measured curves go straight to the RF module's combined statistics. */
+function totalEfficiencyStatsOf(sampler: RangeSampler | null, range: FrequencyRange): RangeStats | null {
+  if (!sampler) return null;
+  if (sampler instanceof GammaAdjustedSampler && sampler.base.curve && sampler.gamma.curve) {
+    return measuredTotalEfficiencyStats(sampler.base.curve, sampler.gamma.curve, range);
+  }
+  return efficiencyStats(single(range, sampler), range);
+}
+
+/**
+ * The lowest total efficiency (%) over one range, exactly as the facts count it (minTotalEfficiencyPct):
+ * the catalogue search filters on this, so search, matrix and candidates share one definition. Null: not known.
+ */
+export function minTotalEfficiencyPctInRange(part: EfficiencySource, gammaCurve: SampledCurve | null, range: FrequencyRange): number | null {
+  const gamma = gammaSamplerOf(gammaCurve, part.specBands, range);
+  const stats = totalEfficiencyStatsOf(totalEfficiencySampler(part, statedEfficiencySampler(part, range), range, gamma), range);
+  return stats ? roundFactValue(stats.min.value) : null;
 }
 
 function gainStats(curve: SampledCurve, range: FrequencyRange): RangeStats {
@@ -386,8 +542,8 @@ export function computeFacts(
   let missingMask = 0;
 
   const gammas = ranges.map((r) => gammaSampler(part, r));
-  const efficiencies = ranges.map((r) => efficiencySampler(part, r));
-  const gains = ranges.map((r) => gainSampler(part, r));
+  const efficiencies = ranges.map((r) => statedEfficiencySampler(part, r));
+  const gains = ranges.map((r) => statedGainSampler(part, r));
   const note = (samplers: (RangeSampler | null)[], bit: number) => {
     for (const s of samplers) {
       if (s) sources.add(s.source);
@@ -398,31 +554,26 @@ export function computeFacts(
   note(efficiencies, 2);
   note(gains, 4);
 
-  // Measured curves go to the RF statistics as they are; spec step curves through combinedCurve.
+  // Measured curves go to the RF statistics as they are; spec step curves and converted figures through combinedCurve.
   const gammaStats = acrossRanges(ranges.map((r, i) => (gammas[i] ? linearStats(single(r, gammas[i]!), r) : null)));
-  const radiation = acrossRanges(ranges.map((r, i) => (efficiencies[i] ? efficiencyStats(single(r, efficiencies[i]!), r) : null)));
-  const total = acrossRanges(
-    ranges.map((r, i) => {
-      const e = efficiencies[i];
-      const g = gammas[i];
-      if (!e || !g) return null;
-      if (e.curve && g.curve) return measuredTotalEfficiencyStats(e.curve, g.curve, r);
-      return efficiencyStats(
-        combinedCurve(r, [e, g], ([ev, gv]) => totalEfficiencyPercent(ev, gv)),
-        r,
-      );
+  const radiation = acrossRanges(
+    ranges.map((r) => {
+      const s = radiationEfficiencySampler(part, r);
+      return s ? efficiencyStats(single(r, s), r) : null;
     }),
   );
-  const gain = acrossRanges(ranges.map((r, i) => (gains[i] ? gainStats(single(r, gains[i]!), r) : null)));
+  const total = acrossRanges(ranges.map((r, i) => totalEfficiencyStatsOf(totalEfficiencySampler(part, efficiencies[i], r, gammas[i]), r)));
+  const gain = acrossRanges(
+    ranges.map((r, i) => {
+      const s = gainSamplerAs(part, gains[i], r, gammas[i], 'peak');
+      return s ? gainStats(single(r, s), r) : null;
+    }),
+  );
   const realized = acrossRanges(
-    ranges.map((r, i) =>
-      gains[i] && gammas[i]
-        ? linearStats(
-            combinedCurve(r, [gains[i]!, gammas[i]!], ([g, m]) => realizedGainDbi(g, m)),
-            r,
-          )
-        : null,
-    ),
+    ranges.map((r, i) => {
+      const s = gainSamplerAs(part, gains[i], r, gammas[i], 'realized');
+      return s ? linearStats(single(r, s), r) : null;
+    }),
   );
   const at2 = coverageAt(part, ranges, 2);
   const at3 = coverageAt(part, ranges, 3);
@@ -432,7 +583,7 @@ export function computeFacts(
     tx.length > 0
       ? acrossRanges(
           tx.map((r) => {
-            const s = gainSampler(part, r);
+            const s = peakGainSampler(part, r);
             return s ? gainStats(single(r, s), r) : null;
           }),
         )
@@ -464,6 +615,7 @@ export function computeFacts(
   facts.worstVswr = rounded(gammaStats ? vswrFromGammaMagnitude(gammaStats.max.value) : null);
   facts.worstVswrAtMhz = rounded(gammaStats ? mhz(gammaStats.max.atHz) : null);
   facts.worstReturnLossDb = rounded(gammaStats ? returnLossDbFromGammaMagnitude(gammaStats.max.value) : null);
+  facts.efficiencyFromBandAverage = efficiencies.some((s, i) => s !== null && s.source === 'spec' && statesOnlyAverage(part.specBands, ranges[i]));
   facts.minRadiationEfficiencyPct = rounded(radiation ? radiation.min.value : null);
   facts.minRadiationEfficiencyAtMhz = rounded(radiation ? mhz(radiation.min.atHz) : null);
   facts.avgRadiationEfficiencyPct = rounded(radiation ? radiation.average : null);
@@ -471,9 +623,14 @@ export function computeFacts(
   facts.minTotalEfficiencyAtMhz = rounded(total ? mhz(total.min.atHz) : null);
   facts.avgTotalEfficiencyPct = rounded(total ? total.average : null);
   facts.avgTotalEfficiencyDb = rounded(total ? powerRatioToDb(total.average / 100) : null);
+  // The feed loss is one factor over the band, so it scales the minimum and the average alike.
+  facts.minSystemEfficiencyPct = rounded(total ? systemEfficiency(total.min.value, requirement.feedLossDb) : null);
+  facts.minSystemEfficiencyAtMhz = rounded(total ? mhz(total.min.atHz) : null);
+  facts.avgSystemEfficiencyPct = rounded(total ? systemEfficiency(total.average, requirement.feedLossDb) : null);
   facts.peakGainDbi = rounded(gain ? gain.max.value : null);
   facts.peakGainAtMhz = rounded(gain ? mhz(gain.max.atHz) : null);
   facts.realizedPeakGainDbi = rounded(realized ? realized.max.value : null);
+  facts.realizedGainAtRadioPortDbi = rounded(realized ? realizedGainAtRadioPortDbi(realized.max.value, requirement.feedLossDb) : null);
   facts.txPeakGainDbi = rounded(txPeakGainDbi);
   facts.gainOverCertifiedDb = rounded(
     txPeakGainDbi !== null && requirement.certifiedMaxGainDbi !== null ? txPeakGainDbi - requirement.certifiedMaxGainDbi : null,
@@ -538,7 +695,7 @@ function regionalLimitFacts(requirement: RadioBandRequirement, part: PartEvaluat
       const shared = overlap(range, limit);
       if (!shared) continue;
       const base = { regionalLimitDbm: limit.valueDbm, regionalLimitKind: limit.kind, regionalLimitRegion: limit.region, regionalLimitSource: limit.source };
-      const sampler = gainSampler(part, shared);
+      const sampler = peakGainSampler(part, shared);
       if (!sampler) {
         unknown ??= { ...base, regionalRadiatedDbm: null, regionalLimitMarginDb: null };
         continue;

@@ -1,7 +1,7 @@
 import { reflectionCurveFromGamma } from '../../rf/reflection';
 import { gammaMagnitudeFromVswr } from '../../rf/mismatch';
 import type { SampledCurve } from '../../rf/curves';
-import type { BandRange, PartEvaluationData, RadioBandRequirement } from './types';
+import type { BandRange, PartEvaluationData, RadioBandRequirement, SpecBand } from './types';
 
 /** Constructed parts and bands for the engine tests: curves built to put a fact exactly where wanted. */
 
@@ -44,7 +44,7 @@ export interface PartShape {
   gainDbi?: number;
 }
 
-/** A part measured flat over [fromHz, toHz]: matched at `vswr`, `efficiencyPercent` efficient, `gainDbi` peak gain. */
+/** A part measured flat over [fromHz, toHz]: matched at `vswr`, `efficiencyPercent` radiation efficiency, `gainDbi` peak gain. */
 export function constructedPart(shape: PartShape = {}, overrides: Partial<PartEvaluationData> = {}): PartEvaluationData {
   const fromHz = shape.fromHz ?? 600 * MHZ;
   const toHz = shape.toHz ?? 3000 * MHZ;
@@ -53,8 +53,10 @@ export function constructedPart(shape: PartShape = {}, overrides: Partial<PartEv
     mpn: 'TEST-1',
     title: 'constructed test part',
     reflection: flatReflection(fromHz, toHz, shape.vswr ?? 1.5),
-    radiationEfficiencyPercent: flatCurve(fromHz, toHz, shape.efficiencyPercent ?? 70),
+    efficiencyPercent: flatCurve(fromHz, toHz, shape.efficiencyPercent ?? 70),
+    efficiencyBasis: 'radiation',
     peakGainDbi: flatCurve(fromHz, toHz, shape.gainDbi ?? 1),
+    gainBasis: 'peak',
     averageGainDbi: null,
     specBands: [],
     evaluationGroundPlane: { lengthMm: 80, widthMm: 40 },
@@ -88,4 +90,21 @@ export function constructedRequirement(overrides: Partial<RadioBandRequirement> 
     regulatoryLimits: [],
     ...overrides,
   } as RadioBandRequirement;
+}
+
+/** A datasheet line with the basis the demo seed states (radiation efficiency as a band minimum, peak gain) unless overridden. */
+export function specBand(fromMhz: number, toMhz: number, figures: Partial<SpecBand> = {}): SpecBand {
+  return {
+    fromHz: fromMhz * MHZ,
+    toHz: toMhz * MHZ,
+    maxVswr: null,
+    minReturnLossDb: null,
+    efficiencyPercent: null,
+    efficiencyBasis: 'radiation',
+    efficiencyStatistic: 'minimum',
+    peakGainDbi: null,
+    averageGainDbi: null,
+    gainBasis: 'peak',
+    ...figures,
+  };
 }

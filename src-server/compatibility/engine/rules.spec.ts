@@ -2,7 +2,7 @@ import { mwToDbm } from '../../rf/units';
 import { loadRuleFiles } from '../rule-files';
 import { CompiledRuleSet } from './compiled-evaluator';
 import { computeFacts, roundFactValue } from './compute-facts';
-import { MHZ, constructedPart, constructedRequirement, flatCurve, flatReflection, rangeMhz, steppedReflection } from './fixtures';
+import { MHZ, constructedPart, constructedRequirement, flatCurve, flatReflection, rangeMhz, specBand, steppedReflection } from './fixtures';
 import { ReferenceEvaluator } from './reference-evaluator';
 import type { ParameterValue, RuleDefinition } from './rule-definition';
 import type { CellVerdict, Facts, PartEvaluationData, RadioBandRequirement } from './types';
@@ -94,10 +94,13 @@ describe('band-coverage', () => {
       maxVswr,
       minReturnLossDb: null,
       efficiencyPercent: 50,
+      efficiencyBasis: 'radiation' as const,
+      efficiencyStatistic: 'minimum' as const,
       peakGainDbi: 1,
       averageGainDbi: null,
+      gainBasis: 'peak' as const,
     });
-    const base = { reflection: null, radiationEfficiencyPercent: null, peakGainDbi: null };
+    const base = { reflection: null, efficiencyPercent: null, peakGainDbi: null };
     const covered = await check('band-coverage', lte(), constructedPart({}, { ...base, specBands: [spec(690, 760, 2.5)] }));
     expect(covered.finding).toBeUndefined();
     const elsewhere = await check('band-coverage', lte(), constructedPart({}, { ...base, specBands: [spec(824, 960, 2)] }));
@@ -135,7 +138,84 @@ describe('efficiency-floor', () => {
     expect((await check('efficiency-floor', lte(), part(15.1))).finding).toBeUndefined();
     const outside = await check('efficiency-floor', lte(), part(14.9));
     expect(outside.finding).toMatchObject({ severity: 'fail', code: 'EFFICIENCY_BELOW_FLOOR' });
-    expect(outside.finding!.message).toBe('total efficiency falls to 14.9 % at 699 MHz; the floor for lte is 15 %');
+    expect(outside.finding!.message).toBe(
+      'efficiency at the radio port falls to 14.9 % at 699 MHz (antenna total efficiency 14.9 %, feed loss 0 dB); the floor for lte is 15 %',
+    );
+  });
+
+  // Pozar, Microwave Engineering 4th ed. §2.3: |Γ| = (VSWR − 1)/(VSWR + 1) = 0.5 at VSWR 3, so 1 − |Γ|² = 0.75.
+  // IEEE Std 145-2013 (from memory): total efficiency = radiation efficiency × (1 − |Γ|²); a total figure already holds it.
+  it('counts the mismatch once: 40 % radiation at VSWR 3 is 30 % total, 40 % declared total stays 40 %', async () => {
+    const radiation = await check('efficiency-floor', lte(), constructedPart({ vswr: 3, efficiencyPercent: 40 }));
+    expect(radiation.facts.minTotalEfficiencyPct).toBe(30);
+    expect(radiation.facts.minRadiationEfficiencyPct).toBe(40);
+    const total = await check('efficiency-floor', lte(), constructedPart({ vswr: 3, efficiencyPercent: 40 }, { efficiencyBasis: 'total' }));
+    expect(total.facts.minTotalEfficiencyPct).toBe(40);
+    expect(total.facts.avgTotalEfficiencyPct).toBe(40);
+    // Radiation efficiency is not stated by total data, and not made up.
+    expect(total.facts.minRadiationEfficiencyPct).toBeNull();
+  });
+
+  it('judges the floor on total efficiency from the basis: 20 % radiation at VSWR 3 (15 % total) is at the LTE floor, 19.9 % under it; 14.9 % total fails', async () => {
+    expect((await check('efficiency-floor', lte(), constructedPart({ vswr: 3, efficiencyPercent: 20 }))).finding).toBeUndefined();
+    const under = await check('efficiency-floor', lte(), constructedPart({ vswr: 3, efficiencyPercent: 19.9 }));
+    expect(under.facts.minTotalEfficiencyPct).toBeCloseTo(14.925, 9);
+    expect(under.finding?.severity).toBe('fail');
+    expect((await check('efficiency-floor', lte(), constructedPart({ vswr: 3, efficiencyPercent: 15 }, { efficiencyBasis: 'total' }))).finding).toBeUndefined();
+    expect(
+      (await check('efficiency-floor', lte(), constructedPart({ vswr: 3, efficiencyPercent: 14.9 }, { efficiencyBasis: 'total' }))).finding?.severity,
+    ).toBe('fail');
+  });
+
+  it('needs S11 to turn radiation data into total efficiency, and not for total data', async () => {
+    const radiation = await check('efficiency-floor', lte(), constructedPart({ efficiencyPercent: 60 }, { reflection: null }));
+    expect(radiation.facts.minTotalEfficiencyPct).toBeNull();
+    expect(radiation.finding?.severity).toBe('no-data');
+    const total = await check('efficiency-floor', lte(), constructedPart({ efficiencyPercent: 60 }, { reflection: null, efficiencyBasis: 'total' }));
+    expect(total.facts.minTotalEfficiencyPct).toBe(60);
+    expect(total.finding).toBeUndefined();
+  });
+
+  it('says when the efficiency is a datasheet band average rather than a minimum', () => {
+    const line = (efficiencyStatistic: 'minimum' | 'average') =>
+      constructedPart(
+        {},
+        { reflection: null, efficiencyPercent: null, specBands: [specBand(690, 760, { maxVswr: 2, efficiencyPercent: 40, efficiencyStatistic })] },
+      );
+    expect(computeFacts(lte(), line('average')).efficiencyFromBandAverage).toBe(true);
+    expect(computeFacts(lte(), line('minimum')).efficiencyFromBandAverage).toBe(false);
+    expect(computeFacts(lte(), constructedPart()).efficiencyFromBandAverage).toBe(false);
+  });
+
+  it('reads each datasheet line by its own basis', async () => {
+    const line = (efficiencyBasis: 'radiation' | 'total') =>
+      constructedPart(
+        {},
+        { reflection: null, efficiencyPercent: null, specBands: [specBand(690, 760, { maxVswr: 3, efficiencyPercent: 40, efficiencyBasis })] },
+      );
+    expect((await check('efficiency-floor', lte(), line('radiation'))).facts.minTotalEfficiencyPct).toBe(30);
+    expect((await check('efficiency-floor', lte(), line('total'))).facts.minTotalEfficiencyPct).toBe(40);
+  });
+
+  // System efficiency at the radio port = total efficiency × 10^(−L/10) (definition; rf-reference §6).
+  it('judges the floor at the radio port: 1.5 dB of feed loss takes 50 % total to 35.4 %, and 21.2 % total under the 15 % LTE floor', async () => {
+    const fed = await check('efficiency-floor', lte({ feedLossDb: 1.5 }), constructedPart({ vswr: 1, efficiencyPercent: 50 }));
+    expect(fed.facts.minTotalEfficiencyPct).toBe(50);
+    // 10^(−0.15) = 0.70795: 50 % → 35.397 %.
+    expect(fed.facts.minSystemEfficiencyPct as number).toBeCloseTo(35.397, 3);
+    expect(fed.facts.avgSystemEfficiencyPct as number).toBeCloseTo(35.397, 3);
+    expect(fed.finding).toBeUndefined();
+    // 15 % / 0.70795 = 21.188 % total is exactly at the floor after the feed; a little less falls under it; without the feed it passes.
+    const atFloor = 15 / 10 ** -0.15;
+    expect((await check('efficiency-floor', lte({ feedLossDb: 1.5 }), constructedPart({ vswr: 1, efficiencyPercent: atFloor }))).finding).toBeUndefined();
+    const under = await check('efficiency-floor', lte({ feedLossDb: 1.5 }), constructedPart({ vswr: 1, efficiencyPercent: 21 }));
+    expect(under.facts.minTotalEfficiencyPct).toBe(21);
+    expect(under.facts.minSystemEfficiencyPct as number).toBeCloseTo(14.867, 3);
+    expect(under.finding).toMatchObject({ severity: 'fail', code: 'EFFICIENCY_BELOW_FLOOR' });
+    expect(under.finding!.message).toBe(
+      'efficiency at the radio port falls to 14.87 % at 699 MHz (antenna total efficiency 21 %, feed loss 1.5 dB); the floor for lte is 15 %',
+    );
+    expect((await check('efficiency-floor', lte(), constructedPart({ vswr: 1, efficiencyPercent: 21 }))).finding).toBeUndefined();
   });
 
   it('reads the floor from the per-technology table: 30 % for GNSS', async () => {
@@ -152,7 +232,7 @@ describe('efficiency-floor', () => {
   });
 
   it('reports no data when the part has no efficiency curve or spec figure', async () => {
-    const { finding } = await check('efficiency-floor', lte(), constructedPart({}, { radiationEfficiencyPercent: null }));
+    const { finding } = await check('efficiency-floor', lte(), constructedPart({}, { efficiencyPercent: null }));
     expect(finding).toMatchObject({ severity: 'no-data', code: 'EFFICIENCY_BELOW_FLOOR_NO_DATA' });
     expect(finding!.message).toContain('efficiency');
   });
@@ -384,9 +464,22 @@ describe('datasheet-only', () => {
       {},
       {
         reflection: null,
-        radiationEfficiencyPercent: null,
+        efficiencyPercent: null,
         peakGainDbi: null,
-        specBands: [{ fromHz: 690 * MHZ, toHz: 760 * MHZ, maxVswr: 2, minReturnLossDb: null, efficiencyPercent: 50, peakGainDbi: 1, averageGainDbi: null }],
+        specBands: [
+          {
+            fromHz: 690 * MHZ,
+            toHz: 760 * MHZ,
+            maxVswr: 2,
+            minReturnLossDb: null,
+            efficiencyPercent: 50,
+            peakGainDbi: 1,
+            averageGainDbi: null,
+            efficiencyBasis: 'radiation' as const,
+            efficiencyStatistic: 'minimum' as const,
+            gainBasis: 'peak' as const,
+          },
+        ],
       },
     );
     const { facts, verdict, finding } = await check('datasheet-only', lte(), specPart);
@@ -411,9 +504,9 @@ describe('the whole starting set on one pair', () => {
   it('ranks fail above no-data above marginal', async () => {
     const marginal = await both(lte(), constructedPart({ vswr: 2.2 }));
     expect(marginal.verdict.status).toBe('marginal');
-    const noData = await both(lte(), constructedPart({ vswr: 2.2 }, { radiationEfficiencyPercent: null }));
+    const noData = await both(lte(), constructedPart({ vswr: 2.2 }, { efficiencyPercent: null }));
     expect(noData.verdict.status).toBe('no-data');
-    const fail = await both(lte(), constructedPart({ vswr: 3.5 }, { radiationEfficiencyPercent: null }));
+    const fail = await both(lte(), constructedPart({ vswr: 3.5 }, { efficiencyPercent: null }));
     expect(fail.verdict.status).toBe('fail');
     expect(fail.verdict.findings.map((f) => f.code)).toEqual(
       expect.arrayContaining(['BAND_NOT_COVERED', 'VSWR_ABOVE_TARGET', 'EFFICIENCY_BELOW_FLOOR_NO_DATA']),
@@ -423,8 +516,36 @@ describe('the whole starting set on one pair', () => {
   it('uses a measured curve across both ranges of an FDD band and skips the duplex gap', async () => {
     // Efficiency dips to 10 % between UL and DL (720 MHz) only: the band itself stays at 70 %.
     const dip = { frequenciesHz: Float64Array.from([600e6, 716e6, 720e6, 729e6, 900e6]), values: Float64Array.from([70, 70, 10, 70, 70]) };
-    const { facts } = await both(lte(), constructedPart({ vswr: 1 }, { radiationEfficiencyPercent: dip, reflection: flatReflection(600e6, 900e6, 1) }));
+    const { facts } = await both(lte(), constructedPart({ vswr: 1 }, { efficiencyPercent: dip, reflection: flatReflection(600e6, 900e6, 1) }));
     expect(facts.minRadiationEfficiencyPct).toBe(70);
     expect(flatCurve(0, 1, 1).values.length).toBe(11);
+  });
+});
+
+describe('gain basis', () => {
+  // Realized gain G_r = G + 10 log10(1 − |Γ|²) (IEEE Std 145-2013, from memory); at VSWR 3 the mismatch loss is 1.249 dB
+  // (Pozar, Microwave Engineering 4th ed. §2.3, table of rf-reference §3.2).
+  it('turns peak gain into realized gain with the mismatch, and uses realized data as it is', () => {
+    const peak = computeFacts(lte(), constructedPart({ vswr: 3, gainDbi: 2 }));
+    expect(peak.peakGainDbi).toBe(2);
+    expect(peak.realizedPeakGainDbi as number).toBeCloseTo(0.7506, 4);
+    const realized = computeFacts(lte(), constructedPart({ vswr: 3, gainDbi: 2 }, { gainBasis: 'realized' }));
+    expect(realized.realizedPeakGainDbi).toBe(2);
+    // The antenna's own gain (for EIRP and the certified cap) is the realized figure plus the mismatch loss.
+    expect(realized.peakGainDbi as number).toBeCloseTo(3.2494, 4);
+    expect(realized.eirpDbm as number).toBeCloseTo(23 + 3.2494, 4);
+  });
+
+  it('shows realized gain at the radio port less the feed loss', () => {
+    const facts = computeFacts(lte({ feedLossDb: 1.5 }), constructedPart({ vswr: 3, gainDbi: 2 }));
+    expect(facts.realizedGainAtRadioPortDbi as number).toBeCloseTo(0.7506 - 1.5, 4);
+    // EIRP = P + G − L counts the feed loss once.
+    expect(facts.eirpDbm).toBe(23 + 2 - 1.5);
+  });
+
+  it('leaves realized data without S11 as realized only: the antenna gain is then not known', () => {
+    const facts = computeFacts(lte(), constructedPart({ gainDbi: 2 }, { gainBasis: 'realized', reflection: null }));
+    expect(facts.realizedPeakGainDbi).toBe(2);
+    expect(facts.peakGainDbi).toBeNull();
   });
 });

@@ -1,8 +1,10 @@
 import type { SampledCurve } from '../../rf/curves';
 import type { ReflectionCurve } from '../../rf/reflection';
 import { POLARIZATIONS, type Polarization } from '../../rf/link-budget';
+import type { EfficiencyBasis, FigureStatistic, GainBasis } from '../../rf/figure-basis';
 
 export { POLARIZATIONS, type Polarization };
+export type { EfficiencyBasis, FigureStatistic, GainBasis };
 
 export const TECHNOLOGIES = ['lte', 'nr', 'gnss', 'wifi', 'ble', 'ism', 'uwb', 'other'] as const;
 export type Technology = (typeof TECHNOLOGIES)[number];
@@ -34,8 +36,14 @@ export interface SpecBand {
   readonly maxVswr: number | null;
   readonly minReturnLossDb: number | null;
   readonly efficiencyPercent: number | null;
+  /** What efficiencyPercent includes: radiation (mismatch left out) or total (mismatch included). */
+  readonly efficiencyBasis: EfficiencyBasis;
+  /** Whether efficiencyPercent is the band's minimum or its average (the minimum is then not known; the average stands for it). */
+  readonly efficiencyStatistic: FigureStatistic;
   readonly peakGainDbi: number | null;
   readonly averageGainDbi: number | null;
+  /** What the gains include: peak (the antenna's gain) or realized (mismatch included). */
+  readonly gainBasis: GainBasis;
 }
 
 /** Everything the engine needs to know about one antenna part; any piece may be missing. */
@@ -44,8 +52,12 @@ export interface PartEvaluationData {
   readonly mpn: string;
   readonly title: string;
   readonly reflection: ReflectionCurve | null;
-  readonly radiationEfficiencyPercent: SampledCurve | null;
+  /** Efficiency in %, of the basis below. */
+  readonly efficiencyPercent: SampledCurve | null;
+  readonly efficiencyBasis: EfficiencyBasis;
+  /** Gain in the direction of its maximum, dBi, of the basis below. */
   readonly peakGainDbi: SampledCurve | null;
+  readonly gainBasis: GainBasis;
   readonly averageGainDbi: SampledCurve | null;
   readonly specBands: readonly SpecBand[];
   readonly evaluationGroundPlane: GroundPlane | null;

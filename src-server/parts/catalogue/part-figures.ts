@@ -2,10 +2,13 @@ import { type FrequencyRange, type SampledCurve, coverageOfBand, efficiencyInBan
 import { type ReflectionCurve, bandMatch, matchedRanges } from '../../rf/reflection';
 import { returnLossDbFromVswr } from '../../rf/mismatch';
 import { type SpecBandClaim, claimedMaxVswr, mergeRanges, overlappingBands, specBandsCover } from '../spec-coverage';
+import type { EfficiencyBasis } from '../../rf/figure-basis';
 
 export interface PartCurves {
   readonly s11: ReflectionCurve | null;
   readonly efficiencyPercent: SampledCurve | null;
+  /** What the measured efficiency curve includes; null read as radiation, the basis data had before it was stated. */
+  readonly efficiencyBasis?: EfficiencyBasis | null;
   readonly peakGainDbi: SampledCurve | null;
   readonly averageGainDbi: SampledCurve | null;
   readonly specBands: readonly SpecBandClaim[];
@@ -20,6 +23,8 @@ export interface RangeFigures {
   worstVswrAtMhz: number | null;
   minReturnLossDb: number | null;
   efficiencySource: 'measured' | 'spec' | 'no-data';
+  /** What the efficiency figures include, as the data states it: radiation, total, or mixed (spec bands of both). */
+  efficiencyBasis: EfficiencyBasis | 'mixed' | null;
   minEfficiencyPct: number | null;
   averageEfficiencyPct: number | null;
   averageEfficiencyDb: number | null;
@@ -41,6 +46,7 @@ export function figuresForRange(curves: PartCurves, range: FrequencyRange): Rang
     worstVswrAtMhz: null,
     minReturnLossDb: null,
     efficiencySource: 'no-data',
+    efficiencyBasis: null,
     minEfficiencyPct: null,
     averageEfficiencyPct: null,
     averageEfficiencyDb: null,
@@ -75,6 +81,7 @@ export function figuresForRange(curves: PartCurves, range: FrequencyRange): Rang
   const efficiency = curves.efficiencyPercent ? efficiencyInBand(curves.efficiencyPercent, range) : null;
   if (efficiency && efficiency.status === 'ok') {
     figures.efficiencySource = 'measured';
+    figures.efficiencyBasis = curves.efficiencyBasis ?? 'radiation';
     figures.minEfficiencyPct = efficiency.minPercent;
     figures.averageEfficiencyPct = efficiency.averagePercent;
     figures.averageEfficiencyDb = efficiency.averageDb;
@@ -83,6 +90,8 @@ export function figuresForRange(curves: PartCurves, range: FrequencyRange): Rang
     const claimed = spec.filter((b) => b.efficiencyPct !== null);
     if (claimed.length > 0 && specBandsCover(claimed, range, () => true)) {
       figures.efficiencySource = 'spec';
+      const bases = new Set(claimed.map((b) => b.efficiencyBasis));
+      figures.efficiencyBasis = bases.size === 1 ? [...bases][0] : 'mixed';
       figures.minEfficiencyPct = Math.min(...claimed.map((b) => b.efficiencyPct!));
     } else if (!efficiency) {
       figures.notes.push('Efficiency: no measured curve and no spec band spans the range');

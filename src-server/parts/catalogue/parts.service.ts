@@ -21,7 +21,7 @@ import { iso, searchTextOf, specBandClaim, specBandDto, userRef } from '../part-
 import { partErrors } from '../parts.exception';
 import type { ReviewState } from '../part.types';
 import { SpecBand } from '../spec-band.entity';
-import type { CreatePartDto, SpecBandInputDto, UpdatePartDto } from '../dto/part-input.dto';
+import { type CreatePartDto, SPEC_BAND_DEFAULTS, type SpecBandInputDto, type UpdatePartDto } from '../dto/part-input.dto';
 import type { DocumentDto, MeasurementDto, OfferDto, PartDetailDto } from '../dto/part-response.dto';
 
 /** Part fields an update may change, in the order the audit log lists them. */
@@ -48,6 +48,7 @@ const REQUIRED_ON_UPDATE = ['mpn', 'title', 'formFactor', 'connector', 'polariza
 export const measurementDto = (m: Measurement, current: boolean): MeasurementDto => ({
   id: m.id,
   kind: m.kind,
+  basis: m.basis,
   groundLengthMm: m.groundLengthMm,
   groundWidthMm: m.groundWidthMm,
   conditions: m.conditions,
@@ -87,6 +88,15 @@ export const offerDto = (o: PartOffer): OfferDto => ({
   lastCheckedOn: o.lastCheckedOn,
   version: o.version,
 });
+
+/** The bases a datasheet line states, or the usual ones where it does not (SPEC_BAND_DEFAULTS). */
+export function specBandBases(band: SpecBandInputDto): Pick<SpecBand, 'efficiencyBasis' | 'efficiencyStatistic' | 'gainBasis'> {
+  return {
+    efficiencyBasis: band.efficiencyBasis ?? SPEC_BAND_DEFAULTS.efficiencyBasis,
+    efficiencyStatistic: band.efficiencyStatistic ?? SPEC_BAND_DEFAULTS.efficiencyStatistic,
+    gainBasis: band.gainBasis ?? SPEC_BAND_DEFAULTS.gainBasis,
+  };
+}
 
 export function checkSpecBands(bands: SpecBandInputDto[] | undefined, prefix = 'specBands'): FieldProblem[] {
   const problems: FieldProblem[] = [];
@@ -145,6 +155,7 @@ export class PartsService {
         maxVswr: b.maxVswr ?? null,
         minReturnLossDb: b.minReturnLossDb ?? null,
         efficiencyPct: b.efficiencyPct ?? null,
+        ...specBandBases(b),
         peakGainDbi: b.peakGainDbi ?? null,
         averageGainDbi: b.averageGainDbi ?? null,
       })),
@@ -231,6 +242,7 @@ export class PartsService {
           maxVswr: b.maxVswr ?? null,
           minReturnLossDb: b.minReturnLossDb ?? null,
           efficiencyPct: b.efficiencyPct ?? null,
+          ...specBandBases(b),
           peakGainDbi: b.peakGainDbi ?? null,
           averageGainDbi: b.averageGainDbi ?? null,
         }));
@@ -282,6 +294,7 @@ export class PartsService {
     const partCurves = {
       s11: curves?.s11?.curve ?? null,
       efficiencyPercent: curves?.efficiency?.curve ?? null,
+      efficiencyBasis: curves?.efficiency?.basis ?? null,
       peakGainDbi: curves?.peakGain?.curve ?? null,
       averageGainDbi: curves?.averageGain?.curve ?? null,
       specBands: specBands.map(specBandClaim),

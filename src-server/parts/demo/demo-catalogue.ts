@@ -33,12 +33,19 @@ export interface DemoPart {
   directivityDbi: number;
   /** Sweep of the measured curves, MHz. */
   sweep?: [fromMhz: number, toMhz: number];
-  /** Datasheet bands: [fromMhz, toMhz, maxVswr, efficiency %, peak gain dBi]. */
+  /** Datasheet bands: [fromMhz, toMhz, maxVswr, efficiency %, peak gain dBi], on the bases of DEMO_SPEC_BASES. */
   specBands: [number, number, number, number, number][];
   offers: DemoOffer[];
   alternates?: number[];
   datasheet?: boolean;
 }
+
+/**
+ * What the demo figures mean (see migration 1765510000000): curves are the resonator model's radiation efficiency
+ * and the gain it gives (mismatch left out); a datasheet efficiency is the band's lowest radiation efficiency.
+ */
+export const DEMO_CURVE_BASES = { efficiency: 'radiation', 'peak-gain': 'peak', 'average-gain': 'peak' } as const;
+export const DEMO_SPEC_BASES = { efficiencyBasis: 'radiation', efficiencyStatistic: 'minimum', gainBasis: 'peak' } as const;
 
 export const DEMO_MANUFACTURERS = [
   'Korrel Antennas',

@@ -4,7 +4,7 @@ import { evenlySpacedFrequencies } from '../../rf/curves';
 import { reflectionCurveFromGamma } from '../../rf/reflection';
 import { writeTouchstone } from '../../rf/touchstone-writer';
 import { figuresForRange } from '../catalogue/part-figures';
-import { DEMO_PARTS, type DemoPart } from './demo-catalogue';
+import { DEMO_PARTS, DEMO_SPEC_BASES, type DemoPart } from './demo-catalogue';
 import { efficiencyAt, gainsAt, s11Curve } from './resonator-model';
 
 /**
@@ -156,6 +156,7 @@ function main(): void {
             maxVswr: v,
             minReturnLossDb: null,
             efficiencyPct: e,
+            ...DEMO_SPEC_BASES,
             peakGainDbi: g,
             averageGainDbi: null,
           })),

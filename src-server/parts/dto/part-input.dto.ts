@@ -2,7 +2,29 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, ValidateNested } from 'class-validator';
 import { EnumField, IntField, NumberField, OptionalField, StringField } from '../../common/dto-fields';
-import { CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, POLARIZATIONS, type PartPolarization } from '../part.types';
+import {
+  CONNECTORS,
+  type Connector,
+  EFFICIENCY_BASES,
+  type EfficiencyBasis,
+  FIGURE_STATISTICS,
+  type FigureStatistic,
+  FORM_FACTORS,
+  type FormFactor,
+  GAIN_BASES,
+  type GainBasis,
+  LIFECYCLES,
+  type Lifecycle,
+  POLARIZATIONS,
+  type PartPolarization,
+} from '../part.types';
+
+/** What a datasheet line means when it does not say: most datasheets quote total efficiency averaged over the band, and the antenna's peak gain (common practice). */
+export const SPEC_BAND_DEFAULTS = { efficiencyBasis: 'total', efficiencyStatistic: 'average', gainBasis: 'peak' } as const satisfies {
+  efficiencyBasis: EfficiencyBasis;
+  efficiencyStatistic: FigureStatistic;
+  gainBasis: GainBasis;
+};
 
 export class SpecBandInputDto {
   @NumberField({ min: 1, max: 300000, example: 791, description: 'Lower edge, MHz' }) fromMhz: number;
@@ -10,8 +32,26 @@ export class SpecBandInputDto {
   @NumberField({ optional: true, nullable: true, min: 1, max: 100, example: 2.5 }) maxVswr?: number | null;
   @NumberField({ optional: true, nullable: true, min: 0, max: 80, example: 7.4 }) minReturnLossDb?: number | null;
   @NumberField({ optional: true, nullable: true, min: 0, max: 100, example: 45 }) efficiencyPct?: number | null;
+  @EnumField(EFFICIENCY_BASES, {
+    enumName: 'EfficiencyBasis',
+    optional: true,
+    description: 'What efficiencyPct includes: radiation (mismatch left out) or total (mismatch included); default total, as most datasheets quote',
+  })
+  efficiencyBasis?: EfficiencyBasis;
+  @EnumField(FIGURE_STATISTICS, {
+    enumName: 'FigureStatistic',
+    optional: true,
+    description: "Whether efficiencyPct is the band's minimum or its average; default average, as most datasheets quote",
+  })
+  efficiencyStatistic?: FigureStatistic;
   @NumberField({ optional: true, nullable: true, min: -60, max: 40, example: 1.5 }) peakGainDbi?: number | null;
   @NumberField({ optional: true, nullable: true, min: -60, max: 40, example: -2 }) averageGainDbi?: number | null;
+  @EnumField(GAIN_BASES, {
+    enumName: 'GainBasis',
+    optional: true,
+    description: "What the gains include: peak (the antenna's gain, mismatch left out) or realized (mismatch included); default peak",
+  })
+  gainBasis?: GainBasis;
 }
 
 /** Fields shared by create and update; every one optional here, required ones enforced in CreatePartDto. */

@@ -4,10 +4,18 @@ import {
   type Connector,
   DOCUMENT_KINDS,
   type DocumentKind,
+  EFFICIENCY_BASES,
+  type EfficiencyBasis,
+  FIGURE_STATISTICS,
+  type FigureStatistic,
   FORM_FACTORS,
   type FormFactor,
+  GAIN_BASES,
+  type GainBasis,
   LIFECYCLES,
   type Lifecycle,
+  MEASUREMENT_BASES,
+  type MeasurementBasis,
   MEASUREMENT_KINDS,
   type MeasurementKind,
   POLARIZATIONS,
@@ -54,13 +62,26 @@ export class SpecBandDto {
   @ApiProperty({ type: Number, nullable: true }) maxVswr: number | null;
   @ApiProperty({ type: Number, nullable: true }) minReturnLossDb: number | null;
   @ApiProperty({ type: Number, nullable: true }) efficiencyPct: number | null;
+  @ApiProperty({ enum: EFFICIENCY_BASES, enumName: 'EfficiencyBasis', description: 'radiation: mismatch left out; total: mismatch included' })
+  efficiencyBasis: EfficiencyBasis;
+  @ApiProperty({ enum: FIGURE_STATISTICS, enumName: 'FigureStatistic', description: "efficiencyPct is the band's minimum or its average" })
+  efficiencyStatistic: FigureStatistic;
   @ApiProperty({ type: Number, nullable: true }) peakGainDbi: number | null;
   @ApiProperty({ type: Number, nullable: true }) averageGainDbi: number | null;
+  @ApiProperty({ enum: GAIN_BASES, enumName: 'GainBasis', description: "peak: the antenna's gain, mismatch left out; realized: mismatch included" })
+  gainBasis: GainBasis;
 }
 
 export class MeasurementDto {
   @ApiProperty() id: number;
   @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind' }) kind: MeasurementKind;
+  @ApiProperty({
+    enum: MEASUREMENT_BASES,
+    enumName: 'MeasurementBasis',
+    nullable: true,
+    description: 'efficiency: radiation or total; gains: peak or realized; null for s11',
+  })
+  basis: MeasurementBasis | null;
   @ApiProperty({ type: Number, nullable: true }) groundLengthMm: number | null;
   @ApiProperty({ type: Number, nullable: true }) groundWidthMm: number | null;
   @ApiProperty({ type: String, nullable: true }) conditions: string | null;
@@ -102,6 +123,12 @@ export class RangeFiguresDto {
   @ApiProperty({ type: Number, nullable: true }) worstVswrAtMhz: number | null;
   @ApiProperty({ type: Number, nullable: true }) minReturnLossDb: number | null;
   @ApiProperty({ enum: ['measured', 'spec', 'no-data'] }) efficiencySource: 'measured' | 'spec' | 'no-data';
+  @ApiProperty({
+    enum: ['radiation', 'total', 'mixed'],
+    nullable: true,
+    description: 'What the efficiency figures include, as the data states it (radiation: mismatch left out; total: included); null without figures',
+  })
+  efficiencyBasis: EfficiencyBasis | 'mixed' | null;
   @ApiProperty({ type: Number, nullable: true }) minEfficiencyPct: number | null;
   @ApiProperty({ type: Number, nullable: true }) averageEfficiencyPct: number | null;
   @ApiProperty({ type: Number, nullable: true }) averageEfficiencyDb: number | null;

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { BoolField, EnumField, NumberField, StringField } from '../../common/dto-fields';
-import { DOCUMENT_KINDS, type DocumentKind, MEASUREMENT_KINDS, type MeasurementKind } from '../part.types';
+import { DOCUMENT_KINDS, type DocumentKind, MEASUREMENT_BASES, MEASUREMENT_KINDS, type MeasurementBasis, type MeasurementKind } from '../part.types';
 import { FREQUENCY_UNITS, VALUE_UNITS, type ValueUnit } from '../measurements/measurement-parsers';
 import type { FrequencyUnit } from '../../rf/touchstone';
 import { MeasurementDto } from './part-response.dto';
@@ -8,6 +8,13 @@ import { MeasurementDto } from './part-response.dto';
 /** Multipart fields beside `file`. */
 export class UploadMeasurementDto {
   @EnumField(MEASUREMENT_KINDS, { enumName: 'MeasurementKind', description: 's11 takes a Touchstone file; the others a CSV' }) kind: MeasurementKind;
+  @EnumField(MEASUREMENT_BASES, {
+    enumName: 'MeasurementBasis',
+    optional: true,
+    description:
+      'Required for efficiency (radiation: mismatch left out, or total: mismatch included) and for gains (peak: the antenna gain, or realized: mismatch included); not sent for s11',
+  })
+  basis?: MeasurementBasis;
   @NumberField({ optional: true, min: 0, max: 5000, description: 'Ground plane the curve was measured on: length, mm' }) groundLengthMm?: number;
   @NumberField({ optional: true, min: 0, max: 5000, description: 'Ground plane width, mm' }) groundWidthMm?: number;
   @StringField({ optional: true, maxLength: 500, description: 'Conditions: fixture, enclosure, cable, chamber' }) conditions?: string;

@@ -11,6 +11,26 @@ describe(parseSpecBandsText.name, () => {
     expect(parseSpecBandsText(formatSpecBands(bands)).bands).toEqual(bands);
   });
 
+  it('reads and writes what the figures include, refusing a basis outside its list', () => {
+    const text = '791-862 vswr=3 eff=40 peak=1 effbasis=radiation effstat=minimum gainbasis=realized';
+    const { bands, error } = parseSpecBandsText(text);
+    expect(error).toBeNull();
+    expect(bands).toEqual([
+      {
+        fromMhz: 791,
+        toMhz: 862,
+        maxVswr: 3,
+        efficiencyPct: 40,
+        peakGainDbi: 1,
+        efficiencyBasis: 'radiation',
+        efficiencyStatistic: 'minimum',
+        gainBasis: 'realized',
+      },
+    ]);
+    expect(formatSpecBands(bands)).toBe(text);
+    expect(parseSpecBandsText('791-862 eff=40 effbasis=peak').error).toMatch(/band 1: effbasis= must be one of radiation, total/);
+  });
+
   it('names the band and the token that is wrong', () => {
     expect(parseSpecBandsText('791-862; 960-880').error).toMatch(/band 2/);
     expect(parseSpecBandsText('791-862 gain=3').error).toMatch(/band 1: "gain=3"/);

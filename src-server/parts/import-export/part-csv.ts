@@ -4,6 +4,7 @@ import { DomainError } from '../../common/domain-error';
 import { flattenValidationErrors } from '../../common/validation';
 import { type CsvBounds, csvParseLimits, firstLineBeyond } from '../csv-bounds';
 import { CreatePartDto, SpecBandInputDto } from '../dto/part-input.dto';
+import { EFFICIENCY_BASES, FIGURE_STATISTICS, GAIN_BASES } from '../part.types';
 
 /** The import/export columns; the export adds id, review state, measured kinds and prices. */
 export const PART_CSV_COLUMNS = [
@@ -40,6 +41,12 @@ const BAND_KEYS: Record<string, keyof SpecBandInputDto> = {
   peak: 'peakGainDbi',
   avg: 'averageGainDbi',
 };
+/** Words, not numbers: what the figures include (see SpecBandInputDto); left out, the usual defaults apply. */
+const BAND_WORD_KEYS: Record<string, { field: 'efficiencyBasis' | 'efficiencyStatistic' | 'gainBasis'; values: readonly string[] }> = {
+  effbasis: { field: 'efficiencyBasis', values: EFFICIENCY_BASES },
+  effstat: { field: 'efficiencyStatistic', values: FIGURE_STATISTICS },
+  gainbasis: { field: 'gainBasis', values: GAIN_BASES },
+};
 
 export interface ImportProblem {
   /** Data row, 1-based (the header is not counted). */
@@ -55,7 +62,7 @@ export interface ParsedImport {
   problems: ImportProblem[];
 }
 
-/** `791-862 vswr=3 eff=45 peak=1.5 avg=-2.5; 880-960 vswr=3` → spec bands. */
+/** `791-862 vswr=3 eff=45 effbasis=total effstat=average peak=1.5 avg=-2.5 gainbasis=peak; 880-960 vswr=3` → spec bands. */
 export function parseSpecBandsText(text: string): { bands: SpecBandInputDto[]; error: string | null } {
   const bands: SpecBandInputDto[] = [];
   for (const [i, entry] of text
@@ -70,9 +77,15 @@ export function parseSpecBandsText(text: string): { bands: SpecBandInputDto[]; e
     if (!(band.fromMhz < band.toMhz)) return { bands, error: `band ${i + 1}: ${range} must go from low to high` };
     for (const pair of pairs) {
       const [key, value] = pair.split('=');
+      const word = BAND_WORD_KEYS[key?.toLowerCase()];
+      if (word) {
+        if (!word.values.includes(value)) return { bands, error: `band ${i + 1}: ${key}= must be one of ${word.values.join(', ')}` };
+        (band as unknown as Record<string, string>)[word.field] = value;
+        continue;
+      }
       const field = BAND_KEYS[key?.toLowerCase()];
       if (!field || value === undefined || value === '' || !Number.isFinite(Number(value))) {
-        return { bands, error: `band ${i + 1}: "${pair}" should be one of vswr=, rl=, eff=, peak=, avg= with a number` };
+        return { bands, error: `band ${i + 1}: "${pair}" should be one of vswr=, rl=, eff=, peak=, avg= with a number, or effbasis=, effstat=, gainbasis=` };
       }
       (band as unknown as Record<string, number>)[field] = Number(value);
     }
@@ -92,6 +105,7 @@ export function formatSpecBands(bands: readonly SpecBandInputDto[]): string {
         ...(Object.entries(BAND_KEYS) as [string, keyof SpecBandInputDto][]).flatMap(([key, field]) =>
           b[field] === null || b[field] === undefined ? [] : [`${key}=${b[field]}`],
         ),
+        ...Object.entries(BAND_WORD_KEYS).flatMap(([key, { field }]) => (b[field] === undefined ? [] : [`${key}=${b[field]}`])),
       ].join(' '),
     )
     .join('; ');

@@ -1,7 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import { type ReflectionCurve, reflectionCurveFromGamma } from '../../rf/reflection';
 import type { SampledCurve } from '../../rf/curves';
-import type { MeasurementKind } from '../part.types';
+import type { EfficiencyBasis, GainBasis, MeasurementBasis, MeasurementKind } from '../part.types';
 import { unpackFloat64 } from './point-codec';
 
 export interface GroundPlane {
@@ -25,9 +25,9 @@ export interface StoredCurve {
 
 export interface CurrentCurves {
   s11: StoredS11 | null;
-  efficiency: StoredCurve | null;
-  peakGain: StoredCurve | null;
-  averageGain: StoredCurve | null;
+  efficiency: (StoredCurve & { basis: EfficiencyBasis }) | null;
+  peakGain: (StoredCurve & { basis: GainBasis }) | null;
+  averageGain: (StoredCurve & { basis: GainBasis }) | null;
 }
 
 export const emptyCurves = (): CurrentCurves => ({ s11: null, efficiency: null, peakGain: null, averageGain: null });
@@ -36,6 +36,7 @@ interface CurveRow {
   id: number;
   part_id: number;
   kind: MeasurementKind;
+  basis: MeasurementBasis | null;
   reference_ohms: number | null;
   ground_length_mm: number | null;
   ground_width_mm: number | null;
@@ -59,7 +60,7 @@ export async function loadCurrentCurves(
   if ('ids' in partFilter && partFilter.ids.length === 0) return result;
   const [partSql, partParams] = 'ids' in partFilter ? ['?', [partFilter.ids]] : [partFilter.sql, partFilter.params];
   const rows: CurveRow[] = await manager.query(
-    `SELECT m.id, m.part_id, m.kind, m.reference_ohms, m.ground_length_mm, m.ground_width_mm, m.frequencies_hz, m.values_a, m.values_b
+    `SELECT m.id, m.part_id, m.kind, m.basis, m.reference_ohms, m.ground_length_mm, m.ground_width_mm, m.frequencies_hz, m.values_a, m.values_b
        FROM part_measurements m
       WHERE m.id IN (SELECT MAX(id) FROM part_measurements WHERE part_id IN (${partSql}) AND kind IN (?) GROUP BY part_id, kind)`,
     [...partParams, kinds],
@@ -79,9 +80,10 @@ export async function loadCurrentCurves(
       };
     } else {
       const stored: StoredCurve = { measurementId: row.id, groundPlane, curve: { frequenciesHz, values: unpackFloat64(row.values_a) } };
-      if (row.kind === 'efficiency') curves.efficiency = stored;
-      else if (row.kind === 'peak-gain') curves.peakGain = stored;
-      else curves.averageGain = stored;
+      // A row without a basis (written before the basis existed, or by a bulk loader) is read as it always was: radiation, peak.
+      if (row.kind === 'efficiency') curves.efficiency = { ...stored, basis: (row.basis as EfficiencyBasis | null) ?? 'radiation' };
+      else if (row.kind === 'peak-gain') curves.peakGain = { ...stored, basis: (row.basis as GainBasis | null) ?? 'peak' };
+      else curves.averageGain = { ...stored, basis: (row.basis as GainBasis | null) ?? 'peak' };
     }
   }
   return result;

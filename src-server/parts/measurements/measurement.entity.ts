@@ -2,7 +2,7 @@ import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGenerat
 import { StoredFileRecord } from '../../storage/stored-file-record';
 import { User } from '../../users/user.entity';
 import { Part } from '../part.entity';
-import { MEASUREMENT_KINDS, type MeasurementKind } from '../part.types';
+import { MEASUREMENT_BASES, MEASUREMENT_KINDS, type MeasurementBasis, type MeasurementKind } from '../part.types';
 
 /**
  * One measured curve. Points are packed float64 arrays (see point-codec.ts): for s11 values_a/values_b
@@ -22,6 +22,10 @@ export class Measurement extends StoredFileRecord {
 
   @Column({ type: 'enum', enum: MEASUREMENT_KINDS })
   kind: MeasurementKind;
+
+  /** What the curve includes: radiation or total (efficiency), peak or realized (gains); null for s11. */
+  @Column({ type: 'enum', enum: MEASUREMENT_BASES, nullable: true })
+  basis: MeasurementBasis | null;
 
   @Column({ name: 'ground_length_mm', type: 'double', nullable: true }) groundLengthMm: number | null;
   @Column({ name: 'ground_width_mm', type: 'double', nullable: true }) groundWidthMm: number | null;

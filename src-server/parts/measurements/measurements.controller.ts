@@ -21,6 +21,7 @@ import type { UploadedFile } from '../../storage/uploaded-file';
 import { MEASUREMENT_MAX_BYTES, MeasurementsService } from './measurements.service';
 import { UploadMeasurementDto, UploadMeasurementResultDto } from '../dto/upload.dto';
 import { MeasurementPointsDto } from '../dto/part-response.dto';
+import { MEASUREMENT_BASES, MEASUREMENT_KINDS } from '../part.types';
 
 @ApiTags('part measurements')
 @Controller('parts/:id/measurements')
@@ -37,7 +38,13 @@ export class MeasurementsController {
       required: ['file', 'kind'],
       properties: {
         file: { type: 'string', format: 'binary' },
-        kind: { type: 'string', enum: ['s11', 'efficiency', 'peak-gain', 'average-gain'] },
+        kind: { type: 'string', enum: [...MEASUREMENT_KINDS] },
+        basis: {
+          type: 'string',
+          enum: [...MEASUREMENT_BASES],
+          description:
+            'Required for efficiency (radiation: mismatch left out; total: mismatch included) and gains (peak: the antenna gain; realized: mismatch included); left out for s11. 400 VALIDATION_FAILED naming `basis` when missing or not of the kind',
+        },
         groundLengthMm: { type: 'number' },
         groundWidthMm: { type: 'number' },
         conditions: { type: 'string' },

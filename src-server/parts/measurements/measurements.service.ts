@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { DataSource } from 'typeorm';
 import type { AuthUser } from '../../common/auth.decorators';
-import { DomainError, NotFoundError } from '../../common/domain-error';
+import { DomainError, NotFoundError, ValidationFailedError } from '../../common/domain-error';
 import { AuditService } from '../../audit/audit.service';
 import { looksBinary } from '../../storage/limited-file-upload';
 import { StoredFiles, type StoredOriginal } from '../../storage/stored-files.service';
@@ -17,7 +17,7 @@ import { packFloat64, unpackFloat64 } from './point-codec';
 import { measurementDto, PartsService } from '../catalogue/parts.service';
 import type { CurvePreviewDto, UploadMeasurementDto, UploadMeasurementResultDto } from '../dto/upload.dto';
 import type { MeasurementPointsDto } from '../dto/part-response.dto';
-import type { MeasurementKind } from '../part.types';
+import { BASES_OF_KIND, type MeasurementBasis, type MeasurementKind } from '../part.types';
 
 const PREVIEW_POINTS = 400;
 /** 100,000 points of a two-port Touchstone file in RI stay well under this. */
@@ -26,6 +26,18 @@ export const MEASUREMENT_MAX_BYTES = 16 * 1024 * 1024;
 /** Served and stored by the measurement's kind (Touchstone for s11, CSV for the others), never as the uploader declared. */
 export function measurementContentType(kind: MeasurementKind): string {
   return kind === 's11' ? 'text/plain' : 'text/csv';
+}
+
+/** The basis a curve of this kind must state (form field `basis`): efficiency radiation | total, gains peak | realized, none for s11. */
+export function measurementBasisOf(kind: MeasurementKind, basis: MeasurementBasis | undefined): MeasurementBasis | null {
+  const allowed = BASES_OF_KIND[kind];
+  if (allowed.length === 0) {
+    if (basis === undefined) return null;
+    throw new ValidationFailedError([{ field: 'basis', message: `an ${kind} curve has no basis; leave the field out` }]);
+  }
+  if (basis === undefined) throw new ValidationFailedError([{ field: 'basis', message: `is required for ${kind}: one of ${allowed.join(', ')}` }]);
+  if (!allowed.includes(basis)) throw new ValidationFailedError([{ field: 'basis', message: `must be one of ${allowed.join(', ')} for ${kind}` }]);
+  return basis;
 }
 
 function previewOf(curve: ParsedCurve): CurvePreviewDto {
@@ -61,6 +73,7 @@ export class MeasurementsService {
 
   /** The one validation of a measurement file: the dry run ("Check file"), the upload and the demo seeder all call it. */
   parse(file: UploadedFile, input: UploadMeasurementDto): ParsedCurve {
+    measurementBasisOf(input.kind, input.basis);
     if (file.size > MEASUREMENT_MAX_BYTES) {
       throw new DomainError(
         'MEASUREMENT_FILE_TOO_LARGE',
@@ -111,6 +124,7 @@ export class MeasurementsService {
         ...stored,
         partId,
         kind: curve.kind,
+        basis: measurementBasisOf(curve.kind, input.basis),
         groundLengthMm: input.groundLengthMm ?? null,
         groundWidthMm: input.groundWidthMm ?? null,
         conditions: input.conditions ?? null,
@@ -134,6 +148,7 @@ export class MeasurementsService {
         changes: {
           measurementId,
           kind: curve.kind,
+          basis: input.basis ?? null,
           fileName: file.originalname,
           points: n,
           groundLengthMm: input.groundLengthMm ?? null,

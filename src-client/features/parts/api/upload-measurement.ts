@@ -1,13 +1,15 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidatePart } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { MeasurementKind, MeasurementUploadResult } from '../types';
+import type { MeasurementBasis, MeasurementKind, MeasurementUploadResult } from '../types';
 
 /** The multipart form of POST /parts/:id/measurements, with the browser's File and the fields as typed. */
 export interface MeasurementUpload {
   id: number;
   file: File;
   kind: MeasurementKind;
+  /** Efficiency radiation | total, gains peak | realized; none for S11. */
+  basis?: MeasurementBasis;
   groundLengthMm?: string;
   groundWidthMm?: string;
   conditions?: string;

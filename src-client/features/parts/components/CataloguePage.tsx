@@ -216,7 +216,7 @@ export function CataloguePage() {
               onValueChange={(v) => Number.isFinite(v) && v >= 1 && setVswrMax(v)}
             />
           </FormGroup>
-          <FormGroup label="with efficiency ≥ (%)" className="bw-filter">
+          <FormGroup label="with total efficiency ≥ (%)" className="bw-filter">
             <NumericInput
               aria-label="Efficiency at least"
               min={0}

@@ -3,7 +3,7 @@ import { Button, Callout, Dialog, DialogBody, DialogFooter, FileInput, FormGroup
 import { FrequencyChart } from '../../../components/FrequencyChart';
 import { ApiError } from '../../../lib/api-client';
 import { useUploadMeasurement } from '../api/upload-measurement';
-import { MEASUREMENT_KINDS, type CurvePreview, type MeasurementKind } from '../types';
+import { MEASUREMENT_KINDS, type CurvePreview, type MeasurementBasis, type MeasurementKind } from '../types';
 
 export interface MeasurementUploadDialogProps {
   partId: number;
@@ -15,15 +15,43 @@ export interface MeasurementUploadDialogProps {
 
 const KIND_LABEL: Record<MeasurementKind, string> = {
   s11: 'S11 (Touchstone .s1p/.s2p)',
-  efficiency: 'Radiation efficiency (CSV)',
+  efficiency: 'Efficiency (CSV)',
   'peak-gain': 'Peak gain (CSV)',
   'average-gain': 'Average gain (CSV)',
 };
+
+/** What the curve includes, in words; the first choice is the usual one and is preselected. */
+const BASIS_CHOICES: Record<MeasurementKind, { value: MeasurementBasis; label: string }[]> = {
+  s11: [],
+  efficiency: [
+    { value: 'total', label: 'Total efficiency (includes mismatch loss)' },
+    { value: 'radiation', label: 'Radiation efficiency (mismatch not included)' },
+  ],
+  'peak-gain': [
+    { value: 'peak', label: 'Antenna gain (mismatch not included)' },
+    { value: 'realized', label: 'Realized gain (includes mismatch loss)' },
+  ],
+  'average-gain': [
+    { value: 'peak', label: 'Antenna gain (mismatch not included)' },
+    { value: 'realized', label: 'Realized gain (includes mismatch loss)' },
+  ],
+};
+
+const BASIS_HELP: Record<MeasurementKind, string> = {
+  s11: '',
+  efficiency:
+    'Chamber reports and most datasheets give total efficiency, which already includes the mismatch; radiation efficiency leaves it out and is combined with the S11 curve.',
+  'peak-gain': 'Datasheets usually give the antenna gain; choose realized gain if the figure already includes the mismatch.',
+  'average-gain': 'Datasheets usually give the antenna gain; choose realized gain if the figure already includes the mismatch.',
+};
+
+const usualBasis = (kind: MeasurementKind): MeasurementBasis | undefined => BASIS_CHOICES[kind][0]?.value;
 
 /** Check a file first (nothing stored: the preview or the offending line), then upload it with progress. */
 export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround }: MeasurementUploadDialogProps) {
   const upload = useUploadMeasurement();
   const [kind, setKind] = useState<MeasurementKind>('s11');
+  const [basis, setBasis] = useState<MeasurementBasis | undefined>(undefined);
   const [file, setFile] = useState<File | null>(null);
   const [ground, setGround] = useState({ length: '', width: '' });
   const [conditions, setConditions] = useState('');
@@ -51,6 +79,7 @@ export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround
         id: partId,
         file,
         kind,
+        basis,
         dryRun,
         groundLengthMm: ground.length,
         groundWidthMm: ground.width,
@@ -83,7 +112,9 @@ export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround
               id="upload-kind"
               value={kind}
               onChange={(e) => {
-                setKind(e.currentTarget.value as MeasurementKind);
+                const next = e.currentTarget.value as MeasurementKind;
+                setKind(next);
+                setBasis(usualBasis(next));
                 setPreview(null);
                 setError(null);
               }}
@@ -115,6 +146,15 @@ export function MeasurementUploadDialog({ partId, isOpen, onClose, defaultGround
           </FormGroup>
           {kind !== 's11' && (
             <>
+              <FormGroup label="The figures are" labelFor="upload-basis" helperText={BASIS_HELP[kind]}>
+                <HTMLSelect id="upload-basis" value={basis} onChange={(e) => setBasis(e.currentTarget.value as MeasurementBasis)}>
+                  {BASIS_CHOICES[kind].map((choice) => (
+                    <option key={choice.value} value={choice.value}>
+                      {choice.label}
+                    </option>
+                  ))}
+                </HTMLSelect>
+              </FormGroup>
               <FormGroup label="Frequency unit (if not in the header)" labelFor="upload-fu">
                 <HTMLSelect
                   id="upload-fu"

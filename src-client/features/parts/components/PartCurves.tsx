@@ -51,7 +51,7 @@ export function PartCurves({ part, overlays }: PartCurvesProps) {
       )}
       {efficiency.data && (
         <FrequencyChart
-          title="Radiation efficiency"
+          title={part.measurements.find((m) => m.kind === 'efficiency' && m.current)?.basis === 'total' ? 'Total efficiency' : 'Radiation efficiency'}
           frequencyHz={efficiency.data.frequenciesHz}
           series={[{ label: 'Efficiency', unit: '%', values: efficiency.data.values, range: [0, 100] }]}
           ranges={overlays}
@@ -98,7 +98,10 @@ export function PartCurves({ part, overlays }: PartCurvesProps) {
               <td>{fmt(f.worstVswr)}</td>
               <td>{fmt(f.worstVswrAtMhz, 1)}</td>
               <td>{fmt(f.minReturnLossDb, 1)}</td>
-              <td>{f.efficiencySource}</td>
+              <td>
+                {f.efficiencySource}
+                {f.efficiencyBasis && <span className="bw-muted">{` (${f.efficiencyBasis})`}</span>}
+              </td>
               <td>{fmt(f.minEfficiencyPct, 1)}</td>
               <td>{fmt(f.averageEfficiencyPct, 1)}</td>
               <td>{fmt(f.peakGainDbi, 1)}</td>

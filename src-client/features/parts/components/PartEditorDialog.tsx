@@ -3,7 +3,18 @@ import { Button, Callout, Classes, Dialog, DialogBody, DialogFooter, FormGroup, 
 import { ApiError } from '../../../lib/api-client';
 import { useCreatePart } from '../api/create-part';
 import { useUpdatePart } from '../api/update-part';
-import { CONNECTORS, FORM_FACTORS, LIFECYCLES, POLARIZATIONS, type PartDetail, type PartInput, type SpecBand } from '../types';
+import {
+  CONNECTORS,
+  type EfficiencyBasis,
+  FORM_FACTORS,
+  type FigureStatistic,
+  type GainBasis,
+  LIFECYCLES,
+  POLARIZATIONS,
+  type PartDetail,
+  type PartInput,
+  type SpecBand,
+} from '../types';
 
 export interface PartEditorDialogProps {
   isOpen: boolean;
@@ -13,7 +24,40 @@ export interface PartEditorDialogProps {
   part?: PartDetail;
 }
 
-type BandRow = Record<'fromMhz' | 'toMhz' | 'maxVswr' | 'efficiencyPct' | 'peakGainDbi', string>;
+type BandRow = Record<'fromMhz' | 'toMhz' | 'maxVswr' | 'efficiencyPct' | 'peakGainDbi', string> & {
+  efficiencyBasis: EfficiencyBasis;
+  efficiencyStatistic: FigureStatistic;
+  gainBasis: GainBasis;
+};
+/** What most datasheets quote: total efficiency averaged over the band, and the antenna's peak gain. */
+const USUAL_BASES = { efficiencyBasis: 'total', efficiencyStatistic: 'average', gainBasis: 'peak' } as const;
+const EMPTY_BAND: BandRow = { fromMhz: '', toMhz: '', maxVswr: '', efficiencyPct: '', peakGainDbi: '', ...USUAL_BASES };
+const BASIS_SELECTS = [
+  {
+    key: 'efficiencyBasis',
+    label: 'efficiency basis',
+    options: [
+      { value: 'total', label: 'total efficiency' },
+      { value: 'radiation', label: 'radiation efficiency' },
+    ],
+  },
+  {
+    key: 'efficiencyStatistic',
+    label: 'efficiency over the band',
+    options: [
+      { value: 'average', label: 'band average' },
+      { value: 'minimum', label: 'band minimum' },
+    ],
+  },
+  {
+    key: 'gainBasis',
+    label: 'gain basis',
+    options: [
+      { value: 'peak', label: 'antenna gain' },
+      { value: 'realized', label: 'realized gain' },
+    ],
+  },
+] as const;
 const TEXT_FIELDS = ['manufacturer', 'mpn', 'title', 'mounting', 'notes'] as const;
 const NUMBER_FIELDS = ['nominalImpedanceOhms', 'evalGroundLengthMm', 'evalGroundWidthMm', 'lengthMm', 'widthMm', 'heightMm', 'tempMinC', 'tempMaxC'] as const;
 const NUMBER_LABELS: Record<(typeof NUMBER_FIELDS)[number], string> = {
@@ -35,6 +79,9 @@ const bandRow = (b: SpecBand): BandRow => ({
   maxVswr: str(b.maxVswr),
   efficiencyPct: str(b.efficiencyPct),
   peakGainDbi: str(b.peakGainDbi),
+  efficiencyBasis: b.efficiencyBasis,
+  efficiencyStatistic: b.efficiencyStatistic,
+  gainBasis: b.gainBasis,
 });
 
 /** Create a draft or edit a part; spec bands are edited as rows and saved together with the part. */
@@ -75,8 +122,11 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
         maxVswr: num(b.maxVswr),
         minReturnLossDb: null,
         efficiencyPct: num(b.efficiencyPct),
+        efficiencyBasis: b.efficiencyBasis,
+        efficiencyStatistic: b.efficiencyStatistic,
         peakGainDbi: num(b.peakGainDbi),
         averageGainDbi: null,
+        gainBasis: b.gainBasis,
       })),
     };
     if (fields.nominalImpedanceOhms === null) delete fields.nominalImpedanceOhms;
@@ -121,7 +171,7 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
   );
 
   return (
-    <Dialog isOpen={isOpen} onClose={onClose} title={part ? `Edit ${part.mpn}` : 'New draft part'} style={{ width: 760 }}>
+    <Dialog isOpen={isOpen} onClose={onClose} title={part ? `Edit ${part.mpn}` : 'New draft part'} style={{ width: 1000 }}>
       <DialogBody>
         {error && !Object.keys(error.fieldErrors).length && (
           <Callout intent={Intent.DANGER} className="bw-gap">
@@ -152,6 +202,10 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
         </FormGroup>
         <h4 className={Classes.HEADING}>Datasheet bands</h4>
         <p className="bw-muted">Used by search and checks where no measured curve covers a range.</p>
+        <p className="bw-muted">
+          Total efficiency includes the mismatch loss; radiation efficiency leaves it out and is combined with the band&apos;s VSWR. Most datasheets quote total
+          efficiency averaged over the band, and the antenna&apos;s peak gain: these are preselected.
+        </p>
         {bands.map((band, i) => (
           <div key={i} className="bw-row bw-gap">
             {(['fromMhz', 'toMhz', 'maxVswr', 'efficiencyPct', 'peakGainDbi'] as const).map((k) => (
@@ -168,14 +222,27 @@ export function PartEditorDialog({ isOpen, onClose, onSaved, part }: PartEditorD
                 }}
               />
             ))}
+            {BASIS_SELECTS.map((select) => (
+              <HTMLSelect
+                key={select.key}
+                aria-label={`Band ${i + 1} ${select.label}`}
+                value={band[select.key]}
+                onChange={(e) => {
+                  const value = e.currentTarget.value;
+                  setBands((rows) => rows.map((r, j) => (j === i ? { ...r, [select.key]: value } : r)));
+                }}
+              >
+                {select.options.map((o) => (
+                  <option key={o.value} value={o.value}>
+                    {o.label}
+                  </option>
+                ))}
+              </HTMLSelect>
+            ))}
             <Button icon="cross" variant="minimal" aria-label={`Remove band ${i + 1}`} onClick={() => setBands((rows) => rows.filter((_, j) => j !== i))} />
           </div>
         ))}
-        <Button
-          icon="add"
-          text="Add band"
-          onClick={() => setBands((rows) => [...rows, { fromMhz: '', toMhz: '', maxVswr: '', efficiencyPct: '', peakGainDbi: '' }])}
-        />
+        <Button icon="add" text="Add band" onClick={() => setBands((rows) => [...rows, { ...EMPTY_BAND }])} />
       </DialogBody>
       <DialogFooter
         actions={

@@ -97,8 +97,14 @@ function Overview({ part }: { part: PartDetail }) {
                   </td>
                   <td>{fmt(b.maxVswr)}</td>
                   <td>{fmt(b.minReturnLossDb, 1)}</td>
-                  <td>{fmt(b.efficiencyPct, 0)}</td>
-                  <td>{fmt(b.peakGainDbi, 1)}</td>
+                  <td>
+                    {fmt(b.efficiencyPct, 0)}
+                    {b.efficiencyPct !== null && <span className="bw-muted">{` ${b.efficiencyBasis}, band ${b.efficiencyStatistic}`}</span>}
+                  </td>
+                  <td>
+                    {fmt(b.peakGainDbi, 1)}
+                    {b.peakGainDbi !== null && b.gainBasis === 'realized' && <span className="bw-muted"> realized</span>}
+                  </td>
                   <td>{fmt(b.averageGainDbi, 1)}</td>
                 </tr>
               ))}

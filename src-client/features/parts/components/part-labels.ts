@@ -19,12 +19,14 @@ export function bandSpan(band: LibraryBand): { fromMhz: number; toMhz: number } 
   return { fromMhz: Math.min(...band.ranges.map((r) => r.fromMhz)), toMhz: Math.max(...band.ranges.map((r) => r.toMhz)) };
 }
 
+/**
+ * The search's `covers`: every range of every band, each checked on its own as the matrix checks it, so a part
+ * that misses only the gap between a band's uplink and downlink is still found.
+ */
 export const rangesParam = (bands: LibraryBand[]) =>
   bands
-    .map((b) => {
-      const s = bandSpan(b);
-      return `${s.fromMhz}-${s.toMhz}`;
-    })
+    .flatMap((b) => b.ranges.map((r) => `${r.fromMhz}-${r.toMhz}`))
+    .filter((range, i, all) => all.indexOf(range) === i)
     .join(',');
 
 export const fmt = (value: number | null | undefined, digits = 2) =>

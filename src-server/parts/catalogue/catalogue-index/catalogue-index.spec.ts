@@ -1,5 +1,10 @@
 import fc from 'fast-check';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr } from '../../../rf/mismatch';
+import type { EfficiencyBasis } from '../../../rf/figure-basis';
+import type { SpecBandClaim } from '../../spec-coverage';
+import { computeFacts } from '../../../compatibility/engine/compute-facts';
+import { constructedRequirement, rangeMhz } from '../../../compatibility/engine/fixtures';
+import { reflectionCurveFromGamma } from '../../../rf/reflection';
 import {
   CatalogueIndex,
   type CoverageQuery,
@@ -31,20 +36,31 @@ function part(id: number, overrides: Partial<IndexedPart> = {}): IndexedPart {
     updatedAtMs: id,
     gamma: null,
     efficiency: null,
+    efficiencyBasis: 'total',
     specBands: [],
     ...overrides,
   };
 }
 
 const curve = (points: [number, number][]) => ({ frequenciesHz: points.map(([f]) => f * MHZ), values: points.map(([, v]) => v) });
-const band = (fromMhz: number, toMhz: number, maxVswr: number | null, efficiencyPct: number | null = null, minReturnLossDb: number | null = null) => ({
+const band = (
+  fromMhz: number,
+  toMhz: number,
+  maxVswr: number | null,
+  efficiencyPct: number | null = null,
+  minReturnLossDb: number | null = null,
+  efficiencyBasis: EfficiencyBasis = 'total',
+): SpecBandClaim => ({
   fromHz: fromMhz * MHZ,
   toHz: toMhz * MHZ,
   maxVswr,
   minReturnLossDb,
   efficiencyPct,
+  efficiencyBasis,
+  efficiencyStatistic: 'minimum',
   peakGainDbi: null,
   averageGainDbi: null,
+  gainBasis: 'peak',
 });
 
 describe(extremeInRange.name, () => {
@@ -154,8 +170,9 @@ describe(screenRejects.name, () => {
       fc.integer({ min: 0, max: 200 }),
       fc.option(fc.constantFrom(1.5, 2, 3), { nil: null }),
       fc.option(fc.constantFrom(30, 40, 50, 60), { nil: null }),
+      fc.constantFrom<EfficiencyBasis>('radiation', 'total'),
     )
-    .map(([from, width, vswr, efficiency]) => band(from, from + width, vswr, efficiency));
+    .map(([from, width, vswr, efficiency, basis]) => band(from, from + width, vswr, efficiency, null, basis));
   const edge = fc.oneof(fc.integer({ min: 550, max: 1050 }), fc.double({ min: 550, max: 1050, noNaN: true }));
   const range = fc
     .tuple(edge, edge)
@@ -172,10 +189,11 @@ describe(screenRejects.name, () => {
       fc.property(
         fc.option(sampled(gammaValue), { nil: null }),
         fc.option(sampled(efficiencyValue), { nil: null }),
+        fc.constantFrom<EfficiencyBasis>('radiation', 'total'),
         fc.array(specBand, { maxLength: 3 }),
         query,
-        (gamma, efficiency, specBands, q) => {
-          const p = part(1, { gamma, efficiency, specBands: [...specBands].sort((a, b) => a.fromHz - b.fromHz) });
+        (gamma, efficiency, efficiencyBasis, specBands, q) => {
+          const p = part(1, { gamma, efficiency, efficiencyBasis, specBands: [...specBands].sort((a, b) => a.fromHz - b.fromHz) });
           const exact = meetsCoverage(p, q);
           if (screenRejects(coverageScreen(p), screenLevels(q), q)) expect(exact).toBe(false);
           const index = new CatalogueIndex();
@@ -227,3 +245,80 @@ describe(screenRejects.name, () => {
     expect(meetsCoverage(p, at(2))).toBe(true);
   });
 });
+
+describe('one definition of "covers" for search and matrix', () => {
+  // Pozar, Microwave Engineering 4th ed. §2.3: |Γ| = (VSWR − 1)/(VSWR + 1) = 0.5 at VSWR 3, transmitted 1 − |Γ|² = 75 %.
+  const vswr3 = curve([
+    [700, 0.5],
+    [1000, 0.5],
+  ]);
+  const b8 = { ranges: [rangeMhz(880, 915), rangeMhz(925, 960)], vswrMax: 3 };
+
+  it('filters on total efficiency: 40 % radiation efficiency at VSWR 3 is 30 % total, 40 % stated as total stays 40 %', () => {
+    const flat40 = curve([
+      [700, 40],
+      [1000, 40],
+    ]);
+    const radiation = part(1, { gamma: vswr3, efficiency: flat40, efficiencyBasis: 'radiation' });
+    const total = part(2, { gamma: vswr3, efficiency: flat40, efficiencyBasis: 'total' });
+    // η_tot = η_rad (1 − |Γ|²) = 40 % × 0.75 = 30 % (IEEE Std 145-2013 definitions, from memory).
+    expect(meetsCoverage(radiation, { ...b8, minEfficiencyPct: 30 })).toBe(true);
+    expect(meetsCoverage(radiation, { ...b8, minEfficiencyPct: 30.01 })).toBe(false);
+    expect(meetsCoverage(total, { ...b8, minEfficiencyPct: 40 })).toBe(true);
+    expect(meetsCoverage(total, { ...b8, minEfficiencyPct: 40.01 })).toBe(false);
+  });
+
+  it('reads each spec band by its own basis', () => {
+    const spec = part(3, { specBands: [band(870, 970, 3, 40, null, 'radiation')] });
+    expect(meetsCoverage(spec, { ...b8, minEfficiencyPct: 30 })).toBe(true);
+    expect(meetsCoverage(spec, { ...b8, minEfficiencyPct: 30.01 })).toBe(false);
+  });
+
+  it('checks each range of a band, so a part that misses only the duplex gap is found, as the matrix judges it', () => {
+    // 3GPP TS 36.101 Table 5.5-1: band 8 UL 880–915 MHz, DL 925–960 MHz; the part is mismatched (|Γ| 0.9) only between them.
+    const gamma = curve([
+      [850, 0.2],
+      [915, 0.2],
+      [918, 0.9],
+      [922, 0.9],
+      [925, 0.2],
+      [990, 0.2],
+    ]);
+    const efficiency = curve([
+      [850, 50],
+      [990, 50],
+    ]);
+    const indexed = part(4, { gamma, efficiency, efficiencyBasis: 'total' });
+    const query = { ranges: [rangeMhz(880, 915), rangeMhz(925, 960)], vswrMax: 2, minEfficiencyPct: 50 };
+    expect(meetsCoverage(indexed, query)).toBe(true);
+    // One span from the lowest to the highest edge would have turned it away.
+    expect(meetsCoverage(indexed, { ...query, ranges: [rangeMhz(880, 960)] })).toBe(false);
+    const facts = computeFacts(
+      constructedRequirement({ designation: 'B8', ranges: [rangeMhz(880, 915, 'uplink'), rangeMhz(925, 960, 'downlink')] }),
+      constructedPartForIndex(indexed),
+    );
+    expect(facts.coverageAtVswr2Pct).toBe(100);
+    expect(facts.minTotalEfficiencyPct).toBe(50);
+  });
+});
+
+/** The same data as the rules engine reads it. */
+function constructedPartForIndex(p: IndexedPart) {
+  const frequenciesHz = Float64Array.from(p.gamma!.frequenciesHz);
+  return {
+    partId: p.id,
+    mpn: p.mpn,
+    title: p.title,
+    reflection: reflectionCurveFromGamma(frequenciesHz, Float64Array.from(p.gamma!.values), new Float64Array(frequenciesHz.length)),
+    efficiencyPercent: p.efficiency,
+    efficiencyBasis: p.efficiencyBasis,
+    peakGainDbi: null,
+    gainBasis: 'peak' as const,
+    averageGainDbi: null,
+    specBands: [],
+    evaluationGroundPlane: null,
+    polarization: 'linear' as const,
+    reviewState: 'approved' as const,
+    lifecycle: 'active' as const,
+  };
+}

@@ -1,7 +1,8 @@
 import { type FrequencyRange, type SampledCurve, interpolateAt, segmentIndex } from '../../../rf/curves';
 import { gammaMagnitudeFromReturnLossDb, gammaMagnitudeFromVswr, vswrFromReturnLossDb } from '../../../rf/mismatch';
-import type { Connector, FormFactor, Lifecycle, MeasurementKind, PartPolarization, ReviewState } from '../../part.types';
+import type { Connector, EfficiencyBasis, FormFactor, Lifecycle, MeasurementKind, PartPolarization, ReviewState } from '../../part.types';
 import { type SpecBandClaim, claimedMaxVswr, specBandsCover } from '../../spec-coverage';
+import { type EfficiencySource, minTotalEfficiencyPctInRange } from '../../../compatibility/engine/compute-facts';
 
 /**
  * The in-memory search index of the catalogue: every part's filterable fields, its newest |Γ| and
@@ -27,14 +28,17 @@ export interface IndexedPart {
   readonly updatedAtMs: number;
   /** |Γ| of the newest S11 measurement. */
   readonly gamma: SampledCurve | null;
-  /** Radiation efficiency in % of the newest efficiency measurement. */
+  /** Efficiency in % of the newest efficiency measurement, of the basis below. */
   readonly efficiency: SampledCurve | null;
+  readonly efficiencyBasis: EfficiencyBasis;
   readonly specBands: readonly SpecBandClaim[];
 }
 
 export interface CoverageQuery {
+  /** Every range of every band asked for, each checked on its own (never one span from the lowest to the highest edge). */
   readonly ranges: readonly FrequencyRange[];
   readonly vswrMax: number;
+  /** Floor on total efficiency, as the matrix counts it (minTotalEfficiencyPct). */
   readonly minEfficiencyPct?: number;
 }
 
@@ -75,7 +79,27 @@ export function extremeInRange(curve: SampledCurve, range: FrequencyRange, mode:
   return best;
 }
 
-/** Measured curves first; where a curve does not reach the range, the spec bands decide. */
+const efficiencySources = new WeakMap<IndexedPart, EfficiencySource>();
+
+/** The part as the rules engine reads its efficiency: one object per indexed part, so the engine's per-part caches hold. */
+function efficiencySourceOf(part: IndexedPart): EfficiencySource {
+  let source = efficiencySources.get(part);
+  if (!source) {
+    source = {
+      efficiencyPercent: part.efficiency,
+      efficiencyBasis: part.efficiencyBasis,
+      specBands: part.specBands.map((b) => ({ ...b, efficiencyPercent: b.efficiencyPct })),
+    };
+    efficiencySources.set(part, source);
+  }
+  return source;
+}
+
+/**
+ * Measured curves first; where a curve does not reach the range, the spec bands decide. The efficiency floor
+ * applies to total efficiency worked out by the rules engine itself (minTotalEfficiencyPctInRange), so a part
+ * the search finds is one the matrix and the candidates judge by the same figure.
+ */
 export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean {
   const gammaLimit = gammaMagnitudeFromVswr(query.vswrMax);
   for (const range of query.ranges) {
@@ -91,12 +115,8 @@ export function meetsCoverage(part: IndexedPart, query: CoverageQuery): boolean 
       return false;
     }
     if (query.minEfficiencyPct !== undefined) {
-      const minEfficiency = part.efficiency ? extremeInRange(part.efficiency, range, 'min') : undefined;
-      if (minEfficiency !== undefined) {
-        if (minEfficiency < query.minEfficiencyPct) return false;
-      } else if (!specBandsCover(part.specBands, range, (b) => b.efficiencyPct !== null && b.efficiencyPct >= query.minEfficiencyPct!)) {
-        return false;
-      }
+      const minTotal = minTotalEfficiencyPctInRange(efficiencySourceOf(part), part.gamma, range);
+      if (minTotal === null || minTotal < query.minEfficiencyPct) return false;
     }
   }
   return true;
@@ -111,6 +131,8 @@ const SCREEN_GAMMA_LIMITS: readonly number[] = [...[1.5, 2, 2.5, 3, 4, 6].map(ga
 );
 /** The same levels as VSWR, for spec bands, which claimedMaxVswr states as VSWR. */
 const SCREEN_SPEC_VSWR: readonly number[] = [1.5, 2, 2.5, 3, 4, 6, vswrFromReturnLossDb(10)].sort((a, b) => a - b);
+/** Far above the facts' rounding to 1e-9 (roundFactValue), far below any figure that matters. */
+const ROUNDING_SLACK_PCT = 1e-6;
 /** Efficiency floors in % the screen is built for; a query uses the highest one at or below its own floor. */
 const SCREEN_EFFICIENCY_FLOORS: readonly number[] = [10, 20, 30, 40, 50, 60, 70, 80, 90];
 
@@ -245,12 +267,17 @@ const outsideHull = (hull: Float64Array, level: number, range: FrequencyRange) =
 export function coverageScreen(part: IndexedPart): CoverageScreen {
   return {
     gamma: part.gamma ? curveScreen(part.gamma, SCREEN_GAMMA_LIMITS, (value, limit) => value > limit) : null,
-    efficiency: part.efficiency ? curveScreen(part.efficiency, SCREEN_EFFICIENCY_FLOORS, (value, floor) => value < floor) : null,
+    // Total efficiency is at most the stated figure (× (1 − |Γ|²) ≤ 1), so a stated sample under the floor fails it; the slack covers the facts' rounding.
+    efficiency: part.efficiency ? curveScreen(part.efficiency, SCREEN_EFFICIENCY_FLOORS, (value, floor) => value < floor - ROUNDING_SLACK_PCT) : null,
     specVswrHull: specHull(part.specBands, SCREEN_SPEC_VSWR, (band, level) => {
       const v = claimedMaxVswr(band);
       return v !== null && v <= level;
     }),
-    specEfficiencyHull: specHull(part.specBands, SCREEN_EFFICIENCY_FLOORS, (band, floor) => band.efficiencyPct !== null && band.efficiencyPct >= floor),
+    specEfficiencyHull: specHull(
+      part.specBands,
+      SCREEN_EFFICIENCY_FLOORS,
+      (band, floor) => band.efficiencyPct !== null && band.efficiencyPct >= floor - ROUNDING_SLACK_PCT,
+    ),
   };
 }
 

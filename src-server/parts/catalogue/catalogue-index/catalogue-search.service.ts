@@ -152,7 +152,7 @@ export class CatalogueSearchService {
         [since],
       ) as Promise<{ part_id: number; currency: string; price: string }[]>,
       manager.query(
-        `SELECT part_id, from_mhz AS fromMhz, to_mhz AS toMhz, max_vswr AS maxVswr, min_return_loss_db AS minReturnLossDb, efficiency_pct AS efficiencyPct, peak_gain_dbi AS peakGainDbi, average_gain_dbi AS averageGainDbi FROM part_spec_bands WHERE part_id IN (${changed})`,
+        `SELECT part_id, from_mhz AS fromMhz, to_mhz AS toMhz, max_vswr AS maxVswr, min_return_loss_db AS minReturnLossDb, efficiency_pct AS efficiencyPct, efficiency_basis AS efficiencyBasis, efficiency_statistic AS efficiencyStatistic, gain_basis AS gainBasis, peak_gain_dbi AS peakGainDbi, average_gain_dbi AS averageGainDbi FROM part_spec_bands WHERE part_id IN (${changed})`,
         [since],
       ),
       manager.query(`SELECT DISTINCT part_id, kind FROM part_measurements WHERE part_id IN (${changed})`, [since]) as Promise<
@@ -188,6 +188,7 @@ export class CatalogueSearchService {
           updatedAtMs: new Date(row.updated_at).getTime(),
           gamma: s11 ? { frequenciesHz: s11.frequenciesHz, values: s11.gammaMagnitude } : null,
           efficiency: current?.efficiency?.curve ?? null,
+          efficiencyBasis: current?.efficiency?.basis ?? 'radiation',
           specBands: (bandsBy.get(row.id) ?? []).map((b): SpecBandClaim => specBandClaim(b)).sort((a, b) => a.fromHz - b.fromHz),
         };
       }),
@@ -197,12 +198,4 @@ export class CatalogueSearchService {
   }
 }
 
-interface SpecBandClaimRow {
-  fromMhz: number;
-  toMhz: number;
-  maxVswr: number | null;
-  minReturnLossDb: number | null;
-  efficiencyPct: number | null;
-  peakGainDbi: number | null;
-  averageGainDbi: number | null;
-}
+type SpecBandClaimRow = Parameters<typeof specBandClaim>[0];
