@@ -10,6 +10,7 @@ import type { CreateRegulatoryLimitDto, RegulatoryLimitDto, RegulatoryLimitQuery
 
 const FIELDS: (keyof RegulatoryLimit)[] = [
   'region',
+  'technologies',
   'title',
   'fromMhz',
   'toMhz',
@@ -27,6 +28,7 @@ function toDto(limit: RegulatoryLimit): RegulatoryLimitDto {
   return {
     id: limit.id,
     region: limit.region,
+    technologies: limit.technologies ?? [],
     title: limit.title,
     fromMhz: limit.fromMhz,
     toMhz: limit.toMhz,
@@ -66,6 +68,7 @@ export class RegulatoryLimitsService {
     const window = checkFrequencyWindow(query.fromMhz, query.toMhz);
     const q = this.dataSource.getRepository(RegulatoryLimit).createQueryBuilder('l').orderBy('l.region').addOrderBy('l.from_mhz').addOrderBy('l.id');
     if (query.region) q.andWhere('l.region = :region', { region: query.region });
+    if (query.technology) q.andWhere('JSON_CONTAINS(l.technologies, :technology)', { technology: JSON.stringify(query.technology) });
     if (window) q.andWhere('l.from_mhz <= :to AND l.to_mhz >= :from', { from: window.fromMhz, to: window.toMhz });
     return (await q.getMany()).map(toDto);
   }

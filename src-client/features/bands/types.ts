@@ -37,10 +37,12 @@ export const TECHNOLOGY_LABELS: Record<Technology, string> = {
   other: 'Other',
 };
 
-export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const;
+/** The markets offered in forms: global, the groupings (EU, CEPT, ASIA) and common ISO 3166-1 country codes; the server takes any ISO code. */
+export const REGIONS = ['global', 'EU', 'CEPT', 'ASIA', 'GB', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN'] as const;
 
 export const LIMIT_KIND_LABELS: Record<LimitKind, string> = {
   eirp: 'EIRP',
   erp: 'ERP',
+  conducted: 'Conducted power at the radio port',
   'conducted-gain-rule': 'Conducted power with antenna-gain rule',
 };

@@ -180,11 +180,18 @@ describe('certified-gain-cap', () => {
     expect(over.finding!.message).toBe("peak gain 2.01 dBi on the transmit ranges of B12 is 0.01 dB over the module's certified maximum of 2 dBi");
   });
 
-  it('does not apply when the grant states no gain or the radio only receives', async () => {
-    const none = await check('certified-gain-cap', lte(), constructedPart({ gainDbi: 9 }));
-    expect(none.verdict.findings).toEqual([]);
+  it('does not apply when the radio only receives', async () => {
     const rx = await check('certified-gain-cap', lte({ certifiedMaxGainDbi: 2, txPowerDbm: null }), constructedPart({ gainDbi: 9 }));
     expect(rx.verdict.findings).toEqual([]);
+  });
+
+  it('leaves a transmitting band with no certified gain entered "not checked", with a code that says so (issue 12)', async () => {
+    const none = await check('certified-gain-cap', lte({ certifiedMaxGainDbi: null }), constructedPart({ gainDbi: 1 }));
+    expect(none.verdict.status).toBe('no-data');
+    expect(none.finding).toMatchObject({ severity: 'no-data', code: 'CERTIFIED_GAIN_NOT_ENTERED' });
+    // Gain entered but the part's gain unknown: the rule's general "no data", not the missing-entry code.
+    const noGain = await check('certified-gain-cap', lte({ certifiedMaxGainDbi: 2 }), constructedPart({ gainDbi: 1 }, { peakGainDbi: null }));
+    expect(noGain.finding).toMatchObject({ severity: 'no-data', code: 'GAIN_OVER_CERTIFIED_NO_DATA' });
   });
 
   it('looks at the transmit ranges only: a gain peak in the downlink does not count', async () => {

@@ -8,6 +8,7 @@ import { CreatePendingUploads1765100000000 } from './1765100000000-create-pendin
 import { HardenAccounts1765300000000 } from './1765300000000-harden-accounts';
 import { OwnershipAndLocking1765310000000 } from './1765310000000-ownership-and-locking';
 import { OneApiVocabulary1765400000000 } from './1765400000000-one-api-vocabulary';
+import { LimitsByServiceAndMarkets1765520000000 } from './1765520000000-limits-by-service-and-markets';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
 export const MIGRATIONS = [
@@ -21,4 +22,5 @@ export const MIGRATIONS = [
   HardenAccounts1765300000000,
   OwnershipAndLocking1765310000000,
   OneApiVocabulary1765400000000,
+  LimitsByServiceAndMarkets1765520000000,
 ];
