@@ -4,7 +4,7 @@ import { CompiledRuleSet } from './compiled-evaluator';
 import { computeFacts, roundFactValue } from './compute-facts';
 import { MHZ, constructedPart, constructedRequirement, flatCurve, flatReflection, rangeMhz, steppedReflection } from './fixtures';
 import { ReferenceEvaluator } from './reference-evaluator';
-import type { ParameterValue, RuleDefinition } from './rule-definition';
+import { type ParameterValue, type RuleDefinition, validateRuleDefinition } from './rule-definition';
 import type { CellVerdict, Facts, PartEvaluationData, RadioBandRequirement } from './types';
 
 const FILE_RULES = loadRuleFiles();
@@ -509,5 +509,23 @@ describe('the whole starting set on one pair', () => {
     const { facts } = await both(lte(), constructedPart({ vswr: 1 }, { radiationEfficiencyPercent: dip, reflection: flatReflection(600e6, 900e6, 1) }));
     expect(facts.minRadiationEfficiencyPct).toBe(70);
     expect(flatCurve(0, 1, 1).values.length).toBe(11);
+  });
+});
+
+describe('a rule naming its own "no data" findings (event.params.noData)', () => {
+  it('is refused when it names a fact its conditions do not, or a bad code, with the place', () => {
+    const rule = ruleWith('certified-gain-cap');
+    const withNoData = (noData: unknown) => ({ ...rule, event: { ...rule.event, params: { ...rule.event.params, noData } } });
+    expect(validateRuleDefinition(withNoData({ eirpDbm: { code: 'NO_EIRP', message: 'x' } }))).toEqual([
+      { path: 'event.params.noData.eirpDbm', message: expect.stringContaining('not a fact the conditions name') },
+    ]);
+    expect(validateRuleDefinition(withNoData({ certifiedMaxGainDbi: { code: 'lower', message: 'x {nothing}' } })).map((p) => p.path)).toEqual([
+      'event.params.noData.certifiedMaxGainDbi.code',
+      'event.params.noData.certifiedMaxGainDbi.message',
+    ]);
+    expect(validateRuleDefinition({ ...rule, event: { ...rule.event, params: { ...rule.event.params, extra: 1 } } }).map((p) => p.path)).toEqual([
+      'event.params.extra',
+    ]);
+    expect(validateRuleDefinition(rule)).toEqual([]);
   });
 });
