@@ -1666,7 +1666,7 @@ export interface components {
              */
             region: components["schemas"]["Region"];
             /**
-             * @description The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies
+             * @description The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies. Left out: the licence-exempt ones (wifi, ble, ism, other)
              * @example [
              *       "wifi",
              *       "ble",
@@ -1674,7 +1674,7 @@ export interface components {
              *       "other"
              *     ]
              */
-            technologies: components["schemas"]["Technology"][];
+            technologies?: components["schemas"]["Technology"][];
             /** @example SRD 869.4–869.65 MHz */
             title: string;
             fromMhz: number;
@@ -1702,7 +1702,7 @@ export interface components {
              */
             region?: components["schemas"]["Region"];
             /**
-             * @description The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies
+             * @description The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies. Left out: the licence-exempt ones (wifi, ble, ism, other)
              * @example [
              *       "wifi",
              *       "ble",

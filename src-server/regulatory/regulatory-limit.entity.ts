@@ -5,6 +5,9 @@ import type { Technology } from '../bands/band-domain';
 export const LIMIT_KINDS = ['eirp', 'erp', 'conducted', 'conducted-gain-rule'] as const;
 export type LimitKind = (typeof LIMIT_KINDS)[number];
 
+/** What a limit governs when its author does not say: licence-exempt radios, as every limit before technologies were named. */
+export const LICENCE_EXEMPT_TECHNOLOGIES: readonly Technology[] = ['wifi', 'ble', 'ism', 'other'];
+
 /** A published power limit for one region, frequency range and service (the technologies it governs), with the document it comes from. */
 @Entity({ name: 'regulatory_limits' })
 export class RegulatoryLimit {

@@ -5,7 +5,7 @@ import { NotFoundError, type FieldProblem, ValidationFailedError } from '../comm
 import type { AuthUser } from '../common/auth.decorators';
 import { AuditService, diffFields } from '../audit/audit.service';
 import { checkFrequencyWindow } from '../bands/bands.service';
-import { RegulatoryLimit } from './regulatory-limit.entity';
+import { LICENCE_EXEMPT_TECHNOLOGIES, RegulatoryLimit } from './regulatory-limit.entity';
 import type { CreateRegulatoryLimitDto, RegulatoryLimitDto, RegulatoryLimitQueryDto, UpdateRegulatoryLimitDto } from './dto/regulatory-limit.dto';
 
 const FIELDS: (keyof RegulatoryLimit)[] = [
@@ -99,6 +99,7 @@ export class RegulatoryLimitsService {
   async create(input: CreateRegulatoryLimitDto, actor: AuthUser): Promise<RegulatoryLimitDto> {
     const row = {
       ...input,
+      technologies: input.technologies ?? [...LICENCE_EXEMPT_TECHNOLOGIES],
       gainThresholdDbi: input.gainThresholdDbi ?? null,
       reductionDbPerDb: input.reductionDbPerDb ?? null,
       conditions: input.conditions ?? null,

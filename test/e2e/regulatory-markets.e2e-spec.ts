@@ -138,6 +138,14 @@ describe('regulatory limits by service, bands against markets, GNSS bandwidth (A
         .expect(201);
       expect(conducted.body).toMatchObject({ region: 'GB', technologies: ['lte'], kind: 'conducted' });
       await http().delete(`/api/regulatory-limits/${conducted.body.id}`).set(as('admin')).expect(204);
+      // Left out, a limit governs the licence-exempt radios, as every limit did before technologies were named.
+      const unnamed = await http()
+        .post('/api/regulatory-limits')
+        .set(as('admin'))
+        .send({ region: 'EU', title: unique('limit'), fromMhz: 433.05, toMhz: 434.79, kind: 'erp', valueDbm: 10, valueText: '10 mW', source: 'test' })
+        .expect(201);
+      expect(unnamed.body.technologies).toEqual(['wifi', 'ble', 'ism', 'other']);
+      await http().delete(`/api/regulatory-limits/${unnamed.body.id}`).set(as('admin')).expect(204);
     });
   });
 

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
-import { EnumField, NumberField, PatchType, StringField } from '../../common/dto-fields';
+import { EnumField, NumberField, OptionalField, PatchType, StringField } from '../../common/dto-fields';
 import { REGIONS, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { LIMIT_KINDS, type LimitKind } from '../regulatory-limit.entity';
 
@@ -8,18 +8,20 @@ export class CreateRegulatoryLimitDto {
   @EnumField(REGIONS, { enumName: 'Region', example: 'EU', description: 'ISO 3166-1 alpha-2 code, a grouping (EU, CEPT, ASIA) or global' })
   region: string;
 
-  @ApiProperty({
+  @ApiPropertyOptional({
     enum: TECHNOLOGIES,
     enumName: 'Technology',
     isArray: true,
     example: ['wifi', 'ble', 'ism', 'other'],
-    description: 'The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies',
+    description:
+      'The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies. Left out: the licence-exempt ones (wifi, ble, ism, other)',
   })
+  @OptionalField()
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(TECHNOLOGIES.length)
   @IsIn(TECHNOLOGIES, { each: true, message: `each value must be one of: ${TECHNOLOGIES.join(', ')}` })
-  technologies: Technology[];
+  technologies?: Technology[];
 
   @StringField({ maxLength: 160, example: 'SRD 869.4–869.65 MHz' })
   title: string;
