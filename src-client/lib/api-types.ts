@@ -1600,6 +1600,12 @@ export interface components {
             /** @description Spec release, corroboration and from-memory remarks */
             note?: string | null;
         };
+        MainLobeDto: {
+            /** @example 1574.397 */
+            fromMhz: number;
+            /** @example 1576.443 */
+            toMhz: number;
+        };
         BandDto: {
             id: number;
             technology: components["schemas"]["Technology"];
@@ -1612,7 +1618,9 @@ export interface components {
             /** @description Carrier centre for GNSS signals and UWB channels */
             centreMhz?: number | null;
             bandwidthMhz?: number | null;
-            /** @description Indicative regions; empty when not meaningful */
+            /** @description GNSS only: the main lobe of the open-service signal (the ranges hold the full signal band); a GNSS radio is judged on it unless it needs the full band */
+            mainLobe?: components["schemas"]["MainLobeDto"] | null;
+            /** @description Markets where the band is used (ISO 3166-1 codes, groupings EU, CEPT, ASIA, or global); indicative; empty when not stated */
             regions: string[];
         };
         BandRangeInputDto: {
@@ -1623,7 +1631,7 @@ export interface components {
             toMhz: number;
         };
         /** @enum {string} */
-        Region: "global" | "EU" | "UK" | "US" | "CA" | "MX" | "BR" | "AU" | "NZ" | "JP" | "KR" | "CN" | "IN" | "AS";
+        Region: "global" | "EU" | "CEPT" | "ASIA" | "AD" | "AE" | "AF" | "AG" | "AI" | "AL" | "AM" | "AO" | "AQ" | "AR" | "AS" | "AT" | "AU" | "AW" | "AX" | "AZ" | "BA" | "BB" | "BD" | "BE" | "BF" | "BG" | "BH" | "BI" | "BJ" | "BL" | "BM" | "BN" | "BO" | "BQ" | "BR" | "BS" | "BT" | "BV" | "BW" | "BY" | "BZ" | "CA" | "CC" | "CD" | "CF" | "CG" | "CH" | "CI" | "CK" | "CL" | "CM" | "CN" | "CO" | "CR" | "CU" | "CV" | "CW" | "CX" | "CY" | "CZ" | "DE" | "DJ" | "DK" | "DM" | "DO" | "DZ" | "EC" | "EE" | "EG" | "EH" | "ER" | "ES" | "ET" | "FI" | "FJ" | "FK" | "FM" | "FO" | "FR" | "GA" | "GB" | "GD" | "GE" | "GF" | "GG" | "GH" | "GI" | "GL" | "GM" | "GN" | "GP" | "GQ" | "GR" | "GS" | "GT" | "GU" | "GW" | "GY" | "HK" | "HM" | "HN" | "HR" | "HT" | "HU" | "ID" | "IE" | "IL" | "IM" | "IN" | "IO" | "IQ" | "IR" | "IS" | "IT" | "JE" | "JM" | "JO" | "JP" | "KE" | "KG" | "KH" | "KI" | "KM" | "KN" | "KP" | "KR" | "KW" | "KY" | "KZ" | "LA" | "LB" | "LC" | "LI" | "LK" | "LR" | "LS" | "LT" | "LU" | "LV" | "LY" | "MA" | "MC" | "MD" | "ME" | "MF" | "MG" | "MH" | "MK" | "ML" | "MM" | "MN" | "MO" | "MP" | "MQ" | "MR" | "MS" | "MT" | "MU" | "MV" | "MW" | "MX" | "MY" | "MZ" | "NA" | "NC" | "NE" | "NF" | "NG" | "NI" | "NL" | "NO" | "NP" | "NR" | "NU" | "NZ" | "OM" | "PA" | "PE" | "PF" | "PG" | "PH" | "PK" | "PL" | "PM" | "PN" | "PR" | "PS" | "PT" | "PW" | "PY" | "QA" | "RE" | "RO" | "RS" | "RU" | "RW" | "SA" | "SB" | "SC" | "SD" | "SE" | "SG" | "SH" | "SI" | "SJ" | "SK" | "SL" | "SM" | "SN" | "SO" | "SR" | "SS" | "ST" | "SV" | "SX" | "SY" | "SZ" | "TC" | "TD" | "TF" | "TG" | "TH" | "TJ" | "TK" | "TL" | "TM" | "TN" | "TO" | "TR" | "TT" | "TV" | "TW" | "TZ" | "UA" | "UG" | "UM" | "US" | "UY" | "UZ" | "VA" | "VC" | "VE" | "VG" | "VI" | "VN" | "VU" | "WF" | "WS" | "YE" | "YT" | "ZA" | "ZM" | "ZW";
         CreateBandDto: {
             technology: components["schemas"]["Technology"];
             /** @example B12 */
@@ -1633,6 +1641,10 @@ export interface components {
             ranges: components["schemas"]["BandRangeInputDto"][];
             centreMhz?: number | null;
             bandwidthMhz?: number | null;
+            /** @description GNSS only: lower edge of the main lobe of the open-service signal */
+            mainLobeFromMhz?: number | null;
+            /** @description GNSS only: upper edge of the main lobe */
+            mainLobeToMhz?: number | null;
             regions: components["schemas"]["Region"][];
             /** @example 3GPP TS 36.101 */
             sourceDocument: string;
@@ -1649,6 +1661,10 @@ export interface components {
             ranges?: components["schemas"]["BandRangeInputDto"][];
             centreMhz?: number | null;
             bandwidthMhz?: number | null;
+            /** @description GNSS only: lower edge of the main lobe of the open-service signal */
+            mainLobeFromMhz?: number | null;
+            /** @description GNSS only: upper edge of the main lobe */
+            mainLobeToMhz?: number | null;
             regions?: components["schemas"]["Region"][];
             /** @example 3GPP TS 36.101 */
             sourceDocument?: string;
@@ -1702,10 +1718,11 @@ export interface components {
             version: number;
         };
         /** @enum {string} */
-        LimitKind: "eirp" | "erp" | "conducted-gain-rule";
+        LimitKind: "eirp" | "erp" | "conducted" | "conducted-gain-rule";
         RegulatoryLimitDto: {
             id: number;
             region: components["schemas"]["Region"];
+            technologies: components["schemas"]["Technology"][];
             title: string;
             fromMhz: number;
             toMhz: number;
@@ -1720,13 +1737,26 @@ export interface components {
             updatedAt: string;
         };
         CreateRegulatoryLimitDto: {
-            /** @example EU */
+            /**
+             * @description ISO 3166-1 alpha-2 code, a grouping (EU, CEPT, ASIA) or global
+             * @example EU
+             */
             region: components["schemas"]["Region"];
+            /**
+             * @description The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies. Left out: the licence-exempt ones (wifi, ble, ism, other)
+             * @example [
+             *       "wifi",
+             *       "ble",
+             *       "ism",
+             *       "other"
+             *     ]
+             */
+            technologies?: components["schemas"]["Technology"][];
             /** @example SRD 869.4–869.65 MHz */
             title: string;
             fromMhz: number;
             toMhz: number;
-            /** @description eirp, erp, or conducted power with an antenna-gain rule */
+            /** @description eirp, erp, conducted power at the radio port, or conducted power with an antenna-gain rule */
             kind: components["schemas"]["LimitKind"];
             /** @description The limit in dBm, unrounded (25 mW = 13.979 dBm) */
             valueDbm: number;
@@ -1743,13 +1773,26 @@ export interface components {
             note?: string | null;
         };
         UpdateRegulatoryLimitDto: {
-            /** @example EU */
+            /**
+             * @description ISO 3166-1 alpha-2 code, a grouping (EU, CEPT, ASIA) or global
+             * @example EU
+             */
             region?: components["schemas"]["Region"];
+            /**
+             * @description The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies. Left out: the licence-exempt ones (wifi, ble, ism, other)
+             * @example [
+             *       "wifi",
+             *       "ble",
+             *       "ism",
+             *       "other"
+             *     ]
+             */
+            technologies?: components["schemas"]["Technology"][];
             /** @example SRD 869.4–869.65 MHz */
             title?: string;
             fromMhz?: number;
             toMhz?: number;
-            /** @description eirp, erp, or conducted power with an antenna-gain rule */
+            /** @description eirp, erp, conducted power at the radio port, or conducted power with an antenna-gain rule */
             kind?: components["schemas"]["LimitKind"];
             /** @description The limit in dBm, unrounded (25 mW = 13.979 dBm) */
             valueDbm?: number;
@@ -1784,6 +1827,7 @@ export interface components {
             /** @description Ground-plane (board) width in mm */
             groundPlaneWidthMm: number;
             /**
+             * @description Target markets: ISO 3166-1 alpha-2 codes, groupings (EU, CEPT, ASIA) or global
              * @example [
              *       "EU",
              *       "US"
@@ -1819,6 +1863,7 @@ export interface components {
             /** @description Ground-plane (board) width in mm */
             groundPlaneWidthMm: number;
             /**
+             * @description Target markets: ISO 3166-1 alpha-2 codes, groupings (EU, CEPT, ASIA) or global
              * @example [
              *       "EU",
              *       "US"
@@ -1831,9 +1876,22 @@ export interface components {
         RadioPolarization: "linear" | "RHCP" | "LHCP" | "any";
         /** @enum {string} */
         Connector: "solder-pad" | "SMA" | "RP-SMA" | "MMCX" | "MCX" | "N" | "micro-coax";
+        /**
+         * @description GNSS radios: main-lobe or full-band; null otherwise
+         * @enum {string}
+         */
+        GnssBandwidth: "main-lobe" | "full-band";
+        RadioChannelDto: {
+            /** @example 869.4 */
+            fromMhz: number;
+            /** @example 869.65 */
+            toMhz: number;
+        };
         RadioBandDto: {
             band: components["schemas"]["BandDto"];
             certifiedMaxGainDbi?: number | null;
+            /** @description The channels the radio uses (edges in MHz); null: the whole band */
+            channels?: components["schemas"]["RadioChannelDto"][] | null;
         };
         RadioDto: {
             id: number;
@@ -1846,6 +1904,8 @@ export interface components {
             polarization: components["schemas"]["RadioPolarization"];
             connector: components["schemas"]["Connector"];
             feedLossDb: number;
+            /** @description GNSS radios: main-lobe or full-band; null otherwise */
+            gnssBandwidth?: components["schemas"]["GnssBandwidth"] | null;
             notes?: string | null;
             version: number;
             bands: components["schemas"]["RadioBandDto"][];
@@ -1866,6 +1926,7 @@ export interface components {
             /** @description Ground-plane (board) width in mm */
             groundPlaneWidthMm: number;
             /**
+             * @description Target markets: ISO 3166-1 alpha-2 codes, groupings (EU, CEPT, ASIA) or global
              * @example [
              *       "EU",
              *       "US"
@@ -1902,6 +1963,7 @@ export interface components {
             /** @description Ground-plane (board) width in mm */
             groundPlaneWidthMm?: number;
             /**
+             * @description Target markets: ISO 3166-1 alpha-2 codes, groupings (EU, CEPT, ASIA) or global
              * @example [
              *       "EU",
              *       "US"
@@ -1912,11 +1974,29 @@ export interface components {
             /** @description The version you edited; a stale one gets 409 PRODUCT_VERSION_CONFLICT */
             version: number;
         };
+        RadioChannelInputDto: {
+            /** @description Lower edge (MHz); with toMhz */
+            fromMhz?: number;
+            /** @description Upper edge (MHz); with fromMhz */
+            toMhz?: number;
+            /**
+             * @description Centre frequency (MHz); with bandwidthMhz
+             * @example 869.525
+             */
+            centreMhz?: number;
+            /**
+             * @description Occupied bandwidth (MHz); with centreMhz
+             * @example 0.25
+             */
+            bandwidthMhz?: number;
+        };
         RadioBandInputDto: {
             /** @description A band id from /api/bands */
             bandId: number;
             /** @description The module's certified maximum antenna gain in this band (dBi); empty for receive-only radios */
             certifiedMaxGainDbi?: number | null;
+            /** @description The channels the radio uses in this band, inside its transmit ranges; power limits are then judged on these channels' sub-bands instead of the tightest sub-band anywhere in the band. Empty or null: the whole band */
+            channels?: components["schemas"]["RadioChannelInputDto"][] | null;
         };
         CreateRadioDto: {
             /** @example Cellular LTE-M / NB-IoT */
@@ -1931,6 +2011,8 @@ export interface components {
             connector: components["schemas"]["Connector"];
             /** @description Cable or feed loss between module and antenna (dB) */
             feedLossDb: number;
+            /** @description GNSS only: judge each signal on its main lobe (default) or its full signal band; leave empty for other radios */
+            gnssBandwidth?: components["schemas"]["GnssBandwidth"] | null;
             notes?: string | null;
             bands: components["schemas"]["RadioBandInputDto"][];
         };
@@ -1947,6 +2029,8 @@ export interface components {
             connector?: components["schemas"]["Connector"];
             /** @description Cable or feed loss between module and antenna (dB) */
             feedLossDb?: number;
+            /** @description GNSS only: judge each signal on its main lobe (default) or its full signal band; leave empty for other radios */
+            gnssBandwidth?: components["schemas"]["GnssBandwidth"] | null;
             notes?: string | null;
             bands?: components["schemas"]["RadioBandInputDto"][];
             /** @description The version you edited; a stale one gets 409 RADIO_VERSION_CONFLICT */
@@ -2650,6 +2734,8 @@ export interface components {
             bandId: number;
             designation: string;
             ranges: components["schemas"]["MatrixRangeDto"][];
+            /** @description Findings of the radio band itself, whatever the part: BAND_OUTSIDE_MARKETS (info) when none of the product's markets uses the band */
+            findings: components["schemas"]["FindingDto"][];
         };
         ColumnAssignmentDto: {
             radioId: number;
@@ -2675,6 +2761,11 @@ export interface components {
             /** @description The finding that decides the status; null for a pass */
             decidingFinding?: components["schemas"]["FindingDto"] | null;
         };
+        RadioFindingsDto: {
+            radioId: number;
+            /** @description Findings of the radio as a whole: MARKET_WITHOUT_BANDS (marginal) for each product market none of the radio's bands is used in */
+            findings: components["schemas"]["FindingDto"][];
+        };
         MatrixDto: {
             productId: number;
             productName: string;
@@ -2683,6 +2774,8 @@ export interface components {
             rows: components["schemas"]["MatrixRowDto"][];
             columns: components["schemas"]["MatrixColumnDto"][];
             cells: components["schemas"]["MatrixCellDto"][];
+            /** @description Per radio of the product, findings about the radio as a whole (bands against markets) */
+            radios: components["schemas"]["RadioFindingsDto"][];
             /** @description Rule ids and versions the matrix was evaluated with */
             rules: string;
         };
@@ -3721,6 +3814,8 @@ export interface operations {
         parameters: {
             query?: {
                 region?: components["schemas"]["Region"];
+                /** @description Only limits that govern this technology */
+                technology?: components["schemas"]["Technology"];
                 fromMhz?: number;
                 toMhz?: number;
             };

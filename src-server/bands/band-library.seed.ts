@@ -14,6 +14,8 @@ export interface BandSeed {
   ranges: { role: RangeRole; fromMhz: number; toMhz: number }[];
   centreMhz?: number;
   bandwidthMhz?: number;
+  /** GNSS: main lobe of the open-service signal (the ranges hold the full signal band). */
+  mainLobe?: { fromMhz: number; toMhz: number };
   regions: string[];
   source: { document: string; table: string; note?: string | null };
 }
@@ -42,6 +44,8 @@ export async function seedBands(dataSource: DataSource): Promise<string> {
         duplex: band.duplex,
         centreMhz: band.centreMhz ?? null,
         bandwidthMhz: band.bandwidthMhz ?? null,
+        mainLobeFromMhz: band.mainLobe?.fromMhz ?? null,
+        mainLobeToMhz: band.mainLobe?.toMhz ?? null,
         regions: band.regions,
         sourceDocument: band.source.document,
         sourceTable: band.source.table,

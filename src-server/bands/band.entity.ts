@@ -25,6 +25,13 @@ export class Band {
   @Column({ name: 'bandwidth_mhz', type: 'double', nullable: true })
   bandwidthMhz: number | null;
 
+  /** GNSS only: the main lobe of the open-service signal (the ranges hold the full signal band); see catalog-seed/bands.json. */
+  @Column({ name: 'main_lobe_from_mhz', type: 'double', nullable: true })
+  mainLobeFromMhz: number | null;
+
+  @Column({ name: 'main_lobe_to_mhz', type: 'double', nullable: true })
+  mainLobeToMhz: number | null;
+
   @Column({ type: 'json' })
   regions: string[];
 

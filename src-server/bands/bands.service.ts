@@ -21,6 +21,7 @@ export function toBandDto(band: Band): BandDto {
     source: { document: band.sourceDocument, table: band.sourceTable, note: band.sourceNote },
     centreMhz: band.centreMhz,
     bandwidthMhz: band.bandwidthMhz,
+    mainLobe: band.mainLobeFromMhz !== null && band.mainLobeToMhz !== null ? { fromMhz: band.mainLobeFromMhz, toMhz: band.mainLobeToMhz } : null,
     regions: band.regions ?? [],
   };
 }
@@ -41,6 +42,8 @@ const BAND_FIELDS: (keyof Band)[] = [
   'duplex',
   'centreMhz',
   'bandwidthMhz',
+  'mainLobeFromMhz',
+  'mainLobeToMhz',
   'regions',
   'sourceDocument',
   'sourceTable',
@@ -90,6 +93,7 @@ export class BandsService {
 
   async create(input: CreateBandDto, actor: AuthUser): Promise<BandDto> {
     checkRanges(input.ranges);
+    checkMainLobe(input.technology, input.ranges, input.mainLobeFromMhz ?? null, input.mainLobeToMhz ?? null);
     return this.dataSource.transaction(async (manager) => {
       await this.assertDesignationFree(manager, input.designation);
       const inserted = await manager.insert(Band, {
@@ -99,6 +103,8 @@ export class BandsService {
         duplex: input.duplex,
         centreMhz: input.centreMhz ?? null,
         bandwidthMhz: input.bandwidthMhz ?? null,
+        mainLobeFromMhz: input.mainLobeFromMhz ?? null,
+        mainLobeToMhz: input.mainLobeToMhz ?? null,
         regions: input.regions,
         sourceDocument: input.sourceDocument,
         sourceTable: input.sourceTable,
@@ -120,6 +126,12 @@ export class BandsService {
       // Lock the row first; MariaDB has no FOR UPDATE OF, so relations load in a second query.
       if (!(await manager.findOne(Band, { where: { id }, lock: { mode: 'pessimistic_write' } }))) throw new NotFoundError('band', id);
       const band = await manager.findOneOrFail(Band, { where: { id }, relations: { ranges: true } });
+      checkMainLobe(
+        input.technology ?? band.technology,
+        input.ranges ?? band.ranges,
+        input.mainLobeFromMhz !== undefined ? input.mainLobeFromMhz : band.mainLobeFromMhz,
+        input.mainLobeToMhz !== undefined ? input.mainLobeToMhz : band.mainLobeToMhz,
+      );
       if (input.designation && input.designation !== band.designation) await this.assertDesignationFree(manager, input.designation);
       const { ranges, ...fields } = input;
       const changes: Record<string, unknown> = diffFields(band, fields as Partial<Band>, BAND_FIELDS);
@@ -164,5 +176,18 @@ export class BandsService {
 
 function checkRanges(ranges: { fromMhz: number; toMhz: number }[]): void {
   const problems = ranges.flatMap((r, i) => (r.toMhz > r.fromMhz ? [] : [{ field: `ranges.${i}.toMhz`, message: `must be above fromMhz (${r.fromMhz})` }]));
+  if (problems.length) throw new ValidationFailedError(problems);
+}
+
+/** A main lobe is GNSS only, given with both edges, and lies inside one of the band's ranges. */
+function checkMainLobe(technology: string, ranges: { fromMhz: number; toMhz: number }[], fromMhz: number | null, toMhz: number | null): void {
+  if (fromMhz === null && toMhz === null) return;
+  const problems: { field: string; message: string }[] = [];
+  if (technology !== 'gnss') problems.push({ field: 'mainLobeFromMhz', message: `a main lobe belongs to a GNSS signal, not a ${technology} band` });
+  else if (fromMhz === null) problems.push({ field: 'mainLobeFromMhz', message: 'is required together with mainLobeToMhz' });
+  else if (toMhz === null) problems.push({ field: 'mainLobeToMhz', message: 'is required together with mainLobeFromMhz' });
+  else if (!(toMhz > fromMhz)) problems.push({ field: 'mainLobeToMhz', message: `must be above mainLobeFromMhz (${fromMhz})` });
+  else if (!ranges.some((r) => r.fromMhz <= fromMhz && toMhz <= r.toMhz))
+    problems.push({ field: 'mainLobeFromMhz', message: `the main lobe ${fromMhz}–${toMhz} MHz must lie inside one of the band's ranges` });
   if (problems.length) throw new ValidationFailedError(problems);
 }

@@ -66,7 +66,9 @@ const product = {
       polarization: 'linear',
       connector: 'solder-pad',
       feedLossDb: 0,
-      bands: [{ band: { id: 3, designation: 'BLE 2.4 GHz', ranges: [{ fromMhz: 2400, toMhz: 2483.5, role: 'tdd' }] }, certifiedMaxGainDbi: null }],
+      bands: [
+        { band: { id: 3, designation: 'BLE 2.4 GHz', regions: ['global'], ranges: [{ fromMhz: 2400, toMhz: 2483.5, role: 'tdd' }] }, certifiedMaxGainDbi: 3 },
+      ],
     },
   ],
 };
@@ -100,7 +102,22 @@ function harness() {
         return load.promise;
       },
     } as unknown as PartDataService,
-    { list: async () => [] } as unknown as RegulatoryLimitsService,
+    // ETSI EN 300 328: 20 dBm e.i.r.p. at 2.4 GHz, so the band has a limit on file for its market.
+    {
+      list: async () => [
+        {
+          region: 'EU',
+          technologies: ['ble'],
+          fromMhz: 2400,
+          toMhz: 2483.5,
+          kind: 'eirp',
+          valueDbm: 20,
+          source: 'ETSI EN 300 328',
+          gainThresholdDbi: null,
+          reductionDbPerDb: null,
+        },
+      ],
+    } as unknown as RegulatoryLimitsService,
   );
   // The services share one EvaluationInputsService, as under Nest, so they share its caches.
   const matrices = new MatrixService(dataSource, rulesService, productsService, inputs);

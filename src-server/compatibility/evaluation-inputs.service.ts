@@ -8,9 +8,10 @@ import { type PartEvaluationData as CataloguePart, PartDataService } from '../pa
 import type { ProductDetailDto } from '../products/dto/product.dto';
 import type { Connector, FormFactor } from '../parts/part.types';
 import { RegulatoryLimitsService } from '../regulatory/regulatory-limits.service';
+import { type LimitOnFile, limitsFor, marketsUsingBand } from '../regulatory/markets';
 import { PartAssignment } from './compatibility.entities';
 import { FactsCache } from './engine/matrix';
-import type { PartEvaluationData, RadioBandRequirement, RegulatoryLimit, Technology } from './engine/types';
+import type { BandRange, PartEvaluationData, RadioBandRequirement, Technology } from './engine/types';
 
 const MHZ = 1e6;
 
@@ -57,25 +58,38 @@ function toEvaluationData(part: CataloguePart): PartColumn {
   };
 }
 
-/** The product's radio bands as the engine reads them; limits of the product's regions (and global ones). */
-function requirementsOf(product: ProductDetailDto, limits: readonly RegulatoryLimit[], regionsOfLimits: readonly string[]): RadioBandRequirement[] {
-  const regions = new Set([...product.targetRegions, 'global']);
-  const applicable = limits.filter((_, i) => regions.has(regionsOfLimits[i]));
+/** The ranges a radio is judged on: a GNSS radio that needs the main lobe gets the signal's main lobe where the library states one. */
+function judgedRanges(radio: ProductDetailDto['radios'][number], band: ProductDetailDto['radios'][number]['bands'][number]['band']): BandRange[] {
+  if (radio.technology === 'gnss' && radio.gnssBandwidth !== 'full-band' && band.mainLobe)
+    return [{ fromHz: band.mainLobe.fromMhz * MHZ, toHz: band.mainLobe.toMhz * MHZ, role: 'receive' }];
+  return band.ranges.map((r) => ({ fromHz: r.fromMhz * MHZ, toHz: r.toMhz * MHZ, role: r.role }));
+}
+
+/**
+ * The product's radio bands as the engine reads them: each band with the product's markets it is used in and the
+ * limits that govern the radio's technology there (see regulatory/markets.ts), and the channels the radio lists.
+ */
+export function requirementsOf(product: ProductDetailDto, limits: readonly LimitOnFile[]): RadioBandRequirement[] {
   return product.radios.flatMap((radio) =>
-    radio.bands.map((rb) => ({
-      radioId: radio.id,
-      radioName: radio.name,
-      technology: radio.technology as Technology,
-      bandId: rb.band.id,
-      designation: rb.band.designation,
-      ranges: rb.band.ranges.map((r) => ({ fromHz: r.fromMhz * MHZ, toHz: r.toMhz * MHZ, role: r.role })),
-      txPowerDbm: radio.receiveOnly ? null : radio.transmitPowerDbm,
-      certifiedMaxGainDbi: rb.certifiedMaxGainDbi,
-      feedLossDb: radio.feedLossDb,
-      requiredPolarization: radio.polarization === 'any' ? null : radio.polarization,
-      productGroundPlane: { lengthMm: product.groundPlaneLengthMm, widthMm: product.groundPlaneWidthMm },
-      regulatoryLimits: applicable,
-    })),
+    radio.bands.map((rb) => {
+      const markets = marketsUsingBand(rb.band.regions, product.targetRegions);
+      return {
+        radioId: radio.id,
+        radioName: radio.name,
+        technology: radio.technology as Technology,
+        bandId: rb.band.id,
+        designation: rb.band.designation,
+        ranges: judgedRanges(radio, rb.band),
+        txPowerDbm: radio.receiveOnly ? null : radio.transmitPowerDbm,
+        certifiedMaxGainDbi: rb.certifiedMaxGainDbi,
+        feedLossDb: radio.feedLossDb,
+        requiredPolarization: radio.polarization === 'any' ? null : radio.polarization,
+        productGroundPlane: { lengthMm: product.groundPlaneLengthMm, widthMm: product.groundPlaneWidthMm },
+        regulatoryLimits: limitsFor(radio.technology, markets, limits),
+        markets,
+        channels: rb.channels ? rb.channels.map((c) => ({ fromHz: c.fromMhz * MHZ, toHz: c.toMhz * MHZ })) : null,
+      };
+    }),
   );
 }
 
@@ -115,21 +129,7 @@ export class EvaluationInputsService {
   readonly partKey = (part: PartEvaluationData) => String(part.partId);
 
   async requirements(product: ProductDetailDto): Promise<RadioBandRequirement[]> {
-    const limits = await this.limits.list();
-    return requirementsOf(
-      product,
-      limits.map((l) => ({
-        region: l.region,
-        fromHz: l.fromMhz * MHZ,
-        toHz: l.toMhz * MHZ,
-        kind: l.kind,
-        valueDbm: l.valueDbm,
-        source: l.source,
-        gainThresholdDbi: l.gainThresholdDbi,
-        reductionDbPerDb: l.reductionDbPerDb,
-      })),
-      limits.map((l) => l.region),
-    );
+    return requirementsOf(product, await this.limits.list());
   }
 
   async assignedPartIds(productId: number): Promise<number[]> {

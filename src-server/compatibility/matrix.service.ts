@@ -12,6 +12,7 @@ import { decidingFindingOf } from './engine/deciding';
 import type { MatrixColumnDto, MatrixDto, MatrixView } from './dto/matrix.dto';
 import { findingView, ruleTitlesOf } from './finding-view';
 import { EvaluationInputsService } from './evaluation-inputs.service';
+import { marketFindings } from '../regulatory/markets';
 import { RulesService } from './rules.service';
 
 const MATRIX_CACHE_SIZE = 200;
@@ -53,7 +54,7 @@ export class MatrixService {
       `SELECT
          (SELECT CONCAT(version, '/', updated_at) FROM products WHERE id = ? AND deleted_at IS NULL) AS product,
          (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(version), 0), '/', COALESCE(MAX(updated_at), '')) FROM radios WHERE product_id = ?) AS radios,
-         (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', rb.radio_id, rb.band_id, COALESCE(rb.certified_max_gain_dbi, 'n'), rb.position))), 0))
+         (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', rb.radio_id, rb.band_id, COALESCE(rb.certified_max_gain_dbi, 'n'), rb.position, COALESCE(rb.channels, 'n')))), 0))
             FROM radio_bands rb JOIN radios r ON r.id = rb.radio_id WHERE r.product_id = ?) AS radioBands,
          (SELECT CONCAT(COUNT(*), '/', COALESCE(MAX(updated_at), ''), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', id, part_id, radio_id, state))), 0)) FROM part_assignments WHERE product_id = ?) AS assignments,
          (SELECT CONCAT(COUNT(*), '/', COALESCE(SUM(CRC32(CONCAT_WS(',', id, band_id, role, from_mhz, to_mhz))), 0)) FROM band_ranges) AS bandRanges,
@@ -104,11 +105,14 @@ export class MatrixService {
       { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey, columnsFor },
     );
     const titles = ruleTitlesOf(ruleSet.compiled);
+    const markets = marketFindings(product.targetRegions, product.radios);
+    const rowFindings = (r: { radioId: number; bandId: number }) =>
+      markets.rows.find((m) => m.radioId === r.radioId && m.bandId === r.bandId)?.findings.map((f) => findingView(f, titles)) ?? [];
     return {
       productId,
       productName: product.name,
       view,
-      rows: matrix.rows.map((r) => ({ ...r, ranges: r.ranges.map((x) => ({ ...x })) })),
+      rows: matrix.rows.map((r) => ({ ...r, ranges: r.ranges.map((x) => ({ ...x })), findings: rowFindings(r) })),
       columns: columns.map((c): MatrixColumnDto => ({
         partId: c.data.partId,
         mpn: c.data.mpn,
@@ -128,6 +132,7 @@ export class MatrixService {
           decidingFinding: deciding ? findingView(deciding, titles) : null,
         };
       }),
+      radios: markets.radios.map((r) => ({ radioId: r.radioId, findings: r.findings.map((f) => findingView(f, titles)) })),
       rules: ruleSet.signature,
     };
   }

@@ -9,12 +9,19 @@ import { Band } from '../bands/band.entity';
 import { toBandDto } from '../bands/bands.service';
 import { Product } from './product.entity';
 import { Radio, RadioBand } from './radio.entity';
-import { isReceiveOnly, type KnownBand, radioProblems } from './radio-rules';
+import { DEFAULT_GNSS_BANDWIDTH, type GnssBandwidth, type Technology } from '../bands/band-domain';
+import { type ChannelInput, isReceiveOnly, type KnownBand, radioProblems, storedChannels } from './radio-rules';
 import type { CreateProductDto, PersonRefDto, ProductDetailDto, ProductSummaryDto, UpdateProductDto } from './dto/product.dto';
 import type { CreateRadioDto, RadioDto, UpdateRadioDto } from './dto/radio.dto';
 
 const PRODUCT_FIELDS: (keyof Product)[] = ['name', 'code', 'owner', 'groundPlaneLengthMm', 'groundPlaneWidthMm', 'targetRegions', 'notes'];
-const RADIO_FIELDS: (keyof Radio)[] = ['name', 'technology', 'module', 'transmitPowerDbm', 'polarization', 'connector', 'feedLossDb', 'notes'];
+const RADIO_FIELDS: (keyof Radio)[] = ['name', 'technology', 'module', 'transmitPowerDbm', 'polarization', 'connector', 'feedLossDb', 'gnssBandwidth', 'notes'];
+
+/** A GNSS radio needs the main lobe unless it says otherwise; other radios have no GNSS bandwidth. */
+function gnssBandwidthFor(technology: Technology, given: GnssBandwidth | null | undefined): GnssBandwidth | null {
+  if (technology !== 'gnss') return given ?? null;
+  return given ?? DEFAULT_GNSS_BANDWIDTH;
+}
 
 function toRadioDto(radio: Radio): RadioDto {
   const bands = [...(radio.bands ?? [])].sort((a, b) => a.position - b.position);
@@ -29,9 +36,10 @@ function toRadioDto(radio: Radio): RadioDto {
     polarization: radio.polarization,
     connector: radio.connector,
     feedLossDb: radio.feedLossDb,
+    gnssBandwidth: radio.gnssBandwidth ?? null,
     notes: radio.notes,
     version: radio.version,
-    bands: bands.map((rb) => ({ band: toBandDto(rb.band), certifiedMaxGainDbi: rb.certifiedMaxGainDbi })),
+    bands: bands.map((rb) => ({ band: toBandDto(rb.band), certifiedMaxGainDbi: rb.certifiedMaxGainDbi, channels: rb.channels ?? null })),
     updatedAt: radio.updatedAt.toISOString(),
   };
 }
@@ -63,8 +71,12 @@ function toSummary(product: Product, radios: Pick<Radio, 'technology'>[]): Produ
 }
 
 /** What the audit log keeps of a radio's bands: readable, and enough to see a gain change. */
-const bandsForAudit = (bands: { designation: string; certifiedMaxGainDbi: number | null }[]) =>
-  bands.map((b) => (b.certifiedMaxGainDbi === null ? b.designation : `${b.designation} (${b.certifiedMaxGainDbi} dBi)`));
+const bandsForAudit = (bands: { designation: string; certifiedMaxGainDbi: number | null; channels?: { fromMhz: number; toMhz: number }[] | null }[]) =>
+  bands.map((b) => {
+    const gain = b.certifiedMaxGainDbi === null ? '' : ` (${b.certifiedMaxGainDbi} dBi)`;
+    const channels = b.channels ? ` channels ${b.channels.map((c) => `${c.fromMhz}–${c.toMhz} MHz`).join(', ')}` : '';
+    return `${b.designation}${gain}${channels}`;
+  });
 
 @Injectable()
 export class ProductsService {
@@ -201,9 +213,10 @@ export class ProductsService {
       const product = await manager.findOne(Product, { where: { id: productId }, lock: { mode: 'pessimistic_write' } });
       if (!product) throw new NotFoundError('product', productId);
       const transmitPowerDbm = input.transmitPowerDbm ?? null;
-      const library = await this.checkRadio(manager, { technology: input.technology, transmitPowerDbm, bands: input.bands });
+      const gnssBandwidth = gnssBandwidthFor(input.technology, input.gnssBandwidth);
+      const library = await this.checkRadio(manager, { technology: input.technology, transmitPowerDbm, gnssBandwidth, bands: input.bands });
       const { bands, ...fields } = input;
-      const inserted = await manager.insert(Radio, { ...fields, transmitPowerDbm, notes: input.notes ?? null, productId });
+      const inserted = await manager.insert(Radio, { ...fields, transmitPowerDbm, gnssBandwidth, notes: input.notes ?? null, productId });
       const radioId = Number(inserted.identifiers[0].id);
       await this.writeRadioBands(manager, radioId, bands);
       await this.audit.record(manager, {
@@ -215,7 +228,14 @@ export class ProductsService {
           radioId,
           ...fields,
           transmitPowerDbm,
-          bands: bandsForAudit(bands.map((b) => ({ designation: library.get(b.bandId)!.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null }))),
+          gnssBandwidth,
+          bands: bandsForAudit(
+            bands.map((b) => ({
+              designation: library.get(b.bandId)!.designation,
+              certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null,
+              channels: storedChannels(b.channels),
+            })),
+          ),
         },
       });
       return this.getRadio(productId, radioId, manager);
@@ -227,20 +247,32 @@ export class ProductsService {
       const before = await this.lockRadio(manager, productId, radioId, input.version);
       const { version: _version, bands, ...patch } = input;
       const beforeDto = toRadioDto(before);
-      const beforeBands = beforeDto.bands.map((b) => ({ bandId: b.band.id, certifiedMaxGainDbi: b.certifiedMaxGainDbi }));
+      const beforeBands = beforeDto.bands.map((b) => ({ bandId: b.band.id, certifiedMaxGainDbi: b.certifiedMaxGainDbi, channels: b.channels }));
+      const technology = patch.technology ?? before.technology;
+      // Left out: kept for a GNSS radio (the default if it had none), cleared when the radio stops being GNSS.
+      const gnssBandwidth =
+        patch.gnssBandwidth !== undefined
+          ? gnssBandwidthFor(technology, patch.gnssBandwidth)
+          : technology === 'gnss'
+            ? gnssBandwidthFor(technology, before.gnssBandwidth)
+            : null;
+      if (gnssBandwidth !== before.gnssBandwidth) (patch as Partial<Radio>).gnssBandwidth = gnssBandwidth;
       const merged = {
-        technology: patch.technology ?? before.technology,
+        technology,
         transmitPowerDbm: patch.transmitPowerDbm !== undefined ? patch.transmitPowerDbm : before.transmitPowerDbm,
-        bands: bands ?? beforeBands,
+        gnssBandwidth,
+        bands: (bands ?? beforeBands) as { bandId: number; certifiedMaxGainDbi?: number | null; channels?: ChannelInput[] | null }[],
       };
       const library = await this.checkRadio(manager, merged);
       const changes: Record<string, unknown> = diffFields(before, patch as Partial<Radio>, RADIO_FIELDS);
-      const nextBands = bands?.map((b) => ({ bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null }));
+      const nextBands = bands?.map((b) => ({ bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null, channels: storedChannels(b.channels) }));
       const bandsChanged = nextBands !== undefined && JSON.stringify(nextBands) !== JSON.stringify(beforeBands);
       if (bandsChanged) {
         changes.bands = [
-          bandsForAudit(beforeDto.bands.map((b) => ({ designation: b.band.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi }))),
-          bandsForAudit(nextBands.map((b) => ({ designation: library.get(b.bandId)!.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi }))),
+          bandsForAudit(beforeDto.bands.map((b) => ({ designation: b.band.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi, channels: b.channels }))),
+          bandsForAudit(
+            nextBands.map((b) => ({ designation: library.get(b.bandId)!.designation, certifiedMaxGainDbi: b.certifiedMaxGainDbi, channels: b.channels })),
+          ),
         ];
       }
       if (Object.keys(changes).length) {
@@ -293,17 +325,27 @@ export class ProductsService {
   /** Runs the cross-field radio rules against the band library; returns the bands it looked up. */
   private async checkRadio(manager: EntityManager, draft: Parameters<typeof radioProblems>[0]): Promise<Map<number, KnownBand>> {
     const ids = draft.bands.map((b) => b.bandId);
-    const found = ids.length ? await manager.find(Band, { select: { id: true, technology: true, designation: true }, where: { id: In(ids) } }) : [];
-    const library = new Map(found.map((b) => [b.id, b]));
+    const found = ids.length ? await manager.find(Band, { where: { id: In(ids) }, relations: { ranges: true } }) : [];
+    const library = new Map<number, KnownBand>(found.map((b) => [b.id, { id: b.id, technology: b.technology, designation: b.designation, ranges: b.ranges }]));
     const problems = radioProblems(draft, library);
     if (problems.length) throw new ValidationFailedError(problems);
     return library;
   }
 
-  private async writeRadioBands(manager: EntityManager, radioId: number, bands: { bandId: number; certifiedMaxGainDbi?: number | null }[]): Promise<void> {
+  private async writeRadioBands(
+    manager: EntityManager,
+    radioId: number,
+    bands: { bandId: number; certifiedMaxGainDbi?: number | null; channels?: ChannelInput[] | null }[],
+  ): Promise<void> {
     await manager.insert(
       RadioBand,
-      bands.map((b, position) => ({ radioId, bandId: b.bandId, certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null, position })),
+      bands.map((b, position) => ({
+        radioId,
+        bandId: b.bandId,
+        certifiedMaxGainDbi: b.certifiedMaxGainDbi ?? null,
+        channels: storedChannels(b.channels),
+        position,
+      })),
     );
   }
 

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, OneToMany, PrimaryColumn, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import { TECHNOLOGIES, type Technology } from '../bands/band-domain';
+import { GNSS_BANDWIDTHS, type GnssBandwidth, TECHNOLOGIES, type Technology } from '../bands/band-domain';
 import { Band } from '../bands/band.entity';
 import { CONNECTORS, type Connector } from '../common/connectors';
 import { Product } from './product.entity';
@@ -44,6 +44,10 @@ export class Radio {
   @Column({ name: 'feed_loss_db', type: 'double', default: 0 })
   feedLossDb: number;
 
+  /** GNSS only: judged on the main lobe of each signal (default) or on the full signal band; null for other radios. */
+  @Column({ name: 'gnss_bandwidth', type: 'enum', enum: GNSS_BANDWIDTHS, nullable: true })
+  gnssBandwidth: GnssBandwidth | null;
+
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
@@ -80,6 +84,15 @@ export class RadioBand {
   @Column({ name: 'certified_max_gain_dbi', type: 'double', nullable: true })
   certifiedMaxGainDbi: number | null;
 
+  /** The channels the radio uses in this band (MHz ranges inside its transmit ranges); null: the whole band. */
+  @Column({ type: 'json', nullable: true })
+  channels: RadioChannel[] | null;
+
   @Column({ type: 'smallint', unsigned: true, default: 0 })
   position: number;
+}
+
+export interface RadioChannel {
+  fromMhz: number;
+  toMhz: number;
 }

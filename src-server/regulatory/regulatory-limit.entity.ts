@@ -1,9 +1,14 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { Technology } from '../bands/band-domain';
 
-export const LIMIT_KINDS = ['eirp', 'erp', 'conducted-gain-rule'] as const;
+/** Radiated (EIRP, ERP), conducted power at the radio's port, or conducted power reduced for gain above a threshold. */
+export const LIMIT_KINDS = ['eirp', 'erp', 'conducted', 'conducted-gain-rule'] as const;
 export type LimitKind = (typeof LIMIT_KINDS)[number];
 
-/** A published power limit for one region and frequency range, with the document it comes from. */
+/** What a limit governs when its author does not say: licence-exempt radios, as every limit before technologies were named. */
+export const LICENCE_EXEMPT_TECHNOLOGIES: readonly Technology[] = ['wifi', 'ble', 'ism', 'other'];
+
+/** A published power limit for one region, frequency range and service (the technologies it governs), with the document it comes from. */
 @Entity({ name: 'regulatory_limits' })
 export class RegulatoryLimit {
   @PrimaryGeneratedColumn({ unsigned: true })
@@ -11,6 +16,10 @@ export class RegulatoryLimit {
 
   @Column({ type: 'varchar', length: 16 })
   region: string;
+
+  /** The radio technologies the limit governs: 47 CFR 15.247 governs licence-exempt radios, not a licensed LTE uplink in the same range. */
+  @Column({ type: 'json' })
+  technologies: Technology[];
 
   @Column({ type: 'varchar', length: 160 })
   title: string;

@@ -5,11 +5,12 @@ import { NotFoundError, type FieldProblem, ValidationFailedError } from '../comm
 import type { AuthUser } from '../common/auth.decorators';
 import { AuditService, diffFields } from '../audit/audit.service';
 import { checkFrequencyWindow } from '../bands/bands.service';
-import { RegulatoryLimit } from './regulatory-limit.entity';
+import { LICENCE_EXEMPT_TECHNOLOGIES, RegulatoryLimit } from './regulatory-limit.entity';
 import type { CreateRegulatoryLimitDto, RegulatoryLimitDto, RegulatoryLimitQueryDto, UpdateRegulatoryLimitDto } from './dto/regulatory-limit.dto';
 
 const FIELDS: (keyof RegulatoryLimit)[] = [
   'region',
+  'technologies',
   'title',
   'fromMhz',
   'toMhz',
@@ -27,6 +28,7 @@ function toDto(limit: RegulatoryLimit): RegulatoryLimitDto {
   return {
     id: limit.id,
     region: limit.region,
+    technologies: limit.technologies ?? [],
     title: limit.title,
     fromMhz: limit.fromMhz,
     toMhz: limit.toMhz,
@@ -66,6 +68,7 @@ export class RegulatoryLimitsService {
     const window = checkFrequencyWindow(query.fromMhz, query.toMhz);
     const q = this.dataSource.getRepository(RegulatoryLimit).createQueryBuilder('l').orderBy('l.region').addOrderBy('l.from_mhz').addOrderBy('l.id');
     if (query.region) q.andWhere('l.region = :region', { region: query.region });
+    if (query.technology) q.andWhere('JSON_CONTAINS(l.technologies, :technology)', { technology: JSON.stringify(query.technology) });
     if (window) q.andWhere('l.from_mhz <= :to AND l.to_mhz >= :from', { from: window.fromMhz, to: window.toMhz });
     return (await q.getMany()).map(toDto);
   }
@@ -96,6 +99,7 @@ export class RegulatoryLimitsService {
   async create(input: CreateRegulatoryLimitDto, actor: AuthUser): Promise<RegulatoryLimitDto> {
     const row = {
       ...input,
+      technologies: input.technologies ?? [...LICENCE_EXEMPT_TECHNOLOGIES],
       gainThresholdDbi: input.gainThresholdDbi ?? null,
       reductionDbPerDb: input.reductionDbPerDb ?? null,
       conditions: input.conditions ?? null,

@@ -291,6 +291,7 @@ describe('band library, band sets and regulatory limits (API)', () => {
   describe('POST, PATCH, DELETE /api/regulatory-limits', () => {
     const body = () => ({
       region: 'EU',
+      technologies: ['ism', 'other'],
       title: unique('Test limit'),
       fromMhz: 433.05,
       toMhz: 434.79,

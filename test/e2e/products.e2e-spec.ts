@@ -163,6 +163,7 @@ describe('products and radios (API)', () => {
       // 3GPP TS 36.101 Table 5.5-1: band 12 UL 699–716, DL 729–746 MHz.
       expect(b12).toEqual({
         certifiedMaxGainDbi: 8.5,
+        channels: null,
         band: expect.objectContaining({
           id: 112,
           ranges: [
@@ -171,7 +172,13 @@ describe('products and radios (API)', () => {
           ],
         }),
       });
-      expect(res.body.radios[1]).toMatchObject({ technology: 'gnss', transmitPowerDbm: null, receiveOnly: true, polarization: 'RHCP' });
+      expect(res.body.radios[1]).toMatchObject({
+        technology: 'gnss',
+        transmitPowerDbm: null,
+        receiveOnly: true,
+        polarization: 'RHCP',
+        gnssBandwidth: 'main-lobe',
+      });
     });
 
     it('ProductsService.getWithRadios gives other domains the same detail', async () => {

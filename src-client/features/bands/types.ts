@@ -21,13 +21,4 @@ export type PartCoverage = Pick<Schemas['PartDetailDto'], 'id' | 'manufacturer' 
 /** A part found by text, for the band strip's "compare a part" picker. */
 export type PartMatch = Schemas['PartSummaryDto'];
 
-export const TECHNOLOGY_LABELS: Record<Technology, string> = {
-  lte: 'LTE (incl. LTE-M, NB-IoT)',
-  nr: '5G NR',
-  gnss: 'GNSS',
-  wifi: 'Wi-Fi',
-  ble: 'Bluetooth LE',
-  ism: 'Sub-GHz ISM / LoRaWAN',
-  uwb: 'UWB',
-  other: 'Other',
-};
+export { TECHNOLOGY_LABELS } from '../../lib/technology-labels';

@@ -50,7 +50,8 @@ export const TECHNOLOGY_SHORT_LABELS: Record<Technology, string> = {
   other: 'Other',
 };
 export const RECEIVE_ONLY: Technology[] = ['gnss'];
-export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const satisfies readonly Region[];
+/** The markets offered in forms: global, the groupings (EU, CEPT, ASIA) and common ISO 3166-1 country codes; the server takes any ISO code. */
+export const REGIONS = ['global', 'EU', 'CEPT', 'ASIA', 'GB', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN'] as const satisfies readonly Region[];
 export const POLARIZATIONS: Polarization[] = ['linear', 'RHCP', 'LHCP', 'any'];
 export const CONNECTOR_LABELS: Record<Connector, string> = {
   'solder-pad': 'Solder pad',

@@ -11,10 +11,15 @@ export type RegulatoryLimitInput = AsTyped<Schemas['CreateRegulatoryLimitDto']>;
 
 export type RegulatoryLimitUpdate = AsTyped<Schemas['UpdateRegulatoryLimitDto']>;
 
-export const REGIONS = ['global', 'EU', 'UK', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN', 'AS'] as const satisfies readonly Region[];
+/** The markets offered in forms: global, the groupings (EU, CEPT, ASIA) and common ISO 3166-1 country codes; the server takes any ISO code. */
+export const REGIONS = ['global', 'EU', 'CEPT', 'ASIA', 'GB', 'US', 'CA', 'MX', 'BR', 'AU', 'NZ', 'JP', 'KR', 'CN', 'IN'] as const satisfies readonly Region[];
 
 export const LIMIT_KIND_LABELS: Record<LimitKind, string> = {
   eirp: 'EIRP',
   erp: 'ERP',
+  conducted: 'Conducted power at the radio port',
   'conducted-gain-rule': 'Conducted power with antenna-gain rule',
 };
+
+export type Technology = Schemas['Technology'];
+export { TECHNOLOGY_LABELS } from '../../lib/technology-labels';

@@ -13,6 +13,11 @@ export class BandSourceDto {
   @ApiPropertyOptional({ type: String, nullable: true, description: 'Spec release, corroboration and from-memory remarks' }) note: string | null;
 }
 
+export class MainLobeDto {
+  @ApiProperty({ example: 1574.397 }) fromMhz: number;
+  @ApiProperty({ example: 1576.443 }) toMhz: number;
+}
+
 export class BandDto {
   @ApiProperty() id: number;
   @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology' }) technology: Technology;
@@ -23,7 +28,18 @@ export class BandDto {
   @ApiProperty({ type: BandSourceDto }) source: BandSourceDto;
   @ApiPropertyOptional({ type: Number, nullable: true, description: 'Carrier centre for GNSS signals and UWB channels' }) centreMhz: number | null;
   @ApiPropertyOptional({ type: Number, nullable: true }) bandwidthMhz: number | null;
-  @ApiProperty({ type: [String], description: 'Indicative regions; empty when not meaningful' }) regions: string[];
+  @ApiPropertyOptional({
+    type: MainLobeDto,
+    nullable: true,
+    description:
+      'GNSS only: the main lobe of the open-service signal (the ranges hold the full signal band); a GNSS radio is judged on it unless it needs the full band',
+  })
+  mainLobe: MainLobeDto | null;
+  @ApiProperty({
+    type: [String],
+    description: 'Markets where the band is used (ISO 3166-1 codes, groupings EU, CEPT, ASIA, or global); indicative; empty when not stated',
+  })
+  regions: string[];
 }
 
 /** The short form used inside band sets. */

@@ -3,6 +3,7 @@ import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, ValidateNested } from 'class-validator';
 import { EnumField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { DUPLEX_MODES, type DuplexMode, RANGE_ROLES, type RangeRole, REGIONS, TECHNOLOGIES, type Technology } from '../band-domain';
+import { REGION_MESSAGE } from '../regions';
 
 export class BandRangeInputDto {
   @EnumField(RANGE_ROLES, { enumName: 'RangeRole' })
@@ -42,10 +43,16 @@ export class CreateBandDto {
   @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000 })
   bandwidthMhz?: number | null;
 
+  @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000, description: 'GNSS only: lower edge of the main lobe of the open-service signal' })
+  mainLobeFromMhz?: number | null;
+
+  @NumberField({ optional: true, nullable: true, min: 0.001, max: 300000, description: 'GNSS only: upper edge of the main lobe' })
+  mainLobeToMhz?: number | null;
+
   @ApiProperty({ enum: REGIONS, enumName: 'Region', isArray: true })
   @IsArray()
   @ArrayMaxSize(REGIONS.length)
-  @IsIn(REGIONS, { each: true, message: `each value must be one of: ${REGIONS.join(', ')}` })
+  @IsIn(REGIONS, { each: true, message: REGION_MESSAGE })
   regions: string[];
 
   @StringField({ maxLength: 200, example: '3GPP TS 36.101' })

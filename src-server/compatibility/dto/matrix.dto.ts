@@ -66,6 +66,20 @@ export class MatrixRowDto {
   @ApiProperty() bandId: number;
   @ApiProperty() designation: string;
   @ApiProperty({ type: [MatrixRangeDto] }) ranges: MatrixRangeDto[];
+  @ApiProperty({
+    type: [FindingDto],
+    description: "Findings of the radio band itself, whatever the part: BAND_OUTSIDE_MARKETS (info) when none of the product's markets uses the band",
+  })
+  findings: FindingDto[];
+}
+
+export class RadioFindingsDto {
+  @ApiProperty() radioId: number;
+  @ApiProperty({
+    type: [FindingDto],
+    description: "Findings of the radio as a whole: MARKET_WITHOUT_BANDS (marginal) for each product market none of the radio's bands is used in",
+  })
+  findings: FindingDto[];
 }
 
 export class ColumnAssignmentDto {
@@ -105,6 +119,8 @@ export class MatrixDto {
   @ApiProperty({ type: [MatrixRowDto] }) rows: MatrixRowDto[];
   @ApiProperty({ type: [MatrixColumnDto] }) columns: MatrixColumnDto[];
   @ApiProperty({ type: [MatrixCellDto] }) cells: MatrixCellDto[];
+  @ApiProperty({ type: [RadioFindingsDto], description: 'Per radio of the product, findings about the radio as a whole (bands against markets)' })
+  radios: RadioFindingsDto[];
   @ApiProperty({ description: 'Rule ids and versions the matrix was evaluated with' }) rules: string;
 }
 

@@ -472,6 +472,27 @@ function transmitRanges(requirement: RadioBandRequirement): readonly BandRange[]
   return tx.length > 0 ? tx : requirement.ranges;
 }
 
+/** The transmit ranges cut to the channels the radio lists (when it lists any): where its power limits are judged. */
+export function judgedTransmitRanges(requirement: RadioBandRequirement): readonly BandRange[] {
+  const tx = transmitRanges(requirement);
+  const channels = requirement.channels;
+  if (!channels || channels.length === 0) return tx;
+  return tx.flatMap((range) =>
+    channels.flatMap((channel) => {
+      const shared = overlap(range, channel);
+      return shared ? [{ ...shared, role: range.role }] : [];
+    }),
+  );
+}
+
+/** The limits over the judged ranges, and the requirement's markets none of them governs. */
+function limitsOnFile(requirement: RadioBandRequirement, judged: readonly BandRange[]): { count: number; missing: string[] | null } {
+  const applicable = requirement.regulatoryLimits.filter((limit) => judged.some((r) => overlap(r, limit) !== null));
+  if (requirement.txPowerDbm === null || !requirement.markets) return { count: applicable.length, missing: null };
+  const missing = requirement.markets.filter((market) => !applicable.some((limit) => !limit.markets || limit.markets.includes(market)));
+  return { count: applicable.length, missing };
+}
+
 function overlap(a: FrequencyRange, b: FrequencyRange): FrequencyRange | null {
   const fromHz = Math.max(a.fromHz, b.fromHz);
   const toHz = Math.min(a.toHz, b.toHz);
@@ -506,8 +527,7 @@ export function computeRowFacts(requirement: RadioBandRequirement): Record<strin
   const highestHz = Math.max(...requirement.ranges.map((r) => r.toHz));
   const product = requirement.productGroundPlane ? sortedSides(requirement.productGroundPlane.lengthMm, requirement.productGroundPlane.widthMm) : null;
   const quarterWaveMm = wavelengthFractionMm(lowestHz, 0.25);
-  const tx = transmitRanges(requirement);
-  const limitCount = requirement.regulatoryLimits.filter((limit) => tx.some((r) => overlap(r, limit) !== null)).length;
+  const onFile = limitsOnFile(requirement, judgedTransmitRanges(requirement));
   const facts: Partial<Record<FactName, FactValue>> = {
     technology: requirement.technology,
     designation: requirement.designation,
@@ -522,7 +542,9 @@ export function computeRowFacts(requirement: RadioBandRequirement): Record<strin
     productGroundPlaneWidthMm: product ? product[1] : null,
     quarterWaveMm,
     groundPlaneVsQuarterWavePct: product ? (product[0] / quarterWaveMm) * 100 : null,
-    regionalLimitCount: limitCount,
+    regionalLimitCount: onFile.count,
+    marketsWithoutLimitCount: onFile.missing ? onFile.missing.length : 0,
+    marketsWithoutLimit: onFile.missing ? (onFile.missing.length > 0 ? onFile.missing.join(', ') : 'none') : null,
   };
   return roundFacts(facts) as Record<string, FactValue>;
 }
@@ -590,7 +612,8 @@ export function computeFacts(
       : null;
   const txPeakGainDbi = txGain ? txGain.max.value : null;
   const eirp = requirement.txPowerDbm !== null && txPeakGainDbi !== null ? eirpDbm(requirement.txPowerDbm, txPeakGainDbi, requirement.feedLossDb) : null;
-  const regional = regionalLimitFacts(requirement, part, tx);
+  // A market with no limit on file leaves the limit unknown ("not checked"), however the other markets fare.
+  const regional = (rowFacts.marketsWithoutLimitCount as number | null) ? {} : regionalLimitFacts(requirement, part, judgedTransmitRanges(requirement));
 
   const evalBoard = part.evaluationGroundPlane ? sortedSides(part.evaluationGroundPlane.lengthMm, part.evaluationGroundPlane.widthMm) : null;
   const productLength = rowFacts.productGroundPlaneLengthMm as number | null;
@@ -695,6 +718,15 @@ function regionalLimitFacts(requirement: RadioBandRequirement, part: PartEvaluat
       const shared = overlap(range, limit);
       if (!shared) continue;
       const base = { regionalLimitDbm: limit.valueDbm, regionalLimitKind: limit.kind, regionalLimitRegion: limit.region, regionalLimitSource: limit.source };
+      if (limit.kind === 'conducted') {
+        // Conducted power at the radio's port (e.g. a UE power class): the antenna's gain plays no part.
+        const margin = limit.valueDbm - requirement.txPowerDbm;
+        if (margin < tightestMargin) {
+          tightestMargin = margin;
+          tightest = { ...base, regionalRadiatedDbm: requirement.txPowerDbm, regionalLimitMarginDb: margin };
+        }
+        continue;
+      }
       const sampler = peakGainSampler(part, shared);
       if (!sampler) {
         unknown ??= { ...base, regionalRadiatedDbm: null, regionalLimitMarginDb: null };

@@ -30,7 +30,13 @@ export const FACT_CATALOG = {
   productGroundPlaneLengthMm: row('number', 'mm', "longer side of the product's ground plane"),
   productGroundPlaneWidthMm: row('number', 'mm', "shorter side of the product's ground plane"),
   quarterWaveMm: row('number', 'mm', 'λ/4 at the lowest frequency of the band'),
-  regionalLimitCount: row('number', 'count', 'number of regional power limits that apply to the transmit ranges'),
+  regionalLimitCount: row(
+    'number',
+    'count',
+    "number of regional power limits that govern the radio's technology in the product's markets and apply to the transmit ranges (or the channels the radio lists)",
+  ),
+  marketsWithoutLimitCount: row('number', 'count', "number of the product's markets using this band that have no power limit on file for it"),
+  marketsWithoutLimit: row('string', 'none', "the product's markets using this band that have no power limit on file for it ('none' when every one has)"),
 
   reviewState: pair('string', 'none', 'review state of the part: draft, in-review, approved, restricted, retired'),
   lifecycle: pair('string', 'none', 'lifecycle of the part: active, nrnd, eol'),
@@ -72,7 +78,7 @@ export const FACT_CATALOG = {
   eirpDbm: pair('number', 'dbm', 'EIRP = transmit power + transmit peak gain − feed loss'),
   erpDbm: pair('number', 'dbm', 'ERP = EIRP − 2.15 dB'),
   regionalLimitDbm: pair('number', 'dbm', 'the tightest regional limit that applies (in its own kind, EIRP or ERP)'),
-  regionalLimitKind: pair('string', 'none', 'kind of the tightest limit: eirp, erp or conducted-gain-rule'),
+  regionalLimitKind: pair('string', 'none', 'kind of the tightest limit: eirp, erp, conducted or conducted-gain-rule'),
   regionalLimitRegion: pair('string', 'none', 'region of the tightest limit'),
   regionalLimitSource: pair('string', 'none', 'published source of the tightest limit'),
   regionalRadiatedDbm: pair('number', 'dbm', 'EIRP, ERP or conducted power, as the tightest limit counts it'),

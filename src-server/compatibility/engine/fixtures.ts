@@ -83,7 +83,8 @@ export function constructedRequirement(overrides: Partial<RadioBandRequirement> 
     designation: 'B12',
     ranges: LTE_B12_RANGES,
     txPowerDbm: 23,
-    certifiedMaxGainDbi: null,
+    // A transmitting band needs a certified gain entered, else it is "not checked".
+    certifiedMaxGainDbi: 9,
     feedLossDb: 0,
     requiredPolarization: null,
     productGroundPlane: { lengthMm: 120, widthMm: 60 },

@@ -23,6 +23,8 @@ export interface BoundRule {
   /** The message split once into text and placeholders, so a finding costs a few concatenations. */
   readonly template: readonly TemplatePiece[];
   readonly noDataCode: string;
+  /** The rule's own "no data" findings per unknown fact, in the order the conditions name the facts. */
+  readonly noData: readonly { readonly fact: string; readonly code: string; readonly template: readonly TemplatePiece[] }[];
 }
 
 type TemplatePiece = string | { readonly name: string; readonly upper: boolean; readonly fromParameters: boolean };
@@ -90,6 +92,7 @@ export function bindRule(rule: RuleDefinition, index: number, rowFacts: Facts): 
   const appliesWhen = rule.appliesWhen ? bindNode(rule, rule.appliesWhen, rowFacts, used) : null;
   const conditions = bindNode(rule, rule.conditions, rowFacts, used);
   const bound = { ...values, ...used };
+  const named = factsNamedBy(rule.conditions);
   return {
     rule,
     index,
@@ -99,6 +102,9 @@ export function bindRule(rule: RuleDefinition, index: number, rowFacts: Facts): 
     requiredFacts: factsNamedBy(rule.conditions),
     template: parseTemplate(rule.event.params.message, bound),
     noDataCode: `${rule.event.params.code}_NO_DATA`,
+    noData: Object.entries(rule.event.params.noData ?? {})
+      .map(([fact, entry]) => ({ fact, code: entry.code, template: parseTemplate(entry.message, bound) }))
+      .sort((a, b) => named.indexOf(a.fact) - named.indexOf(b.fact)),
   };
 }
 
@@ -124,9 +130,9 @@ export function formatValue(value: unknown): string {
 }
 
 /** Fills {name} and {name|upper} from the bound parameters first, then from the facts. */
-export function renderMessage(bound: BoundRule, facts: Facts): string {
+export function renderMessage(bound: BoundRule, facts: Facts, template: readonly TemplatePiece[] = bound.template): string {
   let out = '';
-  for (const piece of bound.template) {
+  for (const piece of template) {
     if (typeof piece === 'string') out += piece;
     else {
       const text = formatValue(piece.fromParameters ? bound.values[piece.name] : facts[piece.name]);
@@ -216,6 +222,8 @@ export function findingOf(bound: BoundRule, facts: Facts): Finding {
 }
 
 export function noDataFindingOf(bound: BoundRule, facts: Facts): Finding {
+  const own = bound.noData.find((entry) => facts[entry.fact] === null || facts[entry.fact] === undefined);
+  if (own) return lazyFinding(bound.rule.id, 'no-data', own.code, () => renderMessage(bound, facts, own.template));
   return lazyFinding(bound.rule.id, 'no-data', bound.noDataCode, () => {
     const unknown = bound.requiredFacts.filter((name) => facts[name] === null || facts[name] === undefined);
     const needs = unknown.map((name) => (isFactName(name) ? FACT_CATALOG[name].description : name)).join('; ');

@@ -33,7 +33,18 @@ export interface RuleDefinition {
   readonly appliesWhen?: ConditionNode | null;
   /** The finding fires when these hold; every fact they name must be known, else the pair gets "no data". */
   readonly conditions: ConditionNode;
-  readonly event: { readonly type: 'finding'; readonly params: { readonly code: string; readonly message: string } };
+  readonly event: { readonly type: 'finding'; readonly params: FindingParams };
+}
+
+/** What a rule says when it fires, and (noData) what it says when a named fact of its conditions is unknown. */
+export interface FindingParams {
+  readonly code: string;
+  readonly message: string;
+  /**
+   * Per fact the conditions name: the code and message of the "no data" finding when that fact is unknown (the first
+   * unknown fact listed decides), so "no limit on file" reads apart from "no gain data". Others get `<code>_NO_DATA`.
+   */
+  readonly noData?: Readonly<Record<string, { readonly code: string; readonly message: string }>>;
 }
 
 export interface RuleProblem {
@@ -278,18 +289,20 @@ export function validateRuleDefinition(input: unknown): RuleProblem[] {
   if (!isRecord(event) || event.type !== 'finding' || !isRecord(event.params)) {
     problems.push({ path: 'event', message: 'must be {"type": "finding", "params": {"code": …, "message": …}}' });
   } else {
-    const { code, message } = event.params;
-    if (typeof code !== 'string' || !/^[A-Z][A-Z0-9_]{2,63}$/.test(code))
-      problems.push({ path: 'event.params.code', message: 'upper-case letters, digits and underscores, 3 to 64 characters' });
-    if (typeof message !== 'string' || message.trim().length === 0 || message.length > 500)
-      problems.push({ path: 'event.params.message', message: 'text of 1 to 500 characters' });
-    else {
-      for (const { name, filter } of messagePlaceholders(message)) {
-        if (!isFactName(name) && !(has(parameters, name) && !INHERITED_NAMES.has(name)))
-          problems.push({ path: 'event.params.message', message: `unknown placeholder {${name}}: name a fact or a parameter` });
-        if (filter !== undefined && !(MESSAGE_FILTERS as readonly string[]).includes(filter))
-          problems.push({ path: 'event.params.message', message: `unknown filter "|${filter}" in {${name}|${filter}}` });
-      }
+    for (const key of Object.keys(event.params))
+      if (!['code', 'message', 'noData'].includes(key)) problems.push({ path: `event.params.${key}`, message: `unexpected field "${key}"` });
+    validateCodeAndMessage(event.params, 'event.params', parameters, problems);
+    const noData = event.params.noData;
+    if (noData !== undefined) {
+      const named = isRecord(conditions) ? factsNamedBy(conditions as unknown as ConditionNode) : [];
+      if (!isRecord(noData)) problems.push({ path: 'event.params.noData', message: 'an object: fact name → {"code": …, "message": …}' });
+      else
+        for (const [fact, entry] of Object.entries(noData)) {
+          const path = `event.params.noData.${fact}`;
+          if (INHERITED_NAMES.has(fact) || !named.includes(fact)) problems.push({ path, message: `"${fact}" is not a fact the conditions name` });
+          else if (!isRecord(entry)) problems.push({ path, message: 'must be {"code": …, "message": …}' });
+          else validateCodeAndMessage(entry, path, parameters, problems);
+        }
     }
   }
   if (problems.length === 0) {
@@ -301,6 +314,23 @@ export function validateRuleDefinition(input: unknown): RuleProblem[] {
     }
   }
   return problems;
+}
+
+/** A finding's code and message template (placeholders name facts or parameters). */
+function validateCodeAndMessage(params: Record<string, unknown>, path: string, parameters: Record<string, unknown>, problems: RuleProblem[]): void {
+  const { code, message } = params;
+  if (typeof code !== 'string' || !/^[A-Z][A-Z0-9_]{2,63}$/.test(code))
+    problems.push({ path: `${path}.code`, message: 'upper-case letters, digits and underscores, 3 to 64 characters' });
+  if (typeof message !== 'string' || message.trim().length === 0 || message.length > 500) {
+    problems.push({ path: `${path}.message`, message: 'text of 1 to 500 characters' });
+    return;
+  }
+  for (const { name, filter } of messagePlaceholders(message)) {
+    if (!isFactName(name) && !(has(parameters, name) && !INHERITED_NAMES.has(name)))
+      problems.push({ path: `${path}.message`, message: `unknown placeholder {${name}}: name a fact or a parameter` });
+    if (filter !== undefined && !(MESSAGE_FILTERS as readonly string[]).includes(filter))
+      problems.push({ path: `${path}.message`, message: `unknown filter "|${filter}" in {${name}|${filter}}` });
+  }
 }
 
 /** The whole rule as JSON at most 64 KiB; JSON.stringify itself refuses a structure nested past the stack. */

@@ -4,7 +4,7 @@ import { CompiledRuleSet } from './compiled-evaluator';
 import { computeFacts, roundFactValue } from './compute-facts';
 import { MHZ, constructedPart, constructedRequirement, flatCurve, flatReflection, rangeMhz, specBand, steppedReflection } from './fixtures';
 import { ReferenceEvaluator } from './reference-evaluator';
-import type { ParameterValue, RuleDefinition } from './rule-definition';
+import { type ParameterValue, type RuleDefinition, validateRuleDefinition } from './rule-definition';
 import type { CellVerdict, Facts, PartEvaluationData, RadioBandRequirement } from './types';
 
 const FILE_RULES = loadRuleFiles();
@@ -260,11 +260,18 @@ describe('certified-gain-cap', () => {
     expect(over.finding!.message).toBe("peak gain 2.01 dBi on the transmit ranges of B12 is 0.01 dB over the module's certified maximum of 2 dBi");
   });
 
-  it('does not apply when the grant states no gain or the radio only receives', async () => {
-    const none = await check('certified-gain-cap', lte(), constructedPart({ gainDbi: 9 }));
-    expect(none.verdict.findings).toEqual([]);
+  it('does not apply when the radio only receives', async () => {
     const rx = await check('certified-gain-cap', lte({ certifiedMaxGainDbi: 2, txPowerDbm: null }), constructedPart({ gainDbi: 9 }));
     expect(rx.verdict.findings).toEqual([]);
+  });
+
+  it('leaves a transmitting band with no certified gain entered "not checked", with a code that says so (issue 12)', async () => {
+    const none = await check('certified-gain-cap', lte({ certifiedMaxGainDbi: null }), constructedPart({ gainDbi: 1 }));
+    expect(none.verdict.status).toBe('no-data');
+    expect(none.finding).toMatchObject({ severity: 'no-data', code: 'CERTIFIED_GAIN_NOT_ENTERED' });
+    // Gain entered but the part's gain unknown: the rule's general "no data", not the missing-entry code.
+    const noGain = await check('certified-gain-cap', lte({ certifiedMaxGainDbi: 2 }), constructedPart({ gainDbi: 1 }, { peakGainDbi: null }));
+    expect(noGain.finding).toMatchObject({ severity: 'no-data', code: 'GAIN_OVER_CERTIFIED_NO_DATA' });
   });
 
   it('looks at the transmit ranges only: a gain peak in the downlink does not count', async () => {
@@ -336,6 +343,82 @@ describe('regional-power-limit', () => {
   it('reports no data when the gain under the limit is unknown', async () => {
     const { finding } = await check('regional-power-limit', wifi(), constructedPart({}, { peakGainDbi: null }));
     expect(finding).toMatchObject({ severity: 'no-data', code: 'OVER_REGIONAL_LIMIT_NO_DATA' });
+  });
+
+  describe('issue 12: not checked is not a pass', () => {
+    const inEu = { ...erp25mW, markets: ['EU'] };
+
+    it('leaves a transmitting band "not checked" when a market using it has no limit on file, naming the market', async () => {
+      const bothMarkets = lte({ ...lora(13), markets: ['EU', 'US'], regulatoryLimits: [inEu] });
+      const { facts, verdict, finding } = await check('regional-power-limit', bothMarkets, dipole);
+      expect(facts.marketsWithoutLimit).toBe('US');
+      expect(verdict.status).toBe('no-data');
+      expect(finding).toMatchObject({ severity: 'no-data', code: 'REGULATORY_LIMIT_NOT_ON_FILE' });
+      expect(finding!.message).toContain('US');
+      // No limit at all for the band's only market: not checked either.
+      const none = await check('regional-power-limit', lte({ ...lora(13), markets: ['US'], regulatoryLimits: [] }), dipole);
+      expect(none.finding).toMatchObject({ severity: 'no-data', code: 'REGULATORY_LIMIT_NOT_ON_FILE' });
+    });
+
+    it('judges the band when every market has a limit, and says nothing for a radio that only receives', async () => {
+      const checked = await check('regional-power-limit', lte({ ...lora(13), markets: ['EU'], regulatoryLimits: [inEu] }), dipole);
+      expect(checked.facts.marketsWithoutLimit).toBe('none');
+      expect(checked.finding).toBeUndefined();
+      const rx = await check('regional-power-limit', lte({ ...lora(13), txPowerDbm: null, markets: ['US'], regulatoryLimits: [] }), dipole);
+      expect(rx.verdict.findings).toEqual([]);
+    });
+  });
+
+  describe('issue 12: the channels a radio lists decide the sub-band', () => {
+    // ERC/REC 70-03 Annex 1 / EU 2017/1483: 868.0–868.6 MHz 25 mW e.r.p.; 869.4–869.65 MHz 500 mW e.r.p. (26.99 dBm).
+    const erp500mW = { region: 'EU', fromHz: 869.4 * MHZ, toHz: 869.65 * MHZ, kind: 'erp' as const, valueDbm: mwToDbm(500), source: 'EU 2017/1483' };
+    const gateway = (channels: { fromHz: number; toHz: number }[] | null) =>
+      lte({
+        technology: 'ism',
+        designation: 'EU868',
+        ranges: [rangeMhz(863, 870, 'tdd')],
+        txPowerDbm: 20,
+        regulatoryLimits: [erp25mW, erp500mW],
+        markets: ['EU'],
+        channels,
+      });
+
+    it('judges the whole band by its tightest sub-band when no channel is listed: 20 dBm into a dipole is 20 dBm e.r.p., over 25 mW', async () => {
+      // ERP = 20 dBm + 2.15 dBi − 2.15 dB (ITU RR Art. 1: EIRP = ERP + 2.15 dB) = 20 dBm > 13.98 dBm.
+      const { facts, finding } = await check('regional-power-limit', gateway(null), dipole);
+      expect(facts.regionalLimitDbm as number).toBeCloseTo(13.979, 3);
+      expect(finding).toMatchObject({ severity: 'fail', code: 'OVER_REGIONAL_LIMIT' });
+    });
+
+    it('judges a radio that lists 869.4–869.65 MHz on that sub-band: 20 dBm e.r.p. is inside 500 mW', async () => {
+      const { facts, finding } = await check('regional-power-limit', gateway([{ fromHz: 869.4 * MHZ, toHz: 869.65 * MHZ }]), dipole);
+      expect(facts.regionalLimitDbm as number).toBeCloseTo(26.99, 2);
+      expect(facts.regionalLimitMarginDb as number).toBeCloseTo(6.99, 2);
+      expect(finding).toBeUndefined();
+    });
+
+    it('judges a channel in the 25 mW sub-band on that limit, and one in no sub-band as not checked', async () => {
+      const low = await check('regional-power-limit', gateway([{ fromHz: 868.1 * MHZ - 62.5e3, toHz: 868.1 * MHZ + 62.5e3 }]), dipole);
+      expect(low.finding).toMatchObject({ code: 'OVER_REGIONAL_LIMIT' });
+      const gap = await check('regional-power-limit', gateway([{ fromHz: 869.25 * MHZ, toHz: 869.3 * MHZ }]), dipole);
+      expect(gap.finding).toMatchObject({ severity: 'no-data', code: 'REGULATORY_LIMIT_NOT_ON_FILE' });
+    });
+  });
+
+  describe('conducted limits (a UE power class)', () => {
+    // 3GPP TS 36.101 §6.2.2 Table 6.2.2-1: power class 3 = 23 dBm at the antenna port (from memory); the antenna plays no part.
+    const powerClass3 = { region: 'EU', fromHz: 880 * MHZ, toHz: 915 * MHZ, kind: 'conducted' as const, valueDbm: 23, source: 'TS 36.101' };
+    const b8 = (txPowerDbm: number) =>
+      lte({ designation: 'B8', ranges: [rangeMhz(880, 915, 'uplink'), rangeMhz(925, 960, 'downlink')], txPowerDbm, regulatoryLimits: [powerClass3] });
+
+    it('passes 23 dBm (at) whatever the gain, fails 23.1 dBm', async () => {
+      const at = await check('regional-power-limit', b8(23), constructedPart({ gainDbi: 8 }));
+      expect(at.facts.regionalRadiatedDbm).toBe(23);
+      expect(at.finding).toBeUndefined();
+      expect((await check('regional-power-limit', b8(23.1), constructedPart({ gainDbi: -3 }))).finding).toMatchObject({ code: 'OVER_REGIONAL_LIMIT' });
+      // The part's gain is not needed for a conducted limit.
+      expect((await check('regional-power-limit', b8(23), constructedPart({}, { peakGainDbi: null }))).finding).toBeUndefined();
+    });
   });
 });
 
@@ -547,5 +630,23 @@ describe('gain basis', () => {
     const facts = computeFacts(lte(), constructedPart({ gainDbi: 2 }, { gainBasis: 'realized', reflection: null }));
     expect(facts.realizedPeakGainDbi).toBe(2);
     expect(facts.peakGainDbi).toBeNull();
+  });
+});
+
+describe('a rule naming its own "no data" findings (event.params.noData)', () => {
+  it('is refused when it names a fact its conditions do not, or a bad code, with the place', () => {
+    const rule = ruleWith('certified-gain-cap');
+    const withNoData = (noData: unknown) => ({ ...rule, event: { ...rule.event, params: { ...rule.event.params, noData } } });
+    expect(validateRuleDefinition(withNoData({ eirpDbm: { code: 'NO_EIRP', message: 'x' } }))).toEqual([
+      { path: 'event.params.noData.eirpDbm', message: expect.stringContaining('not a fact the conditions name') },
+    ]);
+    expect(validateRuleDefinition(withNoData({ certifiedMaxGainDbi: { code: 'lower', message: 'x {nothing}' } })).map((p) => p.path)).toEqual([
+      'event.params.noData.certifiedMaxGainDbi.code',
+      'event.params.noData.certifiedMaxGainDbi.message',
+    ]);
+    expect(validateRuleDefinition({ ...rule, event: { ...rule.event, params: { ...rule.event.params, extra: 1 } } }).map((p) => p.path)).toEqual([
+      'event.params.extra',
+    ]);
+    expect(validateRuleDefinition(rule)).toEqual([]);
   });
 });

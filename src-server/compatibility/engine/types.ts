@@ -66,8 +66,8 @@ export interface PartEvaluationData {
   readonly lifecycle: Lifecycle;
 }
 
-/** As the band library stores them: radiated (EIRP, ERP) or conducted power reduced for gain above a threshold. */
-export type LimitKind = 'eirp' | 'erp' | 'conducted-gain-rule';
+/** As the band library stores them: radiated (EIRP, ERP), conducted power at the radio's port, or conducted power reduced for gain above a threshold. */
+export type LimitKind = 'eirp' | 'erp' | 'conducted' | 'conducted-gain-rule';
 
 /** A regional power limit that applies to part of a band. */
 export interface RegulatoryLimit {
@@ -81,6 +81,14 @@ export interface RegulatoryLimit {
   readonly gainThresholdDbi?: number | null;
   /** … by this many dB per dB (1 for 47 CFR 15.247(b)(4), 1/3 for fixed point-to-point (c)(1)(i)). */
   readonly reductionDbPerDb?: number | null;
+  /** The requirement's markets this limit governs; absent: every one of them. */
+  readonly markets?: readonly string[];
+}
+
+/** A frequency range in Hz (a channel the radio uses). */
+export interface ChannelRange {
+  readonly fromHz: number;
+  readonly toHz: number;
 }
 
 /** One band of one radio of a product, with everything of the radio the rules look at. */
@@ -99,6 +107,13 @@ export interface RadioBandRequirement {
   readonly requiredPolarization: Polarization | null;
   readonly productGroundPlane: GroundPlane | null;
   readonly regulatoryLimits: readonly RegulatoryLimit[];
+  /**
+   * The product's markets this band is used in: when the radio transmits, each needs a limit on file for the
+   * transmit ranges, else the band is "not checked". Absent: markets are not checked.
+   */
+  readonly markets?: readonly string[];
+  /** Channels the radio uses in this band: limits are judged on them (inside the transmit ranges) instead of the whole ranges. */
+  readonly channels?: readonly ChannelRange[] | null;
 }
 
 export type FactValue = number | string | boolean | null;

@@ -10,6 +10,7 @@ import { OwnershipAndLocking1765310000000 } from './1765310000000-ownership-and-
 import { OneApiVocabulary1765400000000 } from './1765400000000-one-api-vocabulary';
 import { OnePolarizationVocabulary1765500000000 } from './1765500000000-one-polarization-vocabulary';
 import { FigureBasis1765510000000 } from './1765510000000-figure-basis';
+import { LimitsByServiceAndMarkets1765520000000 } from './1765520000000-limits-by-service-and-markets';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
 export const MIGRATIONS = [
@@ -25,4 +26,5 @@ export const MIGRATIONS = [
   OneApiVocabulary1765400000000,
   OnePolarizationVocabulary1765500000000,
   FigureBasis1765510000000,
+  LimitsByServiceAndMarkets1765520000000,
 ];

@@ -2,6 +2,7 @@ import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
 import { BoolField, IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { REGIONS, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
+import { REGION_MESSAGE } from '../../bands/regions';
 import { RadioDto } from './radio.dto';
 
 export class CreateProductDto {
@@ -20,11 +21,17 @@ export class CreateProductDto {
   @NumberField({ min: 1, max: 2000, description: 'Ground-plane (board) width in mm' })
   groundPlaneWidthMm: number;
 
-  @ApiProperty({ enum: REGIONS, enumName: 'Region', isArray: true, example: ['EU', 'US'] })
+  @ApiProperty({
+    enum: REGIONS,
+    enumName: 'Region',
+    isArray: true,
+    example: ['EU', 'US'],
+    description: 'Target markets: ISO 3166-1 alpha-2 codes, groupings (EU, CEPT, ASIA) or global',
+  })
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(REGIONS.length)
-  @IsIn(REGIONS, { each: true, message: `each value must be one of: ${REGIONS.join(', ')}` })
+  @IsIn(REGIONS, { each: true, message: REGION_MESSAGE })
   targetRegions: string[];
 
   @StringField({ optional: true, nullable: true, maxLength: 4000 })

@@ -1,10 +1,25 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, ValidateNested } from 'class-validator';
-import { EnumField, IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
-import { TECHNOLOGIES, type Technology } from '../../bands/band-domain';
+import { EnumField, IntField, NumberField, OptionalField, PatchType, StringField } from '../../common/dto-fields';
+import { GNSS_BANDWIDTHS, type GnssBandwidth, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { BandDto } from '../../bands/dto/band-response.dto';
 import { CONNECTORS, type Connector, POLARIZATIONS, type Polarization } from '../radio.entity';
+
+/** A channel the radio uses: an edge pair, or a centre and bandwidth (exactly one of the two forms). */
+export class RadioChannelInputDto {
+  @NumberField({ optional: true, min: 0.001, max: 300000, description: 'Lower edge (MHz); with toMhz' })
+  fromMhz?: number;
+
+  @NumberField({ optional: true, min: 0.001, max: 300000, description: 'Upper edge (MHz); with fromMhz' })
+  toMhz?: number;
+
+  @NumberField({ optional: true, min: 0.001, max: 300000, description: 'Centre frequency (MHz); with bandwidthMhz', example: 869.525 })
+  centreMhz?: number;
+
+  @NumberField({ optional: true, min: 0.000001, max: 10000, description: 'Occupied bandwidth (MHz); with centreMhz', example: 0.25 })
+  bandwidthMhz?: number;
+}
 
 export class RadioBandInputDto {
   @IntField({ min: 1, description: 'A band id from /api/bands' })
@@ -18,6 +33,19 @@ export class RadioBandInputDto {
     description: "The module's certified maximum antenna gain in this band (dBi); empty for receive-only radios",
   })
   certifiedMaxGainDbi?: number | null;
+
+  @ApiPropertyOptional({
+    type: [RadioChannelInputDto],
+    nullable: true,
+    description:
+      "The channels the radio uses in this band, inside its transmit ranges; power limits are then judged on these channels' sub-bands instead of the tightest sub-band anywhere in the band. Empty or null: the whole band",
+  })
+  @OptionalField({ nullable: true })
+  @IsArray()
+  @ArrayMaxSize(64)
+  @ValidateNested({ each: true })
+  @Type(() => RadioChannelInputDto)
+  channels?: RadioChannelInputDto[] | null;
 }
 
 export class CreateRadioDto {
@@ -48,6 +76,14 @@ export class CreateRadioDto {
   @NumberField({ min: 0, max: 20, description: 'Cable or feed loss between module and antenna (dB)' })
   feedLossDb: number;
 
+  @EnumField(GNSS_BANDWIDTHS, {
+    enumName: 'GnssBandwidth',
+    optional: true,
+    nullable: true,
+    description: 'GNSS only: judge each signal on its main lobe (default) or its full signal band; leave empty for other radios',
+  })
+  gnssBandwidth?: GnssBandwidth | null;
+
   @StringField({ optional: true, nullable: true, maxLength: 4000 })
   notes?: string | null;
 
@@ -65,9 +101,16 @@ export class UpdateRadioDto extends PatchType(CreateRadioDto) {
   version: number;
 }
 
+export class RadioChannelDto {
+  @ApiProperty({ example: 869.4 }) fromMhz: number;
+  @ApiProperty({ example: 869.65 }) toMhz: number;
+}
+
 export class RadioBandDto {
   @ApiProperty({ type: BandDto }) band: BandDto;
   @ApiPropertyOptional({ type: Number, nullable: true }) certifiedMaxGainDbi: number | null;
+  @ApiPropertyOptional({ type: [RadioChannelDto], nullable: true, description: 'The channels the radio uses (edges in MHz); null: the whole band' })
+  channels: RadioChannelDto[] | null;
 }
 
 export class RadioDto {
@@ -81,6 +124,8 @@ export class RadioDto {
   @ApiProperty({ enum: POLARIZATIONS, enumName: 'RadioPolarization' }) polarization: Polarization;
   @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
   @ApiProperty() feedLossDb: number;
+  @ApiPropertyOptional({ enum: GNSS_BANDWIDTHS, enumName: 'GnssBandwidth', nullable: true, description: 'GNSS radios: main-lobe or full-band; null otherwise' })
+  gnssBandwidth: GnssBandwidth | null;
   @ApiPropertyOptional({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty({ type: [RadioBandDto] }) bands: RadioBandDto[];

@@ -1,11 +1,27 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { EnumField, NumberField, PatchType, StringField } from '../../common/dto-fields';
-import { REGIONS } from '../../bands/band-domain';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
+import { EnumField, NumberField, OptionalField, PatchType, StringField } from '../../common/dto-fields';
+import { REGIONS, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { LIMIT_KINDS, type LimitKind } from '../regulatory-limit.entity';
 
 export class CreateRegulatoryLimitDto {
-  @EnumField(REGIONS, { enumName: 'Region', example: 'EU' })
+  @EnumField(REGIONS, { enumName: 'Region', example: 'EU', description: 'ISO 3166-1 alpha-2 code, a grouping (EU, CEPT, ASIA) or global' })
   region: string;
+
+  @ApiPropertyOptional({
+    enum: TECHNOLOGIES,
+    enumName: 'Technology',
+    isArray: true,
+    example: ['wifi', 'ble', 'ism', 'other'],
+    description:
+      'The radio technologies (services) the limit governs; a limit is judged only on radios of these technologies. Left out: the licence-exempt ones (wifi, ble, ism, other)',
+  })
+  @OptionalField()
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(TECHNOLOGIES.length)
+  @IsIn(TECHNOLOGIES, { each: true, message: `each value must be one of: ${TECHNOLOGIES.join(', ')}` })
+  technologies?: Technology[];
 
   @StringField({ maxLength: 160, example: 'SRD 869.4–869.65 MHz' })
   title: string;
@@ -16,7 +32,10 @@ export class CreateRegulatoryLimitDto {
   @NumberField({ min: 0.001, max: 300000 })
   toMhz: number;
 
-  @EnumField(LIMIT_KINDS, { enumName: 'LimitKind', description: 'eirp, erp, or conducted power with an antenna-gain rule' })
+  @EnumField(LIMIT_KINDS, {
+    enumName: 'LimitKind',
+    description: 'eirp, erp, conducted power at the radio port, or conducted power with an antenna-gain rule',
+  })
   kind: LimitKind;
 
   @NumberField({ min: -30, max: 60, description: 'The limit in dBm, unrounded (25 mW = 13.979 dBm)' })
@@ -53,6 +72,9 @@ export class RegulatoryLimitQueryDto {
   @EnumField(REGIONS, { enumName: 'Region', optional: true })
   region?: string;
 
+  @EnumField(TECHNOLOGIES, { enumName: 'Technology', optional: true, description: 'Only limits that govern this technology' })
+  technology?: Technology;
+
   @NumberField({ optional: true, min: 0, max: 300000 })
   fromMhz?: number;
 
@@ -63,6 +85,7 @@ export class RegulatoryLimitQueryDto {
 export class RegulatoryLimitDto {
   @ApiProperty() id: number;
   @ApiProperty({ enum: REGIONS, enumName: 'Region' }) region: string;
+  @ApiProperty({ enum: TECHNOLOGIES, enumName: 'Technology', isArray: true }) technologies: Technology[];
   @ApiProperty() title: string;
   @ApiProperty() fromMhz: number;
   @ApiProperty() toMhz: number;

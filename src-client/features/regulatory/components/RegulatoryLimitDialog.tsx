@@ -1,9 +1,18 @@
 import { FormEvent, useState } from 'react';
-import { Button, Callout, Dialog, DialogBody, DialogFooter, FormGroup, HTMLSelect, InputGroup, Intent, TextArea } from '@blueprintjs/core';
+import { Button, Callout, Checkbox, Dialog, DialogBody, DialogFooter, FormGroup, HTMLSelect, InputGroup, Intent, TextArea } from '@blueprintjs/core';
 import { ApiError } from '../../../lib/api-client';
 import { useCreateRegulatoryLimit } from '../api/create-regulatory-limit';
 import { useUpdateRegulatoryLimit } from '../api/update-regulatory-limit';
-import { LIMIT_KIND_LABELS, type LimitKind, type Region, REGIONS, type RegulatoryLimit, type RegulatoryLimitInput } from '../types';
+import {
+  LIMIT_KIND_LABELS,
+  type LimitKind,
+  type Region,
+  REGIONS,
+  type RegulatoryLimit,
+  type RegulatoryLimitInput,
+  TECHNOLOGY_LABELS,
+  type Technology,
+} from '../types';
 
 export interface RegulatoryLimitDialogProps {
   /** The limit to edit; a new limit when null. */
@@ -11,10 +20,14 @@ export interface RegulatoryLimitDialogProps {
   onClose: () => void;
 }
 
-type Draft = Record<keyof RegulatoryLimitInput, string>;
+type Draft = Record<Exclude<keyof RegulatoryLimitInput, 'technologies'>, string> & { technologies: Technology[] };
+
+/** A new limit governs licence-exempt radios unless the admin says otherwise. */
+const LICENCE_EXEMPT: Technology[] = ['wifi', 'ble', 'ism', 'other'];
 
 const toDraft = (l: RegulatoryLimit | null): Draft => ({
   region: l?.region ?? 'EU',
+  technologies: l?.technologies ?? LICENCE_EXEMPT,
   title: l?.title ?? '',
   fromMhz: l ? String(l.fromMhz) : '',
   toMhz: l ? String(l.toMhz) : '',
@@ -39,10 +52,15 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
   const [draft, setDraft] = useState<Draft>(() => toDraft(limit));
   const error = mutation.error instanceof ApiError ? mutation.error : null;
   const fe = error?.fieldErrors ?? {};
-  const set = (key: keyof Draft) => (value: string) => setDraft((d) => ({ ...d, [key]: value }));
+  const set = (key: Exclude<keyof Draft, 'technologies'>) => (value: string) => setDraft((d) => ({ ...d, [key]: value }));
+  const toggleTechnology = (technology: Technology) =>
+    setDraft((d) => ({
+      ...d,
+      technologies: d.technologies.includes(technology) ? d.technologies.filter((t) => t !== technology) : [...d.technologies, technology],
+    }));
   const gainRule = draft.kind === 'conducted-gain-rule';
 
-  const field = (key: keyof Draft, label: string, helper?: string) => (
+  const field = (key: Exclude<keyof Draft, 'technologies'>, label: string, helper?: string) => (
     <FormGroup label={label} labelFor={`limit-${key}`} intent={fe[key] ? Intent.DANGER : Intent.NONE} helperText={fe[key] ?? helper}>
       <InputGroup id={`limit-${key}`} value={draft[key]} onValueChange={set(key)} />
     </FormGroup>
@@ -52,6 +70,7 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
     event.preventDefault();
     const body: RegulatoryLimitInput = {
       region: draft.region as Region,
+      technologies: draft.technologies,
       title: draft.title,
       kind: draft.kind as LimitKind,
       valueText: draft.valueText,
@@ -91,6 +110,15 @@ export function RegulatoryLimitDialog({ limit, onClose }: RegulatoryLimitDialogP
               />
             </FormGroup>
           </div>
+          <FormGroup
+            label="Radios it governs"
+            intent={fe.technologies ? Intent.DANGER : Intent.NONE}
+            helperText={fe.technologies ?? 'A licensed mobile limit governs LTE and 5G NR; a licence-exempt rule the others'}
+          >
+            {(Object.entries(TECHNOLOGY_LABELS) as [Technology, string][]).map(([technology, label]) => (
+              <Checkbox key={technology} inline label={label} checked={draft.technologies.includes(technology)} onChange={() => toggleTechnology(technology)} />
+            ))}
+          </FormGroup>
           {field('title', 'Title')}
           <div className="bw-form-grid">
             {field('fromMhz', 'From (MHz)')}
