@@ -225,6 +225,11 @@ describe('coexistence (API)', () => {
       // 23 dBm − 50 dBc − (−174 + 10·log10(1 MHz) + 6 dB NF − 6 dB) = −27 − (−114) = 87 dB.
       expect(hit.requiredIsolationDb).toBeCloseTo(23 - 50 - tolerableDbm(1e6, 6), 6);
       expect(hit.requiredIsolationDb).toBeCloseTo(87, 6);
+      // Two radios sharing one band are not an adjacency finding: they take turns on the air.
+      const shared = await product();
+      await radio(shared, 'ble', 8, [rx]);
+      await radio(shared, 'ble', 8, [rx]);
+      expect((await coexistenceOf(shared)).filter((f) => f.mechanism === 'adjacent')).toEqual([]);
     });
   });
 

@@ -122,7 +122,9 @@ export function checkCoexistence(
     intermodulationOrders: rule.parameters.intermodulationOrders,
     canTransmitTogether: simultaneousTransmitPredicate(options.simultaneousTransmit),
   });
-  return hits.map((hit) => findingOf(hit, rule, radios, isolationOf));
+  // Adjacency is about a neighbouring band: two radios sharing one band (BLE and Wi-Fi at 2.4 GHz) take turns on the air, which antenna isolation does not settle.
+  const judged = hits.filter((hit) => hit.product.mechanism !== 'adjacent' || hit.overlapHz === 0);
+  return judged.map((hit) => findingOf(hit, rule, radios, isolationOf));
 }
 
 function findingOf(
