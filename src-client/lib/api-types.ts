@@ -1075,6 +1075,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/products/{id}/coexistence.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The product's coexistence findings as CSV: one line per harmonic, intermodulation product or transmit edge on another radio's receive range, with the isolation it needs */
+        get: operations["CompatibilityController_coexistenceCsv"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/products/{id}/radios/{radioId}/candidates": {
         parameters: {
             query?: never;
@@ -1835,6 +1852,8 @@ export interface components {
              */
             targetRegions: components["schemas"]["Region"][];
             id: number;
+            /** @description 'all', or the pairs of radio ids that may transmit at the same time */
+            simultaneousTransmit: "all" | number[][];
             notes?: string | null;
             version: number;
             radioCount: number;
@@ -1871,6 +1890,16 @@ export interface components {
              */
             targetRegions: components["schemas"]["Region"][];
             notes?: string | null;
+            /**
+             * @description Which radios may transmit at the same time, for the intermodulation check: 'all' (the default) or pairs of radio ids of this product; an empty list means no two radios transmit together
+             * @example [
+             *       [
+             *         11,
+             *         12
+             *       ]
+             *     ]
+             */
+            simultaneousTransmit?: "all" | number[][];
         };
         /** @enum {string} */
         RadioPolarization: "linear" | "RHCP" | "LHCP" | "any";
@@ -1934,6 +1963,8 @@ export interface components {
              */
             targetRegions: components["schemas"]["Region"][];
             id: number;
+            /** @description 'all', or the pairs of radio ids that may transmit at the same time */
+            simultaneousTransmit: "all" | number[][];
             notes?: string | null;
             version: number;
             radioCount: number;
@@ -1971,6 +2002,16 @@ export interface components {
              */
             targetRegions?: components["schemas"]["Region"][];
             notes?: string | null;
+            /**
+             * @description Which radios may transmit at the same time, for the intermodulation check: 'all' (the default) or pairs of radio ids of this product; an empty list means no two radios transmit together
+             * @example [
+             *       [
+             *         11,
+             *         12
+             *       ]
+             *     ]
+             */
+            simultaneousTransmit?: "all" | number[][];
             /** @description The version you edited; a stale one gets 409 PRODUCT_VERSION_CONFLICT */
             version: number;
         };
@@ -2590,6 +2631,10 @@ export interface components {
             peakGainDbi?: number | null;
             /** @description EIRP = transmit power + peak gain on the transmit ranges − feed loss, dBm; null for a receive-only radio */
             eirpDbm?: number | null;
+            /** @description Largest downward shift of the measured S11 curve that keeps the whole band at VSWR ≤ 3:1, %; null without a measured S11 that meets it */
+            detuningMarginDownPct?: number | null;
+            /** @description Largest upward shift of the measured S11 curve that keeps the whole band at VSWR ≤ 3:1, % */
+            detuningMarginUpPct?: number | null;
         };
         EvaluationBandDto: {
             bandId: number;
@@ -2638,6 +2683,56 @@ export interface components {
             /** @description The radio the finding is about; null for the product as a whole */
             radioId?: number | null;
         };
+        CoexistenceEndDto: {
+            radioId: number;
+            bandId: number;
+            /** @example B13 */
+            designation: string;
+        };
+        /** @enum {string} */
+        CoexistenceMechanism: "harmonic" | "intermodulation" | "adjacent";
+        CoexistenceFindingDto: {
+            /** @description The transmitter (for intermodulation, the stronger of the two) */
+            aggressor: components["schemas"]["CoexistenceEndDto"];
+            /** @description The other transmitter of an intermodulation product; null otherwise */
+            secondAggressor?: components["schemas"]["CoexistenceEndDto"] | null;
+            /** @description The receiver the product lands on or near */
+            victim: components["schemas"]["CoexistenceEndDto"];
+            mechanism: components["schemas"]["CoexistenceMechanism"];
+            /** @description Harmonic number (2–5), intermodulation order (3 or 5), or 1 for a transmit band next to a receive band */
+            order: number;
+            /**
+             * @description How the product is formed, in band designations
+             * @example 2 × B13
+             */
+            expression: string;
+            /** @description Lowest frequency of the product, MHz */
+            fromMhz: number;
+            /** @description Highest frequency of the product, MHz */
+            toMhz: number;
+            /** @description Lowest frequency of the victim's receive range, MHz */
+            victimFromMhz: number;
+            /** @description Highest frequency of the victim's receive range, MHz */
+            victimToMhz: number;
+            /** @description Width of the product inside the receive range, MHz (0 when it only comes within the guard) */
+            overlapMhz: number;
+            /** @description Gap between the product and the receive range, MHz (0 when they overlap) */
+            distanceMhz: number;
+            severity: components["schemas"]["Severity"];
+            message: string;
+            /** @description The aggressor radio's transmit power, dBm */
+            aggressorPowerDbm: number;
+            /** @description Assumed emission level of the mechanism and order relative to the carrier, dBc (rule parameter) */
+            emissionDbc: number;
+            /** @description Interference the victim tolerates: −174 dBm/Hz + 10·log10(bandwidth) + noise figure + I/N, dBm (rule parameters) */
+            victimTolerableDbm: number;
+            /** @description Antenna isolation needed: transmit power + emission level − tolerable level, dB */
+            requiredIsolationDb: number;
+            /** @description In-product antenna isolation between the two radios, dB; null when unknown */
+            isolationDb?: number | null;
+            /** @description isolationDb − requiredIsolationDb, dB; null when the isolation is unknown */
+            isolationMarginDb?: number | null;
+        };
         ProductEvaluationDto: {
             productId: number;
             productName: string;
@@ -2648,6 +2743,8 @@ export interface components {
             radios: components["schemas"]["EvaluationRadioDto"][];
             /** @description Findings about the product and its radios as a whole (no part chosen …); band findings are on the bands */
             findings: components["schemas"]["EvaluationFindingDto"][];
+            /** @description Harmonics, intermodulation and transmit edges of one radio on or near another radio's receive ranges (rules/coexistence/coexistence.json); counted into the product verdict by severity */
+            coexistence: components["schemas"]["CoexistenceFindingDto"][];
             /** @description Rule ids and versions the evaluation used */
             rules: string;
             /** @description When the evaluation was computed (ISO 8601) */
@@ -5839,6 +5936,33 @@ export interface operations {
                 /** @description Only each radio's chosen part (default: its chosen and shortlisted parts); not with `parts` */
                 chosenOnly?: boolean;
             };
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CompatibilityController_coexistenceCsv: {
+        parameters: {
+            query?: never;
             header?: never;
             path: {
                 id: number;

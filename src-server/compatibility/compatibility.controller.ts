@@ -11,6 +11,7 @@ import { EvaluationService } from './evaluation.service';
 import { BillOfMaterialsService } from './bill-of-materials.service';
 import { BillOfMaterialsDto, BillOfMaterialsQueryDto, ProductEvaluationDto } from './dto/evaluation.dto';
 import { matrixCsvFileName, matrixToCsv } from './matrix-csv';
+import { coexistenceCsvFileName, coexistenceToCsv } from './coexistence-csv';
 import { AssignmentDto, CandidatesDto, CandidatesQueryDto, ChoosePartDto, MatrixDto, MatrixQueryDto, ShortlistDto } from './dto/matrix.dto';
 import { AuditPageDto } from '../audit/dto/audit-page.dto';
 
@@ -73,6 +74,21 @@ export class CompatibilityController {
     // Set only once the file exists: an error before it must still answer as JSON.
     response.setHeader('Content-Type', 'text/csv; charset=utf-8');
     response.setHeader('Content-Disposition', `attachment; filename="${matrixCsvFileName(matrix.productName)}"`);
+    return text;
+  }
+
+  @Get('coexistence.csv')
+  @Roles(...ALL_ROLES)
+  @ApiProduces('text/csv')
+  @ApiOperation({
+    summary:
+      "The product's coexistence findings as CSV: one line per harmonic, intermodulation product or transmit edge on another radio's receive range, with the isolation it needs",
+  })
+  async coexistenceCsv(@Param('id', ParseIdPipe) id: number, @Res({ passthrough: true }) response: Response): Promise<string> {
+    const { productName, radioNames, findings } = await this.evaluations.coexistence(id);
+    const text = coexistenceToCsv(productName, radioNames, findings);
+    response.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    response.setHeader('Content-Disposition', `attachment; filename="${coexistenceCsvFileName(productName)}"`);
     return text;
   }
 

@@ -12,6 +12,25 @@ import type { BandFactsDto, EvaluationRadioDto, ProductEvaluationDto } from './d
 import { EvaluationInputsService } from './evaluation-inputs.service';
 import { findingView, ruleTitlesOf } from './finding-view';
 import { RulesService } from './rules.service';
+import { loadCoexistenceRule } from './coexistence-rule-file';
+import { type CoexistenceFinding, type IsolationLookup, NO_ISOLATION_DATA, checkCoexistence } from './engine/coexistence-check';
+import type { CellStatus } from './engine/types';
+
+const VERDICT_RANK: Record<CellStatus, number> = { pass: 0, marginal: 1, 'no-data': 2, fail: 3 };
+
+/** The product verdict with coexistence counted in: a fail or marginal finding can only make it worse; notes do not count. */
+function withCoexistence(verdict: CellStatus, coexistence: readonly CoexistenceFinding[]): { verdict: CellStatus; deciding: CoexistenceFinding | null } {
+  let worst = verdict;
+  let deciding: CoexistenceFinding | null = null;
+  for (const finding of coexistence) {
+    if (finding.severity === 'info') continue;
+    if (VERDICT_RANK[finding.severity] > VERDICT_RANK[worst]) {
+      worst = finding.severity;
+      deciding = finding;
+    }
+  }
+  return { verdict: worst, deciding };
+}
 
 /** The VSWR the band-coverage rule judges coverage at (rules/band-coverage.json). */
 const COVERAGE_VSWR = 3;
@@ -36,6 +55,8 @@ export function bandFacts(facts: Facts | null, feedLossDb: number): BandFactsDto
     feedLossDb,
     peakGainDbi: numberOrNull(facts?.peakGainDbi),
     eirpDbm: numberOrNull(facts?.eirpDbm),
+    detuningMarginDownPct: numberOrNull(facts?.detuningMarginDownPct),
+    detuningMarginUpPct: numberOrNull(facts?.detuningMarginUpPct),
   };
 }
 
@@ -58,6 +79,31 @@ export class EvaluationService {
     private readonly products: ProductsService,
     private readonly inputs: EvaluationInputsService,
   ) {}
+
+  /**
+   * In-product antenna isolation between two radios of the product, dB, where it is measured. None is stored yet:
+   * the in-product measurements fill this in, and every coexistence finding then shows its margin.
+   */
+  async isolationLookup(_productId: number): Promise<IsolationLookup> {
+    return NO_ISOLATION_DATA;
+  }
+
+  /** The coexistence findings of a product (harmonics, intermodulation and transmit edges on other radios' receive ranges), with its names. */
+  async coexistence(productId: number): Promise<{ productName: string; radioNames: Map<number, string>; findings: CoexistenceFinding[] }> {
+    const product = await this.products.getWithRadios(productId);
+    const findings = await this.coexistenceOf(product, await this.inputs.requirements(product));
+    return { productName: product.name, radioNames: new Map(product.radios.map((r) => [r.id, r.name])), findings };
+  }
+
+  private async coexistenceOf(
+    product: Awaited<ReturnType<ProductsService['getWithRadios']>>,
+    requirements: Awaited<ReturnType<EvaluationInputsService['requirements']>>,
+  ): Promise<CoexistenceFinding[]> {
+    return checkCoexistence(requirements, loadCoexistenceRule(), {
+      simultaneousTransmit: product.simultaneousTransmit === 'all' ? null : product.simultaneousTransmit,
+      isolation: await this.isolationLookup(product.id),
+    });
+  }
 
   async evaluate(productId: number): Promise<ProductEvaluationDto> {
     const product = await this.products.getWithRadios(productId);
@@ -104,13 +150,22 @@ export class EvaluationService {
     // The product's reason is its worst radio's (the first of them, in the product's order).
     const deciding = radios.find((r) => r.verdict === evaluation.status) ?? null;
     const productFinding = evaluation.findings.find((f) => f.radioId === null)?.finding ?? null;
+    const coexistence = await this.coexistenceOf(product, requirements);
+    const overall = withCoexistence(evaluation.status, coexistence);
     return {
       productId,
       productName: product.name,
-      verdict: evaluation.status,
-      reason: deciding ? `${deciding.name}: ${deciding.reason}` : productFinding ? productFinding.message : 'every radio passes',
+      verdict: overall.verdict,
+      reason: overall.deciding
+        ? `Coexistence: ${overall.deciding.message}`
+        : deciding
+          ? `${deciding.name}: ${deciding.reason}`
+          : productFinding
+            ? productFinding.message
+            : 'every radio passes',
       radios,
       findings: evaluation.findings.map((f) => ({ ...findingView(f.finding, titles), radioId: f.radioId })),
+      coexistence,
       rules: ruleSet.signature,
       evaluatedAt: new Date().toISOString(),
     };

@@ -30,6 +30,10 @@ export class Product {
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  /** Pairs of radio ids that may transmit at the same time; null: every radio may transmit with every other. */
+  @Column({ name: 'simultaneous_transmit', type: 'json', nullable: true })
+  simultaneousTransmit: number[][] | null;
+
   @Column({ type: 'int', unsigned: true, default: 1 })
   version: number;
 

@@ -11,10 +11,34 @@ import { Product } from './product.entity';
 import { Radio, RadioBand } from './radio.entity';
 import { DEFAULT_GNSS_BANDWIDTH, type GnssBandwidth, type Technology } from '../bands/band-domain';
 import { type ChannelInput, isReceiveOnly, type KnownBand, radioProblems, storedChannels } from './radio-rules';
-import type { CreateProductDto, PersonRefDto, ProductDetailDto, ProductSummaryDto, UpdateProductDto } from './dto/product.dto';
+import type { CreateProductDto, PersonRefDto, ProductDetailDto, ProductSummaryDto, SimultaneousTransmit, UpdateProductDto } from './dto/product.dto';
 import type { CreateRadioDto, RadioDto, UpdateRadioDto } from './dto/radio.dto';
+const PRODUCT_FIELDS: (keyof Product)[] = [
+  'name',
+  'code',
+  'owner',
+  'groundPlaneLengthMm',
+  'groundPlaneWidthMm',
+  'targetRegions',
+  'notes',
+  'simultaneousTransmit',
+];
 
-const PRODUCT_FIELDS: (keyof Product)[] = ['name', 'code', 'owner', 'groundPlaneLengthMm', 'groundPlaneWidthMm', 'targetRegions', 'notes'];
+/** 'all' is stored as NULL, pairs as they are (each pair sorted, once). */
+function storedSimultaneousTransmit(value: SimultaneousTransmit): number[][] | null {
+  if (value === 'all') return null;
+  const seen = new Map<string, number[]>();
+  for (const [a, b] of value) seen.set(`${Math.min(a, b)},${Math.max(a, b)}`, [Math.min(a, b), Math.max(a, b)]);
+  return [...seen.values()];
+}
+
+/** Each pair must name radios of this product: a 400 naming the field otherwise. */
+function assertPairsOfRadios(pairs: number[][] | null, radioIds: readonly number[]): void {
+  const unknown = (pairs ?? []).flat().filter((id) => !radioIds.includes(id));
+  if (unknown.length > 0) {
+    throw new ValidationFailedError([{ field: 'simultaneousTransmit', message: `radio ${unknown[0]} is not a radio of this product` }]);
+  }
+}
 const RADIO_FIELDS: (keyof Radio)[] = ['name', 'technology', 'module', 'transmitPowerDbm', 'polarization', 'connector', 'feedLossDb', 'gnssBandwidth', 'notes'];
 
 /** A GNSS radio needs the main lobe unless it says otherwise; other radios have no GNSS bandwidth. */
@@ -59,6 +83,7 @@ function toSummary(product: Product, radios: Pick<Radio, 'technology'>[]): Produ
     groundPlaneWidthMm: product.groundPlaneWidthMm,
     targetRegions: product.targetRegions ?? [],
     notes: product.notes,
+    simultaneousTransmit: product.simultaneousTransmit ?? 'all',
     version: product.version,
     radioCount: radios.length,
     technologies: [...new Set(radios.map((r) => r.technology))],
@@ -118,7 +143,9 @@ export class ProductsService {
   async create(input: CreateProductDto, actor: AuthUser): Promise<ProductDetailDto> {
     return transactionWithRetry(this.dataSource, async (manager) => {
       await this.assertCodeFree(manager, input.code);
-      const row = { ...input, notes: input.notes ?? null };
+      const simultaneousTransmit = storedSimultaneousTransmit(input.simultaneousTransmit ?? 'all');
+      assertPairsOfRadios(simultaneousTransmit, []);
+      const row = { ...input, notes: input.notes ?? null, simultaneousTransmit };
       const inserted = await manager.insert(Product, { ...row, createdById: actor.id });
       const id = Number(inserted.identifiers[0].id);
       await this.audit.record(manager, { entityType: 'product', entityId: id, action: 'created', userId: actor.id, changes: { ...row } });
@@ -129,7 +156,16 @@ export class ProductsService {
   async update(id: number, input: UpdateProductDto, actor: AuthUser): Promise<ProductDetailDto> {
     return transactionWithRetry(this.dataSource, async (manager) => {
       const before = await this.lockProduct(manager, id, input.version);
-      const { version: _version, ...patch } = input;
+      const { version: _version, simultaneousTransmit: transmit, ...rest } = input;
+      const patch: Partial<Product> = { ...rest };
+      if (transmit !== undefined) {
+        patch.simultaneousTransmit = storedSimultaneousTransmit(transmit);
+        const radios = await manager.find(Radio, { select: { id: true }, where: { productId: id } });
+        assertPairsOfRadios(
+          patch.simultaneousTransmit,
+          radios.map((r) => r.id),
+        );
+      }
       if (patch.code !== undefined && patch.code !== before.code) await this.assertCodeFree(manager, patch.code, id);
       const changes = diffFields(before, patch as Partial<Product>, PRODUCT_FIELDS);
       if (Object.keys(changes).length) {

@@ -34,6 +34,18 @@ export class BandFactsDto {
     description: 'EIRP = transmit power + peak gain on the transmit ranges − feed loss, dBm; null for a receive-only radio',
   })
   eirpDbm: number | null;
+  @ApiPropertyOptional({
+    type: Number,
+    nullable: true,
+    description: 'Largest downward shift of the measured S11 curve that keeps the whole band at VSWR ≤ 3:1, %; null without a measured S11 that meets it',
+  })
+  detuningMarginDownPct: number | null;
+  @ApiPropertyOptional({
+    type: Number,
+    nullable: true,
+    description: 'Largest upward shift of the measured S11 curve that keeps the whole band at VSWR ≤ 3:1, %',
+  })
+  detuningMarginUpPct: number | null;
 }
 
 export class EvaluationBandDto {
@@ -69,6 +81,42 @@ export class EvaluationRadioDto {
   @ApiProperty({ type: [EvaluationBandDto] }) bands: EvaluationBandDto[];
 }
 
+export const COEXISTENCE_MECHANISMS = ['harmonic', 'intermodulation', 'adjacent'] as const;
+export const FINDING_SEVERITIES = ['fail', 'marginal', 'info'] as const;
+
+export class CoexistenceEndDto {
+  @ApiProperty() radioId: number;
+  @ApiProperty() bandId: number;
+  @ApiProperty({ example: 'B13' }) designation: string;
+}
+
+export class CoexistenceFindingDto {
+  @ApiProperty({ type: CoexistenceEndDto, description: 'The transmitter (for intermodulation, the stronger of the two)' }) aggressor: CoexistenceEndDto;
+  @ApiPropertyOptional({ type: CoexistenceEndDto, nullable: true, description: 'The other transmitter of an intermodulation product; null otherwise' })
+  secondAggressor: CoexistenceEndDto | null;
+  @ApiProperty({ type: CoexistenceEndDto, description: 'The receiver the product lands on or near' }) victim: CoexistenceEndDto;
+  @ApiProperty({ enum: COEXISTENCE_MECHANISMS, enumName: 'CoexistenceMechanism' }) mechanism: (typeof COEXISTENCE_MECHANISMS)[number];
+  @ApiProperty({ description: 'Harmonic number (2–5), intermodulation order (3 or 5), or 1 for a transmit band next to a receive band' }) order: number;
+  @ApiProperty({ example: '2 × B13', description: 'How the product is formed, in band designations' }) expression: string;
+  @ApiProperty({ description: 'Lowest frequency of the product, MHz' }) fromMhz: number;
+  @ApiProperty({ description: 'Highest frequency of the product, MHz' }) toMhz: number;
+  @ApiProperty({ description: "Lowest frequency of the victim's receive range, MHz" }) victimFromMhz: number;
+  @ApiProperty({ description: "Highest frequency of the victim's receive range, MHz" }) victimToMhz: number;
+  @ApiProperty({ description: 'Width of the product inside the receive range, MHz (0 when it only comes within the guard)' }) overlapMhz: number;
+  @ApiProperty({ description: 'Gap between the product and the receive range, MHz (0 when they overlap)' }) distanceMhz: number;
+  @ApiProperty({ enum: FINDING_SEVERITIES, enumName: 'Severity' }) severity: (typeof FINDING_SEVERITIES)[number];
+  @ApiProperty() message: string;
+  @ApiProperty({ description: "The aggressor radio's transmit power, dBm" }) aggressorPowerDbm: number;
+  @ApiProperty({ description: 'Assumed emission level of the mechanism and order relative to the carrier, dBc (rule parameter)' }) emissionDbc: number;
+  @ApiProperty({ description: 'Interference the victim tolerates: −174 dBm/Hz + 10·log10(bandwidth) + noise figure + I/N, dBm (rule parameters)' })
+  victimTolerableDbm: number;
+  @ApiProperty({ description: 'Antenna isolation needed: transmit power + emission level − tolerable level, dB' }) requiredIsolationDb: number;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'In-product antenna isolation between the two radios, dB; null when unknown' })
+  isolationDb: number | null;
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'isolationDb − requiredIsolationDb, dB; null when the isolation is unknown' })
+  isolationMarginDb: number | null;
+}
+
 export class ProductEvaluationDto {
   @ApiProperty() productId: number;
   @ApiProperty() productName: string;
@@ -80,6 +128,12 @@ export class ProductEvaluationDto {
     description: 'Findings about the product and its radios as a whole (no part chosen …); band findings are on the bands',
   })
   findings: EvaluationFindingDto[];
+  @ApiProperty({
+    type: [CoexistenceFindingDto],
+    description:
+      "Harmonics, intermodulation and transmit edges of one radio on or near another radio's receive ranges (rules/coexistence/coexistence.json); counted into the product verdict by severity",
+  })
+  coexistence: CoexistenceFindingDto[];
   @ApiProperty({ description: 'Rule ids and versions the evaluation used' }) rules: string;
   @ApiProperty({ description: 'When the evaluation was computed (ISO 8601)' }) evaluatedAt: string;
 }

@@ -89,6 +89,13 @@ export const FACT_CATALOG = {
   evalGroundPlaneWidthMm: pair('number', 'mm', "shorter side of the part's evaluation board"),
   groundPlaneVsEvalPct: pair('number', 'percent', 'product ground plane as a share of the evaluation board (worse side)'),
   groundPlaneVsQuarterWavePct: row('number', 'percent', "product ground-plane length as a share of λ/4 at the band's lowest frequency"),
+  detuningMarginKnown: pair('boolean', 'none', 'whether a measured S11 covers the band and VSWR ≤ 3:1 holds over all of it, so the detuning margin is known'),
+  detuningMarginDownPct: pair(
+    'number',
+    'percent',
+    'largest downward shift of the measured S11 curve (resonance lower) that keeps the whole band at VSWR ≤ 3:1',
+  ),
+  detuningMarginUpPct: pair('number', 'percent', 'largest upward shift of the measured S11 curve that keeps the whole band at VSWR ≤ 3:1'),
   polarizationLossDb: { ...pair('number', 'db', 'polarization loss between part and required polarization (Balanis §2.12)'), ideal: 0 },
 } as const satisfies Record<string, FactDescription>;
 

@@ -28,11 +28,12 @@ async function check(id: string, requirement: RadioBandRequirement, part: PartEv
 const lte = (overrides: Partial<RadioBandRequirement> = {}) => constructedRequirement(overrides);
 
 describe('rule files', () => {
-  it('loads all sixteen starting rules, each enabled at version 1 with a named source', () => {
+  it('loads all seventeen starting rules, each enabled at version 1 with a named source', () => {
     expect(FILE_RULES.map((r) => r.id)).toEqual([
       'band-coverage',
       'certified-gain-cap',
       'datasheet-only',
+      'detuning-margin',
       'efficiency-floor',
       'efficiency-target',
       'eval-board-unknown',

@@ -11,6 +11,7 @@ import { OneApiVocabulary1765400000000 } from './1765400000000-one-api-vocabular
 import { OnePolarizationVocabulary1765500000000 } from './1765500000000-one-polarization-vocabulary';
 import { FigureBasis1765510000000 } from './1765510000000-figure-basis';
 import { LimitsByServiceAndMarkets1765520000000 } from './1765520000000-limits-by-service-and-markets';
+import { SimultaneousTransmit1765550000000 } from './1765550000000-simultaneous-transmit';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
 export const MIGRATIONS = [
@@ -27,4 +28,5 @@ export const MIGRATIONS = [
   OnePolarizationVocabulary1765500000000,
   FigureBasis1765510000000,
   LimitsByServiceAndMarkets1765520000000,
+  SimultaneousTransmit1765550000000,
 ];

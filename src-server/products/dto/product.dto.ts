@@ -1,9 +1,22 @@
 import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn } from 'class-validator';
-import { BoolField, IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, ValidateBy } from 'class-validator';
+import { BoolField, IntField, NumberField, OptionalField, PatchType, StringField } from '../../common/dto-fields';
 import { REGIONS, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { REGION_MESSAGE } from '../../bands/regions';
 import { RadioDto } from './radio.dto';
+
+/** 'all', or a list of pairs of two different radio ids. */
+export type SimultaneousTransmit = 'all' | number[][];
+
+const MAX_TRANSMIT_PAIRS = 200;
+
+function isSimultaneousTransmit(value: unknown): boolean {
+  if (value === 'all') return true;
+  if (!Array.isArray(value) || value.length > MAX_TRANSMIT_PAIRS) return false;
+  return value.every(
+    (pair) => Array.isArray(pair) && pair.length === 2 && pair.every((id) => Number.isInteger(id) && id >= 1 && id <= 2 ** 31) && pair[0] !== pair[1],
+  );
+}
 
 export class CreateProductDto {
   @StringField({ maxLength: 120, example: 'Livestock tracker (collar unit)' })
@@ -36,6 +49,25 @@ export class CreateProductDto {
 
   @StringField({ optional: true, nullable: true, maxLength: 4000 })
   notes?: string | null;
+
+  @ApiPropertyOptional({
+    oneOf: [
+      { type: 'string', enum: ['all'] },
+      { type: 'array', items: { type: 'array', items: { type: 'integer' }, minItems: 2, maxItems: 2 } },
+    ],
+    example: [[11, 12]],
+    description:
+      "Which radios may transmit at the same time, for the intermodulation check: 'all' (the default) or pairs of radio ids of this product; an empty list means no two radios transmit together",
+  })
+  @OptionalField()
+  @ValidateBy({
+    name: 'isSimultaneousTransmit',
+    validator: {
+      validate: isSimultaneousTransmit,
+      defaultMessage: () => `must be 'all' or a list of at most ${MAX_TRANSMIT_PAIRS} pairs of two different radio ids`,
+    },
+  })
+  simultaneousTransmit?: SimultaneousTransmit;
 }
 
 export class UpdateProductDto extends PatchType(CreateProductDto) {
@@ -59,8 +91,16 @@ export class PersonRefDto {
   @ApiProperty() name: string;
 }
 
-export class ProductSummaryDto extends OmitType(CreateProductDto, ['notes'] as const) {
+export class ProductSummaryDto extends OmitType(CreateProductDto, ['notes', 'simultaneousTransmit'] as const) {
   @ApiProperty() id: number;
+  @ApiProperty({
+    oneOf: [
+      { type: 'string', enum: ['all'] },
+      { type: 'array', items: { type: 'array', items: { type: 'integer' } } },
+    ],
+    description: "'all', or the pairs of radio ids that may transmit at the same time",
+  })
+  simultaneousTransmit: SimultaneousTransmit;
   @ApiPropertyOptional({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty() radioCount: number;
