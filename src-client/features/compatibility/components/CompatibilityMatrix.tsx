@@ -6,7 +6,7 @@ import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { useDownloadMatrixCsv } from '../api/download-matrix-csv';
 import { useMatrix } from '../api/get-matrix';
 import type { Matrix, MatrixCell } from '../types';
-import { STATUS_LOOK, decidingFinding, shortCode } from './cell-status';
+import { STATUS_LOOK, decidingFinding } from './cell-status';
 import { CandidatesDialog } from './CandidatesDialog';
 import { MatrixCellDrawer } from './MatrixCellDrawer';
 import './compatibility.css';
@@ -66,7 +66,7 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
             >
               <Icon icon={look.icon} size={12} />
               {look.label}
-              {finding && <span className="bw-matrix__code">{shortCode(finding.code)}</span>}
+              {finding && <span className="bw-matrix__code">{finding.title}</span>}
               {assignment?.state === 'chosen' && <Icon icon="star" size={10} title="chosen for this radio" />}
             </button>
           </Cell>
