@@ -61,17 +61,17 @@ describe('product verdict and report in the browser', () => {
     await ble.getByText('Bluetooth LE').first().waitFor();
     await ble.getByText('Fail', { exact: true }).waitFor();
     // The deciding reason in words: the efficiency floor the chosen chip misses (rules/efficiency-floor.json).
-    await ble.getByText(/total efficiency falls to [\d.]+ % at [\d.]+ MHz; the floor for ble is 30 %/).waitFor();
+    await ble.getByText(/total efficiency falls to [\d.]+ % at [\d.]+ MHz; the floor for ble is 30 %/i).waitFor();
     expect(await ble.textContent()).not.toMatch(/[A-Z]_[A-Z]/);
 
     // Chosen parts only: in the page URL, so it survives a reload.
-    const chosenOnly = page.getByTestId('chosen-only').locator('input');
+    const chosenOnly = page.getByLabel('Chosen parts only');
     expect(await chosenOnly.isChecked()).toBe(false);
-    await page.getByText('Chosen parts only').click();
+    await chosenOnly.click({ force: true });
     await page.waitForURL(/parts=chosen/);
     await page.reload();
     await page.getByTestId('matrix-table').waitFor();
-    expect(await page.getByTestId('chosen-only').locator('input').isChecked()).toBe(true);
+    expect(await page.getByLabel('Chosen parts only').isChecked()).toBe(true);
     const chosenCell = page.locator(`[data-testid^="cell-${TRACKER_BLE}-"][data-testid$="-${LOW_EFFICIENCY_CHIP}"]`).first();
     await chosenCell.waitFor();
     expect(await chosenCell.getAttribute('data-status')).toBe('fail');

@@ -77,12 +77,14 @@ export function BillOfMaterials({ productId }: BillOfMaterialsProps) {
                       </div>
                     </td>
                     <td>{line.radios.map((r) => r.name).join(', ')}</td>
-                    <td className="bw-num">{line.quantityPerUnit} pcs</td>
-                    <td className="bw-num">{line.buyQuantity.toLocaleString()} pcs</td>
+                    <td className="bw-num bw-bom__price">{line.quantityPerUnit} pcs</td>
+                    <td className="bw-num bw-bom__price">{line.buyQuantity.toLocaleString()} pcs</td>
                     <td className="bw-num">
                       {line.offer ? (
                         <>
-                          {line.offer.unitPrice} {line.offer.currency}
+                          <span className="bw-bom__price">
+                            {line.offer.unitPrice} {line.offer.currency}
+                          </span>
                           <div className="bw-muted">
                             {line.offer.supplier}, break {line.offer.breakQuantity.toLocaleString()} pcs
                           </div>
@@ -91,10 +93,10 @@ export function BillOfMaterials({ productId }: BillOfMaterialsProps) {
                         <span className="bw-muted">No offer for {line.buyQuantity.toLocaleString()} pcs</span>
                       )}
                     </td>
-                    <td className="bw-num">
+                    <td className="bw-num bw-bom__price">
                       {line.offer?.leadTimeDays !== null && line.offer?.leadTimeDays !== undefined ? `${line.offer.leadTimeDays} days` : 'not stated'}
                     </td>
-                    <td className="bw-num">{line.costPerUnit && line.offer ? `${line.costPerUnit} ${line.offer.currency}` : '—'}</td>
+                    <td className="bw-num bw-bom__price">{line.costPerUnit && line.offer ? `${line.costPerUnit} ${line.offer.currency}` : '—'}</td>
                   </tr>
                 ))}
                 {b.radiosWithoutPart.map((radio) => (
