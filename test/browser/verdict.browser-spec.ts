@@ -61,7 +61,7 @@ describe('product verdict and report in the browser', () => {
     await ble.getByText('Bluetooth LE').first().waitFor();
     await ble.getByText('Fail', { exact: true }).waitFor();
     // The deciding reason in words: the efficiency floor the chosen chip misses (rules/efficiency-floor.json).
-    await ble.getByText(/total efficiency falls to [\d.]+ % at [\d.]+ MHz; the floor for ble is 30 %/i).waitFor();
+    await ble.getByText(/total efficiency falls to [\d.]+\s%\sat [\d.]+\sMHz; the floor for ble is 30\s%/i).waitFor();
     expect(await ble.textContent()).not.toMatch(/[A-Z]_[A-Z]/);
 
     // Chosen parts only: in the page URL, so it survives a reload.

@@ -3,7 +3,7 @@ import { QueryState } from '../../../components/QueryState';
 import { VERDICT_LOOK } from '../../../components/verdict-look';
 import { useDownloadReport } from '../api/download-report';
 import { useEvaluation } from '../api/get-evaluation';
-import { chosenPartsText, sentence, verdictCounts } from './verdict-summary';
+import { chosenPartsText, keepUnitsTogether, sentence, verdictCounts } from './verdict-summary';
 import './compatibility.css';
 
 export interface ProductVerdictProps {
@@ -46,7 +46,7 @@ export function ProductVerdict({ productId }: ProductVerdictProps) {
               data-testid="product-verdict-summary"
               data-verdict={e.verdict}
             >
-              <div>{sentence(e.reason)}.</div>
+              <div>{keepUnitsTogether(sentence(e.reason))}.</div>
               <div className="bw-muted">
                 {verdictCounts(e)}. A product takes its worst radio; a radio not checked cannot pass. Checked{' '}
                 {new Date(e.evaluatedAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })}.
@@ -82,7 +82,9 @@ export function ProductVerdict({ productId }: ProductVerdictProps) {
                             {band && <span className="bw-muted"> · {band.designation}</span>}
                           </div>
                         )}
-                        <div className={radio.decidingFinding ? 'bw-muted' : undefined}>{sentence(radio.decidingFinding?.message ?? radio.reason)}</div>
+                        <div className={radio.decidingFinding ? 'bw-muted' : undefined}>
+                          {keepUnitsTogether(sentence(radio.decidingFinding?.message ?? radio.reason))}
+                        </div>
                       </td>
                       <td className={radio.chosen.length === 0 ? 'bw-muted' : undefined}>{chosenPartsText(radio)}</td>
                     </tr>

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { EvaluationRadio } from '../types';
-import { chosenPartsText, sentence, verdictCounts } from './verdict-summary';
+import { chosenPartsText, keepUnitsTogether, sentence, verdictCounts } from './verdict-summary';
 
 const radio = (verdict: EvaluationRadio['verdict']) => ({ verdict }) as EvaluationRadio;
 
@@ -22,5 +22,11 @@ describe(verdictCounts.name, () => {
 describe(sentence.name, () => {
   it('raises the first letter only', () => {
     expect(sentence('bluetooth LE: efficiency')).toBe('Bluetooth LE: efficiency');
+  });
+});
+
+describe(keepUnitsTogether.name, () => {
+  it('joins a number and its unit with a no-break space', () => {
+    expect(keepUnitsTogether('falls to 19.74 % at 2483.5 MHz')).toBe('falls to 19.74\u00a0% at 2483.5\u00a0MHz');
   });
 });

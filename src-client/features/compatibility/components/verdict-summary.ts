@@ -25,3 +25,8 @@ export function verdictCounts(evaluation: Pick<ProductEvaluation, 'radios'>): st
   if (pass) parts.push(`${pass} ${pass === 1 ? 'passes' : 'pass'}`);
   return parts.join(', ');
 }
+
+/** Keeps a number and its unit on one line ("30 %", "699 MHz"), with a no-break space. */
+export function keepUnitsTogether(text: string): string {
+  return text.replace(/(\d) (%|dBi|dBm|dB|MHz|GHz|mm|days)/g, '$1\u00a0$2');
+}
