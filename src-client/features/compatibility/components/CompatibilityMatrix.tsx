@@ -74,7 +74,7 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
         />
         <Button icon="print" text="Print page" onClick={() => window.print()} />
       </div>
-      <ScreeningCaution compact />
+      {/* The product page shows the compact caution right above this section; the printout carries the full one. */}
       <QueryState isPending={matrix.isPending} error={matrix.error}>
         {m && (
           <>
