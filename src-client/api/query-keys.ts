@@ -41,10 +41,16 @@ export const productKeys = {
   history: (id: number) => [...productKeys.all, 'history', id] as const,
 };
 
-/** GET /products/:id/matrix: every product's radios' bands against the catalogue. */
+/**
+ * GET /products/:id/matrix, and what is computed from the same verdicts and choices: the evaluation and the bill
+ * of materials sit under the product's key, so every invalidation of a product's matrix refreshes them too.
+ */
 export const matrixKeys = {
   all: ['matrices'] as const,
   product: (productId: number) => [...matrixKeys.all, productId] as const,
+  view: (productId: number, chosenOnly: boolean) => [...matrixKeys.product(productId), 'matrix', chosenOnly ? 'chosen' : 'assigned'] as const,
+  evaluation: (productId: number) => [...matrixKeys.product(productId), 'evaluation'] as const,
+  billOfMaterials: (productId: number, quantity: number) => [...matrixKeys.product(productId), 'bill-of-materials', quantity] as const,
 };
 
 /** GET /products/:id/radios/:radioId/candidates: the parts ranked for one radio. */
@@ -52,6 +58,7 @@ export const candidateKeys = {
   all: ['candidates'] as const,
   product: (productId: number) => [...candidateKeys.all, productId] as const,
   radio: (productId: number, radioId: number) => [...candidateKeys.product(productId), radioId] as const,
+  filtered: (productId: number, radioId: number, filters: Query) => [...candidateKeys.radio(productId, radioId), filters] as const,
 };
 
 /** GET /regulatory-limits: the published power limits the matrix's EIRP rules compare against. */

@@ -11,6 +11,8 @@ import { useParts } from '../features/parts/api/get-parts';
 import { useReviewPart } from '../features/parts/api/review-part';
 import { useCandidates } from '../features/compatibility/api/get-candidates';
 import { useMatrix } from '../features/compatibility/api/get-matrix';
+import { useEvaluation } from '../features/compatibility/api/get-evaluation';
+import { useBillOfMaterials } from '../features/compatibility/api/get-bill-of-materials';
 import { usePartMeasurements } from '../features/compatibility/api/get-part-measurements';
 import { useBandChoices } from '../features/products/api/get-band-choices';
 import { useProduct } from '../features/products/api/get-product';
@@ -32,6 +34,16 @@ const answers: Record<string, unknown> = {
   'GET /api/products/7': { id: 7, name: 'Tracker', radios: [] },
   'PATCH /api/products/7/radios/70': { id: 70 },
   'GET /api/products/7/matrix': { productId: 7, productName: 'Tracker', rows: [], columns: [], cells: [], rules: '' },
+  'GET /api/products/7/evaluation': { productId: 7, productName: 'Tracker', verdict: 'pass', reason: '', radios: [], findings: [], rules: '', evaluatedAt: '' },
+  'GET /api/products/7/bill-of-materials': {
+    productId: 7,
+    productName: 'Tracker',
+    quantity: 100,
+    currency: 'USD',
+    lines: [],
+    radiosWithoutPart: [],
+    totalPerUnit: [],
+  },
   'GET /api/regulatory-limits': [],
   'PATCH /api/regulatory-limits/3': { id: 3 },
   'GET /api/products/7/radios/70/candidates': { productId: 7, radioId: 70, radioName: 'LTE', evaluated: 0, candidates: [] },
@@ -78,17 +90,35 @@ describe('shared resources', () => {
     expect(count('GET /api/parts/5')).toBe(1);
   });
 
-  it("refreshes the product's matrix and candidates on the same page when a radio is edited", async () => {
+  it("refreshes the product's matrix, verdict, bill of materials and candidates on the same page when a radio is edited", async () => {
     const { queryClient, wrapper } = setup();
-    const { result } = renderHook(() => ({ product: useProduct(7), matrix: useMatrix(7), candidates: useCandidates(7, 70), updateRadio: useUpdateRadio() }), {
-      wrapper,
-    });
-    await waitFor(() => expect(result.current.matrix.data && result.current.candidates.data && result.current.product.data).toBeTruthy());
+    const { result } = renderHook(
+      () => ({
+        product: useProduct(7),
+        matrix: useMatrix(7),
+        evaluation: useEvaluation(7),
+        bom: useBillOfMaterials(7, 100),
+        candidates: useCandidates(7, 70),
+        updateRadio: useUpdateRadio(),
+      }),
+      { wrapper },
+    );
+    await waitFor(() =>
+      expect(
+        result.current.matrix.data &&
+          result.current.candidates.data &&
+          result.current.product.data &&
+          result.current.evaluation.data &&
+          result.current.bom.data,
+      ).toBeTruthy(),
+    );
     const invalidate = vi.spyOn(queryClient, 'invalidateQueries');
     await result.current.updateRadio.mutateAsync({ productId: 7, radioId: 70, version: 1, name: 'LTE main' });
     expect(invalidate).toHaveBeenCalledWith({ queryKey: matrixKeys.product(7) });
     expect(invalidate).toHaveBeenCalledWith({ queryKey: candidateKeys.product(7) });
     await waitFor(() => expect(count('GET /api/products/7/matrix')).toBe(2));
+    await waitFor(() => expect(count('GET /api/products/7/evaluation')).toBe(2));
+    await waitFor(() => expect(count('GET /api/products/7/bill-of-materials')).toBe(2));
     expect(count('GET /api/products/7/radios/70/candidates')).toBe(2);
     expect(count('GET /api/products/7')).toBe(2);
   });

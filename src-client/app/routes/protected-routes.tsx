@@ -14,12 +14,26 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.product(':id'),
     lazy: async () => {
-      const [{ ProductPage }, { CompatibilityMatrix }] = await Promise.all([
+      const [{ ProductPage }, { CompatibilityMatrix }, { ProductVerdict }, { BillOfMaterials }] = await Promise.all([
         import('../../features/products/components/ProductPage'),
         import('../../features/compatibility/components/CompatibilityMatrix'),
+        import('../../features/compatibility/components/ProductVerdict'),
+        import('../../features/compatibility/components/BillOfMaterials'),
       ]);
-      // Other features add product sections through ProductPage's `extensions` prop, composed here.
-      return { element: <ProductPage extensions={(product) => <CompatibilityMatrix productId={product.id} />} /> };
+      // Other features add product sections through ProductPage's `summary` and `extensions` props, composed here.
+      return {
+        element: (
+          <ProductPage
+            summary={(product) => <ProductVerdict productId={product.id} />}
+            extensions={(product) => (
+              <>
+                <CompatibilityMatrix productId={product.id} />
+                <BillOfMaterials productId={product.id} />
+              </>
+            )}
+          />
+        ),
+      };
     },
   },
   {

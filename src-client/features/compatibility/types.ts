@@ -1,4 +1,4 @@
-import type { components } from '../../lib/api-types';
+import type { components, operations } from '../../lib/api-types';
 
 type Schemas = components['schemas'];
 export type CellStatus = Schemas['CellStatus'];
@@ -30,3 +30,28 @@ export type AssignmentTarget = { productId: number; radioId: number } & Schemas[
 export type PartMeasurements = Pick<Schemas['PartDetailDto'], 'id' | 'measurements'>;
 
 export type MeasurementPoints = Schemas['MeasurementPointsDto'];
+
+export type ProductEvaluation = Schemas['ProductEvaluationDto'];
+
+export type EvaluationRadio = Schemas['EvaluationRadioDto'];
+
+export type BillOfMaterials = Schemas['BillOfMaterialsDto'];
+
+/** The candidates route's filters as the server reads them (lists comma-separated). */
+export type CandidateQuery = NonNullable<operations['CompatibilityController_candidates']['parameters']['query']>;
+
+/** The filters the candidates dialog offers, as the form holds them. */
+export interface CandidateFilters {
+  formFactor: FormFactor[];
+  feed: Connector[];
+  /** Decimal amount as typed, in `currency`; empty for no limit. */
+  maxPrice: string;
+  /** Whole days as typed; empty for no limit. */
+  maxLeadTimeDays: string;
+  quantity: number;
+  currency: string;
+}
+
+export type FormFactor = Schemas['FormFactor'];
+
+export type Connector = Schemas['Connector'];

@@ -1,13 +1,14 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { candidateKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
-import type { Candidates } from '../types';
+import type { CandidateQuery, Candidates } from '../types';
 
-export const getCandidates = (productId: number, radioId: number) =>
-  apiRequest<Candidates>(`/products/${productId}/radios/${radioId}/candidates`, { query: { limit: 30 } });
+export const getCandidates = (productId: number, radioId: number, query: CandidateQuery) =>
+  apiRequest<Candidates>(`/products/${productId}/radios/${radioId}/candidates`, { query });
 
-export const getCandidatesQueryOptions = (productId: number, radioId: number) =>
-  queryOptions({ queryKey: candidateKeys.radio(productId, radioId), queryFn: () => getCandidates(productId, radioId) });
+export const getCandidatesQueryOptions = (productId: number, radioId: number, query: CandidateQuery) =>
+  queryOptions({ queryKey: candidateKeys.filtered(productId, radioId, query), queryFn: () => getCandidates(productId, radioId, query) });
 
-export const useCandidates = (productId: number, radioId: number | null) =>
-  useQuery({ ...getCandidatesQueryOptions(productId, radioId ?? 0), enabled: radioId !== null });
+/** Keeps the last list on screen while a changed filter loads. */
+export const useCandidates = (productId: number, radioId: number | null, query: CandidateQuery = {}) =>
+  useQuery({ ...getCandidatesQueryOptions(productId, radioId ?? 0, query), enabled: radioId !== null, placeholderData: keepPreviousData });

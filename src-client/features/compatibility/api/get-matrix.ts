@@ -3,8 +3,11 @@ import { matrixKeys } from '../../../api/query-keys';
 import { apiRequest } from '../../../lib/api-client';
 import type { Matrix } from '../types';
 
-export const getMatrix = (productId: number) => apiRequest<Matrix>(`/products/${productId}/matrix`);
+/** Each radio's bands against its own chosen and shortlisted parts; with chosenOnly, its chosen part only. */
+export const getMatrix = (productId: number, chosenOnly = false) =>
+  apiRequest<Matrix>(`/products/${productId}/matrix`, { query: chosenOnly ? { chosenOnly: true } : undefined });
 
-export const getMatrixQueryOptions = (productId: number) => queryOptions({ queryKey: matrixKeys.product(productId), queryFn: () => getMatrix(productId) });
+export const getMatrixQueryOptions = (productId: number, chosenOnly = false) =>
+  queryOptions({ queryKey: matrixKeys.view(productId, chosenOnly), queryFn: () => getMatrix(productId, chosenOnly) });
 
-export const useMatrix = (productId: number) => useQuery(getMatrixQueryOptions(productId));
+export const useMatrix = (productId: number, chosenOnly = false) => useQuery(getMatrixQueryOptions(productId, chosenOnly));

@@ -1,11 +1,27 @@
-import { Button, Dialog, DialogBody, HTMLTable, Intent, OverlayToaster, Position, Tag } from '@blueprintjs/core';
+import { useState } from 'react';
+import {
+  Button,
+  ControlGroup,
+  Dialog,
+  DialogBody,
+  FormGroup,
+  HTMLSelect,
+  HTMLTable,
+  InputGroup,
+  Intent,
+  OverlayToaster,
+  Position,
+  Tag,
+} from '@blueprintjs/core';
 import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { useHasRole } from '../../../lib/session';
 import { useCandidates } from '../api/get-candidates';
 import { useChoosePart } from '../api/choose-part';
 import { useShortlistPart } from '../api/shortlist-part';
+import type { CandidateFilters, Connector, FormFactor } from '../types';
 import { STATUS_LOOK } from './cell-status';
+import { FEED_WORDS, FORM_FACTOR_WORDS, NO_FILTERS, POLARIZATION_FIT_WORDS, candidateQuery, feedFitText, leadTimeText, priceText } from './candidate-words';
 
 export interface CandidatesDialogProps {
   productId: number;
@@ -18,7 +34,8 @@ const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 
 /** Approved parts for one radio, best first, with the figure that decides each one's place. */
 export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDialogProps) {
-  const candidates = useCandidates(productId, radioId);
+  const [filters, setFilters] = useState<CandidateFilters>(NO_FILTERS);
+  const candidates = useCandidates(productId, radioId, candidateQuery(filters, 30));
   const canAssign = useHasRole('engineer', 'admin');
   const shortlist = useShortlistPart();
   const choose = useChoosePart();
@@ -37,16 +54,19 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
           {c && (
             <>
               <p className="bw-muted">
-                {c.evaluated} approved parts checked against every band of the radio; the best {c.candidates.length} are listed, ranked by state and then by the
-                margin to the nearest limit.
+                {c.evaluated} approved parts checked against every band of the radio; the best {c.candidates.length} are listed, ranked by verdict, then by how
+                they fit the radio&apos;s {FEED_WORDS[c.radioConnector]} feed and polarization, then by the margin to the nearest limit.
               </p>
+              <CandidateFilterBar filters={filters} onChange={setFilters} />
               <ScreeningCaution compact />
               <HTMLTable compact striped className="bw-candidates" data-testid="candidates">
                 <thead>
                   <tr>
-                    <th>State</th>
+                    <th>Verdict</th>
                     <th>Part</th>
-                    <th>Deciding figure</th>
+                    <th>Why here</th>
+                    <th>Fit to the radio</th>
+                    <th>Price and lead time</th>
                     <th>Bands</th>
                     {canAssign && <th />}
                   </tr>
@@ -65,17 +85,28 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
                         <td>
                           <b>{candidate.mpn}</b>
                           <div className="bw-muted">
-                            {candidate.manufacturer} · {candidate.title}
+                            {candidate.manufacturer} · {candidate.title} · {FORM_FACTOR_WORDS[candidate.formFactor]}
                           </div>
                         </td>
-                        <td>{candidate.deciding?.text ?? 'no numeric limit applies'}</td>
+                        <td data-testid="explanation">
+                          <b>{candidate.explanation.title}</b>
+                          <div>{candidate.explanation.text}</div>
+                        </td>
+                        <td>
+                          <div>{feedFitText(candidate.fit.feed, c.radioConnector, candidate.connector)}</div>
+                          <div className="bw-muted">{POLARIZATION_FIT_WORDS[candidate.fit.polarization]}</div>
+                        </td>
+                        <td>
+                          <div>{priceText(candidate.price, c.quantity)}</div>
+                          <div className="bw-muted">{leadTimeText(candidate.price)}</div>
+                        </td>
                         <td>
                           {candidate.bands.map((b) => (
                             <Tag
                               key={b.bandId}
                               minimal
                               intent={STATUS_LOOK[b.status].intent}
-                              title={b.findings.map((f) => f.message).join('; ')}
+                              title={b.decidingFinding ? `${b.decidingFinding.title}: ${b.decidingFinding.message}` : STATUS_LOOK[b.status].label}
                               style={{ marginRight: 2 }}
                             >
                               {b.designation}
@@ -119,5 +150,72 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
         </QueryState>
       </DialogBody>
     </Dialog>
+  );
+}
+
+interface CandidateFilterBarProps {
+  filters: CandidateFilters;
+  onChange: (filters: CandidateFilters) => void;
+}
+
+const CURRENCIES = ['USD', 'EUR', 'GBP'];
+
+/** Form factor, feed, highest unit price and longest lead time, at a build quantity. */
+function CandidateFilterBar({ filters, onChange }: CandidateFilterBarProps) {
+  const set = (patch: Partial<CandidateFilters>) => onChange({ ...filters, ...patch });
+  return (
+    <div className="bw-candidates__filters" data-testid="candidate-filters">
+      <FormGroup label="Form factor" labelFor="candidate-form-factor">
+        <HTMLSelect
+          id="candidate-form-factor"
+          value={filters.formFactor[0] ?? ''}
+          onChange={(e) => set({ formFactor: e.currentTarget.value ? [e.currentTarget.value as FormFactor] : [] })}
+          options={[{ value: '', label: 'Any' }, ...Object.entries(FORM_FACTOR_WORDS).map(([value, label]) => ({ value, label }))]}
+        />
+      </FormGroup>
+      <FormGroup label="Feed" labelFor="candidate-feed">
+        <HTMLSelect
+          id="candidate-feed"
+          value={filters.feed[0] ?? ''}
+          onChange={(e) => set({ feed: e.currentTarget.value ? [e.currentTarget.value as Connector] : [] })}
+          options={[{ value: '', label: 'Any' }, ...Object.entries(FEED_WORDS).map(([value, label]) => ({ value, label }))]}
+        />
+      </FormGroup>
+      <FormGroup label="Highest unit price" labelFor="candidate-max-price">
+        <ControlGroup>
+          <InputGroup
+            id="candidate-max-price"
+            inputMode="decimal"
+            placeholder="no limit"
+            value={filters.maxPrice}
+            onValueChange={(maxPrice) => set({ maxPrice })}
+            style={{ width: '7rem' }}
+          />
+          <HTMLSelect aria-label="Currency" value={filters.currency} onChange={(e) => set({ currency: e.currentTarget.value })} options={CURRENCIES} />
+        </ControlGroup>
+      </FormGroup>
+      <FormGroup label="Longest lead time" labelFor="candidate-max-lead">
+        <InputGroup
+          id="candidate-max-lead"
+          inputMode="numeric"
+          placeholder="no limit"
+          value={filters.maxLeadTimeDays}
+          onValueChange={(maxLeadTimeDays) => set({ maxLeadTimeDays })}
+          rightElement={<span className="bw-input-unit">days</span>}
+          style={{ width: '8rem' }}
+        />
+      </FormGroup>
+      <FormGroup label="Build quantity" labelFor="candidate-quantity">
+        <InputGroup
+          id="candidate-quantity"
+          inputMode="numeric"
+          value={String(filters.quantity)}
+          onValueChange={(v) => set({ quantity: Math.max(1, Math.min(100_000_000, Math.trunc(Number(v)) || 1)) })}
+          rightElement={<span className="bw-input-unit">pcs</span>}
+          style={{ width: '8rem' }}
+        />
+      </FormGroup>
+      <Button minimal text="Clear filters" onClick={() => onChange(NO_FILTERS)} />
+    </div>
   );
 }

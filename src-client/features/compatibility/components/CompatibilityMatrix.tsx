@@ -1,14 +1,16 @@
-import { useCallback, useMemo, useState } from 'react';
-import { Button, ButtonGroup, H3, HTMLTable, Icon, Intent, NonIdealState, OverlayToaster, Position, Tag } from '@blueprintjs/core';
-import { Cell, Column, ColumnHeaderCell, RowHeaderCell, Table } from '@blueprintjs/table';
+import { useMemo, useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { Button, H3, H4, HTMLTable, Icon, Intent, NonIdealState, OverlayToaster, Position, Switch, Tag } from '@blueprintjs/core';
 import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
+import { VERDICTS } from '../../../components/verdict-look';
 import { useDownloadMatrixCsv } from '../api/download-matrix-csv';
 import { useMatrix } from '../api/get-matrix';
 import type { Matrix, MatrixCell } from '../types';
-import { STATUS_LOOK, decidingFinding, shortCode } from './cell-status';
+import { STATUS_LOOK, decidingFinding } from './cell-status';
 import { CandidatesDialog } from './CandidatesDialog';
 import { MatrixCellDrawer } from './MatrixCellDrawer';
+import { type RadioMatrix, matrixByRadio } from './matrix-layout';
 import './compatibility.css';
 
 export interface CompatibilityMatrixProps {
@@ -17,144 +19,78 @@ export interface CompatibilityMatrixProps {
 
 const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 
-/** Every radio band of the product (rows) against its assigned and shortlisted parts (columns). */
+/** The page URL's switch for the chosen parts only view, so it survives a reload and Back. */
+export const CHOSEN_ONLY_PARAM = 'parts';
+
+/** Each radio's bands (rows) against that radio's own chosen and shortlisted parts (columns). */
 export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
-  const matrix = useMatrix(productId);
+  const [searchParams, setSearchParams] = useSearchParams();
+  const chosenOnly = searchParams.get(CHOSEN_ONLY_PARAM) === 'chosen';
+  const matrix = useMatrix(productId, chosenOnly);
   const downloadCsv = useDownloadMatrixCsv();
   const [selected, setSelected] = useState<MatrixCell | null>(null);
   const [candidatesFor, setCandidatesFor] = useState<number | null>(null);
   const m = matrix.data;
+  const radios = useMemo(() => (m ? matrixByRadio(m) : []), [m]);
 
-  const cellAt = useMemo(() => {
-    const index = new Map<string, MatrixCell>();
-    for (const cell of m?.cells ?? []) index.set(`${cell.row}:${cell.column}`, cell);
-    return (row: number, column: number) => index.get(`${row}:${column}`);
-  }, [m]);
-
-  const radios = useMemo(() => {
-    const seen = new Map<number, string>();
-    for (const row of m?.rows ?? []) if (!seen.has(row.radioId)) seen.set(row.radioId, row.radioName);
-    return [...seen.entries()].map(([id, name]) => ({ id, name }));
-  }, [m]);
-
-  const getCellData = useCallback(
-    (row: number, column: number) => {
-      const cell = cellAt(row, column);
-      return cell ? `${STATUS_LOOK[cell.status].label} ${cell.findings.map((f) => f.message).join('; ')}` : '';
-    },
-    [cellAt],
-  );
-
-  const cellRenderers = useMemo(
-    () =>
-      (m?.columns ?? []).map((column, c) => (row: number) => {
-        const cell = cellAt(row, c);
-        if (!cell || !m) return <Cell />;
-        const look = STATUS_LOOK[cell.status];
-        const radioId = m.rows[row].radioId;
-        const assignment = column.assignments.find((a) => a.radioId === radioId);
-        const finding = decidingFinding(cell);
-        return (
-          <Cell intent={look.intent}>
-            <button
-              type="button"
-              className={`bw-matrix__cell${assignment ? ' bw-matrix__cell--assigned' : ''}`}
-              data-testid={`cell-${radioId}-${m.rows[row].bandId}-${column.partId}`}
-              data-status={cell.status}
-              onClick={() => setSelected(cell)}
-              title={finding?.message ?? look.label}
-            >
-              <Icon icon={look.icon} size={12} />
-              {look.label}
-              {finding && <span className="bw-matrix__code">{shortCode(finding.code)}</span>}
-              {assignment?.state === 'chosen' && <Icon icon="star" size={10} title="chosen for this radio" />}
-            </button>
-          </Cell>
-        );
-      }),
-    [m, cellAt],
-  );
-
-  const headerRenderers = useMemo(
-    () =>
-      (m?.columns ?? []).map((column) => () => (
-        <ColumnHeaderCell
-          name={column.mpn}
-          nameRenderer={() => (
-            <span title={`${column.manufacturer} ${column.title}`}>
-              <b>{column.mpn}</b>
-              <span className="bw-muted"> {column.manufacturer}</span>
-            </span>
-          )}
-        />
-      )),
-    [m],
-  );
-
-  const rowHeader = useCallback(
-    (row: number) => {
-      const r = m?.rows[row];
-      return <RowHeaderCell name={r ? `${r.designation} · ${r.radioName}` : ''} />;
-    },
-    [m],
-  );
+  const setChosenOnly = (on: boolean) =>
+    setSearchParams((params) => {
+      const next = new URLSearchParams(params);
+      if (on) next.set(CHOSEN_ONLY_PARAM, 'chosen');
+      else next.delete(CHOSEN_ONLY_PARAM);
+      return next;
+    });
 
   return (
     <section className="bw-matrix" aria-labelledby="bw-matrix-title">
       <H3 id="bw-matrix-title">Compatibility matrix</H3>
+      <div className="bw-matrix__toolbar bw-no-print">
+        <span className="bw-matrix__legend">
+          {VERDICTS.map((s) => (
+            <Tag key={s} intent={STATUS_LOOK[s].intent} icon={STATUS_LOOK[s].icon} minimal={s === 'no-data'}>
+              {STATUS_LOOK[s].label}
+            </Tag>
+          ))}
+        </span>
+        <Switch
+          className="bw-matrix__switch"
+          label="Chosen parts only"
+          checked={chosenOnly}
+          onChange={(e) => setChosenOnly(e.currentTarget.checked)}
+          data-testid="chosen-only"
+        />
+        <Button
+          icon="download"
+          text="Export CSV"
+          disabled={!m || m.columns.length === 0}
+          loading={downloadCsv.isPending}
+          onClick={() =>
+            m &&
+            downloadCsv.mutate(
+              { productId, productName: m.productName },
+              { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) },
+            )
+          }
+        />
+        <Button icon="print" text="Print page" onClick={() => window.print()} />
+      </div>
+      {/* The product page shows the compact caution right above this section; the printout carries the full one. */}
       <QueryState isPending={matrix.isPending} error={matrix.error}>
         {m && (
           <>
-            <div className="bw-matrix__toolbar bw-no-print">
-              <span className="bw-matrix__legend">
-                {(['pass', 'marginal', 'fail', 'no-data'] as const).map((s) => (
-                  <Tag key={s} intent={STATUS_LOOK[s].intent} icon={STATUS_LOOK[s].icon} minimal={s === 'no-data'}>
-                    {STATUS_LOOK[s].label}
-                  </Tag>
-                ))}
-              </span>
-              <ButtonGroup>
-                {radios.map((radio) => (
-                  <Button key={radio.id} icon="search" text={`Find candidates: ${radio.name}`} onClick={() => setCandidatesFor(radio.id)} />
-                ))}
-              </ButtonGroup>
-              <Button
-                icon="download"
-                text="Export CSV"
-                disabled={m.columns.length === 0}
-                loading={downloadCsv.isPending}
-                onClick={() =>
-                  downloadCsv.mutate(
-                    { productId, productName: m.productName },
-                    { onError: (e) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: e.message })) },
-                  )
-                }
-              />
-              <Button icon="print" text="Print report" onClick={() => window.print()} />
+            {m.rows.length === 0 && <NonIdealState icon="th" title="No radio bands yet" description="Add radios with their bands above." />}
+            <div className="bw-screen-only" data-testid="matrix-table">
+              {radios.map((radio) => (
+                <RadioTable
+                  key={radio.radioId}
+                  radio={radio}
+                  chosenOnly={chosenOnly}
+                  onSelect={setSelected}
+                  onFindCandidates={() => setCandidatesFor(radio.radioId)}
+                />
+              ))}
             </div>
-            <ScreeningCaution compact />
-            {m.columns.length === 0 ? (
-              <NonIdealState
-                icon="th"
-                title="No parts assigned yet"
-                description="Use Find candidates for a radio to shortlist or choose parts; they appear here as columns."
-              />
-            ) : (
-              <div className="bw-matrix__table bw-screen-only" data-testid="matrix-table">
-                <Table
-                  numRows={m.rows.length}
-                  defaultRowHeight={30}
-                  columnWidths={m.columns.map(() => 230)}
-                  rowHeaderCellRenderer={rowHeader}
-                  getCellClipboardData={getCellData}
-                >
-                  {m.columns.map((column, c) => (
-                    <Column key={column.partId} id={`part-${column.partId}`} cellRenderer={cellRenderers[c]} columnHeaderCellRenderer={headerRenderers[c]} />
-                  ))}
-                </Table>
-              </div>
-            )}
-            <MatrixReport matrix={m} />
+            <MatrixPrintout matrix={m} />
             <MatrixCellDrawer
               matrix={m}
               cell={selected}
@@ -164,30 +100,106 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
                 setCandidatesFor(radioId);
               }}
             />
-            <CandidatesDialog productId={productId} radioId={candidatesFor} onClose={() => setCandidatesFor(null)} />
           </>
         )}
       </QueryState>
+      <CandidatesDialog productId={productId} radioId={candidatesFor} onClose={() => setCandidatesFor(null)} />
     </section>
   );
 }
 
-interface MatrixReportProps {
+interface RadioTableProps {
+  radio: RadioMatrix;
+  chosenOnly: boolean;
+  onSelect: (cell: MatrixCell) => void;
+  onFindCandidates: () => void;
+}
+
+/** One radio's bands against its own parts; the text of a cell wraps rather than being cut. */
+function RadioTable({ radio, chosenOnly, onSelect, onFindCandidates }: RadioTableProps) {
+  return (
+    <div className="bw-matrix__radio" data-testid={`matrix-radio-${radio.radioId}`}>
+      <div className="bw-matrix__radio-head">
+        <H4>{radio.radioName}</H4>
+        <Button className="bw-no-print" small icon="search" text={`Find candidates: ${radio.radioName}`} onClick={onFindCandidates} />
+      </div>
+      {radio.columns.length === 0 ? (
+        <p className="bw-muted">
+          {chosenOnly ? 'No part chosen for this radio.' : 'No part chosen or shortlisted for this radio yet: find candidates to add one.'}
+        </p>
+      ) : (
+        <HTMLTable compact bordered className="bw-matrix__grid">
+          <thead>
+            <tr>
+              <th scope="col">Band</th>
+              {radio.columns.map(({ column }) => {
+                const state = column.assignments.find((a) => a.radioId === radio.radioId)?.state;
+                return (
+                  <th key={column.partId} scope="col" title={`${column.manufacturer} ${column.title}`}>
+                    <b>{column.mpn}</b>
+                    <div className="bw-muted bw-matrix__part-sub">
+                      {column.manufacturer}
+                      {state === 'chosen' ? ' · chosen' : state === 'shortlisted' ? ' · shortlisted' : ''}
+                    </div>
+                  </th>
+                );
+              })}
+            </tr>
+          </thead>
+          <tbody>
+            {radio.rows.map(({ index: r, row }) => (
+              <tr key={row.bandId}>
+                <th scope="row">{row.designation}</th>
+                {radio.columns.map(({ index: c, column }) => {
+                  const cell = radio.cellAt(r, c);
+                  if (!cell) return <td key={column.partId} className="bw-muted" />;
+                  const look = STATUS_LOOK[cell.status];
+                  const finding = decidingFinding(cell);
+                  const chosen = column.assignments.some((a) => a.radioId === radio.radioId && a.state === 'chosen');
+                  return (
+                    <td key={column.partId} className={`bw-matrix__td bw-matrix__td--${cell.status}`}>
+                      <button
+                        type="button"
+                        className={`bw-matrix__cell${chosen ? ' bw-matrix__cell--assigned' : ''}`}
+                        data-testid={`cell-${radio.radioId}-${row.bandId}-${column.partId}`}
+                        data-status={cell.status}
+                        onClick={() => onSelect(cell)}
+                        title={finding?.message ?? look.label}
+                      >
+                        <Tag intent={look.intent} icon={look.icon} minimal={cell.status === 'no-data'}>
+                          {look.label}
+                        </Tag>
+                        {finding && <span className="bw-matrix__reason">{finding.title}</span>}
+                        {chosen && <Icon icon="star" size={10} title="chosen for this radio" />}
+                      </button>
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </HTMLTable>
+      )}
+    </div>
+  );
+}
+
+interface MatrixPrintoutProps {
   matrix: Matrix;
 }
 
-/** The printed form: every cell with its findings, under the full caution. */
-function MatrixReport({ matrix }: MatrixReportProps) {
+/** The matrix as the browser prints the page: every cell with its findings, under the full caution. */
+function MatrixPrintout({ matrix }: MatrixPrintoutProps) {
   return (
     <div className="bw-print-only bw-matrix__report">
-      <h2>Compatibility report: {matrix.productName}</h2>
+      <h2>Compatibility matrix: {matrix.productName}</h2>
       <ScreeningCaution />
       <HTMLTable compact bordered>
         <thead>
           <tr>
             <th>Radio band</th>
             <th>Part</th>
-            <th>Status</th>
+            <th>Verdict</th>
             <th>Findings</th>
           </tr>
         </thead>
@@ -207,7 +219,7 @@ function MatrixReport({ matrix }: MatrixReportProps) {
                 <td>
                   {cell.findings.map((f) => (
                     <div key={f.ruleId + f.code}>
-                      {f.severity}: {f.message}
+                      {f.title}: {f.message}
                     </div>
                   ))}
                 </td>

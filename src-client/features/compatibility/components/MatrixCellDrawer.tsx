@@ -48,7 +48,7 @@ export function MatrixCellDrawer({ matrix, cell, onClose, onFindCandidates }: Ma
             </Callout>
           )}
           {cell.findings.map((f) => (
-            <Callout key={f.ruleId + f.code} intent={FINDING_INTENT[f.severity]} className="bw-matrix__finding" title={f.code} data-testid="finding">
+            <Callout key={f.ruleId + f.code} intent={FINDING_INTENT[f.severity]} className="bw-matrix__finding" title={f.title} data-testid="finding">
               {f.message}
             </Callout>
           ))}

@@ -1,22 +1,12 @@
-import { Intent } from '@blueprintjs/core';
-import type { IconName } from '@blueprintjs/icons';
-import type { CellStatus, MatrixCell } from '../types';
+import { VERDICT_LOOK } from '../../../components/verdict-look';
+import type { MatrixCell } from '../types';
 
-/** One look per state, used by the matrix, the candidates and the report alike. */
-export const STATUS_LOOK: Record<CellStatus, { intent: Intent; icon: IconName; label: string }> = {
-  pass: { intent: Intent.SUCCESS, icon: 'tick-circle', label: 'PASS' },
-  marginal: { intent: Intent.WARNING, icon: 'warning-sign', label: 'MARGINAL' },
-  fail: { intent: Intent.DANGER, icon: 'error', label: 'FAIL' },
-  'no-data': { intent: Intent.NONE, icon: 'help', label: 'NO DATA' },
-};
+/** The shared look per state (components/verdict-look.ts), under the name the matrix and candidates use. */
+export const STATUS_LOOK = VERDICT_LOOK;
 
-/** The finding that decides the cell's state, for the short code shown in the cell. */
+/** The finding that decides the cell's state: the server's choice, or the first of the cell's own severity. */
 export function decidingFinding(cell: MatrixCell) {
+  if (cell.decidingFinding !== undefined) return cell.decidingFinding;
   const wanted = cell.status === 'pass' ? null : cell.status;
   return wanted ? (cell.findings.find((f) => f.severity === wanted) ?? null) : null;
-}
-
-/** "EFFICIENCY_BELOW_FLOOR" → "EFFICIENCY BELOW FLOOR", short enough for a cell. */
-export function shortCode(code: string): string {
-  return code.replace(/_NO_DATA$/, '').replace(/_/g, ' ');
 }

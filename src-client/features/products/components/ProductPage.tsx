@@ -18,6 +18,11 @@ const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 
 export interface ProductPageProps {
   /**
+   * What other features put at the top of the page, under its header (the product verdict), composed in the
+   * route like `extensions`. @default none
+   */
+  summary?: (product: ProductDetail) => ReactNode;
+  /**
    * Sections other features add below the radios (the compatibility matrix), composed in the
    * route so that features never import each other. @default none
    */
@@ -25,7 +30,7 @@ export interface ProductPageProps {
 }
 
 /** One product: its facts, band plan, radios, what other features add, and its history. */
-export function ProductPage({ extensions }: ProductPageProps) {
+export function ProductPage({ summary, extensions }: ProductPageProps) {
   const id = Number(useParams().id);
   const product = useProduct(id);
   const canEdit = useHasRole('engineer', 'admin');
@@ -60,6 +65,7 @@ export function ProductPage({ extensions }: ProductPageProps) {
               )
             }
           />
+          {summary?.(p)}
           {p.notes && <p className="bw-muted bw-notes">{p.notes}</p>}
           <ProductStrip product={p} />
           <RadiosSection product={p} canEdit={canEdit} />

@@ -4,6 +4,7 @@ import { ApiError } from '../../../lib/api-client';
 import { useRule } from '../api/get-rule';
 import { useRuleVersions } from '../api/get-rule-versions';
 import { useCreateRule } from '../api/create-rule';
+import { VERDICT_LOOK } from '../../../components/verdict-look';
 import { usePreviewRule } from '../api/preview-rule';
 import { useUpdateRule } from '../api/update-rule';
 import { useValidateRule } from '../api/validate-rule';
@@ -139,10 +140,14 @@ export function RuleEditorDialog({ ruleId, onClose }: RuleEditorDialogProps) {
                       </td>
                       <td>{c.mpn}</td>
                       <td>
-                        <Tag minimal>{c.before}</Tag>
+                        <Tag minimal intent={VERDICT_LOOK[c.before].intent}>
+                          {VERDICT_LOOK[c.before].label}
+                        </Tag>
                       </td>
                       <td>
-                        <Tag minimal>{c.after}</Tag>
+                        <Tag minimal intent={VERDICT_LOOK[c.after].intent}>
+                          {VERDICT_LOOK[c.after].label}
+                        </Tag>
                       </td>
                       <td>{c.findings.join('; ')}</td>
                     </tr>
