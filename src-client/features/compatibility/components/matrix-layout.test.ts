@@ -2,8 +2,24 @@ import { describe, expect, it } from 'vitest';
 import type { Matrix } from '../types';
 import { matrixByRadio } from './matrix-layout';
 
-const row = (radioId: number, bandId: number) => ({ radioId, radioName: `radio ${radioId}`, technology: 'lte', bandId, designation: `B${bandId}`, ranges: [] });
-const column = (partId: number) => ({ partId, mpn: `P${partId}`, title: '', manufacturer: '', reviewState: 'approved', lifecycle: 'active', assignments: [] });
+const row = (radioId: number, bandId: number) => ({
+  radioId,
+  radioName: `radio ${radioId}`,
+  technology: 'lte' as const,
+  bandId,
+  designation: `B${bandId}`,
+  ranges: [],
+  findings: [],
+});
+const column = (partId: number) => ({
+  partId,
+  mpn: `P${partId}`,
+  title: '',
+  manufacturer: '',
+  reviewState: 'approved' as const,
+  lifecycle: 'active' as const,
+  assignments: [],
+});
 const cell = (r: number, c: number) => ({ row: r, column: c, status: 'pass' as const, findings: [], decidingFinding: null });
 
 describe(matrixByRadio.name, () => {
@@ -15,6 +31,7 @@ describe(matrixByRadio.name, () => {
       rows: [row(10, 1), row(10, 3), row(20, 7)],
       columns: [column(100), column(200)],
       cells: [cell(0, 0), cell(1, 0), cell(2, 1)],
+      radios: [],
       rules: '',
     };
     const radios = matrixByRadio(matrix);
@@ -27,7 +44,7 @@ describe(matrixByRadio.name, () => {
   });
 
   it('keeps a radio with no parts, with no columns', () => {
-    const radios = matrixByRadio({ productId: 1, productName: 'x', view: 'chosen', rows: [row(10, 1)], columns: [], cells: [], rules: '' });
+    const radios = matrixByRadio({ productId: 1, productName: 'x', view: 'chosen', rows: [row(10, 1)], columns: [], cells: [], radios: [], rules: '' });
     expect(radios).toHaveLength(1);
     expect(radios[0].columns).toEqual([]);
   });
