@@ -9,6 +9,7 @@ import { HardenAccounts1765300000000 } from './1765300000000-harden-accounts';
 import { OwnershipAndLocking1765310000000 } from './1765310000000-ownership-and-locking';
 import { OneApiVocabulary1765400000000 } from './1765400000000-one-api-vocabulary';
 import { OnePolarizationVocabulary1765500000000 } from './1765500000000-one-polarization-vocabulary';
+import { InProductMeasurements1765540000000 } from './1765540000000-in-product-measurements';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
 export const MIGRATIONS = [
@@ -23,4 +24,5 @@ export const MIGRATIONS = [
   OwnershipAndLocking1765310000000,
   OneApiVocabulary1765400000000,
   OnePolarizationVocabulary1765500000000,
+  InProductMeasurements1765540000000,
 ];
