@@ -2586,6 +2586,10 @@ export interface components {
             mpn: string;
             title: string;
             manufacturer: string;
+            /** @description The antenna of the radio this part is (main unless the radio has several) */
+            role: components["schemas"]["AntennaRole"];
+            /** @description Which S11 the bands were judged with: "evaluation board" or "measured in product, file X, port N" */
+            s11Source: string;
         };
         BandFactsDto: {
             /** @description Share (0–1) of the band width where VSWR ≤ coverageVswr */

@@ -272,6 +272,56 @@ describe('in-product measurements (API)', () => {
     expect(zero.body.correlation[0].worstEcc).toBe(0);
   });
 
+  it("an antenna's in-product S11 replaces the evaluation-board S11, and the findings name the file and port", async () => {
+    const product = await createProduct();
+    const radio = await createRadio(product.id, 'Cellular', [120]);
+    // Demo part 1002, an external LTE whip (invented demo data), chosen for the radio.
+    await http().post(`/api/products/${product.id}/radios/${radio.id}/shortlist`).set(as('engineer')).send({ partId: 1002 }).expect(201);
+    await http().put(`/api/products/${product.id}/radios/${radio.id}/choice`).set(as('engineer')).send({ partId: 1002 }).expect(200);
+    const before = (await http().get(`/api/products/${product.id}/evaluation`).set(as('procurement')).expect(200)).body;
+    expect(before.radios[0].chosen[0]).toMatchObject({ partId: 1002, role: 'main', s11Source: 'evaluation board' });
+    const codesBefore = before.radios[0].bands[0].findings.map((f: { code: string }) => f.code);
+    expect(codesBefore).not.toContain('S11_MEASURED_IN_PRODUCT');
+
+    // Port 2 reflects |Γ| = 0.5 everywhere: VSWR (1 + 0.5)/(1 − 0.5) = 3.0 (Pozar 4th ed. §2.3).
+    const stored = (
+      await upload(
+        product.id,
+        'engineer',
+        'enclosure.s2p',
+        constantNetwork(
+          [
+            [0.1, 0.05],
+            [0.05, 0.5],
+          ],
+          sweepMhz,
+        ),
+      ).expect(201)
+    ).body;
+    await http()
+      .put(`${base(product.id)}/${stored.id}/ports`)
+      .set(as('engineer'))
+      .send([{ port: 2, radioId: radio.id, role: 'main' }])
+      .expect(200);
+    const after = (await http().get(`/api/products/${product.id}/evaluation`).set(as('procurement')).expect(200)).body;
+    expect(after.radios[0].chosen[0].s11Source).toBe('measured in product, file enclosure.s2p, port 2');
+    const band = after.radios[0].bands[0];
+    expect(band.facts.worstVswr).toBeCloseTo(3, 6);
+    const note = band.findings.find((f: { code: string }) => f.code === 'S11_MEASURED_IN_PRODUCT');
+    expect(note.severity).toBe('info');
+    expect(note.message).toContain('enclosure.s2p');
+    expect(note.message).toContain('port 2');
+
+    // Without the measurement the evaluation-board S11 is back.
+    await http()
+      .delete(`${base(product.id)}/${stored.id}`)
+      .set(as('engineer'))
+      .expect(204);
+    const again = (await http().get(`/api/products/${product.id}/evaluation`).set(as('procurement')).expect(200)).body;
+    expect(again.radios[0].chosen[0].s11Source).toBe('evaluation board');
+    expect(again.radios[0].bands[0].facts.worstVswr).toBe(before.radios[0].bands[0].facts.worstVswr);
+  });
+
   it('the demo gateway housing: ECC of LTE main and diversity per band matches numpy computing the formula independently', async () => {
     const res = await http().get('/api/products/2/isolation').set(as('procurement')).expect(200);
     const roles = res.body.antennas.map((a: { port: number; radioId: number; role: string }) => [a.port, a.radioId, a.role]);

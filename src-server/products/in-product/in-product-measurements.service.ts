@@ -9,6 +9,8 @@ import { StoredFiles, type StoredOriginal } from '../../storage/stored-files.ser
 import { type UploadedFile, requireFile } from '../../storage/uploaded-file';
 import { packFloat64 } from '../../parts/measurements/point-codec';
 import type { TouchstoneNetwork } from '../../rf/touchstone';
+import { type ReflectionCurve, reflectionCurveFromNetwork } from '../../rf/reflection';
+import type { AntennaRole } from './antenna-roles';
 import { Product } from '../product.entity';
 import { Radio } from '../radio.entity';
 import { ProductsService } from '../products.service';
@@ -48,6 +50,20 @@ export interface StoredAssembly {
   readonly row: InProductMeasurement;
   readonly network: TouchstoneNetwork;
 }
+
+/** The S11 of one antenna as measured in the product, with where it came from. */
+export interface MeasuredReflection {
+  readonly radioId: number;
+  readonly role: AntennaRole;
+  readonly curve: ReflectionCurve;
+  readonly measurementId: number;
+  readonly fileName: string;
+  readonly port: number;
+  /** "measured in product, file housing.s4p, port 2" */
+  readonly source: string;
+}
+
+export const antennaKey = (radioId: number, role: AntennaRole) => `${radioId}/${role}`;
 
 @Injectable()
 export class InProductMeasurementsService {
@@ -174,6 +190,25 @@ export class InProductMeasurementsService {
       .orderBy('m.id', 'ASC')
       .getMany();
     return rows.map((row) => ({ row, network: networkFromStored(row, row.frequenciesHz, row.sMatrix) }));
+  }
+
+  /** Each mapped antenna's in-product S11, keyed by antennaKey; the newest measurement wins where several map one antenna. */
+  async measuredReflections(productId: number): Promise<Map<string, MeasuredReflection>> {
+    const out = new Map<string, MeasuredReflection>();
+    for (const { row, network } of await this.mappedAssemblies(productId)) {
+      for (const p of row.portMapping) {
+        out.set(antennaKey(p.radioId, p.role), {
+          radioId: p.radioId,
+          role: p.role,
+          curve: reflectionCurveFromNetwork(network, p.port),
+          measurementId: row.id,
+          fileName: row.fileName,
+          port: p.port,
+          source: `measured in product, file ${row.fileName}, port ${p.port}`,
+        });
+      }
+    }
+    return out;
   }
 
   async isolation(productId: number): Promise<ProductIsolationDto> {
