@@ -1892,6 +1892,11 @@ export interface components {
         RadioPolarization: "linear" | "RHCP" | "LHCP" | "any";
         /** @enum {string} */
         Connector: "solder-pad" | "SMA" | "RP-SMA" | "MMCX" | "MCX" | "N" | "micro-coax";
+        /**
+         * @description The antennas the radio needs, main first
+         * @enum {string}
+         */
+        AntennaRole: "main" | "diversity" | "mimo-2" | "mimo-3" | "mimo-4";
         RadioBandDto: {
             band: components["schemas"]["BandDto"];
             certifiedMaxGainDbi?: number | null;
@@ -1907,6 +1912,8 @@ export interface components {
             polarization: components["schemas"]["RadioPolarization"];
             connector: components["schemas"]["Connector"];
             feedLossDb: number;
+            /** @description The antennas the radio needs, main first */
+            antennaRoles: components["schemas"]["AntennaRole"][];
             notes?: string | null;
             version: number;
             bands: components["schemas"]["RadioBandDto"][];
@@ -1993,6 +2000,8 @@ export interface components {
             /** @description Cable or feed loss between module and antenna (dB) */
             feedLossDb: number;
             notes?: string | null;
+            /** @description The antennas the radio needs, main first; default [main] */
+            antennaRoles?: components["schemas"]["AntennaRole"][];
             bands: components["schemas"]["RadioBandInputDto"][];
         };
         UpdateRadioDto: {
@@ -2009,12 +2018,12 @@ export interface components {
             /** @description Cable or feed loss between module and antenna (dB) */
             feedLossDb?: number;
             notes?: string | null;
+            /** @description The antennas the radio needs, main first; default [main] */
+            antennaRoles?: components["schemas"]["AntennaRole"][];
             bands?: components["schemas"]["RadioBandInputDto"][];
             /** @description The version you edited; a stale one gets 409 RADIO_VERSION_CONFLICT */
             version: number;
         };
-        /** @enum {string} */
-        AntennaRole: "main" | "diversity" | "mimo-2" | "mimo-3" | "mimo-4";
         PortAssignmentViewDto: {
             /** @description Port number in the file, 1-based */
             port: number;
@@ -2884,6 +2893,8 @@ export interface components {
             title: string;
             /** @enum {string} */
             state: "shortlisted" | "chosen";
+            /** @description The antenna the part is chosen for (main for shortlisted parts) */
+            role: components["schemas"]["AntennaRole"];
             note?: string | null;
             updatedAt: string;
         };
@@ -2895,6 +2906,8 @@ export interface components {
         ChoosePartDto: {
             /** @description The part to choose for this radio; it joins the shortlist if it was not on it */
             partId: number;
+            /** @description Which of the radio's antennas (its antennaRoles); default main */
+            role?: components["schemas"]["AntennaRole"];
         };
     };
     responses: never;

@@ -14,6 +14,7 @@ import { findingView, ruleTitlesOf } from './finding-view';
 import { RulesService } from './rules.service';
 import { InProductMeasurementsService, type MeasuredReflection, antennaKey } from '../products/in-product/in-product-measurements.service';
 import type { PartEvaluationData } from './engine/types';
+import type { AntennaRole } from '../products/in-product/antenna-roles';
 
 /** Says on every band of a radio that its S11 came from the product, not the evaluation board. */
 function inProductS11Finding(measured: MeasuredReflection, mpn: string): Finding {
@@ -83,13 +84,15 @@ export class EvaluationService {
     // An antenna's S11 measured in the product replaces its evaluation-board S11; such parts skip the facts cache.
     const measured = await this.inProduct.measuredReflections(productId);
     const usedInProduct = new Map<PartEvaluationData, MeasuredReflection>();
+    // Each chosen part is its own object so that its antenna role can be told apart (a part can serve two roles).
+    const roleOf = new Map<PartEvaluationData, AntennaRole>();
     const dataFor = (a: PartAssignment): PartEvaluationData => {
       const data = byPart.get(a.partId)!.data;
-      const inProduct = measured.get(antennaKey(a.radioId, 'main'));
-      if (!inProduct) return data;
-      const replaced = { ...data, reflection: inProduct.curve };
-      usedInProduct.set(replaced, inProduct);
-      return replaced;
+      const inProduct = measured.get(antennaKey(a.radioId, a.role));
+      const copy = inProduct ? { ...data, reflection: inProduct.curve } : { ...data };
+      if (inProduct) usedInProduct.set(copy, inProduct);
+      roleOf.set(copy, a.role);
+      return copy;
     };
     const evaluation = evaluateProduct(
       product.radios.map((radio) => ({
@@ -118,7 +121,7 @@ export class EvaluationService {
           mpn: p.mpn,
           title: p.title,
           manufacturer: byPart.get(p.partId)?.manufacturer ?? '',
-          role: 'main' as const,
+          role: roleOf.get(p) ?? 'main',
           s11Source: usedInProduct.get(p)?.source ?? 'evaluation board',
         })),
         bands: r.bands.map((b: BandEvaluation) => ({

@@ -14,7 +14,7 @@ import type { CreateProductDto, PersonRefDto, ProductDetailDto, ProductSummaryDt
 import type { CreateRadioDto, RadioDto, UpdateRadioDto } from './dto/radio.dto';
 
 const PRODUCT_FIELDS: (keyof Product)[] = ['name', 'code', 'owner', 'groundPlaneLengthMm', 'groundPlaneWidthMm', 'targetRegions', 'notes'];
-const RADIO_FIELDS: (keyof Radio)[] = ['name', 'technology', 'module', 'transmitPowerDbm', 'polarization', 'connector', 'feedLossDb', 'notes'];
+const RADIO_FIELDS: (keyof Radio)[] = ['name', 'technology', 'module', 'transmitPowerDbm', 'polarization', 'connector', 'feedLossDb', 'notes', 'antennaRoles'];
 
 function toRadioDto(radio: Radio): RadioDto {
   const bands = [...(radio.bands ?? [])].sort((a, b) => a.position - b.position);
@@ -29,6 +29,7 @@ function toRadioDto(radio: Radio): RadioDto {
     polarization: radio.polarization,
     connector: radio.connector,
     feedLossDb: radio.feedLossDb,
+    antennaRoles: radio.antennaRoles?.length ? radio.antennaRoles : ['main'],
     notes: radio.notes,
     version: radio.version,
     bands: bands.map((rb) => ({ band: toBandDto(rb.band), certifiedMaxGainDbi: rb.certifiedMaxGainDbi })),

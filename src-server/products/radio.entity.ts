@@ -3,6 +3,7 @@ import { TECHNOLOGIES, type Technology } from '../bands/band-domain';
 import { Band } from '../bands/band.entity';
 import { CONNECTORS, type Connector } from '../common/connectors';
 import { Product } from './product.entity';
+import type { AntennaRole } from './in-product/antenna-roles';
 
 export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP', 'any'] as const;
 export type Polarization = (typeof POLARIZATIONS)[number];
@@ -43,6 +44,10 @@ export class Radio {
 
   @Column({ name: 'feed_loss_db', type: 'double', default: 0 })
   feedLossDb: number;
+
+  /** The antennas the radio needs, main first (e.g. main, diversity); one part is chosen per role. */
+  @Column({ name: 'antenna_roles', type: 'simple-array', default: 'main' })
+  antennaRoles: AntennaRole[];
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;

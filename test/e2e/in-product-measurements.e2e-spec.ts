@@ -322,6 +322,60 @@ describe('in-product measurements (API)', () => {
     expect(again.radios[0].bands[0].facts.worstVswr).toBe(before.radios[0].bands[0].facts.worstVswr);
   });
 
+  it('a radio with main and diversity antennas: one part chosen per role, each listed with its role in the evaluation', async () => {
+    const product = await createProduct();
+    const body = {
+      name: 'Cellular',
+      technology: 'lte',
+      module: 'Test modem (invented)',
+      transmitPowerDbm: 23,
+      polarization: 'linear',
+      connector: 'solder-pad',
+      feedLossDb: 0,
+      antennaRoles: ['main', 'diversity'],
+      bands: [{ bandId: 120, certifiedMaxGainDbi: 5 }],
+    };
+    const radio = (await http().post(`/api/products/${product.id}/radios`).set(as('engineer')).send(body).expect(201)).body;
+    expect(radio.antennaRoles).toEqual(['main', 'diversity']);
+    const bad = await http()
+      .post(`/api/products/${product.id}/radios`)
+      .set(as('engineer'))
+      .send({ ...body, antennaRoles: ['main', 'spare'] })
+      .expect(400);
+    expect(bad.body.fields[0].field).toContain('antennaRoles');
+    const choose = (partId: number, role?: string) =>
+      http()
+        .put(`/api/products/${product.id}/radios/${radio.id}/choice`)
+        .set(as('engineer'))
+        .send(role ? { partId, role } : { partId });
+    expect((await choose(1002, 'mimo-2').expect(400)).body.fields[0].field).toBe('role');
+    await choose(1002).expect(200);
+    const assignments = (await choose(1004, 'diversity').expect(200)).body as { partId: number; state: string; role: string }[];
+    expect(assignments.filter((a) => a.state === 'chosen').map((a) => [a.partId, a.role])).toEqual(
+      expect.arrayContaining([
+        [1002, 'main'],
+        [1004, 'diversity'],
+      ]),
+    );
+    const result = (await http().get(`/api/products/${product.id}/evaluation`).set(as('procurement')).expect(200)).body;
+    expect(result.radios[0].chosen.map((c: { partId: number; role: string }) => [c.partId, c.role])).toEqual([
+      [1002, 'main'],
+      [1004, 'diversity'],
+    ]);
+    // A radio without roles stated has one main antenna.
+    const single = await createRadio(product.id, 'Single', [120]);
+    expect((await http().get(`/api/products/${product.id}/radios/${single.id}`).set(as('procurement')).expect(200)).body.antennaRoles).toEqual(['main']);
+  });
+
+  it('the demo gateway: its LTE radio has a main and a diversity antenna, each judged with its in-product S11', async () => {
+    const result = (await http().get('/api/products/2/evaluation').set(as('procurement')).expect(200)).body;
+    const lte = result.radios.find((r: { radioId: number }) => r.radioId === 21);
+    expect(lte.chosen.map((c: { partId: number; role: string; s11Source: string }) => [c.partId, c.role, c.s11Source])).toEqual([
+      [1002, 'main', 'measured in product, file cold-chain-gateway-housing.s4p, port 1'],
+      [1004, 'diversity', 'measured in product, file cold-chain-gateway-housing.s4p, port 2'],
+    ]);
+  });
+
   it('the demo gateway housing: ECC of LTE main and diversity per band matches numpy computing the formula independently', async () => {
     const res = await http().get('/api/products/2/isolation').set(as('procurement')).expect(200);
     const roles = res.body.antennas.map((a: { port: number; radioId: number; role: string }) => [a.port, a.radioId, a.role]);

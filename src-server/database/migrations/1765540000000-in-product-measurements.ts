@@ -1,6 +1,9 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
 
-/** Multi-port measurements of a product's own assembly, and the radio and antenna role of each port. */
+/**
+ * Multi-port measurements of a product's own assembly with the radio and antenna role of each port; a radio's
+ * antenna roles, and one chosen part per role (existing choices become the main antenna).
+ */
 export class InProductMeasurements1765540000000 implements MigrationInterface {
   name = 'InProductMeasurements1765540000000';
 
@@ -29,6 +32,9 @@ export class InProductMeasurements1765540000000 implements MigrationInterface {
       CONSTRAINT fk_in_product_measurements_product FOREIGN KEY (product_id) REFERENCES products(id) ON DELETE CASCADE,
       CONSTRAINT fk_in_product_measurements_uploader FOREIGN KEY (uploaded_by_id) REFERENCES users(id) ON DELETE SET NULL
     ) ENGINE=InnoDB`);
+    await q.query("ALTER TABLE radios ADD COLUMN antenna_roles VARCHAR(100) NOT NULL DEFAULT 'main'");
+    await q.query("ALTER TABLE part_assignments ADD COLUMN role ENUM('main','diversity','mimo-2','mimo-3','mimo-4') NOT NULL DEFAULT 'main'");
+    await q.query('ALTER TABLE part_assignments DROP INDEX uq_assignment_one_choice, ADD UNIQUE KEY uq_assignment_one_choice_per_role (chosen_radio_id, role)');
     await q.query(`CREATE TABLE in_product_ports (
       measurement_id INT UNSIGNED NOT NULL,
       port SMALLINT UNSIGNED NOT NULL,
@@ -43,6 +49,11 @@ export class InProductMeasurements1765540000000 implements MigrationInterface {
   }
 
   async down(q: QueryRunner): Promise<void> {
+    // Only main antennas survive: the old key allowed one choice per radio.
+    await q.query("UPDATE part_assignments SET state = 'shortlisted' WHERE role <> 'main' AND state = 'chosen'");
+    await q.query('ALTER TABLE part_assignments DROP INDEX uq_assignment_one_choice_per_role, ADD UNIQUE KEY uq_assignment_one_choice (chosen_radio_id)');
+    await q.query('ALTER TABLE part_assignments DROP COLUMN role');
+    await q.query('ALTER TABLE radios DROP COLUMN antenna_roles');
     await q.query('DROP TABLE in_product_ports');
     await q.query('DROP TABLE in_product_measurements');
   }

@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsIn, IsOptional, ValidateNested } from 'class-validator';
+import { ANTENNA_ROLES, type AntennaRole } from '../in-product/antenna-roles';
 import { EnumField, IntField, NumberField, PatchType, StringField } from '../../common/dto-fields';
 import { TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { BandDto } from '../../bands/dto/band-response.dto';
@@ -51,6 +52,15 @@ export class CreateRadioDto {
   @StringField({ optional: true, nullable: true, maxLength: 4000 })
   notes?: string | null;
 
+  @ApiPropertyOptional({ enum: ANTENNA_ROLES, enumName: 'AntennaRole', isArray: true, description: 'The antennas the radio needs, main first; default [main]' })
+  @IsOptional()
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(ANTENNA_ROLES.length)
+  @ArrayUnique()
+  @IsIn(ANTENNA_ROLES, { each: true })
+  antennaRoles?: AntennaRole[];
+
   @ApiProperty({ type: [RadioBandInputDto] })
   @IsArray()
   @ArrayMinSize(1)
@@ -81,6 +91,8 @@ export class RadioDto {
   @ApiProperty({ enum: POLARIZATIONS, enumName: 'RadioPolarization' }) polarization: Polarization;
   @ApiProperty({ enum: CONNECTORS, enumName: 'Connector' }) connector: Connector;
   @ApiProperty() feedLossDb: number;
+  @ApiProperty({ enum: ANTENNA_ROLES, enumName: 'AntennaRole', isArray: true, description: 'The antennas the radio needs, main first' })
+  antennaRoles: AntennaRole[];
   @ApiPropertyOptional({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty({ type: [RadioBandDto] }) bands: RadioBandDto[];
