@@ -525,6 +525,93 @@ export interface paths {
         patch: operations["ProductsController_updateRadio"];
         trace?: never;
     };
+    "/api/products/{id}/in-product-measurements": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The in-product measurements of a product with their port mappings */
+        get: operations["InProductMeasurementsController_list"];
+        put?: never;
+        /** Upload an N-port Touchstone file measured or simulated in the product (engineer, admin); at most 16 MiB (413), text only (415); 422 { code, message, line } for a bad file, and nothing is stored */
+        post: operations["InProductMeasurementsController_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/products/{id}/in-product-measurements/{measurementId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One in-product measurement: ports, reference resistances and port mapping */
+        get: operations["InProductMeasurementsController_get"];
+        put?: never;
+        post?: never;
+        /** Delete an in-product measurement, its port mapping and its file */
+        delete: operations["InProductMeasurementsController_remove"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/products/{id}/in-product-measurements/{measurementId}/file": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The original uploaded file, as text/plain */
+        get: operations["InProductMeasurementsController_file"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/products/{id}/in-product-measurements/{measurementId}/ports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        /** Replace the port mapping: [{ port, radioId, role }] with role one of main, diversity, mimo-2, mimo-3, mimo-4; 400 VALIDATION_FAILED names [i].port, [i].radioId or [i].role */
+        put: operations["InProductMeasurementsController_mapPorts"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/products/{id}/isolation": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Isolation between every two mapped antennas (worst per band pair, dB) and the envelope correlation between antennas of one radio per band */
+        get: operations["InProductMeasurementsController_isolation"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/parts/review-queue": {
         parameters: {
             query?: never;
@@ -1910,6 +1997,11 @@ export interface components {
          * @enum {string}
          */
         GnssBandwidth: "main-lobe" | "full-band";
+        /**
+         * @description The antennas the radio needs, main first
+         * @enum {string}
+         */
+        AntennaRole: "main" | "diversity" | "mimo-2" | "mimo-3" | "mimo-4";
         RadioChannelDto: {
             /** @example 869.4 */
             fromMhz: number;
@@ -1935,6 +2027,8 @@ export interface components {
             feedLossDb: number;
             /** @description GNSS radios: main-lobe or full-band; null otherwise */
             gnssBandwidth?: components["schemas"]["GnssBandwidth"] | null;
+            /** @description The antennas the radio needs, main first */
+            antennaRoles: components["schemas"]["AntennaRole"][];
             notes?: string | null;
             version: number;
             bands: components["schemas"]["RadioBandDto"][];
@@ -2055,6 +2149,8 @@ export interface components {
             /** @description GNSS only: judge each signal on its main lobe (default) or its full signal band; leave empty for other radios */
             gnssBandwidth?: components["schemas"]["GnssBandwidth"] | null;
             notes?: string | null;
+            /** @description The antennas the radio needs, main first; default [main] */
+            antennaRoles?: components["schemas"]["AntennaRole"][];
             bands: components["schemas"]["RadioBandInputDto"][];
         };
         UpdateRadioDto: {
@@ -2073,13 +2169,101 @@ export interface components {
             /** @description GNSS only: judge each signal on its main lobe (default) or its full signal band; leave empty for other radios */
             gnssBandwidth?: components["schemas"]["GnssBandwidth"] | null;
             notes?: string | null;
+            /** @description The antennas the radio needs, main first; default [main] */
+            antennaRoles?: components["schemas"]["AntennaRole"][];
             bands?: components["schemas"]["RadioBandInputDto"][];
             /** @description The version you edited; a stale one gets 409 RADIO_VERSION_CONFLICT */
             version: number;
         };
+        PortAssignmentViewDto: {
+            /** @description Port number in the file, 1-based */
+            port: number;
+            /** @description A radio of this product */
+            radioId: number;
+            role: components["schemas"]["AntennaRole"];
+            radioName: string;
+        };
         UserRefDto: {
             id: number;
             name: string;
+        };
+        InProductMeasurementDto: {
+            id: number;
+            productId: number;
+            note: string | null;
+            fileName: string;
+            sizeBytes: number;
+            sha256: string;
+            /** @description e.g. "Touchstone 1.0, 4-port, S MA" */
+            sourceFormat: string;
+            /** @description Number of ports in the file */
+            ports: number;
+            /** @description Reference resistance of each port, ohms */
+            referenceOhms: number[];
+            pointCount: number;
+            fromMhz: number;
+            toMhz: number;
+            /** @description Mapped ports only, by port number */
+            portMapping: components["schemas"]["PortAssignmentViewDto"][];
+            uploadedBy: components["schemas"]["UserRefDto"] | null;
+            createdAt: string;
+        };
+        PortAssignmentDto: {
+            /** @description Port number in the file, 1-based */
+            port: number;
+            /** @description A radio of this product */
+            radioId: number;
+            role: components["schemas"]["AntennaRole"];
+        };
+        IsolationAntennaDto: {
+            measurementId: number;
+            port: number;
+            radioId: number;
+            radioName: string;
+            role: components["schemas"]["AntennaRole"];
+        };
+        BandPairIsolationDto: {
+            /** @description Band of antenna a */
+            bandA: string;
+            /** @description Band of antenna b */
+            bandB: string;
+            /** @description Least isolation over the ranges of both bands, dB; null without points there */
+            isolationDb: number | null;
+        };
+        IsolationCellDto: {
+            /** @description Index into antennas */
+            a: number;
+            /** @description Index into antennas */
+            b: number;
+            /** @description Least isolation −20·log10|Sba| over every band pair, dB; null without points in those bands */
+            worstIsolationDb: number | null;
+            bandPairs: components["schemas"]["BandPairIsolationDto"][];
+        };
+        CorrelationRowDto: {
+            radioId: number;
+            radioName: string;
+            /** @description Index into antennas */
+            a: number;
+            /** @description Index into antennas */
+            b: number;
+            bandId: number;
+            band: string;
+            /** @description Highest envelope correlation coefficient in the band (0 … 1); null where undefined or no points */
+            worstEcc: number | null;
+            /** @description ECC above it is flagged (0.5, common practice for mobile MIMO) */
+            threshold: number;
+            /** @description True when worstEcc exceeds the threshold */
+            aboveThreshold: boolean | null;
+        };
+        ProductIsolationDto: {
+            /** @description Every mapped port of the product, measurement by measurement */
+            antennas: components["schemas"]["IsolationAntennaDto"][];
+            /** @description One cell per pair of antennas of the same measurement (a < b) */
+            isolation: components["schemas"]["IsolationCellDto"][];
+            /** @description Per band, for each pair of antennas of one radio */
+            correlation: components["schemas"]["CorrelationRowDto"][];
+            /** @description The assumption behind the correlation figures */
+            correlationAssumption: string;
         };
         /** @enum {string} */
         MeasurementKind: "s11" | "efficiency" | "peak-gain" | "average-gain";
@@ -2611,6 +2795,10 @@ export interface components {
             mpn: string;
             title: string;
             manufacturer: string;
+            /** @description The antenna of the radio this part is (main unless the radio has several) */
+            role: components["schemas"]["AntennaRole"];
+            /** @description Which S11 the bands were judged with: "evaluation board" or "measured in product, file X, port N" */
+            s11Source: string;
         };
         BandFactsDto: {
             /** @description Share (0–1) of the band width where VSWR ≤ coverageVswr */
@@ -2970,6 +3158,8 @@ export interface components {
             title: string;
             /** @enum {string} */
             state: "shortlisted" | "chosen";
+            /** @description The antenna the part is chosen for (main for shortlisted parts) */
+            role: components["schemas"]["AntennaRole"];
             note?: string | null;
             updatedAt: string;
         };
@@ -2981,6 +3171,8 @@ export interface components {
         ChoosePartDto: {
             /** @description The part to choose for this radio; it joins the shortlist if it was not on it */
             partId: number;
+            /** @description Which of the radio's antennas (its antennaRoles); default main */
+            role?: components["schemas"]["AntennaRole"];
         };
     };
     responses: never;
@@ -4522,6 +4714,260 @@ export interface operations {
                 content?: never;
             };
             /** @description Only for: engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InProductMeasurementsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InProductMeasurementDto"][];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InProductMeasurementsController_upload: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description N-port Touchstone (.sNp or version 2 .ts)
+                     */
+                    file: string;
+                    note?: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InProductMeasurementDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InProductMeasurementsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+                measurementId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InProductMeasurementDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InProductMeasurementsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+                measurementId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InProductMeasurementsController_file: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+                measurementId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InProductMeasurementsController_mapPorts: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+                measurementId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PortAssignmentDto"][];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InProductMeasurementDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InProductMeasurementsController_isolation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProductIsolationDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
             403: {
                 headers: {
                     [name: string]: unknown;

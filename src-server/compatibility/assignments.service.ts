@@ -5,7 +5,9 @@ import { duplicateKeyName } from '../common/duplicate-key';
 import { isRetryableLockError, transactionWithRetry } from '../common/transaction-retry';
 import { AuditService, type AuditEntryView } from '../audit/audit.service';
 import type { AuthUser } from '../common/auth.decorators';
-import { DomainError, NotFoundError } from '../common/domain-error';
+import { DomainError, NotFoundError, ValidationFailedError } from '../common/domain-error';
+import { Radio } from '../products/radio.entity';
+import type { AntennaRole } from '../products/in-product/antenna-roles';
 import { PartDataService } from '../parts/part-data.service';
 import { ProductsService } from '../products/products.service';
 import { PartAssignment } from './compatibility.entities';
@@ -19,6 +21,7 @@ const assignmentDto = (a: PartAssignment, part: { mpn: string; title: string } |
   mpn: part?.mpn ?? '',
   title: part?.title ?? '',
   state: a.state,
+  role: a.role,
   note: a.note,
   updatedAt: a.updatedAt.toISOString(),
 });
@@ -94,24 +97,27 @@ export class AssignmentsService {
   }
 
   /** One chosen part per radio: the previous choice goes back to the shortlist, in the same transaction. */
-  async choose(productId: number, radioId: number, partId: number, actor: AuthUser): Promise<AssignmentDto[]> {
+  async choose(productId: number, radioId: number, partId: number, actor: AuthUser, role: AntennaRole = 'main'): Promise<AssignmentDto[]> {
     await this.checkRadioAndPart(productId, radioId, partId);
+    const radio = await this.dataSource.getRepository(Radio).findOneBy({ id: radioId });
+    const roles = radio?.antennaRoles?.length ? radio.antennaRoles : ['main'];
+    if (!roles.includes(role)) throw new ValidationFailedError([{ field: 'role', message: `the radio's antennas are ${roles.join(', ')}` }]);
     await transactionWithRetry(
       this.dataSource,
       async (manager) => {
         const rows = await manager.find(PartAssignment, { where: { radioId }, lock: { mode: 'pessimistic_write' } });
-        const previous = rows.find((r) => r.state === 'chosen');
+        const previous = rows.find((r) => r.state === 'chosen' && r.role === role);
         if (previous?.partId === partId) return;
-        if (previous) await manager.update(PartAssignment, { id: previous.id }, { state: 'shortlisted' });
+        if (previous) await manager.update(PartAssignment, { id: previous.id }, { state: 'shortlisted', role: 'main' });
         const existing = rows.find((r) => r.partId === partId);
-        if (existing) await manager.update(PartAssignment, { id: existing.id }, { state: 'chosen' });
-        else await manager.insert(PartAssignment, { productId, radioId, partId, state: 'chosen', createdById: actor.id });
+        if (existing) await manager.update(PartAssignment, { id: existing.id }, { state: 'chosen', role });
+        else await manager.insert(PartAssignment, { productId, radioId, partId, state: 'chosen', role, createdById: actor.id });
         await this.audit.record(manager, {
           entityType: 'product-assignment',
           entityId: productId,
           action: 'chosen',
           userId: actor.id,
-          changes: { radioId, partId: [previous?.partId ?? null, partId] },
+          changes: { radioId, ...(role === 'main' ? {} : { role }), partId: [previous?.partId ?? null, partId] },
         });
       },
       ASSIGNMENT_ATTEMPTS,
@@ -127,7 +133,7 @@ export class AssignmentsService {
       async (manager) => {
         const chosen = await manager.findOne(PartAssignment, { where: { productId, radioId, state: 'chosen' }, lock: { mode: 'pessimistic_write' } });
         if (!chosen) throw new DomainError('ASSIGNMENT_NOT_FOUND', `radio ${radioId} has no chosen part`, 404);
-        await manager.update(PartAssignment, { id: chosen.id }, { state: 'shortlisted' });
+        await manager.update(PartAssignment, { id: chosen.id }, { state: 'shortlisted', role: 'main' });
         await this.audit.record(manager, {
           entityType: 'product-assignment',
           entityId: productId,

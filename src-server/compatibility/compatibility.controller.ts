@@ -155,7 +155,7 @@ export class CompatibilityController {
     @Body() body: ChoosePartDto,
     @CurrentUser() actor: AuthUser,
   ): Promise<AssignmentDto[]> {
-    return this.partAssignments.choose(id, radioId, body.partId, actor);
+    return this.partAssignments.choose(id, radioId, body.partId, actor, body.role);
   }
 
   @Delete('radios/:radioId/choice')

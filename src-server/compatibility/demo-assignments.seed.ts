@@ -1,3 +1,4 @@
+import type { AntennaRole } from '../products/in-product/antenna-roles';
 import type { DataSource } from 'typeorm';
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
@@ -9,6 +10,7 @@ interface DemoAssignment {
   radioId: number;
   partId: number;
   state: AssignmentState;
+  role?: AntennaRole;
   note: string;
 }
 
@@ -25,7 +27,7 @@ export async function seedDemoAssignments(dataSource: DataSource): Promise<strin
         [a.radioId, a.productId, a.partId],
       );
       // A radio that already has a choice (someone chose in the demo) keeps it.
-      const choiceTaken = a.state === 'chosen' && (await manager.existsBy(PartAssignment, { radioId: a.radioId, state: 'chosen' }));
+      const choiceTaken = a.state === 'chosen' && (await manager.existsBy(PartAssignment, { radioId: a.radioId, state: 'chosen', role: a.role ?? 'main' }));
       const pairTaken = await manager.existsBy(PartAssignment, { radioId: a.radioId, partId: a.partId });
       if (Number(ok) === 0 || choiceTaken || pairTaken) {
         skipped += 1;
@@ -37,6 +39,7 @@ export async function seedDemoAssignments(dataSource: DataSource): Promise<strin
         radioId: a.radioId,
         partId: a.partId,
         state: a.state,
+        role: a.role ?? 'main',
         note: a.note,
         createdById: null,
       });

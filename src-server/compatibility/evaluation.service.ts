@@ -32,6 +32,20 @@ function withCoexistence(verdict: CellStatus, coexistence: readonly CoexistenceF
   return { verdict: worst, deciding };
 }
 
+import { InProductMeasurementsService, type MeasuredReflection, antennaKey } from '../products/in-product/in-product-measurements.service';
+import type { PartEvaluationData } from './engine/types';
+import type { AntennaRole } from '../products/in-product/antenna-roles';
+
+/** Says on every band of a radio that its S11 came from the product, not the evaluation board. */
+function inProductS11Finding(measured: MeasuredReflection, mpn: string): Finding {
+  return {
+    ruleId: 'evaluation',
+    severity: 'info',
+    code: 'S11_MEASURED_IN_PRODUCT',
+    message: `S11 ${measured.source} replaces the evaluation-board S11 of ${mpn}`,
+  };
+}
+
 /** The VSWR the band-coverage rule judges coverage at (rules/band-coverage.json). */
 const COVERAGE_VSWR = 3;
 
@@ -78,6 +92,7 @@ export class EvaluationService {
     private readonly rules: RulesService,
     private readonly products: ProductsService,
     private readonly inputs: EvaluationInputsService,
+    private readonly inProduct: InProductMeasurementsService,
   ) {}
 
   /**
@@ -113,15 +128,28 @@ export class EvaluationService {
     const columns = await this.inputs.partColumns([...new Set(chosen.map((a) => a.partId))], revision);
     const byPart = new Map(columns.map((c) => [c.data.partId, c]));
     const requirements = await this.inputs.requirements(product);
+    // An antenna's S11 measured in the product replaces its evaluation-board S11; such parts skip the facts cache.
+    const measured = await this.inProduct.measuredReflections(productId);
+    const usedInProduct = new Map<PartEvaluationData, MeasuredReflection>();
+    // Each chosen part is its own object so that its antenna role can be told apart (a part can serve two roles).
+    const roleOf = new Map<PartEvaluationData, AntennaRole>();
+    const dataFor = (a: PartAssignment): PartEvaluationData => {
+      const data = byPart.get(a.partId)!.data;
+      const inProduct = measured.get(antennaKey(a.radioId, a.role));
+      const copy = inProduct ? { ...data, reflection: inProduct.curve } : { ...data };
+      if (inProduct) usedInProduct.set(copy, inProduct);
+      roleOf.set(copy, a.role);
+      return copy;
+    };
     const evaluation = evaluateProduct(
       product.radios.map((radio) => ({
         radioId: radio.id,
         radioName: radio.name,
         requirements: requirements.filter((r) => r.radioId === radio.id),
-        chosen: chosen.filter((a) => a.radioId === radio.id).map((a) => byPart.get(a.partId)!.data),
+        chosen: chosen.filter((a) => a.radioId === radio.id).map(dataFor),
       })),
       ruleSet.compiled,
-      { cache: this.inputs.factsAt(revision), partKey: this.inputs.partKey },
+      { cache: this.inputs.factsAt(revision), partKey: (part) => (usedInProduct.has(part) ? null : this.inputs.partKey(part)) },
     );
     const titles = ruleTitlesOf(ruleSet.compiled);
     const view = (f: Finding | null) => (f ? findingView(f, titles) : null);
@@ -135,14 +163,23 @@ export class EvaluationService {
         decidingFinding: view(r.decidingFinding),
         decidingBandId: r.decidingBandId,
         reason: reasonOf(r, titles),
-        chosen: r.chosen.map((p) => ({ partId: p.partId, mpn: p.mpn, title: p.title, manufacturer: byPart.get(p.partId)?.manufacturer ?? '' })),
+        chosen: r.chosen.map((p) => ({
+          partId: p.partId,
+          mpn: p.mpn,
+          title: p.title,
+          manufacturer: byPart.get(p.partId)?.manufacturer ?? '',
+          role: roleOf.get(p) ?? 'main',
+          s11Source: usedInProduct.get(p)?.source ?? 'evaluation board',
+        })),
         bands: r.bands.map((b: BandEvaluation) => ({
           bandId: b.requirement.bandId,
           designation: b.requirement.designation,
           verdict: b.status,
           decidingFinding: view(b.decidingFinding),
           partId: b.partId,
-          findings: b.findings.map((f) => findingView(f, titles)),
+          findings: [...b.findings, ...r.chosen.flatMap((p) => (usedInProduct.has(p) ? [inProductS11Finding(usedInProduct.get(p)!, p.mpn)] : []))].map((f) =>
+            findingView(f, titles),
+          ),
           facts: bandFacts(b.facts, radio.feedLossDb),
         })),
       };

@@ -11,6 +11,7 @@ import { BandSet, BandSetMember } from '../bands/band-set.entity';
 import { RegulatoryLimit } from '../regulatory/regulatory-limit.entity';
 import { Product } from '../products/product.entity';
 import { Radio, RadioBand } from '../products/radio.entity';
+import { IN_PRODUCT_ENTITIES } from '../products/in-product/in-product-measurement.entity';
 import { COMPATIBILITY_ENTITIES } from '../compatibility/compatibility.entities';
 
 /** Every TypeORM entity; add new domains here. */
@@ -31,5 +32,6 @@ export const ENTITIES = [
   Product,
   Radio,
   RadioBand,
+  ...IN_PRODUCT_ENTITIES,
   ...COMPATIBILITY_ENTITIES,
 ];

@@ -6,6 +6,7 @@ import { seedRegulatoryLimits } from '../regulatory/regulatory-limits.seed';
 import { seedDemoProducts } from '../products/demo-products.seed';
 import { seedDemoParts } from '../parts/demo-parts.seed';
 import { seedDemoAssignments } from '../compatibility/demo-assignments.seed';
+import { seedDemoInProduct } from '../products/in-product/demo-in-product.seed';
 
 export type Seeder = (dataSource: DataSource, config: AppConfig) => Promise<string>;
 
@@ -18,4 +19,5 @@ export const SEEDERS: [string, Seeder][] = [
   ['demo products', seedDemoProducts],
   ['demo parts', seedDemoParts],
   ['demo assignments', seedDemoAssignments],
+  ['demo in-product measurements', seedDemoInProduct],
 ];

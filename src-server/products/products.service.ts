@@ -39,7 +39,18 @@ function assertPairsOfRadios(pairs: number[][] | null, radioIds: readonly number
     throw new ValidationFailedError([{ field: 'simultaneousTransmit', message: `radio ${unknown[0]} is not a radio of this product` }]);
   }
 }
-const RADIO_FIELDS: (keyof Radio)[] = ['name', 'technology', 'module', 'transmitPowerDbm', 'polarization', 'connector', 'feedLossDb', 'gnssBandwidth', 'notes'];
+const RADIO_FIELDS: (keyof Radio)[] = [
+  'name',
+  'technology',
+  'module',
+  'transmitPowerDbm',
+  'polarization',
+  'connector',
+  'feedLossDb',
+  'gnssBandwidth',
+  'notes',
+  'antennaRoles',
+];
 
 /** A GNSS radio needs the main lobe unless it says otherwise; other radios have no GNSS bandwidth. */
 function gnssBandwidthFor(technology: Technology, given: GnssBandwidth | null | undefined): GnssBandwidth | null {
@@ -61,6 +72,7 @@ function toRadioDto(radio: Radio): RadioDto {
     connector: radio.connector,
     feedLossDb: radio.feedLossDb,
     gnssBandwidth: radio.gnssBandwidth ?? null,
+    antennaRoles: radio.antennaRoles?.length ? radio.antennaRoles : ['main'],
     notes: radio.notes,
     version: radio.version,
     bands: bands.map((rb) => ({ band: toBandDto(rb.band), certifiedMaxGainDbi: rb.certifiedMaxGainDbi, channels: rb.channels ?? null })),

@@ -3,6 +3,7 @@ import { GNSS_BANDWIDTHS, type GnssBandwidth, TECHNOLOGIES, type Technology } fr
 import { Band } from '../bands/band.entity';
 import { CONNECTORS, type Connector } from '../common/connectors';
 import { Product } from './product.entity';
+import type { AntennaRole } from './in-product/antenna-roles';
 
 export const POLARIZATIONS = ['linear', 'RHCP', 'LHCP', 'any'] as const;
 export type Polarization = (typeof POLARIZATIONS)[number];
@@ -47,6 +48,9 @@ export class Radio {
   /** GNSS only: judged on the main lobe of each signal (default) or on the full signal band; null for other radios. */
   @Column({ name: 'gnss_bandwidth', type: 'enum', enum: GNSS_BANDWIDTHS, nullable: true })
   gnssBandwidth: GnssBandwidth | null;
+  /** The antennas the radio needs, main first (e.g. main, diversity); one part is chosen per role. */
+  @Column({ name: 'antenna_roles', type: 'simple-array', default: 'main' })
+  antennaRoles: AntennaRole[];
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;

@@ -1,3 +1,4 @@
+import { ANTENNA_ROLES, type AntennaRole } from '../../products/in-product/antenna-roles';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsOptional, Matches } from 'class-validator';
 import { IntField } from '../../common/dto-fields';
@@ -65,6 +66,9 @@ export class ChosenPartDto {
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
   @ApiProperty() manufacturer: string;
+  @ApiProperty({ enum: ANTENNA_ROLES, enumName: 'AntennaRole', description: 'The antenna of the radio this part is (main unless the radio has several)' })
+  role: AntennaRole;
+  @ApiProperty({ description: 'Which S11 the bands were judged with: "evaluation board" or "measured in product, file X, port N"' }) s11Source: string;
 }
 
 export class EvaluationRadioDto {

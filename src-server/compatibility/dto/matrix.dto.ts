@@ -1,9 +1,10 @@
+import { ANTENNA_ROLES, type AntennaRole } from '../../products/in-product/antenna-roles';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsOptional, Matches } from 'class-validator';
 import { ListField } from '../../parts/dto/part-search.dto';
 import { CONNECTORS, type Connector, FORM_FACTORS, type FormFactor, LIFECYCLES, type Lifecycle, REVIEW_STATES, type ReviewState } from '../../parts/part.types';
 import { RANGE_ROLES, type RangeRole, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
-import { BoolField, IntField, StringField } from '../../common/dto-fields';
+import { BoolField, EnumField, IntField, StringField } from '../../common/dto-fields';
 
 export const CELL_STATUSES = ['pass', 'marginal', 'fail', 'no-data'] as const;
 export type CellStatus = (typeof CELL_STATUSES)[number];
@@ -229,6 +230,8 @@ export class AssignmentDto {
   @ApiProperty() mpn: string;
   @ApiProperty() title: string;
   @ApiProperty({ enum: ['shortlisted', 'chosen'] }) state: string;
+  @ApiProperty({ enum: ANTENNA_ROLES, enumName: 'AntennaRole', description: 'The antenna the part is chosen for (main for shortlisted parts)' })
+  role: AntennaRole;
   @ApiPropertyOptional({ type: String, nullable: true }) note: string | null;
   @ApiProperty() updatedAt: string;
 }
@@ -240,4 +243,6 @@ export class ShortlistDto {
 
 export class ChoosePartDto {
   @IntField({ min: 1, description: 'The part to choose for this radio; it joins the shortlist if it was not on it' }) partId: number;
+  @EnumField(ANTENNA_ROLES, { optional: true, enumName: 'AntennaRole', description: "Which of the radio's antennas (its antennaRoles); default main" })
+  role?: AntennaRole;
 }

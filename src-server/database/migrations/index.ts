@@ -12,6 +12,7 @@ import { OnePolarizationVocabulary1765500000000 } from './1765500000000-one-pola
 import { FigureBasis1765510000000 } from './1765510000000-figure-basis';
 import { LimitsByServiceAndMarkets1765520000000 } from './1765520000000-limits-by-service-and-markets';
 import { SimultaneousTransmit1765550000000 } from './1765550000000-simultaneous-transmit';
+import { InProductMeasurements1765540000000 } from './1765540000000-in-product-measurements';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
 export const MIGRATIONS = [
@@ -29,4 +30,5 @@ export const MIGRATIONS = [
   FigureBasis1765510000000,
   LimitsByServiceAndMarkets1765520000000,
   SimultaneousTransmit1765550000000,
+  InProductMeasurements1765540000000,
 ];

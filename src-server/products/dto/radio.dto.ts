@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsIn, IsOptional, ValidateNested } from 'class-validator';
+import { ANTENNA_ROLES, type AntennaRole } from '../in-product/antenna-roles';
 import { EnumField, IntField, NumberField, OptionalField, PatchType, StringField } from '../../common/dto-fields';
 import { GNSS_BANDWIDTHS, type GnssBandwidth, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
 import { BandDto } from '../../bands/dto/band-response.dto';
@@ -87,6 +88,15 @@ export class CreateRadioDto {
   @StringField({ optional: true, nullable: true, maxLength: 4000 })
   notes?: string | null;
 
+  @ApiPropertyOptional({ enum: ANTENNA_ROLES, enumName: 'AntennaRole', isArray: true, description: 'The antennas the radio needs, main first; default [main]' })
+  @IsOptional()
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(ANTENNA_ROLES.length)
+  @ArrayUnique()
+  @IsIn(ANTENNA_ROLES, { each: true })
+  antennaRoles?: AntennaRole[];
+
   @ApiProperty({ type: [RadioBandInputDto] })
   @IsArray()
   @ArrayMinSize(1)
@@ -126,6 +136,8 @@ export class RadioDto {
   @ApiProperty() feedLossDb: number;
   @ApiPropertyOptional({ enum: GNSS_BANDWIDTHS, enumName: 'GnssBandwidth', nullable: true, description: 'GNSS radios: main-lobe or full-band; null otherwise' })
   gnssBandwidth: GnssBandwidth | null;
+  @ApiProperty({ enum: ANTENNA_ROLES, enumName: 'AntennaRole', isArray: true, description: 'The antennas the radio needs, main first' })
+  antennaRoles: AntennaRole[];
   @ApiPropertyOptional({ type: String, nullable: true }) notes: string | null;
   @ApiProperty() version: number;
   @ApiProperty({ type: [RadioBandDto] }) bands: RadioBandDto[];
