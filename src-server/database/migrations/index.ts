@@ -29,6 +29,6 @@ export const MIGRATIONS = [
   OnePolarizationVocabulary1765500000000,
   FigureBasis1765510000000,
   LimitsByServiceAndMarkets1765520000000,
-  SimultaneousTransmit1765550000000,
   InProductMeasurements1765540000000,
+  SimultaneousTransmit1765550000000,
 ];

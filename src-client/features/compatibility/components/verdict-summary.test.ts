@@ -9,7 +9,16 @@ describe(chosenPartsText.name, () => {
     expect(chosenPartsText({ chosen: [] })).toBe('No part chosen for this radio');
   });
   it('names each chosen part with its maker', () => {
-    expect(chosenPartsText({ chosen: [{ partId: 1, mpn: 'A-1', title: '', manufacturer: 'Maker' }] })).toBe('A-1 (Maker)');
+    expect(chosenPartsText({ chosen: [{ partId: 1, mpn: 'A-1', title: '', manufacturer: 'Maker', role: 'main', s11Source: 'evaluation board' }] })).toBe(
+      'A-1 (Maker)',
+    );
+  });
+  it('names the antenna of each part when a radio has several, and where its S11 was measured', () => {
+    const chosen = [
+      { partId: 1, mpn: 'A-1', title: '', manufacturer: 'Maker', role: 'main' as const, s11Source: 'measured in product, file housing.s4p, port 1' },
+      { partId: 2, mpn: 'B-2', title: '', manufacturer: 'Other', role: 'diversity' as const, s11Source: 'evaluation board' },
+    ];
+    expect(chosenPartsText({ chosen })).toBe('main: A-1 (Maker, S11 measured in product, file housing.s4p, port 1); diversity: B-2 (Other)');
   });
 });
 

@@ -1,9 +1,19 @@
 import type { EvaluationRadio, ProductEvaluation } from '../types';
 
 /** What the chosen-part cell of a radio says: its parts, or that none is chosen. */
+const ROLE_WORDS: Record<string, string> = { main: 'main', diversity: 'diversity', 'mimo-2': 'MIMO 2', 'mimo-3': 'MIMO 3', 'mimo-4': 'MIMO 4' };
+
 export function chosenPartsText(radio: Pick<EvaluationRadio, 'chosen'>): string {
   if (radio.chosen.length === 0) return 'No part chosen for this radio';
-  return radio.chosen.map((p) => `${p.mpn} (${p.manufacturer})`).join(', ');
+  // A radio with one antenna reads as before; with several each part says which antenna it is and whose S11 counts.
+  const several = radio.chosen.length > 1;
+  return radio.chosen
+    .map((p) => {
+      const role = several && p.role ? `${ROLE_WORDS[p.role] ?? p.role}: ` : '';
+      const measured = p.s11Source && p.s11Source !== 'evaluation board' ? `, S11 ${p.s11Source}` : '';
+      return `${role}${p.mpn} (${p.manufacturer}${measured})`;
+    })
+    .join('; ');
 }
 
 /** A radio's reason with its first letter raised, so it reads as a sentence beside the verdict. */
