@@ -25,6 +25,12 @@ export const FINDING_TITLES: Readonly<Record<string, string>> = {
   RULE_BROKEN: 'Rule broken, not checked',
   NO_PART_CHOSEN: 'No part chosen',
   PRODUCT_WITHOUT_RADIOS: 'No radios',
+  REGULATORY_LIMIT_NOT_ON_FILE: 'No regulatory limit on file',
+  CERTIFIED_GAIN_NOT_ENTERED: 'Certified gain not entered',
+  BAND_OUTSIDE_MARKETS: 'Band not used in the markets',
+  MARKET_WITHOUT_BANDS: 'Market without a band',
+  DETUNING_MARGIN_LOW: 'Little detuning margin',
+  S11_MEASURED_IN_PRODUCT: 'S11 measured in the product',
 };
 
 /** Within one severity, which finding names the reason first: the band's match before what follows from it. */

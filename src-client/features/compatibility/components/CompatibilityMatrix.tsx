@@ -6,7 +6,7 @@ import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { VERDICTS } from '../../../components/verdict-look';
 import { useDownloadMatrixCsv } from '../api/download-matrix-csv';
 import { useMatrix } from '../api/get-matrix';
-import type { Matrix, MatrixCell } from '../types';
+import type { Finding, Matrix, MatrixCell } from '../types';
 import { STATUS_LOOK, decidingFinding } from './cell-status';
 import { CandidatesDialog } from './CandidatesDialog';
 import { MatrixCellDrawer } from './MatrixCellDrawer';
@@ -84,6 +84,7 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
                 <RadioTable
                   key={radio.radioId}
                   radio={radio}
+                  radioFindings={m.radios.find((r) => r.radioId === radio.radioId)?.findings ?? []}
                   chosenOnly={chosenOnly}
                   onSelect={setSelected}
                   onFindCandidates={() => setCandidatesFor(radio.radioId)}
@@ -110,19 +111,29 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
 
 interface RadioTableProps {
   radio: RadioMatrix;
+  /** Findings about the radio as a whole, e.g. a target market none of its bands is used in. */
+  radioFindings: Finding[];
   chosenOnly: boolean;
   onSelect: (cell: MatrixCell) => void;
   onFindCandidates: () => void;
 }
 
 /** One radio's bands against its own parts; the text of a cell wraps rather than being cut. */
-function RadioTable({ radio, chosenOnly, onSelect, onFindCandidates }: RadioTableProps) {
+function RadioTable({ radio, radioFindings, chosenOnly, onSelect, onFindCandidates }: RadioTableProps) {
   return (
     <div className="bw-matrix__radio" data-testid={`matrix-radio-${radio.radioId}`}>
       <div className="bw-matrix__radio-head">
         <H4>{radio.radioName}</H4>
         <Button className="bw-no-print" small icon="search" text={`Find candidates: ${radio.radioName}`} onClick={onFindCandidates} />
       </div>
+      {radioFindings.map((finding) => (
+        <p key={`${finding.code}-${finding.message}`} className="bw-matrix__radio-finding" data-testid={`radio-finding-${radio.radioId}`}>
+          <Tag minimal intent={finding.severity === 'info' ? Intent.NONE : Intent.WARNING}>
+            {finding.title}
+          </Tag>{' '}
+          {finding.message}
+        </p>
+      ))}
       {radio.columns.length === 0 ? (
         <p className="bw-muted">
           {chosenOnly ? 'No part chosen for this radio.' : 'No part chosen or shortlisted for this radio yet: find candidates to add one.'}
@@ -149,7 +160,14 @@ function RadioTable({ radio, chosenOnly, onSelect, onFindCandidates }: RadioTabl
           <tbody>
             {radio.rows.map(({ index: r, row }) => (
               <tr key={row.bandId}>
-                <th scope="row">{row.designation}</th>
+                <th scope="row">
+                  {row.designation}
+                  {row.findings.map((finding) => (
+                    <div key={finding.code} className="bw-muted bw-matrix__part-sub" title={finding.message} data-testid={`row-finding-${row.bandId}`}>
+                      {finding.title}: {finding.message}
+                    </div>
+                  ))}
+                </th>
                 {radio.columns.map(({ index: c, column }) => {
                   const cell = radio.cellAt(r, c);
                   if (!cell) return <td key={column.partId} className="bw-muted" />;

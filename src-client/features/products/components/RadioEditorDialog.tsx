@@ -27,6 +27,39 @@ export interface RadioEditorDialogProps {
 interface BandRow {
   bandId: number;
   gain: string;
+  /** Channels the radio uses in the band, as typed: "869.4–869.65; 868.0–868.6" (MHz). */
+  channels: string;
+}
+
+type AntennaRole = Radio['antennaRoles'][number];
+type GnssBandwidth = NonNullable<Radio['gnssBandwidth']>;
+
+/** The antenna sets a radio can ask for, in words. */
+const ANTENNA_SETS: { label: string; roles: AntennaRole[] }[] = [
+  { label: 'One antenna', roles: ['main'] },
+  { label: 'Main and diversity', roles: ['main', 'diversity'] },
+  { label: 'MIMO 2 × 2 (main, MIMO 2)', roles: ['main', 'mimo-2'] },
+  { label: 'MIMO 4 × 4 (main, MIMO 2, 3, 4)', roles: ['main', 'mimo-2', 'mimo-3', 'mimo-4'] },
+];
+const antennaSetOf = (roles: readonly string[] | undefined) =>
+  Math.max(
+    0,
+    ANTENNA_SETS.findIndex((set) => set.roles.join() === (roles ?? ['main']).join()),
+  );
+
+const channelsText = (channels: { fromMhz: number; toMhz: number }[] | null | undefined) => (channels ?? []).map((c) => `${c.fromMhz}–${c.toMhz}`).join('; ');
+
+/** "869.4–869.65; 868-868.6" → ranges in MHz; null when a piece is not "from–to" with from below to. */
+export function parseChannels(text: string): { fromMhz: number; toMhz: number }[] | null {
+  const pieces = text
+    .split(/[;,]/)
+    .map((piece) => piece.trim())
+    .filter(Boolean);
+  const ranges = pieces.map((piece) => {
+    const [from, to, extra] = piece.split(/[–-]/).map((x) => Number(x.trim()));
+    return extra === undefined && Number.isFinite(from) && Number.isFinite(to) && from < to ? { fromMhz: from, toMhz: to } : null;
+  });
+  return ranges.every((r) => r !== null) ? (ranges as { fromMhz: number; toMhz: number }[]) : null;
 }
 
 const describe = (b: BandChoice) => b.ranges.map((r) => `${r.fromMhz}–${r.toMhz}`).join(', ') + ' MHz';
@@ -45,7 +78,12 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
   const [connector, setConnector] = useState<Connector>(radio?.connector ?? 'solder-pad');
   const [feedLoss, setFeedLoss] = useState(textOf(radio?.feedLossDb ?? 0));
   const [notes, setNotes] = useState(radio?.notes ?? '');
-  const [rows, setRows] = useState<BandRow[]>(radio?.bands.map((b) => ({ bandId: b.band.id, gain: textOf(b.certifiedMaxGainDbi) })) ?? []);
+  const [rows, setRows] = useState<BandRow[]>(
+    radio?.bands.map((b) => ({ bandId: b.band.id, gain: textOf(b.certifiedMaxGainDbi), channels: channelsText(b.channels) })) ?? [],
+  );
+  const [gnssBandwidth, setGnssBandwidth] = useState<GnssBandwidth>(radio?.gnssBandwidth ?? 'main-lobe');
+  const [antennaSet, setAntennaSet] = useState(antennaSetOf(radio?.antennaRoles));
+  const [channelError, setChannelError] = useState<number | null>(null);
   const [setPick, setSetPick] = useState('');
   const [bandPick, setBandPick] = useState('');
   const receiveOnly = RECEIVE_ONLY.includes(technology);
@@ -58,7 +96,7 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
   const usableSets = useMemo(() => (choices.data?.sets ?? []).filter((s) => s.bands.some((b) => b.technology === technology)), [choices.data, technology]);
 
   const addBands = (ids: number[]) =>
-    setRows((cur) => [...cur, ...ids.filter((id) => !cur.some((r) => r.bandId === id)).map((bandId) => ({ bandId, gain: '' }))]);
+    setRows((cur) => [...cur, ...ids.filter((id) => !cur.some((r) => r.bandId === id)).map((bandId) => ({ bandId, gain: '', channels: '' }))]);
   const changeTechnology = (next: Technology) => {
     setTechnology(next);
     // Bands of another technology would be refused; drop them, and the power of a receive-only radio.
@@ -69,6 +107,9 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
+    const badChannels = rows.findIndex((r) => r.channels.trim() !== '' && parseChannels(r.channels) === null);
+    setChannelError(badChannels >= 0 ? badChannels : null);
+    if (badChannels >= 0) return;
     const input = {
       name,
       technology,
@@ -78,7 +119,13 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
       notes: notes.trim() ? notes : null,
       transmitPowerDbm: receiveOnly ? null : numberOrNull(power),
       feedLossDb: numberOrNull(feedLoss) ?? 0,
-      bands: rows.map((r) => ({ bandId: r.bandId, certifiedMaxGainDbi: receiveOnly ? null : numberOrNull(r.gain) })),
+      bands: rows.map((r) => ({
+        bandId: r.bandId,
+        certifiedMaxGainDbi: receiveOnly ? null : numberOrNull(r.gain),
+        channels: receiveOnly || r.channels.trim() === '' ? null : parseChannels(r.channels),
+      })),
+      gnssBandwidth: technology === 'gnss' ? gnssBandwidth : null,
+      antennaRoles: ANTENNA_SETS[antennaSet].roles,
     };
     if (radio) update.mutate({ productId, radioId: radio.id, version: radio.version, ...input }, { onSuccess: onClose });
     else create.mutate({ productId, ...input }, { onSuccess: onClose });
@@ -155,6 +202,31 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
               />
             </FormGroup>
             {field('radio-feed-loss', 'Feed loss', 'feedLossDb', feedLoss, setFeedLoss, { unit: 'dB', helper: 'Cable, connector and trace loss' })}
+            <FormGroup label="Antennas" labelFor="radio-antennas" helperText="One part is chosen for each antenna; each is judged on every band">
+              <HTMLSelect
+                id="radio-antennas"
+                value={String(antennaSet)}
+                onChange={(e) => setAntennaSet(Number(e.currentTarget.value))}
+                options={ANTENNA_SETS.map((set, i) => ({ value: String(i), label: set.label }))}
+              />
+            </FormGroup>
+            {technology === 'gnss' && (
+              <FormGroup
+                label="Signal bandwidth judged"
+                labelFor="radio-gnss-bandwidth"
+                helperText="Main lobe: the open-service signal's main lobe (usual for receivers); full band: the whole signal band"
+              >
+                <HTMLSelect
+                  id="radio-gnss-bandwidth"
+                  value={gnssBandwidth}
+                  onChange={(e) => setGnssBandwidth(e.currentTarget.value as GnssBandwidth)}
+                  options={[
+                    { value: 'main-lobe', label: 'Main lobe of each signal' },
+                    { value: 'full-band', label: 'Full signal band' },
+                  ]}
+                />
+              </FormGroup>
+            )}
           </div>
 
           <FormGroup
@@ -237,6 +309,27 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
                         {gainError && <div className="bw-error-text">{gainError}</div>}
                       </td>
                       <td>
+                        {!receiveOnly && (
+                          <InputGroup
+                            size="small"
+                            aria-label={`Channels used in ${band?.designation ?? row.bandId}`}
+                            placeholder="channels, e.g. 869.4–869.65"
+                            value={row.channels}
+                            intent={channelError === i || fe[`bands.${i}.channels`] ? Intent.DANGER : Intent.NONE}
+                            rightElement={<span className="bw-unit">MHz</span>}
+                            onValueChange={(v) => setRows((cur) => cur.map((r, j) => (j === i ? { ...r, channels: v } : r)))}
+                          />
+                        )}
+                        {channelError === i && <div className="bw-error-text">Write each channel as from–to in MHz, separated by semicolons</div>}
+                        {Object.entries(fe)
+                          .filter(([key]) => key.startsWith(`bands.${i}.channels`))
+                          .map(([key, message]) => (
+                            <div key={key} className="bw-error-text">
+                              {message}
+                            </div>
+                          ))}
+                      </td>
+                      <td>
                         <Button
                           size="small"
                           variant="minimal"
@@ -252,7 +345,8 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
             </table>
             {!receiveOnly && rows.length > 0 && (
               <p className="bw-muted bw-small">
-                Certified max gain: the antenna gain the module&apos;s certification allows in that band (dBi), from its grant.
+                Certified max gain: the antenna gain the module&apos;s certification allows in that band (dBi), from its grant. Channels (optional): the parts
+                of the band the radio transmits in; power limits are then judged on those channels instead of the tightest part of the band.
               </p>
             )}
           </FormGroup>
