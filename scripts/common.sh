@@ -103,5 +103,5 @@ fakes_stop() {
 }
 
 # Benchmarks left the production build (tsconfig.bench.json); an older build's copy is removed.
-build_server() { log "building server"; rm -rf dist/server/bench; npx tsc -p tsconfig.server.build.json; }
+build_server() { log "building server"; rm -rf dist/server; npx tsc -p tsconfig.server.build.json; } # from scratch: a stale file of a moved module would shadow its folder
 build_client() { log "building client"; npx vite build --logLevel warn; }

@@ -114,7 +114,13 @@ export class EvaluationService {
     product: Awaited<ReturnType<ProductsService['getWithRadios']>>,
     requirements: Awaited<ReturnType<EvaluationInputsService['requirements']>>,
   ): Promise<CoexistenceFinding[]> {
-    return checkCoexistence(requirements, loadCoexistenceRule(), {
+    // A receiver's front end passes the whole signal band, not only the main lobe a GNSS match is judged on.
+    const fullBands = new Map(product.radios.flatMap((radio) => radio.bands.map((rb) => [`${radio.id}:${rb.band.id}`, rb.band.ranges] as const)));
+    const asReceiversSeeThem = requirements.map((requirement) => {
+      const ranges = fullBands.get(`${requirement.radioId}:${requirement.bandId}`);
+      return ranges ? { ...requirement, ranges: ranges.map((r) => ({ fromHz: r.fromMhz * 1e6, toHz: r.toMhz * 1e6, role: r.role })) } : requirement;
+    });
+    return checkCoexistence(asReceiversSeeThem, loadCoexistenceRule(), {
       simultaneousTransmit: product.simultaneousTransmit === 'all' ? null : product.simultaneousTransmit,
       isolation: await this.isolationLookup(product.id),
     });

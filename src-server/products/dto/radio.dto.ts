@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsIn, IsOptional, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsIn, ValidateNested } from 'class-validator';
 import { ANTENNA_ROLES, type AntennaRole } from '../in-product/antenna-roles';
 import { EnumField, IntField, NumberField, OptionalField, PatchType, StringField } from '../../common/dto-fields';
 import { GNSS_BANDWIDTHS, type GnssBandwidth, TECHNOLOGIES, type Technology } from '../../bands/band-domain';
@@ -89,7 +89,7 @@ export class CreateRadioDto {
   notes?: string | null;
 
   @ApiPropertyOptional({ enum: ANTENNA_ROLES, enumName: 'AntennaRole', isArray: true, description: 'The antennas the radio needs, main first; default [main]' })
-  @IsOptional()
+  @OptionalField()
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(ANTENNA_ROLES.length)
