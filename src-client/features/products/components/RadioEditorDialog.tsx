@@ -313,7 +313,7 @@ export function RadioEditorDialog({ productId, radio, onClose }: RadioEditorDial
                           <InputGroup
                             size="small"
                             aria-label={`Channels used in ${band?.designation ?? row.bandId}`}
-                            placeholder="channels, e.g. 869.4–869.65"
+                            placeholder="channels used, from–to (optional)"
                             value={row.channels}
                             intent={channelError === i || fe[`bands.${i}.channels`] ? Intent.DANGER : Intent.NONE}
                             rightElement={<span className="bw-unit">MHz</span>}
