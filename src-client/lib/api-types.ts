@@ -1007,6 +1007,40 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/products/{id}/evaluation": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The product's verdict and, per radio, its verdict from its chosen part: each band's verdict, deciding finding and facts. Worst first: fail, then no-data (a radio not checked cannot pass), then marginal, then pass */
+        get: operations["CompatibilityController_evaluation"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/products/{id}/bill-of-materials": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The chosen parts with the unit price at the build quantity (from the offers' price breaks), lead time, and the antenna cost per product (one total per currency when mixed) */
+        get: operations["CompatibilityController_billOfMaterials"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/products/{id}/matrix": {
         parameters: {
             query?: never;
@@ -1014,7 +1048,7 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** Every radio band of the product against parts (default: its chosen and shortlisted parts), with each cell's findings */
+        /** Each radio's bands against that radio's own chosen and shortlisted parts (chosenOnly: its chosen part; parts: the asked parts on every band), with each cell's findings */
         get: operations["CompatibilityController_matrix"];
         put?: never;
         post?: never;
@@ -1048,7 +1082,7 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** Approved parts for one radio, ranked by status and by the margin to their nearest limit */
+        /** Approved parts for one radio, ranked by status, then by fit to the radio's feed and polarization, then by the margin to their nearest limit; each explained by the finding that decides its rank, with its price at the build quantity and lead time */
         get: operations["CompatibilityController_candidates"];
         put?: never;
         post?: never;
@@ -2338,6 +2372,180 @@ export interface components {
             at?: string | null;
             definition: Record<string, never>;
         };
+        FindingDto: {
+            ruleId: string;
+            /** @enum {string} */
+            severity: "fail" | "marginal" | "info" | "no-data";
+            /**
+             * @description Stable code, kept for export and filtering
+             * @example EFFICIENCY_BELOW_FLOOR
+             */
+            code: string;
+            /**
+             * @description Short human title of the code, for screens
+             * @example Efficiency below floor
+             */
+            title: string;
+            /** @example total efficiency falls to 31 % at 699 MHz; the floor for lte is 40 % */
+            message: string;
+        };
+        ChosenPartDto: {
+            partId: number;
+            mpn: string;
+            title: string;
+            manufacturer: string;
+        };
+        BandFactsDto: {
+            /** @description Share (0–1) of the band width where VSWR ≤ coverageVswr */
+            coverageFraction?: number | null;
+            /** @description The VSWR the coverage is judged at (the band-coverage rule: 3:1) */
+            coverageVswr: number;
+            /** @description Highest VSWR in the band, VSWR = (1 + |Γ|) / (1 − |Γ|) */
+            worstVswr?: number | null;
+            /** @description Lowest total efficiency (mismatch included), % */
+            minTotalEfficiencyPct?: number | null;
+            /** @description Total efficiency averaged over the band (linear power), % */
+            avgTotalEfficiencyPct?: number | null;
+            /** @description Lowest efficiency at the radio port: total efficiency × 10^(−feed loss / 10), with the radio's feed loss, % */
+            minSystemEfficiencyPct?: number | null;
+            /** @description The radio's feed or cable loss, dB */
+            feedLossDb: number;
+            /** @description Highest peak gain in the band, dBi */
+            peakGainDbi?: number | null;
+            /** @description EIRP = transmit power + peak gain on the transmit ranges − feed loss, dBm; null for a receive-only radio */
+            eirpDbm?: number | null;
+        };
+        EvaluationBandDto: {
+            bandId: number;
+            designation: string;
+            /** @description pass | marginal | fail | no-data. A product or radio takes its worst part: fail, then no-data (what was not checked cannot pass), then marginal, then pass. */
+            verdict: components["schemas"]["CellStatus"];
+            /** @description The finding that decides the verdict; null for a pass */
+            decidingFinding?: components["schemas"]["FindingDto"] | null;
+            /** @description The chosen part the band was judged with; null when none is chosen */
+            partId?: number | null;
+            /** @description Every finding of the band, notes included */
+            findings: components["schemas"]["FindingDto"][];
+            facts: components["schemas"]["BandFactsDto"];
+        };
+        EvaluationRadioDto: {
+            radioId: number;
+            name: string;
+            technology: components["schemas"]["Technology"];
+            /** @description pass | marginal | fail | no-data. A product or radio takes its worst part: fail, then no-data (what was not checked cannot pass), then marginal, then pass. */
+            verdict: components["schemas"]["CellStatus"];
+            /** @description The finding that decides the radio; null for a pass */
+            decidingFinding?: components["schemas"]["FindingDto"] | null;
+            /** @description The band of the deciding finding */
+            decidingBandId?: number | null;
+            /** @example Efficiency below floor on BLE 2.4 GHz: total efficiency falls to 21 % at 2400 MHz; the floor for ble is 30 % */
+            reason: string;
+            chosen: components["schemas"]["ChosenPartDto"][];
+            bands: components["schemas"]["EvaluationBandDto"][];
+        };
+        EvaluationFindingDto: {
+            ruleId: string;
+            /** @enum {string} */
+            severity: "fail" | "marginal" | "info" | "no-data";
+            /**
+             * @description Stable code, kept for export and filtering
+             * @example EFFICIENCY_BELOW_FLOOR
+             */
+            code: string;
+            /**
+             * @description Short human title of the code, for screens
+             * @example Efficiency below floor
+             */
+            title: string;
+            /** @example total efficiency falls to 31 % at 699 MHz; the floor for lte is 40 % */
+            message: string;
+            /** @description The radio the finding is about; null for the product as a whole */
+            radioId?: number | null;
+        };
+        ProductEvaluationDto: {
+            productId: number;
+            productName: string;
+            /** @description pass | marginal | fail | no-data. A product or radio takes its worst part: fail, then no-data (what was not checked cannot pass), then marginal, then pass. */
+            verdict: components["schemas"]["CellStatus"];
+            /** @description The deciding radio's reason in words */
+            reason: string;
+            radios: components["schemas"]["EvaluationRadioDto"][];
+            /** @description Findings about the product and its radios as a whole (no part chosen …); band findings are on the bands */
+            findings: components["schemas"]["EvaluationFindingDto"][];
+            /** @description Rule ids and versions the evaluation used */
+            rules: string;
+            /** @description When the evaluation was computed (ISO 8601) */
+            evaluatedAt: string;
+        };
+        BomRadioRefDto: {
+            radioId: number;
+            name: string;
+        };
+        OfferPriceDto: {
+            offerId: number;
+            supplier: string;
+            /** @example USD */
+            currency: string;
+            /**
+             * @description Unit price at the asked quantity, decimal string
+             * @example 0.4211
+             */
+            unitPrice: string;
+            /** @description Quantity of the price break that applies */
+            breakQuantity: number;
+            leadTimeDays?: number | null;
+            moq?: number | null;
+        };
+        BomLineDto: {
+            partId: number;
+            mpn: string;
+            title: string;
+            manufacturer: string;
+            connector: components["schemas"]["Connector"];
+            /** @description The radios the part is chosen for */
+            radios: components["schemas"]["BomRadioRefDto"][];
+            /** @description Pieces per product (one per radio it is chosen for) */
+            quantityPerUnit: number;
+            /** @description Pieces bought for the build: quantity × quantityPerUnit */
+            buyQuantity: number;
+            /** @description The offer bought from; null when no offer can supply buyQuantity */
+            offer?: components["schemas"]["OfferPriceDto"] | null;
+            /**
+             * @description unit price × quantityPerUnit, in the offer currency
+             * @example 0.8422
+             */
+            costPerUnit?: string | null;
+        };
+        CurrencyTotalDto: {
+            /** @example USD */
+            currency: string;
+            /**
+             * @description Decimal string
+             * @example 1.2633
+             */
+            total: string;
+        };
+        BillOfMaterialsDto: {
+            productId: number;
+            productName: string;
+            quantity: number;
+            /** @example USD */
+            currency: string;
+            lines: components["schemas"]["BomLineDto"][];
+            /** @description Radios with no chosen part: the cost leaves them out */
+            radiosWithoutPart: components["schemas"]["BomRadioRefDto"][];
+            /** @description Antenna cost per product, one total per currency when the offers mix them */
+            totalPerUnit: components["schemas"]["CurrencyTotalDto"][];
+            /** @description Longest lead time of the offers bought from, days */
+            longestLeadTimeDays?: number | null;
+            /** @description Every radio has a chosen part and every part an offer at the quantity */
+            complete: boolean;
+        };
+        /**
+         * @description assigned: each radio's rows against that radio's chosen and shortlisted parts only; chosen: its chosen part only; parts: every row against the asked parts. Cells exist only for the pairs evaluated.
+         * @enum {string}
+         */
+        MatrixView: "assigned" | "chosen" | "parts";
         MatrixRangeDto: {
             fromMhz: number;
             toMhz: number;
@@ -2365,15 +2573,6 @@ export interface components {
             lifecycle: string;
             assignments: components["schemas"]["ColumnAssignmentDto"][];
         };
-        FindingDto: {
-            ruleId: string;
-            /** @enum {string} */
-            severity: "fail" | "marginal" | "info" | "no-data";
-            /** @example EFFICIENCY_BELOW_FLOOR */
-            code: string;
-            /** @example total efficiency falls to 31 % at 699 MHz; the floor for lte is 40 % */
-            message: string;
-        };
         MatrixCellDto: {
             /** @description Index into rows */
             row: number;
@@ -2381,15 +2580,51 @@ export interface components {
             column: number;
             status: components["schemas"]["CellStatus"];
             findings: components["schemas"]["FindingDto"][];
+            /** @description The finding that decides the status; null for a pass */
+            decidingFinding?: components["schemas"]["FindingDto"] | null;
         };
         MatrixDto: {
             productId: number;
             productName: string;
+            /** @description assigned: each radio's rows against that radio's chosen and shortlisted parts only; chosen: its chosen part only; parts: every row against the asked parts. Cells exist only for the pairs evaluated. */
+            view: components["schemas"]["MatrixView"];
             rows: components["schemas"]["MatrixRowDto"][];
             columns: components["schemas"]["MatrixColumnDto"][];
             cells: components["schemas"]["MatrixCellDto"][];
             /** @description Rule ids and versions the matrix was evaluated with */
             rules: string;
+        };
+        /**
+         * @description direct: the radio's own feed; adapter: coaxial adapter or cable; board-change: solder pad against a connector
+         * @enum {string}
+         */
+        FeedFit: "direct" | "adapter" | "board-change";
+        /**
+         * @description matched; loss: linear against circular (about 3 dB); opposite: the other circular sense
+         * @enum {string}
+         */
+        PolarizationFit: "matched" | "loss" | "opposite" | "unknown";
+        CandidateFitDto: {
+            /** @description direct: the radio's own feed; adapter: coaxial adapter or cable; board-change: solder pad against a connector */
+            feed: components["schemas"]["FeedFit"];
+            /** @description matched; loss: linear against circular (about 3 dB); opposite: the other circular sense */
+            polarization: components["schemas"]["PolarizationFit"];
+            /** @description Ranking weight of the two (0 = fits; each step away adds 1) */
+            rank: number;
+        };
+        CandidateExplanationDto: {
+            status: components["schemas"]["CellStatus"];
+            /**
+             * @description The deciding finding's short title; for a pass 'Nearest limit' or 'Passes'
+             * @example Band not covered
+             */
+            title: string;
+            /** @example B3: VSWR ≤ 3:1 covers only 0 % of B3; not covered: 1710–1880 MHz */
+            text: string;
+            /** @description The finding that decides the rank; null for a pass */
+            finding?: components["schemas"]["FindingDto"] | null;
+            bandId?: number | null;
+            designation?: string | null;
         };
         DecidingFigureDto: {
             ruleId: string;
@@ -2407,15 +2642,25 @@ export interface components {
             designation: string;
             status: components["schemas"]["CellStatus"];
             findings: components["schemas"]["FindingDto"][];
+            /** @description The finding that decides the band; null for a pass */
+            decidingFinding?: components["schemas"]["FindingDto"] | null;
         };
         CandidateDto: {
             partId: number;
             mpn: string;
             title: string;
             manufacturer: string;
+            formFactor: components["schemas"]["FormFactor"];
+            connector: components["schemas"]["Connector"];
             status: components["schemas"]["CellStatus"];
+            fit: components["schemas"]["CandidateFitDto"];
+            /** @description Why the candidate stands here: the deciding finding, or for a pass its nearest limit */
+            explanation: components["schemas"]["CandidateExplanationDto"];
             marginDb?: number | null;
+            /** @description The limit the part is nearest to (or furthest over), which orders parts of one status */
             deciding?: components["schemas"]["DecidingFigureDto"] | null;
+            /** @description The offer it would be bought from at the asked quantity; null when none can supply it */
+            price?: components["schemas"]["OfferPriceDto"] | null;
             /** @enum {string|null} */
             assignment?: "shortlisted" | "chosen" | null;
             bands: components["schemas"]["CandidateBandDto"][];
@@ -2424,7 +2669,13 @@ export interface components {
             productId: number;
             radioId: number;
             radioName: string;
-            /** @description Approved parts evaluated */
+            /** @description The radio's feed the candidates are fitted to */
+            radioConnector: components["schemas"]["Connector"];
+            /** @description Build quantity of the prices */
+            quantity: number;
+            /** @example USD */
+            currency: string;
+            /** @description Approved parts evaluated (after the filters) */
             evaluated: number;
             candidates: components["schemas"]["CandidateDto"][];
         };
@@ -5249,11 +5500,88 @@ export interface operations {
             };
         };
     };
+    CompatibilityController_evaluation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProductEvaluationDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CompatibilityController_billOfMaterials: {
+        parameters: {
+            query?: {
+                /** @description Products to build; price breaks are taken at this times the parts per product (default 1) */
+                quantity?: number;
+                /** @description Currency preferred when a part has offers in several (default USD) */
+                currency?: string;
+            };
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BillOfMaterialsDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     CompatibilityController_matrix: {
         parameters: {
             query?: {
                 /** @description Comma-separated part ids; default: the parts assigned to or shortlisted for the product */
                 parts?: string;
+                /** @description Only each radio's chosen part (default: its chosen and shortlisted parts); not with `parts` */
+                chosenOnly?: boolean;
             };
             header?: never;
             path: {
@@ -5292,6 +5620,8 @@ export interface operations {
             query?: {
                 /** @description Comma-separated part ids; default: the parts assigned to or shortlisted for the product */
                 parts?: string;
+                /** @description Only each radio's chosen part (default: its chosen and shortlisted parts); not with `parts` */
+                chosenOnly?: boolean;
             };
             header?: never;
             path: {
@@ -5322,6 +5652,18 @@ export interface operations {
             query?: {
                 /** @description How many of the best candidates to return (default 20) */
                 limit?: number;
+                /** @description Only these form factors; comma-separated: chip, pcb-trace, flex, stamped-metal, patch, external-whip, panel */
+                formFactor?: string;
+                /** @description Only parts with one of these feeds (connectors); comma-separated: solder-pad, SMA, RP-SMA, MMCX, MCX, N, micro-coax */
+                feed?: string;
+                /** @description Highest unit price at `quantity`, in `currency` (parts without such an offer are left out) */
+                maxPrice?: string;
+                /** @description Longest acceptable lead time in days (an offer must meet it, and maxPrice, together) */
+                maxLeadTimeDays?: number;
+                /** @description Build quantity the price is taken at, from the price breaks (default 1) */
+                quantity?: number;
+                /** @description Currency of maxPrice, and the one preferred for the price shown (default USD) */
+                currency?: string;
             };
             header?: never;
             path: {
