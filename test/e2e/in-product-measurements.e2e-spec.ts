@@ -155,6 +155,20 @@ describe('in-product measurements (API)', () => {
     expect(await rowsOf(product.id)).toBe(0);
   });
 
+  it('refuses a file under the byte cap whose S-matrix would be too large to store (many ports × many points), and stores nothing', async () => {
+    const product = await createProduct();
+    // 8 ports × 20,000 points of zeros: about 5 MB of text, but 1,280,000 complex values (20 MB as doubles).
+    const ports = 8;
+    const points = 20_000;
+    const frequenciesHz = Float64Array.from({ length: points }, (_, i) => 1e9 + i * 1e4);
+    const data = Array.from({ length: ports * ports }, () => ({ re: new Float64Array(points), im: new Float64Array(points) }));
+    const text = writeTouchstone({ version: 1, ports, frequenciesHz, data, format: 'RI', frequencyUnit: 'Hz' });
+    expect(text.length).toBeLessThan(16 * 1024 * 1024);
+    const res = await upload(product.id, 'engineer', 'huge.s8p', text).expect(413);
+    expect(res.body).toMatchObject({ code: 'IN_PRODUCT_TOO_MANY_VALUES', field: 'file' });
+    expect(await rowsOf(product.id)).toBe(0);
+  }, 60_000);
+
   it('maps ports to radios and roles, naming the field of each bad entry', async () => {
     const product = await createProduct();
     const other = await createProduct();

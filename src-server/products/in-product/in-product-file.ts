@@ -8,6 +8,11 @@ import { type TouchstoneNetwork, portsFromFileName, readTouchstone } from '../..
 
 /** Same caps as a part's measurement: 16 MiB and 100,000 points. */
 export const IN_PRODUCT_MAX_BYTES = MEASUREMENT_MAX_BYTES;
+/**
+ * Most complex values (points × ports²) stored: 8 MB as doubles, inside a database's default 16 MiB packet.
+ * Short numbers let a file under the byte cap hold far more (16 MiB of "0 0" pairs is about 64 MB as doubles).
+ */
+export const IN_PRODUCT_MAX_VALUES = 500_000;
 
 export interface ParsedInProductFile {
   readonly network: TouchstoneNetwork;
@@ -44,6 +49,15 @@ export function parseInProductFile(file: UploadedFile): ParsedInProductFile {
     readTouchstone(file.buffer, { expectedPorts: portsFromFileName(file.originalname), maxPoints: MEASUREMENT_MAX_POINTS, maxBytes: IN_PRODUCT_MAX_BYTES }),
   );
   const n = network.frequenciesHz.length;
+  const values = n * network.ports * network.ports;
+  if (values > IN_PRODUCT_MAX_VALUES) {
+    throw new DomainError(
+      'IN_PRODUCT_TOO_MANY_VALUES',
+      `file: ${network.ports} ports × ${n} points are ${values} complex values; at most ${IN_PRODUCT_MAX_VALUES} are stored (fewer points or ports); nothing was stored`,
+      413,
+      { field: 'file', limitValues: IN_PRODUCT_MAX_VALUES },
+    );
+  }
   if (n < 2) throw new CurveFileError('MEASUREMENT_TOO_FEW_POINTS', `A measurement needs at least two points; the file has ${n}`, null);
   for (let i = 0; i < n; i++) {
     const line = network.pointLines[i];
