@@ -15,8 +15,7 @@ import { RulesService } from './rules.service';
 import { loadCoexistenceRule } from './coexistence-rule-file';
 import { type CoexistenceFinding, type IsolationLookup, NO_ISOLATION_DATA, checkCoexistence } from './engine/coexistence-check';
 import type { CellStatus } from './engine/types';
-
-const VERDICT_RANK: Record<CellStatus, number> = { pass: 0, marginal: 1, 'no-data': 2, fail: 3 };
+import { statusRank } from './engine/rule-binding';
 
 /** The product verdict with coexistence counted in: a fail or marginal finding can only make it worse; notes do not count. */
 function withCoexistence(verdict: CellStatus, coexistence: readonly CoexistenceFinding[]): { verdict: CellStatus; deciding: CoexistenceFinding | null } {
@@ -24,7 +23,7 @@ function withCoexistence(verdict: CellStatus, coexistence: readonly CoexistenceF
   let deciding: CoexistenceFinding | null = null;
   for (const finding of coexistence) {
     if (finding.severity === 'info') continue;
-    if (VERDICT_RANK[finding.severity] > VERDICT_RANK[worst]) {
+    if (statusRank(finding.severity) > statusRank(worst)) {
       worst = finding.severity;
       deciding = finding;
     }
