@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
 import {
   Button,
   ControlGroup,
@@ -21,7 +21,18 @@ import { useChoosePart } from '../api/choose-part';
 import { useShortlistPart } from '../api/shortlist-part';
 import type { CandidateFilters, Connector, FormFactor } from '../types';
 import { STATUS_LOOK } from './cell-status';
-import { FEED_WORDS, FORM_FACTOR_WORDS, NO_FILTERS, POLARIZATION_FIT_WORDS, candidateQuery, feedFitText, leadTimeText, priceText } from './candidate-words';
+import {
+  FEED_WORDS,
+  FORM_FACTOR_WORDS,
+  NO_FILTERS,
+  POLARIZATION_FIT_WORDS,
+  candidateQuery,
+  feedFitText,
+  filtersFromParams,
+  leadTimeText,
+  priceText,
+  withFilterParams,
+} from './candidate-words';
 
 export interface CandidatesDialogProps {
   productId: number;
@@ -34,7 +45,10 @@ const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 
 /** Approved parts for one radio, best first, with the figure that decides each one's place. */
 export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDialogProps) {
-  const [filters, setFilters] = useState<CandidateFilters>(NO_FILTERS);
+  // The filters live in the page address, so a reload, Back or a shared link shows the same list.
+  const [searchParams, setSearchParams] = useSearchParams();
+  const filters = filtersFromParams(searchParams);
+  const setFilters = (next: CandidateFilters) => setSearchParams((current) => withFilterParams(current, next), { replace: true });
   const candidates = useCandidates(productId, radioId, candidateQuery(filters, 30));
   const canAssign = useHasRole('engineer', 'admin');
   const shortlist = useShortlistPart();

@@ -9,6 +9,7 @@ import { useMatrix } from '../api/get-matrix';
 import type { Finding, Matrix, MatrixCell } from '../types';
 import { STATUS_LOOK, decidingFinding } from './cell-status';
 import { CandidatesDialog } from './CandidatesDialog';
+import { CANDIDATE_PARAMS, withoutCandidateParams } from './candidate-words';
 import { MatrixCellDrawer } from './MatrixCellDrawer';
 import { type RadioMatrix, matrixByRadio } from './matrix-layout';
 import './compatibility.css';
@@ -29,7 +30,16 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
   const matrix = useMatrix(productId, chosenOnly);
   const downloadCsv = useDownloadMatrixCsv();
   const [selected, setSelected] = useState<MatrixCell | null>(null);
-  const [candidatesFor, setCandidatesFor] = useState<number | null>(null);
+  // The radio whose candidates are open is in the address too (its filters are kept there by the dialog).
+  const candidatesParam = Number(searchParams.get(CANDIDATE_PARAMS.radio));
+  const candidatesFor = Number.isInteger(candidatesParam) && candidatesParam > 0 ? candidatesParam : null;
+  const setCandidatesFor = (radioId: number | null) =>
+    setSearchParams((current) => {
+      if (radioId === null) return withoutCandidateParams(current);
+      const next = new URLSearchParams(current);
+      next.set(CANDIDATE_PARAMS.radio, String(radioId));
+      return next;
+    });
   const m = matrix.data;
   const radios = useMemo(() => (m ? matrixByRadio(m) : []), [m]);
 
