@@ -13,7 +13,7 @@ import { EvaluationInputsService } from './evaluation-inputs.service';
 import { findingView, ruleTitlesOf } from './finding-view';
 import { RulesService } from './rules.service';
 import { loadCoexistenceRule } from './coexistence-rule-file';
-import { type CoexistenceFinding, type IsolationLookup, NO_ISOLATION_DATA, checkCoexistence } from './engine/coexistence-check';
+import { type CoexistenceFinding, type IsolationLookup, checkCoexistence } from './engine/coexistence-check';
 import type { CellStatus } from './engine/types';
 import { statusRank } from './engine/rule-binding';
 
@@ -94,12 +94,9 @@ export class EvaluationService {
     private readonly inProduct: InProductMeasurementsService,
   ) {}
 
-  /**
-   * In-product antenna isolation between two radios of the product, dB, where it is measured. None is stored yet:
-   * the in-product measurements fill this in, and every coexistence finding then shows its margin.
-   */
-  async isolationLookup(_productId: number): Promise<IsolationLookup> {
-    return NO_ISOLATION_DATA;
+  /** In-product antenna isolation between two radios of the product, dB, where it is measured; unknown elsewhere. */
+  async isolationLookup(productId: number): Promise<IsolationLookup> {
+    return this.inProduct.radioIsolation(productId);
   }
 
   /** The coexistence findings of a product (harmonics, intermodulation and transmit edges on other radios' receive ranges), with its names. */

@@ -141,6 +141,38 @@ describe('coexistence (API)', () => {
       expect(hit.requiredIsolationDb).toBeCloseTo(75, 6);
     });
 
+    it('the gateway: the LoRa → LTE isolation of that finding is read from the in-product file, least over both LTE antennas', async () => {
+      const hit = (await coexistenceOf(GATEWAY)).find(
+        (f) => f.mechanism === 'harmonic' && f.order === 2 && f.aggressor.designation === 'US902-928' && f.victim.designation === 'B3',
+      )!;
+      // Read the stored original by hand (Touchstone 1.1 §2: a 4-port record is frequency + 4 rows of 4 RI pairs, row-major).
+      const [file] = (await http().get(`/api/products/${GATEWAY}/in-product-measurements`).set(as('engineer')).expect(200)).body;
+      const text = (await http().get(`/api/products/${GATEWAY}/in-product-measurements/${file.id}/file`).set(as('engineer')).buffer(true).expect(200)).text;
+      const numbers = text
+        .split('\n')
+        .filter((line) => !line.startsWith('!') && !line.startsWith('#'))
+        .flatMap((line) => line.trim().split(/\s+/).filter(Boolean).map(Number));
+      const records = new Map<number, number[]>();
+      for (let i = 0; i + 33 <= numbers.length; i += 33) records.set(numbers[i], numbers.slice(i + 1, i + 33));
+      expect(text).toContain('# MHz S RI R 50');
+      // Isolation −20·log10|S_va| from LoRa (port 4) into LTE main (port 1) and diversity (port 2), linear between 1830 and 1840 MHz.
+      const isolationAt = (mhz: number, victimPort: number) => {
+        const record = records.get(mhz)!;
+        const at = ((victimPort - 1) * 4 + (4 - 1)) * 2;
+        return -20 * Math.log10(Math.hypot(record[at], record[at + 1]));
+      };
+      const centreMhz = (Math.max(hit.fromMhz, hit.victimFromMhz) + Math.min(hit.toMhz, hit.victimToMhz)) / 2;
+      expect(centreMhz).toBeCloseTo(1830.5, 9);
+      const t = (centreMhz - 1830) / 10;
+      const byPort = [1, 2].map((port) => isolationAt(1830, port) + t * (isolationAt(1840, port) - isolationAt(1830, port)));
+      expect(hit.isolationDb).not.toBeNull();
+      expect(hit.isolationDb!).toBeCloseTo(Math.min(...byPort), 6);
+      expect(hit.isolationMarginDb!).toBeCloseTo(hit.isolationDb! - hit.requiredIsolationDb, 5);
+      // The demo housing gives far less than the 75 dB the harmonic needs: short of isolation is a fail.
+      expect(hit.isolationMarginDb!).toBeLessThan(0);
+      expect(hit.severity).toBe('fail');
+    });
+
     it('a harmonic inside, at and just outside the 10 MHz guard of a receive range', async () => {
       // Aggressor 100–110 MHz: 2nd harmonic 200–220 MHz.
       const aggressorBand = await band('ism', 'transmit-receive', 100, 110);

@@ -1,4 +1,4 @@
-import { type FrequencyRange, bandStatistics } from '../../rf/curves';
+import { type FrequencyRange, bandStatistics, interpolateAt } from '../../rf/curves';
 import { envelopeCorrelationCurve, isolationCurve } from '../../rf/multiport';
 import type { TouchstoneNetwork } from '../../rf/touchstone';
 import type { AntennaRole } from './antenna-roles';
@@ -110,4 +110,37 @@ export function isolationMatrix(
     }
   }
   return result;
+}
+
+/** Isolation in dB between an aggressor radio and a victim radio at a frequency; null where it was not measured. */
+export type RadioIsolation = (aggressorRadioId: number, victimRadioId: number, atHz: number) => number | null;
+
+/**
+ * The measured isolation from any antenna of the aggressor radio to any antenna of the victim radio at a frequency:
+ * the least over every such pair in one measurement (the weakest path sets the interference), interpolated between
+ * sweep points; null outside every sweep or where the two radios share no measurement, never assumed.
+ */
+export function radioIsolationLookup(assemblies: readonly MeasuredAssembly[], antennas: readonly MappedAntenna[]): RadioIsolation {
+  const curves = new Map<string, { frequenciesHz: Float64Array; values: Float64Array }[]>();
+  for (const { measurementId, network } of assemblies) {
+    const mapped = antennas.filter((a) => a.measurementId === measurementId);
+    for (const aggressor of mapped) {
+      for (const victim of mapped) {
+        if (aggressor.radioId === victim.radioId) continue;
+        const key = `${aggressor.radioId}>${victim.radioId}`;
+        const list = curves.get(key) ?? [];
+        list.push({ frequenciesHz: network.frequenciesHz, values: isolationCurve(network, aggressor.port, victim.port) });
+        curves.set(key, list);
+      }
+    }
+  }
+  return (aggressorRadioId, victimRadioId, atHz) => {
+    let least: number | null = null;
+    for (const curve of curves.get(`${aggressorRadioId}>${victimRadioId}`) ?? []) {
+      const value = interpolateAt(curve, atHz);
+      if (value === undefined || !Number.isFinite(value)) continue;
+      least = least === null ? value : Math.min(least, value);
+    }
+    return least;
+  };
 }

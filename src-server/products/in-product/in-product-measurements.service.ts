@@ -19,7 +19,14 @@ import type { InProductMeasurementDto, ProductIsolationDto, UploadInProductMeasu
 import { parseInProductFile } from './in-product-file';
 import { networkFromStored, packSMatrix } from './in-product-network';
 import { checkPortAssignments } from './port-assignments';
-import { type BandOfRadio, type MappedAntenna, type MeasuredAssembly, isolationMatrix } from './in-product-isolation';
+import {
+  type BandOfRadio,
+  type MappedAntenna,
+  type MeasuredAssembly,
+  type RadioIsolation,
+  isolationMatrix,
+  radioIsolationLookup,
+} from './in-product-isolation';
 
 const MHZ = 1e6;
 
@@ -213,8 +220,7 @@ export class InProductMeasurementsService {
 
   async isolation(productId: number): Promise<ProductIsolationDto> {
     const product = await this.products.getWithRadios(productId);
-    const assemblies = await this.mappedAssemblies(productId);
-    const radioName = new Map(product.radios.map((r) => [r.id, r.name]));
+    const { measured, antennas } = await this.mappedAntennas(productId, new Map(product.radios.map((r) => [r.id, r.name])));
     const bandsOfRadio = new Map<number, BandOfRadio[]>(
       product.radios.map((r) => [
         r.id,
@@ -225,13 +231,26 @@ export class InProductMeasurementsService {
         })),
       ]),
     );
+    return isolationMatrix(measured, antennas, bandsOfRadio);
+  }
+
+  /** Measured isolation between two radios of the product at a frequency, for the coexistence check. */
+  async radioIsolation(productId: number): Promise<RadioIsolation> {
+    const { measured, antennas } = await this.mappedAntennas(productId, new Map());
+    return radioIsolationLookup(measured, antennas);
+  }
+
+  private async mappedAntennas(
+    productId: number,
+    radioName: ReadonlyMap<number, string>,
+  ): Promise<{ measured: MeasuredAssembly[]; antennas: MappedAntenna[] }> {
+    const assemblies = await this.mappedAssemblies(productId);
     const antennas: MappedAntenna[] = assemblies.flatMap(({ row }) =>
       [...row.portMapping]
         .sort((a, b) => a.port - b.port)
         .map((p) => ({ measurementId: row.id, port: p.port, radioId: p.radioId, radioName: radioName.get(p.radioId) ?? '', role: p.role })),
     );
-    const measured: MeasuredAssembly[] = assemblies.map(({ row, network }) => ({ measurementId: row.id, network }));
-    return isolationMatrix(measured, antennas, bandsOfRadio);
+    return { measured: assemblies.map(({ row, network }) => ({ measurementId: row.id, network })), antennas };
   }
 
   private async lockProduct(manager: EntityManager, productId: number): Promise<Product> {
