@@ -132,6 +132,7 @@ export class EvaluationService {
     const requirements = await this.inputs.requirements(product);
     // An antenna's S11 measured in the product replaces its evaluation-board S11; such parts skip the facts cache.
     const measured = await this.inProduct.measuredReflections(productId);
+    const correlation = await this.inProduct.correlationFindings(productId);
     const usedInProduct = new Map<PartEvaluationData, MeasuredReflection>();
     // Each chosen part is its own object so that its antenna role can be told apart (a part can serve two roles).
     const roleOf = new Map<PartEvaluationData, AntennaRole>();
@@ -149,6 +150,7 @@ export class EvaluationService {
         radioName: radio.name,
         requirements: requirements.filter((r) => r.radioId === radio.id),
         chosen: chosen.filter((a) => a.radioId === radio.id).map(dataFor),
+        systemFindings: correlation.get(radio.id),
       })),
       ruleSet.compiled,
       { cache: this.inputs.factsAt(revision), partKey: (part) => (usedInProduct.has(part) ? null : this.inputs.partKey(part)) },

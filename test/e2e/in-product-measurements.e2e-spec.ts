@@ -336,6 +336,93 @@ describe('in-product measurements (API)', () => {
     expect(again.radios[0].bands[0].facts.worstVswr).toBe(before.radios[0].bands[0].facts.worstVswr);
   });
 
+  it('two antennas of one radio correlated above the rule limit: a finding on the band that counts into the verdict (rules/system/envelope-correlation.json)', async () => {
+    const product = await createProduct();
+    const radio = (
+      await http()
+        .post(`/api/products/${product.id}/radios`)
+        .set(as('engineer'))
+        .send({
+          name: 'Cellular',
+          technology: 'lte',
+          module: 'Test modem (invented)',
+          transmitPowerDbm: 23,
+          polarization: 'linear',
+          connector: 'solder-pad',
+          feedLossDb: 0,
+          antennaRoles: ['main', 'diversity'],
+          bands: [{ bandId: 120, certifiedMaxGainDbi: 5 }],
+        })
+        .expect(201)
+    ).body;
+    for (const [partId, role] of [
+      [1002, 'main'],
+      [1004, 'diversity'],
+    ] as const)
+      await http().put(`/api/products/${product.id}/radios/${radio.id}/choice`).set(as('engineer')).send({ partId, role }).expect(200);
+    const mapBoth = (id: number) =>
+      http()
+        .put(`${base(product.id)}/${id}/ports`)
+        .set(as('engineer'))
+        .send([
+          { port: 1, radioId: radio.id, role: 'main' },
+          { port: 2, radioId: radio.id, role: 'diversity' },
+        ])
+        .expect(200);
+    const correlationFindings = async () =>
+      (await http().get(`/api/products/${product.id}/evaluation`).set(as('procurement')).expect(200)).body.radios[0].bands[0].findings.filter(
+        (f: { code: string }) => f.code === 'ENVELOPE_CORRELATION_HIGH',
+      );
+
+    // Nearly uncoupled: ρe = |0.2·0.01 + 0.01·0.2|² / (1 − 0.04 − 0.0001)² ≈ 1.7e-5 (Blanch, Romeu and Corbella 2003), under 0.5.
+    const loose = (
+      await upload(
+        product.id,
+        'engineer',
+        'loose.s2p',
+        constantNetwork(
+          [
+            [0.2, 0.01],
+            [0.01, 0.2],
+          ],
+          sweepMhz,
+        ),
+      ).expect(201)
+    ).body;
+    await mapBoth(loose.id);
+    expect(await correlationFindings()).toEqual([]);
+    await http()
+      .delete(`${base(product.id)}/${loose.id}`)
+      .set(as('engineer'))
+      .expect(204);
+
+    // S11 = S12 = S21 = S22 = 0.5: |0.25 + 0.25|² / (1 − 0.25 − 0.25)² = 1, fully correlated (constructed from the formula).
+    const tight = (
+      await upload(
+        product.id,
+        'engineer',
+        'tight.s2p',
+        constantNetwork(
+          [
+            [0.5, 0.5],
+            [0.5, 0.5],
+          ],
+          sweepMhz,
+        ),
+      ).expect(201)
+    ).body;
+    await mapBoth(tight.id);
+    const isolation = (await http().get(`/api/products/${product.id}/isolation`).set(as('procurement')).expect(200)).body;
+    expect(isolation.correlation[0]).toMatchObject({ band: 'B20', threshold: 0.5, aboveThreshold: true });
+    expect(isolation.correlation[0].worstEcc).toBeCloseTo(1, 9);
+    const [finding] = await correlationFindings();
+    expect(finding).toMatchObject({ severity: 'marginal', ruleId: 'envelope-correlation' });
+    expect(finding.message).toContain('1.00');
+    const result = (await http().get(`/api/products/${product.id}/evaluation`).set(as('procurement')).expect(200)).body;
+    expect(['marginal', 'fail']).toContain(result.radios[0].bands[0].verdict);
+    expect(['marginal', 'fail']).toContain(result.verdict);
+  });
+
   it('a radio with main and diversity antennas: one part chosen per role, each listed with its role in the evaluation', async () => {
     const product = await createProduct();
     const body = {

@@ -31,6 +31,7 @@ export const FINDING_TITLES: Readonly<Record<string, string>> = {
   MARKET_WITHOUT_BANDS: 'Market without a band',
   DETUNING_MARGIN_LOW: 'Little detuning margin',
   S11_MEASURED_IN_PRODUCT: 'S11 measured in the product',
+  ENVELOPE_CORRELATION_HIGH: 'Antennas too correlated',
 };
 
 /** Within one severity, which finding names the reason first: the band's match before what follows from it. */

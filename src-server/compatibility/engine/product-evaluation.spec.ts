@@ -69,4 +69,23 @@ describe(evaluateProduct.name, () => {
       decidingFinding: { code: 'BAND_NOT_COVERED_NO_DATA' },
     });
   });
+
+  it("counts a band's system finding (two antennas too correlated) into its status only when it is worse; a note never does", () => {
+    const correlated = { ruleId: 'envelope-correlation', severity: 'marginal' as const, code: 'ENVELOPE_CORRELATION_HIGH', message: 'ρe 0.8 in B12' };
+    const note = { ruleId: 'evaluation', severity: 'info' as const, code: 'S11_MEASURED_IN_PRODUCT', message: 'measured in product' };
+    const withSystem = (chosen: RadioToEvaluate['chosen'], findings: RadioToEvaluate['systemFindings']) =>
+      evaluateProduct([{ ...radio(1, chosen), systemFindings: findings }], RULES);
+    const marginal = withSystem([good], new Map([[12, [correlated]]]));
+    expect(marginal.radios[0].bands[0]).toMatchObject({ status: 'marginal', decidingFinding: { code: 'ENVELOPE_CORRELATION_HIGH' } });
+    expect(marginal.radios[0].bands[0].findings.map((f) => f.code)).toContain('ENVELOPE_CORRELATION_HIGH');
+    expect(marginal.radios[0].bands[1].status).toBe('pass');
+    expect(marginal.radios[0]).toMatchObject({ status: 'marginal', decidingBandId: 12, decidingFinding: { code: 'ENVELOPE_CORRELATION_HIGH' } });
+    expect(marginal.status).toBe('marginal');
+    // A fail of the part itself stays the reason.
+    expect(withSystem([poor], new Map([[12, [correlated]]])).radios[0].bands[0]).toMatchObject({
+      status: 'fail',
+      decidingFinding: { code: 'EFFICIENCY_BELOW_FLOOR' },
+    });
+    expect(withSystem([good], new Map([[12, [note]]])).radios[0].bands[0].status).toBe('pass');
+  });
 });

@@ -1,7 +1,7 @@
 import type { CompiledRuleSet } from './compiled-evaluator';
 import { decidedCell, firedMargins, pairFacts, prepare, type EvaluationOptions } from './matrix';
 import { decidingCellOf } from './deciding';
-import { worseStatus } from './rule-binding';
+import { statusRank, worseStatus } from './rule-binding';
 import type { CellStatus, Facts, Finding, PartEvaluationData, RadioBandRequirement } from './types';
 
 /** Findings the evaluation itself writes (not a rule's): they carry this rule id. */
@@ -14,6 +14,8 @@ export interface RadioToEvaluate {
   readonly requirements: readonly RadioBandRequirement[];
   /** The part(s) chosen for the radio; empty when none is. */
   readonly chosen: readonly PartEvaluationData[];
+  /** Findings about the radio's antennas together in one band (e.g. their correlation), by band id; they count into the band's status. */
+  readonly systemFindings?: ReadonlyMap<number, readonly Finding[]>;
 }
 
 export interface BandEvaluation {
@@ -96,13 +98,24 @@ function evaluateRadio(radio: RadioToEvaluate, rules: CompiledRuleSet, options: 
       return decidedCell(verdict.status, verdict.findings, margins, { part, facts, findings: verdict.findings });
     });
     const worst = decidingCellOf(cells)!;
+    const system = radio.systemFindings?.get(row.requirement.bandId) ?? [];
+    // A system finding worse than every cell's decides the band; otherwise the cells do.
+    let status = worst.status;
+    let worseSystem: Finding | null = null;
+    for (const finding of system) {
+      if (finding.severity !== 'info' && statusRank(finding.severity) > statusRank(status)) {
+        status = finding.severity;
+        worseSystem = finding;
+      }
+    }
+    const deciding = worseSystem ?? worst.deciding;
     return {
-      cell: worst,
+      cell: worseSystem ? { ...worst, status, deciding, overByDb: null } : worst,
       band: {
         requirement: row.requirement,
-        status: worst.status,
-        decidingFinding: worst.deciding,
-        findings: worst.item.findings,
+        status,
+        decidingFinding: deciding,
+        findings: [...worst.item.findings, ...system],
         facts: worst.item.facts,
         partId: worst.item.part.partId,
       } satisfies BandEvaluation,

@@ -7,9 +7,6 @@ import type { AntennaRole } from './antenna-roles';
 export const CORRELATION_ASSUMPTION =
   'Envelope correlation from S-parameters (Blanch, Romeu and Corbella, 2003) assumes lossless antennas in a uniform multipath environment; real antennas have losses, so treat it as an estimate and confirm with radiation-pattern measurements in a chamber.';
 
-/** ECC above this is commonly judged too correlated for mobile MIMO and diversity (common practice). */
-export const DEFAULT_ECC_THRESHOLD = 0.5;
-
 export interface BandOfRadio {
   readonly id: number;
   readonly designation: string;
@@ -67,7 +64,7 @@ export function isolationMatrix(
   assemblies: readonly MeasuredAssembly[],
   antennas: readonly MappedAntenna[],
   bandsOfRadio: ReadonlyMap<number, readonly BandOfRadio[]>,
-  eccThreshold: number = DEFAULT_ECC_THRESHOLD,
+  eccThreshold: number,
 ): IsolationMatrix {
   const result: IsolationMatrix = { antennas: [...antennas], isolation: [], correlation: [], correlationAssumption: CORRELATION_ASSUMPTION };
   for (const assembly of assemblies) {

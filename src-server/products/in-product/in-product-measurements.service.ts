@@ -19,6 +19,8 @@ import type { InProductMeasurementDto, ProductIsolationDto, UploadInProductMeasu
 import { parseInProductFile } from './in-product-file';
 import { networkFromStored, packSMatrix } from './in-product-network';
 import { checkPortAssignments } from './port-assignments';
+import { loadEnvelopeCorrelationRule } from './envelope-correlation-rule';
+import type { Finding } from '../../compatibility/engine/types';
 import {
   type BandOfRadio,
   type MappedAntenna,
@@ -231,7 +233,34 @@ export class InProductMeasurementsService {
         })),
       ]),
     );
-    return isolationMatrix(measured, antennas, bandsOfRadio);
+    return isolationMatrix(measured, antennas, bandsOfRadio, loadEnvelopeCorrelationRule().parameters.maxEnvelopeCorrelation);
+  }
+
+  /**
+   * The correlation rule's findings, by radio and band: each band where two antennas of one radio correlate above the
+   * rule's limit (rules/system/envelope-correlation.json), with the figure and its assumption.
+   */
+  async correlationFindings(productId: number): Promise<Map<number, Map<number, Finding[]>>> {
+    const rule = loadEnvelopeCorrelationRule();
+    const matrix = await this.isolation(productId);
+    const out = new Map<number, Map<number, Finding[]>>();
+    for (const row of matrix.correlation) {
+      if (!row.aboveThreshold || row.worstEcc === null) continue;
+      const [a, b] = [matrix.antennas[row.a], matrix.antennas[row.b]];
+      const byBand = out.get(row.radioId) ?? new Map<number, Finding[]>();
+      const list = byBand.get(row.bandId) ?? [];
+      list.push({
+        ruleId: rule.id,
+        severity: rule.severity,
+        code: 'ENVELOPE_CORRELATION_HIGH',
+        message:
+          `envelope correlation between ${row.radioName} ${a.role} (port ${a.port}) and ${b.role} (port ${b.port}) reaches ${row.worstEcc.toFixed(2)} in ${row.band}, ` +
+          `above ${rule.parameters.maxEnvelopeCorrelation} (from S-parameters, assuming lossless antennas in uniform multipath)`,
+      });
+      byBand.set(row.bandId, list);
+      out.set(row.radioId, byBand);
+    }
+    return out;
   }
 
   /** Measured isolation between two radios of the product at a frequency, for the coexistence check. */
