@@ -94,4 +94,60 @@ describe('product report PDF', () => {
   it('spells out the signs the shipped Latin font lacks', () => {
     expect(printable('VSWR ≤ 2, |Γ| ≈ 0.33, below λ/4')).toBe('VSWR <= 2, |Gamma| ~ 0.33, below lambda/4');
   });
+
+  it('prints each coexistence finding with its numbers, the isolation needed and measured (or unknown), and the assumptions', async () => {
+    const report = input();
+    report.evaluation.radios.push({ radioId: 3, name: 'Satellite receiver', technology: 'gnss', verdict: 'marginal', chosen: [], bands: [] });
+    report.evaluation.coexistence = [
+      {
+        aggressor: { radioId: 1, designation: 'B13' },
+        victim: { radioId: 3, designation: 'GPS L1' },
+        mechanism: 'harmonic',
+        order: 2,
+        fromMhz: 1554,
+        toMhz: 1574,
+        overlapMhz: 8.81,
+        distanceMhz: 0,
+        severity: 'marginal',
+        requiredIsolationDb: 97.99,
+        isolationDb: null,
+      },
+      {
+        aggressor: { radioId: 1, designation: 'B3' },
+        victim: { radioId: 3, designation: 'GPS L1' },
+        mechanism: 'intermodulation',
+        order: 3,
+        fromMhz: 1500,
+        toMhz: 1560,
+        overlapMhz: 0,
+        distanceMhz: 5.19,
+        severity: 'fail',
+        requiredIsolationDb: 60,
+        isolationDb: 42.25,
+      },
+    ];
+    report.coexistenceAssumptions = 'thermal noise -174 dBm/Hz, I/N -6 dB';
+    report.evaluation.radios[0].bands[0].facts = { ...facts, detuningMarginDownPct: 3.14, detuningMarginUpPct: 1.5 };
+    const text = pdfText(await renderProductReport(report)).replace(/\s+/g, ' ');
+    expect(text).toContain('Radios disturbing each other');
+    // Cells wrap inside their columns, so each figure is looked for on its own.
+    for (const piece of [
+      'Cellular modem, B13',
+      '2nd-order',
+      '1554–1574',
+      'Satellite receiver,',
+      '8.81 98.0 unknown Marginal',
+      '3rd-order',
+      '1500–1560',
+      '5.19 gap 60.0 42.3 Fail',
+    ])
+      expect(text).toContain(piece);
+    expect(text).toContain('thermal noise -174 dBm/Hz');
+    expect(text).toContain('−3.1 / +1.5');
+  });
+
+  it('says so when no radio disturbs another', async () => {
+    const text = pdfText(await renderProductReport({ ...input(), evaluation: { ...input().evaluation, coexistence: [] } }));
+    expect(text).toContain('No transmitter of this product lands on or near');
+  });
 });

@@ -20,6 +20,24 @@ export interface ReportBandFacts {
   minSystemEfficiencyPct: number | null;
   peakGainDbi: number | null;
   eirpDbm: number | null;
+  detuningMarginDownPct?: number | null;
+  detuningMarginUpPct?: number | null;
+}
+
+/** One radio's transmitter landing on or near another radio's receiver, as the evaluation gives it. */
+export interface ReportCoexistence {
+  aggressor: { radioId: number; designation: string };
+  secondAggressor?: { radioId: number; designation: string } | null;
+  victim: { radioId: number; designation: string };
+  mechanism: 'harmonic' | 'intermodulation' | 'adjacent';
+  order: number;
+  fromMhz: number;
+  toMhz: number;
+  overlapMhz: number;
+  distanceMhz: number;
+  severity: string;
+  requiredIsolationDb: number;
+  isolationDb: number | null;
 }
 
 /** The product evaluation as GET /api/products/:id/evaluation returns it (the fields the report prints). */
@@ -32,10 +50,11 @@ export interface ReportEvaluation {
     verdict: ReportVerdict;
     /** The radio's deciding reason in words, as the evaluation gives it. */
     reason?: string;
-    chosen: Array<{ partId: number; mpn: string; manufacturer?: string | null; title?: string | null }>;
+    chosen: Array<{ partId: number; mpn: string; manufacturer?: string | null; title?: string | null; role?: string; s11Source?: string }>;
     bands: Array<{ bandId: number; designation: string; verdict: ReportVerdict; decidingFinding: ReportFinding | null; facts: ReportBandFacts }>;
   }>;
   findings: Array<Partial<ReportFinding> & { message: string; radioId?: number | null }>;
+  coexistence?: ReportCoexistence[];
 }
 
 export interface ProductReportInput {
@@ -44,6 +63,8 @@ export interface ProductReportInput {
   product: { id: number; name: string; code: string; version: number; targetRegions: string[]; groundPlaneMm: { length: number; width: number } };
   evaluation: ReportEvaluation;
   rules: Array<{ id: string; name: string; version: number; severity: string }>;
+  /** How the required isolation of a coexistence finding is worked out, printed beside the figures. */
+  coexistenceAssumptions?: string;
   cautions: string[];
 }
 
@@ -155,12 +176,12 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
       .stroke();
   };
 
-  const table = (columns: Column[], rows: string[][], colourOf?: (row: number, column: number) => string | undefined) => {
+  const table = (columns: Column[], rows: string[][], colourOf?: (row: number, column: number) => string | undefined, fontSize = 8.5) => {
     const scale = contentWidth / columns.reduce((sum, c) => sum + c.width, 0);
     const widths = columns.map((c) => c.width * scale);
     const pad = 3;
     const rowHeight = (cells: string[], font: string) => {
-      doc.font(font).fontSize(8.5);
+      doc.font(font).fontSize(fontSize);
       return Math.max(...cells.map((cell, i) => doc.heightOfString(printable(cell), { width: widths[i] - 2 * pad }))) + 2 * pad;
     };
     const drawRow = (cells: string[], font: string, fill?: string, rowIndex?: number) => {
@@ -172,7 +193,7 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
         const colour = rowIndex === undefined ? undefined : colourOf?.(rowIndex, i);
         doc
           .font(colour ? 'bold' : font)
-          .fontSize(8.5)
+          .fontSize(fontSize)
           .fillColor(colour ?? 'black')
           .text(printable(cell), x + pad, top + pad, { width: widths[i] - 2 * pad, align: columns[i].align ?? 'left' });
         x += widths[i];
@@ -245,7 +266,19 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
     heading(`${radio.name} (${technologyWords(radio.technology)}): ${VERDICT_WORDS[radio.verdict]}`, 12);
     text(
       radio.chosen.length > 0
-        ? `Chosen: ${radio.chosen.map((c) => [c.manufacturer, c.mpn, c.title ? `(${c.title})` : ''].filter(Boolean).join(' ')).join('; ')}`
+        ? `Chosen: ${radio.chosen
+            .map((c) =>
+              [
+                c.role && radio.chosen.length > 1 ? `${ROLE_WORDS[c.role] ?? c.role}:` : '',
+                c.manufacturer,
+                c.mpn,
+                c.title ? `(${c.title})` : '',
+                s11Note(c.s11Source),
+              ]
+                .filter(Boolean)
+                .join(' '),
+            )
+            .join('; ')}`
         : 'No antenna is chosen for this radio, so none of its bands could be checked.',
       { width: contentWidth },
     );
@@ -256,15 +289,16 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
     }
     table(
       [
-        { header: 'Band', width: 10 },
-        { header: 'Verdict', width: 11 },
-        { header: 'Reason', width: 23 },
-        { header: 'Covered (%)', width: 9, align: 'right' },
-        { header: 'Worst VSWR', width: 8, align: 'right' },
-        { header: 'Lowest total efficiency (%)', width: 11, align: 'right' },
-        { header: 'Lowest at radio port (%)', width: 11, align: 'right' },
-        { header: 'Peak gain (dBi)', width: 9, align: 'right' },
+        { header: 'Band', width: 8 },
+        { header: 'Verdict', width: 9 },
+        { header: 'Reason', width: 21 },
+        { header: 'Covered (%)', width: 8, align: 'right' },
+        { header: 'Worst VSWR', width: 7, align: 'right' },
+        { header: 'Lowest total efficiency (%)', width: 10, align: 'right' },
+        { header: 'Lowest at radio port (%)', width: 9, align: 'right' },
+        { header: 'Peak gain (dBi)', width: 7, align: 'right' },
         { header: 'EIRP (dBm)', width: 8, align: 'right' },
+        { header: 'Detuning margin (%)', width: 13, align: 'right' },
       ],
       radio.bands.map((band) => [
         band.designation,
@@ -276,8 +310,10 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
         fixed(band.facts.minSystemEfficiencyPct, 1),
         fixed(band.facts.peakGainDbi, 1),
         fixed(band.facts.eirpDbm, 1),
+        detuning(band.facts),
       ]),
       (row, column) => (column === 1 ? VERDICT_COLOURS[radio.bands[row].verdict] : undefined),
+      7.5, // ten columns: a smaller type keeps each header word whole
     );
   }
 
@@ -287,11 +323,52 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
     table(
       [
         { header: 'Finding', width: 25 },
-        { header: 'Severity', width: 10 },
-        { header: 'Details', width: 65 },
+        { header: 'Severity', width: 12 },
+        { header: 'Details', width: 63 },
       ],
       productFindings.map((f) => [f.title ?? f.code ?? '', severityWords(f.severity), f.message]),
     );
+  }
+
+  const coexistence = evaluation.coexistence ?? [];
+  heading('Radios disturbing each other');
+  if (coexistence.length === 0) {
+    text("No transmitter of this product lands on or near another radio's receive band (harmonics, intermodulation and band edges checked).", {
+      width: contentWidth,
+    });
+  } else {
+    const radioName = (id: number) => evaluation.radios.find((r) => r.radioId === id)?.name ?? `radio ${id}`;
+    const end = (e: { radioId: number; designation: string }) => `${radioName(e.radioId)}, ${e.designation}`;
+    table(
+      [
+        { header: 'From (transmitter)', width: 18 },
+        { header: 'Mechanism', width: 15 },
+        { header: 'Range (MHz)', width: 12, align: 'right' },
+        { header: 'Onto (receiver)', width: 17 },
+        { header: 'Overlap or gap (MHz)', width: 10, align: 'right' },
+        { header: 'Isolation needed (dB)', width: 9, align: 'right' },
+        { header: 'Isolation measured (dB)', width: 10, align: 'right' },
+        { header: 'Severity', width: 9 },
+      ],
+      coexistence.map((c) => [
+        c.secondAggressor ? `${end(c.aggressor)} with ${end(c.secondAggressor)}` : end(c.aggressor),
+        mechanismWords(c),
+        `${trimmed(c.fromMhz)}–${trimmed(c.toMhz)}`,
+        end(c.victim),
+        c.overlapMhz > 0 ? `${trimmed(c.overlapMhz)} overlap` : `${trimmed(c.distanceMhz)} gap`,
+        fixed(c.requiredIsolationDb, 1),
+        c.isolationDb === null ? 'unknown' : fixed(c.isolationDb, 1),
+        severityWords(c.severity),
+      ]),
+      (row, column) => (column === 7 ? VERDICT_COLOURS[coexistence[row].severity as ReportVerdict] : undefined),
+      7.5,
+    );
+  }
+  if (input.coexistenceAssumptions) {
+    doc.moveDown(0.3);
+    doc.fontSize(8).fillColor('#444444');
+    text(`How the isolation needed is worked out: ${input.coexistenceAssumptions}`, { width: contentWidth });
+    doc.fontSize(9.5).fillColor('black');
   }
 
   heading('Rules applied');
@@ -366,6 +443,22 @@ export function renderProductReport(input: ProductReportInput): Promise<Buffer> 
   }
   doc.end();
   return done;
+}
+
+const ROLE_WORDS: Record<string, string> = { main: 'Main', diversity: 'Diversity', 'mimo-2': 'MIMO 2', 'mimo-3': 'MIMO 3', 'mimo-4': 'MIMO 4' };
+const s11Note = (source: string | undefined) => (source && source !== 'evaluation board' ? `[S11 ${source}]` : '');
+const trimmed = (mhz: number) => String(Math.round(mhz * 1000) / 1000);
+const ORDINALS = ['', '1st', '2nd', '3rd', '4th', '5th', '6th', '7th', '8th', '9th', '10th'];
+function mechanismWords(c: ReportCoexistence): string {
+  if (c.mechanism === 'adjacent') return 'Transmit band edge';
+  return `${ORDINALS[c.order] ?? `${c.order}th`}-order ${c.mechanism === 'harmonic' ? 'harmonic' : 'intermodulation'}`;
+}
+/** "−3.1 / +2.4": how far the S11 may shift down and up before the band fails its VSWR limit. */
+function detuning(facts: ReportBandFacts): string {
+  const down = facts.detuningMarginDownPct;
+  const up = facts.detuningMarginUpPct;
+  if ((down === null || down === undefined) && (up === null || up === undefined)) return '–';
+  return `−${fixed(down, 1)} / +${fixed(up, 1)}`;
 }
 
 /** The radio's deciding reason in words: its worst band's finding, or why nothing could be checked. */

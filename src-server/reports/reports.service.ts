@@ -5,6 +5,8 @@ import { MATRIX_CSV_CAUTION } from '../compatibility/matrix-csv';
 import { RulesService } from '../compatibility/rules.service';
 import { ProductsService } from '../products/products.service';
 import { renderProductReport } from './product-report';
+import { loadCoexistenceRule } from '../compatibility/coexistence-rule-file';
+import { loadEnvelopeCorrelationRule } from '../products/in-product/envelope-correlation-rule';
 
 /** The cautions every report carries, beside the screening caution that travels with every figure. */
 const REPORT_CAUTIONS = [
@@ -50,7 +52,16 @@ export class ReportsService {
         groundPlaneMm: { length: product.groundPlaneLengthMm, width: product.groundPlaneWidthMm },
       },
       evaluation,
-      rules: rules.filter((rule) => rule.enabled).map((rule) => ({ id: rule.id, name: rule.title, version: rule.version, severity: rule.severity })),
+      rules: [
+        ...rules.filter((rule) => rule.enabled).map((rule) => ({ id: rule.id, name: rule.title, version: rule.version, severity: rule.severity })),
+        ...[loadCoexistenceRule(), loadEnvelopeCorrelationRule()].map((rule) => ({
+          id: rule.id,
+          name: rule.title,
+          version: rule.version,
+          severity: 'by outcome',
+        })),
+      ],
+      coexistenceAssumptions: `${loadCoexistenceRule().description} Sources: ${loadCoexistenceRule().source}`,
       cautions: REPORT_CAUTIONS,
     });
     return { body, fileName: reportFileName(product.code, generatedAt), contentType: 'application/pdf' };

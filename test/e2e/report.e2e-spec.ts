@@ -60,6 +60,11 @@ describe('product report PDF (API)', () => {
     expect(text).toContain('accredited');
     expect(text).toContain('RF exposure');
     expect(text).toContain('Reviewed by (RF)');
+    // The tracker's B13 uplink 2nd harmonic (2 × 777–787 MHz) on GPS L1, as the evaluation gives it (3GPP TS 36.101 Table 5.5-1).
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain('Radios disturbing each other');
+    expect(flat).toContain('1554–1574');
+    expect(flat).toContain('Coexistence between the product');
     expect(text).toMatch(/Page 1 of \d+/);
   });
 
