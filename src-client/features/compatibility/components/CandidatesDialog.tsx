@@ -67,6 +67,7 @@ export function CandidatesDialog({ productId, radioId, antennaRoles, onClose }: 
   const chosenFor = chosenRoles(evaluation.data, radioId ?? 0);
   const [pickedRole, setPickedRole] = useState<AntennaRole | null>(null);
   const role = pickedRole !== null && roles.includes(pickedRole) ? pickedRole : firstOpenRole(roles, chosenFor);
+  const chosenForRole = evaluation.data?.radios.find((r) => r.radioId === radioId)?.chosen.find((p) => p.role === role);
   const c = candidates.data;
   return (
     <Dialog
@@ -90,7 +91,11 @@ export function CandidatesDialog({ productId, radioId, antennaRoles, onClose }: 
                   label="Choose parts for the antenna"
                   labelFor="candidate-antenna"
                   inline
-                  helperText={`${c.radioName} needs ${roles.length} antennas: ${roles.map((r) => ANTENNA_ROLE_LABELS[r]).join(', ')}. A part is chosen for one of them.`}
+                  helperText={`${c.radioName} needs ${roles.length} antennas: ${roles.map((r) => ANTENNA_ROLE_LABELS[r]).join(', ')}. ${
+                    chosenForRole
+                      ? `The ${ANTENNA_ROLE_LABELS[role]} antenna is now ${chosenForRole.mpn}; choosing another part replaces it.`
+                      : `No part is chosen for the ${ANTENNA_ROLE_LABELS[role]} antenna yet.`
+                  }`}
                 >
                   <HTMLSelect
                     id="candidate-antenna"

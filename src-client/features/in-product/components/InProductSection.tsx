@@ -35,7 +35,7 @@ export function InProductSection({ productId, radios }: InProductSectionProps) {
   return (
     <Section
       title="Measured in the product"
-      subtitle="Touchstone files measured or simulated with the antennas in this product's own enclosure, each port mapped to an antenna of a radio"
+      subtitle="Multi-port Touchstone files of the antennas in this product's enclosure"
       icon="antenna"
       rightElement={canEdit ? <Button icon="upload" intent={Intent.PRIMARY} text="Upload .sNp file" onClick={() => setUploading(true)} /> : undefined}
       className="bw-gap bw-in-product"
@@ -72,7 +72,7 @@ export function InProductSection({ productId, radios }: InProductSectionProps) {
                     <td className="bw-nowrap">{m.ports}</td>
                     <td className="bw-nowrap">{m.pointCount.toLocaleString('en')}</td>
                     <td className="bw-nowrap">{frequencySpanText(m)}</td>
-                    <td>
+                    <td className="bw-in-product__mapping">
                       {m.portMapping.length === 0 ? (
                         <span className="bw-muted">none yet</span>
                       ) : (

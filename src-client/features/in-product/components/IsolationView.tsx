@@ -68,23 +68,24 @@ export function IsolationView({ productId, files }: IsolationViewProps) {
                   No radio has two antennas mapped in the same file, so there is no correlation to show.
                 </p>
               ) : (
-                <HTMLTable compact striped className="bw-correlation" data-testid="correlation">
+                <HTMLTable compact className="bw-correlation" data-testid="correlation">
                   <thead>
                     <tr>
-                      <th>Radio</th>
-                      <th>Antennas</th>
                       <th>Band</th>
                       <th className="bw-num">Highest ECC in the band (0 to 1)</th>
                       <th className="bw-num">Limit</th>
                       <th />
                     </tr>
                   </thead>
-                  <tbody>
-                    {correlationGroups(data).flatMap((group) =>
-                      group.rows.map((row, k) => (
-                        <tr key={`${group.key}-${row.bandId}`} data-testid="correlation-row" data-above={String(row.aboveThreshold)}>
-                          <td>{k === 0 && <b>{group.radioName}</b>}</td>
-                          <td>{k === 0 && group.antennas}</td>
+                  {correlationGroups(data).map((group) => (
+                    <tbody key={group.key} data-testid="correlation-group">
+                      <tr className="bw-correlation__pair">
+                        <th colSpan={4} scope="rowgroup">
+                          {group.radioName} <span className="bw-muted">· {group.antennas}</span>
+                        </th>
+                      </tr>
+                      {group.rows.map((row) => (
+                        <tr key={row.bandId} data-testid="correlation-row" data-above={String(row.aboveThreshold)}>
                           <td>{row.band}</td>
                           <td className="bw-num" data-testid="ecc">
                             {eccText(row.worstEcc)}
@@ -102,9 +103,9 @@ export function IsolationView({ productId, files }: IsolationViewProps) {
                             ) : null}
                           </td>
                         </tr>
-                      )),
-                    )}
-                  </tbody>
+                      ))}
+                    </tbody>
+                  ))}
                 </HTMLTable>
               )}
               <Callout icon="info-sign" className="bw-in-product__assumption" data-testid="correlation-assumption">

@@ -48,7 +48,7 @@ export function mappingProblems(rows: readonly MappingRow[], radios: readonly Ra
     if (row.radioId === null || row.role === null) continue;
     const radio = radios.find((r) => r.id === row.radioId);
     if (!radio) {
-      problems.set(row.port, 'this radio is no longer part of the product');
+      problems.set(row.port, 'This radio is no longer part of the product');
       continue;
     }
     if (!rolesOf(radios, row.radioId).includes(row.role)) {
@@ -58,7 +58,7 @@ export function mappingProblems(rows: readonly MappingRow[], radios: readonly Ra
     const antenna = `${row.radioId}/${row.role}`;
     const earlier = firstPort.get(antenna);
     if (earlier === undefined) firstPort.set(antenna, row.port);
-    else problems.set(row.port, `the ${ANTENNA_ROLE_LABELS[row.role]} antenna of ${radio.name} is already port ${earlier}`);
+    else problems.set(row.port, `The ${ANTENNA_ROLE_LABELS[row.role]} antenna of ${radio.name} is already port ${earlier}`);
   }
   return problems;
 }
