@@ -65,7 +65,9 @@ export function CandidatesDialog({ productId, radioId, antennaRoles, onClose }: 
   const roles: readonly AntennaRole[] = antennaRoles?.length ? antennaRoles : ['main'];
   const several = roles.length > 1;
   const chosenFor = chosenRoles(evaluation.data, radioId ?? 0);
-  const [pickedRole, setPickedRole] = useState<AntennaRole | null>(null);
+  // The antenna picked is the radio's own: opening another radio's candidates starts again from its first open antenna.
+  const [picked, setPicked] = useState<{ radioId: number | null; role: AntennaRole } | null>(null);
+  const pickedRole = picked?.radioId === radioId ? picked.role : null;
   const role = pickedRole !== null && roles.includes(pickedRole) ? pickedRole : firstOpenRole(roles, chosenFor);
   const chosenForRole = evaluation.data?.radios.find((r) => r.radioId === radioId)?.chosen.find((p) => p.role === role);
   const c = candidates.data;
@@ -100,7 +102,7 @@ export function CandidatesDialog({ productId, radioId, antennaRoles, onClose }: 
                   <HTMLSelect
                     id="candidate-antenna"
                     value={role}
-                    onChange={(e) => setPickedRole(e.currentTarget.value as AntennaRole)}
+                    onChange={(e) => setPicked({ radioId, role: e.currentTarget.value as AntennaRole })}
                     options={roles.map((r) => ({ value: r, label: ANTENNA_ROLE_LABELS[r] }))}
                   />
                 </FormGroup>
