@@ -2,6 +2,7 @@ import { QueryClient } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
 import {
   invalidateAssignment,
+  invalidateInProduct,
   invalidatePart,
   invalidateRadio,
   invalidateRegulatoryLimits,
@@ -9,7 +10,7 @@ import {
   invalidateUsers,
   invalidateVerdicts,
 } from './invalidation';
-import { bandKeys, candidateKeys, matrixKeys, partKeys, productKeys, regulatoryLimitKeys, ruleKeys, userKeys } from './query-keys';
+import { bandKeys, candidateKeys, inProductKeys, matrixKeys, partKeys, productKeys, regulatoryLimitKeys, ruleKeys, userKeys } from './query-keys';
 
 /** A cache holding one entry under each key a page may show, all fresh. */
 function filledCache() {
@@ -23,6 +24,9 @@ function filledCache() {
     matrix8: matrixKeys.product(8),
     candidates7: candidateKeys.radio(7, 70),
     candidates8: candidateKeys.radio(8, 80),
+    inProductFiles7: inProductKeys.list(7),
+    isolation7: inProductKeys.isolation(7),
+    isolation8: inProductKeys.isolation(8),
     part5: partKeys.detail(5),
     part5Ranges: partKeys.detail(5, '791-862'),
     part6: partKeys.detail(6),
@@ -45,10 +49,18 @@ function filledCache() {
 }
 
 describe(invalidateRadio.name, () => {
-  it("marks stale the product, its history, the list, and that product's matrix and candidates only", async () => {
+  it("marks stale the product, its history, the list, and that product's matrix, candidates and in-product data only", async () => {
     const { queryClient, stale } = filledCache();
     await invalidateRadio(queryClient, 7);
-    expect(stale()).toEqual(['candidates7', 'history7', 'matrix7', 'product7', 'productList']);
+    expect(stale()).toEqual(['candidates7', 'history7', 'inProductFiles7', 'isolation7', 'matrix7', 'product7', 'productList']);
+  });
+});
+
+describe(invalidateInProduct.name, () => {
+  it("marks stale that product's files, isolation, history and verdicts, not its candidates or another product", async () => {
+    const { queryClient, stale } = filledCache();
+    await invalidateInProduct(queryClient, 7);
+    expect(stale()).toEqual(['history7', 'inProductFiles7', 'isolation7', 'matrix7']);
   });
 });
 

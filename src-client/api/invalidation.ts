@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { bandSetKeys, candidateKeys, matrixKeys, partKeys, productKeys, regulatoryLimitKeys, ruleKeys, userKeys } from './query-keys';
+import { bandSetKeys, candidateKeys, inProductKeys, matrixKeys, partKeys, productKeys, regulatoryLimitKeys, ruleKeys, userKeys } from './query-keys';
 
 /**
  * What a write changes, in one place: each mutation calls the function for the resource it wrote,
@@ -14,7 +14,10 @@ const invalidateAll = (queryClient: QueryClient, keys: readonly (readonly unknow
 export const invalidateProduct = (queryClient: QueryClient, productId?: number) =>
   invalidateAll(queryClient, productId === undefined ? [productKeys.all] : [productKeys.all, matrixKeys.product(productId), candidateKeys.product(productId)]);
 
-/** A radio added, edited or removed: its product (radios, history, list counts), the product's matrix and candidates. */
+/**
+ * A radio added, edited or removed: its product (radios, history, list counts), the product's matrix and candidates,
+ * and its in-product port mapping and isolation (a radio's name and bands label them; removing it unmaps its ports).
+ */
 export const invalidateRadio = (queryClient: QueryClient, productId: number) =>
   invalidateAll(queryClient, [
     productKeys.detail(productId),
@@ -22,7 +25,15 @@ export const invalidateRadio = (queryClient: QueryClient, productId: number) =>
     productKeys.list(),
     matrixKeys.product(productId),
     candidateKeys.product(productId),
+    inProductKeys.product(productId),
   ]);
+
+/**
+ * An in-product measurement uploaded, mapped or deleted: the files and isolation, the product's history, and its
+ * verdicts (a mapped port's S11 replaces the chosen part's evaluation-board S11; isolation feeds coexistence).
+ */
+export const invalidateInProduct = (queryClient: QueryClient, productId: number) =>
+  invalidateAll(queryClient, [inProductKeys.product(productId), productKeys.history(productId), matrixKeys.product(productId)]);
 
 /** A part created, edited, reviewed, measured or documented: the part, searches, the queue and every verdict. */
 export const invalidatePart = (queryClient: QueryClient, partId?: number) =>

@@ -53,6 +53,17 @@ export const matrixKeys = {
   billOfMaterials: (productId: number, quantity: number) => [...matrixKeys.product(productId), 'bill-of-materials', quantity] as const,
 };
 
+/**
+ * GET /products/:id/in-product-measurements and /products/:id/isolation: the product's files measured in its own
+ * enclosure, their port mapping, and the isolation and envelope correlation between the mapped antennas.
+ */
+export const inProductKeys = {
+  all: ['in-product'] as const,
+  product: (productId: number) => [...inProductKeys.all, productId] as const,
+  list: (productId: number) => [...inProductKeys.product(productId), 'list'] as const,
+  isolation: (productId: number) => [...inProductKeys.product(productId), 'isolation'] as const,
+};
+
 /** GET /products/:id/radios/:radioId/candidates: the parts ranked for one radio. */
 export const candidateKeys = {
   all: ['candidates'] as const,

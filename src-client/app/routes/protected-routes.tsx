@@ -14,11 +14,12 @@ export const protectedRoutes: RouteObject[] = [
   {
     path: paths.product(':id'),
     lazy: async () => {
-      const [{ ProductPage }, { CompatibilityMatrix }, { ProductVerdict }, { BillOfMaterials }] = await Promise.all([
+      const [{ ProductPage }, { CompatibilityMatrix }, { ProductVerdict }, { BillOfMaterials }, { InProductSection }] = await Promise.all([
         import('../../features/products/components/ProductPage'),
         import('../../features/compatibility/components/CompatibilityMatrix'),
         import('../../features/compatibility/components/ProductVerdict'),
         import('../../features/compatibility/components/BillOfMaterials'),
+        import('../../features/in-product/components/InProductSection'),
       ]);
       // Other features add product sections through ProductPage's `summary` and `extensions` props, composed here.
       return {
@@ -27,8 +28,9 @@ export const protectedRoutes: RouteObject[] = [
             summary={(product) => <ProductVerdict productId={product.id} />}
             extensions={(product) => (
               <>
-                <CompatibilityMatrix productId={product.id} />
+                <CompatibilityMatrix productId={product.id} antennaRoles={Object.fromEntries(product.radios.map((r) => [r.id, r.antennaRoles]))} />
                 <BillOfMaterials productId={product.id} />
+                <InProductSection productId={product.id} radios={product.radios} />
               </>
             )}
           />

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import {
   Button,
@@ -15,11 +16,14 @@ import {
 } from '@blueprintjs/core';
 import { QueryState } from '../../../components/QueryState';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
+import { ANTENNA_ROLE_LABELS, type AntennaRole } from '../../../lib/antenna-role-labels';
 import { useHasRole } from '../../../lib/session';
 import { useCandidates } from '../api/get-candidates';
 import { useChoosePart } from '../api/choose-part';
+import { useEvaluation } from '../api/get-evaluation';
 import { useShortlistPart } from '../api/shortlist-part';
 import type { CandidateFilters, Connector, FormFactor } from '../types';
+import { chosenRoles, firstOpenRole } from './antenna-choice';
 import { STATUS_LOOK } from './cell-status';
 import {
   FEED_WORDS,
@@ -38,13 +42,15 @@ export interface CandidatesDialogProps {
   productId: number;
   /** The radio to find parts for; null keeps the dialog closed. */
   radioId: number | null;
+  /** The radio's antennas; with more than one, the user picks which one a part is chosen for. @default main only */
+  antennaRoles?: readonly AntennaRole[];
   onClose: () => void;
 }
 
 const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 
 /** Approved parts for one radio, best first, with the figure that decides each one's place. */
-export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDialogProps) {
+export function CandidatesDialog({ productId, radioId, antennaRoles, onClose }: CandidatesDialogProps) {
   // The filters live in the page address, so a reload, Back or a shared link shows the same list.
   const [searchParams, setSearchParams] = useSearchParams();
   const filters = filtersFromParams(searchParams);
@@ -54,6 +60,16 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
   const shortlist = useShortlistPart();
   const choose = useChoosePart();
   const failed = (error: Error) => toaster.then((t) => t.show({ intent: Intent.DANGER, message: error.message }));
+  // Which antenna a chosen part is for comes from the product's evaluation (the page shows it already, so it is cached).
+  const evaluation = useEvaluation(productId);
+  const roles: readonly AntennaRole[] = antennaRoles?.length ? antennaRoles : ['main'];
+  const several = roles.length > 1;
+  const chosenFor = chosenRoles(evaluation.data, radioId ?? 0);
+  // The antenna picked is the radio's own: opening another radio's candidates starts again from its first open antenna.
+  const [picked, setPicked] = useState<{ radioId: number | null; role: AntennaRole } | null>(null);
+  const pickedRole = picked?.radioId === radioId ? picked.role : null;
+  const role = pickedRole !== null && roles.includes(pickedRole) ? pickedRole : firstOpenRole(roles, chosenFor);
+  const chosenForRole = evaluation.data?.radios.find((r) => r.radioId === radioId)?.chosen.find((p) => p.role === role);
   const c = candidates.data;
   return (
     <Dialog
@@ -72,6 +88,25 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
                 they fit the radio&apos;s {FEED_WORDS[c.radioConnector]} feed and polarization, then by the margin to the nearest limit.
               </p>
               <CandidateFilterBar filters={filters} onChange={setFilters} />
+              {several && canAssign && (
+                <FormGroup
+                  label="Choose parts for the antenna"
+                  labelFor="candidate-antenna"
+                  inline
+                  helperText={`${c.radioName} needs ${roles.length} antennas: ${roles.map((r) => ANTENNA_ROLE_LABELS[r]).join(', ')}. ${
+                    chosenForRole
+                      ? `The ${ANTENNA_ROLE_LABELS[role]} antenna is now ${chosenForRole.mpn}; choosing another part replaces it.`
+                      : `No part is chosen for the ${ANTENNA_ROLE_LABELS[role]} antenna yet.`
+                  }`}
+                >
+                  <HTMLSelect
+                    id="candidate-antenna"
+                    value={role}
+                    onChange={(e) => setPicked({ radioId, role: e.currentTarget.value as AntennaRole })}
+                    options={roles.map((r) => ({ value: r, label: ANTENNA_ROLE_LABELS[r] }))}
+                  />
+                </FormGroup>
+              )}
               <ScreeningCaution compact />
               <HTMLTable compact striped className="bw-candidates" data-testid="candidates">
                 <thead>
@@ -89,6 +124,7 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
                   {c.candidates.map((candidate) => {
                     const look = STATUS_LOOK[candidate.status];
                     const target = { productId, radioId: c.radioId, partId: candidate.partId };
+                    const chosenRole = candidate.assignment === 'chosen' ? (chosenFor.get(candidate.partId) ?? 'main') : null;
                     return (
                       <tr key={candidate.partId} data-testid={`candidate-${candidate.partId}`} data-status={candidate.status}>
                         <td>
@@ -129,12 +165,17 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
                         </td>
                         {canAssign && (
                           <td style={{ whiteSpace: 'nowrap' }}>
-                            {candidate.assignment === 'chosen' ? (
-                              <Tag intent={Intent.PRIMARY} icon="star">
-                                chosen
+                            {chosenRole === role ? (
+                              <Tag intent={Intent.PRIMARY} icon="star" data-testid="chosen-tag">
+                                {several ? `chosen: ${ANTENNA_ROLE_LABELS[chosenRole]}` : 'chosen'}
                               </Tag>
                             ) : (
                               <>
+                                {chosenRole !== null && (
+                                  <Tag intent={Intent.PRIMARY} minimal icon="star" data-testid="chosen-tag">
+                                    chosen: {ANTENNA_ROLE_LABELS[chosenRole]}
+                                  </Tag>
+                                )}
                                 {!candidate.assignment && (
                                   <Button
                                     small
@@ -146,9 +187,9 @@ export function CandidatesDialog({ productId, radioId, onClose }: CandidatesDial
                                 <Button
                                   small
                                   intent={Intent.PRIMARY}
-                                  text="Choose"
+                                  text={several ? `Choose as ${ANTENNA_ROLE_LABELS[role]}` : 'Choose'}
                                   loading={choose.isPending && choose.variables?.partId === candidate.partId}
-                                  onClick={() => choose.mutate(target, { onSuccess: onClose, onError: failed })}
+                                  onClick={() => choose.mutate({ ...target, role }, { onSuccess: onClose, onError: failed })}
                                 />
                               </>
                             )}

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { Button, H3, H4, HTMLTable, Icon, Intent, NonIdealState, OverlayToaster, Position, Switch, Tag } from '@blueprintjs/core';
 import { QueryState } from '../../../components/QueryState';
+import type { AntennaRole } from '../../../lib/antenna-role-labels';
 import { ScreeningCaution } from '../../../components/ScreeningCaution';
 import { VERDICTS } from '../../../components/verdict-look';
 import { useDownloadMatrixCsv } from '../api/download-matrix-csv';
@@ -16,6 +17,8 @@ import './compatibility.css';
 
 export interface CompatibilityMatrixProps {
   productId: number;
+  /** Each radio's antennas (main, diversity, MIMO …) by radio id, so a part can be chosen for one of them. @default main only */
+  antennaRoles?: Readonly<Record<number, readonly AntennaRole[]>>;
 }
 
 const toaster = OverlayToaster.createAsync({ position: Position.TOP });
@@ -24,7 +27,7 @@ const toaster = OverlayToaster.createAsync({ position: Position.TOP });
 export const CHOSEN_ONLY_PARAM = 'parts';
 
 /** Each radio's bands (rows) against that radio's own chosen and shortlisted parts (columns). */
-export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
+export function CompatibilityMatrix({ productId, antennaRoles }: CompatibilityMatrixProps) {
   const [searchParams, setSearchParams] = useSearchParams();
   const chosenOnly = searchParams.get(CHOSEN_ONLY_PARAM) === 'chosen';
   const matrix = useMatrix(productId, chosenOnly);
@@ -114,7 +117,12 @@ export function CompatibilityMatrix({ productId }: CompatibilityMatrixProps) {
           </>
         )}
       </QueryState>
-      <CandidatesDialog productId={productId} radioId={candidatesFor} onClose={() => setCandidatesFor(null)} />
+      <CandidatesDialog
+        productId={productId}
+        radioId={candidatesFor}
+        antennaRoles={candidatesFor === null ? undefined : antennaRoles?.[candidatesFor]}
+        onClose={() => setCandidatesFor(null)}
+      />
     </section>
   );
 }

@@ -3,7 +3,7 @@ import { QueryState } from '../../../components/QueryState';
 import { VERDICT_LOOK } from '../../../components/verdict-look';
 import { useDownloadReport } from '../api/download-report';
 import { useEvaluation } from '../api/get-evaluation';
-import { chosenPartsText, keepUnitsTogether, sentence, verdictCounts } from './verdict-summary';
+import { chosenPartLines, keepUnitsTogether, sentence, verdictCounts } from './verdict-summary';
 import './compatibility.css';
 
 export interface ProductVerdictProps {
@@ -86,7 +86,27 @@ export function ProductVerdict({ productId }: ProductVerdictProps) {
                           {keepUnitsTogether(sentence(radio.decidingFinding?.message ?? radio.reason))}
                         </div>
                       </td>
-                      <td className={radio.chosen.length === 0 ? 'bw-muted' : undefined}>{chosenPartsText(radio)}</td>
+                      <td data-testid="chosen-parts">
+                        {radio.chosen.length === 0 ? (
+                          <span className="bw-muted">No part chosen for this radio</span>
+                        ) : (
+                          chosenPartLines(radio).map((line) => (
+                            <div key={line.key} className="bw-verdict__part" data-testid="chosen-part">
+                              <div>
+                                {line.role && (
+                                  <Tag minimal className="bw-verdict__role">
+                                    {line.role}
+                                  </Tag>
+                                )}
+                                {line.part}
+                              </div>
+                              <div className="bw-muted bw-small" data-testid="s11-source">
+                                {line.s11}
+                              </div>
+                            </div>
+                          ))
+                        )}
+                      </td>
                     </tr>
                   );
                 })}

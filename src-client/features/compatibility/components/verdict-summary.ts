@@ -1,19 +1,24 @@
+import { ANTENNA_ROLE_LABELS } from '../../../lib/antenna-role-labels';
 import type { EvaluationRadio, ProductEvaluation } from '../types';
 
-/** What the chosen-part cell of a radio says: its parts, or that none is chosen. */
-const ROLE_WORDS: Record<string, string> = { main: 'main', diversity: 'diversity', 'mimo-2': 'MIMO 2', 'mimo-3': 'MIMO 3', 'mimo-4': 'MIMO 4' };
+/** One chosen part of a radio as the verdict lists it: its antenna (when the radio has several), the part, and whose S11 judged it. */
+export interface ChosenPartLine {
+  key: string;
+  /** "diversity", "MIMO 2"; null for the one antenna of a radio with a single one. */
+  role: string | null;
+  part: string;
+  /** "S11 measured in product, file housing.s4p, port 2" or "S11 of the evaluation board" */
+  s11: string;
+}
 
-export function chosenPartsText(radio: Pick<EvaluationRadio, 'chosen'>): string {
-  if (radio.chosen.length === 0) return 'No part chosen for this radio';
-  // A radio with one antenna reads as before; with several each part says which antenna it is and whose S11 counts.
-  const several = radio.chosen.length > 1;
-  return radio.chosen
-    .map((p) => {
-      const role = several && p.role ? `${ROLE_WORDS[p.role] ?? p.role}: ` : '';
-      const measured = p.s11Source && p.s11Source !== 'evaluation board' ? `, S11 ${p.s11Source}` : '';
-      return `${role}${p.mpn} (${p.manufacturer}${measured})`;
-    })
-    .join('; ');
+export function chosenPartLines(radio: Pick<EvaluationRadio, 'chosen'>): ChosenPartLine[] {
+  const several = radio.chosen.length > 1 || radio.chosen.some((p) => p.role !== 'main');
+  return radio.chosen.map((p) => ({
+    key: `${p.partId}-${p.role}`,
+    role: several ? ANTENNA_ROLE_LABELS[p.role] : null,
+    part: `${p.mpn} (${p.manufacturer})`,
+    s11: p.s11Source && p.s11Source !== 'evaluation board' ? `S11 ${p.s11Source}` : 'S11 of the evaluation board',
+  }));
 }
 
 /** A radio's reason with its first letter raised, so it reads as a sentence beside the verdict. */

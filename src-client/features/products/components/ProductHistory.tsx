@@ -13,9 +13,20 @@ const ACTION_TEXT: Record<string, string> = {
   'radio-created': 'Added a radio',
   'radio-updated': 'Edited a radio',
   'radio-deleted': 'Removed a radio',
+  'in-product-measurement-uploaded': 'Uploaded a measurement in the product',
+  'in-product-measurement-deleted': 'Deleted a measurement in the product',
+  'in-product-ports-mapped': 'Mapped the ports of a measurement in the product',
 };
 
-const show = (v: unknown) => (Array.isArray(v) ? v.join(', ') : v === null || v === undefined || v === '' ? '—' : String(v));
+/** A mapped port of an in-product measurement, as its audit entry stores it: { port, radioId, role }. */
+const isPortEntry = (v: unknown): v is { port: number; radioId: number; role: string } => typeof v === 'object' && v !== null && 'port' in v && 'role' in v;
+
+const show = (v: unknown): string =>
+  Array.isArray(v)
+    ? v.map((x) => (isPortEntry(x) ? `port ${x.port} → radio ${x.radioId} ${x.role}` : show(x))).join(', ')
+    : v === null || v === undefined || v === ''
+      ? '—'
+      : String(v);
 
 /** Edits store { field: [before, after] }; creations and deletions store plain values. */
 function describeChanges(action: string, changes: Record<string, unknown>): string {
