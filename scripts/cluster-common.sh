@@ -76,7 +76,17 @@ cluster_app_start() {
 
 cluster_app_kill() { kill -9 "$(cat "$CLUSTER_DIR/run/app$1.pid" 2>/dev/null)" 2>/dev/null || true; }
 
+# HAProxy's own refusals in the app's error shape: a 503 with a code, so a client knows it was not served.
+cluster_write_error_pages() {
+  local status
+  for status in 502 503 504; do
+    local body='{"statusCode":503,"code":"INSTANCE_UNAVAILABLE","message":"No Bandwright instance could answer; try again shortly"}'
+    printf 'HTTP/1.1 503 Service Unavailable\r\nContent-Type: application/json\r\nCache-Control: no-store\r\nContent-Length: %s\r\nConnection: close\r\n\r\n%s' "${#body}" "$body" >"$CLUSTER_DIR/error-$status.http"
+  done
+}
+
 cluster_write_haproxy_config() {
+  cluster_write_error_pages
   {
     cat <<CFG
 global
@@ -114,8 +124,14 @@ listen app
   balance roundrobin
   option httpchk GET /api/health
   option forwardfor
-  retry-on conn-failure empty-response
+  # The whole request reaches HAProxy before an instance sees it: an instance dying mid-upload then gets a 503 answer, not a cut connection.
+  option http-buffer-request
+  # Only a connection that never reached an instance is retried: a write cut off after it arrived may have committed.
+  retry-on conn-failure
   default-server inter 1s fall 2 rise 2
+  errorfile 502 $CLUSTER_DIR/error-502.http
+  errorfile 503 $CLUSTER_DIR/error-503.http
+  errorfile 504 $CLUSTER_DIR/error-504.http
 CFG
     for i in 0 1; do echo "  server app$((i + 1)) 127.0.0.1:${APP_PORTS[$i]} check"; done
   } >"$CLUSTER_DIR/haproxy.cfg"
