@@ -107,6 +107,7 @@ function bandCheck(input: ConsistencyInput, claim: SpecBandClaim, plausibleMaxDb
       range,
       input.s11 ? gammaCurveOf(input.s11) : null,
     );
+    // The band's highest D is judged: a dip between samples of two curves on different grids is no evidence against the figures.
     if (d.status === 'ok') directivity = { source: 'measured', maxDbi: d.maxDbi, minDbi: d.minDbi, verdict: judgeDirectivity(d.maxDbi, plausibleMaxDbi) };
   }
   if (!directivity) {

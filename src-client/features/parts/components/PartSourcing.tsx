@@ -131,8 +131,12 @@ function OfferDialog({ partId, offer, isOpen, onClose }: { partId: number; offer
           {field('stock', 'Stock (pieces)')}
           {field('leadTimeDays', 'Lead time (days)')}
         </div>
-        <fieldset className="bw-gap" data-testid="price-breaks">
-          <legend>Price breaks (unit price from a quantity on)</legend>
+        <fieldset className="bw-breaks" data-testid="price-breaks">
+          <legend>Price breaks</legend>
+          <div className="bw-break-row bw-break-row--head" aria-hidden="true">
+            <span>From quantity (pieces)</span>
+            <span>Unit price ({draft.currency || 'currency'})</span>
+          </div>
           {draft.breaks.map((b, i) => {
             const qError = errors[`priceBreaks.${i}.quantity`];
             const pError = errors[`priceBreaks.${i}.unitPrice`];

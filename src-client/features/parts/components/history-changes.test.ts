@@ -35,6 +35,10 @@ describe('history changes', () => {
     ]);
   });
 
+  it('reads the seed state as a before and after too', () => {
+    expect(describeChanges('seeded-state', { reviewState: ['draft', 'in-review'] })[0].text).toBe('Review state: draft → in-review');
+  });
+
   it('names fields in words with units', () => {
     expect(fieldLabel('evalGroundLengthMm')).toBe('Eval ground length (mm)');
     expect(fieldLabel('heightMm')).toBe('Height (mm)');

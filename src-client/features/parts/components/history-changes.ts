@@ -1,10 +1,13 @@
 /** An audit entry's changes in words: "Lead time (days): 28 → 42", not only the field names. */
 
 /** Actions whose changes are recorded as { field: [before, after] }. */
-const CHANGE_ACTIONS = new Set(['updated', 'offer-updated', 'submitted', 'approved', 'rejected', 'restricted', 'reinstated', 'retired']);
+const CHANGE_ACTIONS = new Set(['updated', 'offer-updated', 'seeded-state', 'submitted', 'approved', 'rejected', 'restricted', 'reinstated', 'retired']);
 
 const FIELD_LABEL: Record<string, string> = {
   offerId: 'Offer',
+  measurementId: 'Measurement',
+  documentId: 'Document',
+  alternatePartId: 'Alternate part',
   supplier: 'Supplier',
   sku: 'SKU',
   currency: 'Currency',
