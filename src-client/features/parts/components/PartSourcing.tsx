@@ -22,7 +22,7 @@ import { useDeleteOffer } from '../api/delete-offer';
 import { useOfferRemovals } from '../api/get-offer-removals';
 import { useRestoreOffer } from '../api/restore-offer';
 import { useUpdateOffer } from '../api/update-offer';
-import type { Offer, OfferFormInput, PartDetail } from '../types';
+import type { Offer, OfferFormInput, OfferRemoval, PartDetail } from '../types';
 import { REVIEW_STATE_INTENT } from './part-labels';
 import './review-offers.css';
 
@@ -201,6 +201,12 @@ function OfferDialog({ partId, offer, isOpen, onClose }: { partId: number; offer
   );
 }
 
+/** Whole seconds left to undo, never more than the window (the clock ticks only while a removal is shown). */
+const secondsLeft = (r: OfferRemoval, now: number) => {
+  const window = Date.parse(r.undoUntil) - Date.parse(r.removedAt);
+  return Math.max(0, Math.ceil(Math.min(window, Date.parse(r.undoUntil) - now) / 1000));
+};
+
 /** Removals that can still be undone, with the seconds left; the list comes from the server, so a reload keeps it. */
 function Removals({ partId, enabled }: { partId: number; enabled: boolean }) {
   const removals = useOfferRemovals(partId, enabled);
@@ -219,7 +225,7 @@ function Removals({ partId, enabled }: { partId: number; enabled: boolean }) {
         <Callout key={r.offerId} intent={Intent.WARNING} icon="trash" className="bw-gap" data-testid="offer-removal">
           <div className="bw-row">
             <span>
-              Offer from {r.supplier} removed. You can undo this for {Math.max(0, Math.ceil((Date.parse(r.undoUntil) - now) / 1000))} s more.
+              Offer from {r.supplier} removed. You can undo this for {secondsLeft(r, now)} s more.
             </span>
             <Button
               text="Undo"
