@@ -38,7 +38,7 @@ export const invalidateInProduct = (queryClient: QueryClient, productId: number)
 /** A part created, edited, reviewed, measured or documented: the part, searches, the queue and every verdict. */
 export const invalidatePart = (queryClient: QueryClient, partId?: number) =>
   invalidateAll(queryClient, [
-    ...(partId === undefined ? [] : [partKeys.details(partId), partKeys.history(partId)]),
+    ...(partId === undefined ? [] : [partKeys.details(partId), partKeys.history(partId), partKeys.consistency(partId)]),
     partKeys.searches(),
     partKeys.reviewQueue(),
     matrixKeys.all,

@@ -30,6 +30,8 @@ export const partKeys = {
   history: (id: number) => [...partKeys.all, 'history', id] as const,
   points: (id: number, measurementId: number) => [...partKeys.all, 'points', id, measurementId] as const,
   reviewQueue: () => [...partKeys.all, 'review-queue'] as const,
+  consistency: (id: number) => [...partKeys.all, 'consistency', id] as const,
+  offerRemovals: (id: number) => [...partKeys.all, 'offer-removals', id] as const,
 };
 
 /** GET /products, /products/:id (with its radios) and its history. */

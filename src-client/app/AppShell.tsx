@@ -2,14 +2,17 @@ import { Suspense } from 'react';
 import { NavLink, Outlet } from 'react-router-dom';
 import { Button, Classes, Icon, Spinner, Tag } from '@blueprintjs/core';
 import { BrandMark } from '../components/BrandMark';
+import { useReviewQueueCount } from '../api/review-queue';
 import { useSession } from '../lib/session';
 import { navigation, NavEntry } from './navigation';
+import { paths } from './routes/paths';
 
 const SECTION_TITLES: Record<NavEntry['section'], string> = { work: 'Work', reference: 'Reference', admin: 'Administration' };
 const ROLE_LABELS = { procurement: 'Procurement', engineer: 'Engineer', admin: 'Admin' } as const;
 
 export function AppShell() {
   const { user, signOut } = useSession();
+  const waiting = useReviewQueueCount(user?.role === 'admin');
   if (!user) return null;
   const visible = navigation.filter((entry) => entry.roles.includes(user.role));
   const sections = (['work', 'reference', 'admin'] as const).filter((s) => visible.some((e) => e.section === s));
@@ -30,6 +33,18 @@ export function AppShell() {
                 <NavLink key={entry.path} to={entry.path} className={({ isActive }) => `bw-rail__link${isActive ? ' bw-rail__link--active' : ''}`}>
                   <Icon icon={entry.icon} size={16} />
                   <span>{entry.label}</span>
+                  {entry.path === paths.reviewQueue && waiting !== undefined && (
+                    <Tag
+                      round
+                      minimal={waiting === 0}
+                      intent={waiting > 0 ? 'primary' : 'none'}
+                      style={{ marginLeft: 'auto' }}
+                      data-testid="review-queue-count"
+                    >
+                      <span className="bw-visually-hidden">parts waiting: </span>
+                      {waiting}
+                    </Tag>
+                  )}
                 </NavLink>
               ))}
           </div>

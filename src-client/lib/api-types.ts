@@ -629,6 +629,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/parts/{id}/consistency": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A part's datasheet claims against its measurements, what is missing, and the directivity its gain and efficiency imply */
+        get: operations["ReviewController_consistency"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/parts/{id}/submission": {
         parameters: {
             query?: never;
@@ -964,12 +981,46 @@ export interface paths {
         get?: never;
         put?: never;
         post?: never;
-        /** Remove an offer (procurement, admin) */
+        /** Remove an offer; it can be put back for 30 s (procurement, admin) */
         delete: operations["SourcingController_removeOffer"];
         options?: never;
         head?: never;
         /** Edit an offer; 409 OFFER_VERSION_CONFLICT on a stale version (procurement, admin) */
         patch: operations["SourcingController_updateOffer"];
+        trace?: never;
+    };
+    "/api/parts/{id}/offer-removals": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Offers removed in the last 30 s, which can still be put back (procurement, admin) */
+        get: operations["SourcingController_removals"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/parts/{id}/offers/{offerId}/restoration": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Undo the removal of an offer, under its id; 410 OFFER_UNDO_EXPIRED after the window (procurement, admin) */
+        post: operations["SourcingController_restoreOffer"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
         trace?: never;
     };
     "/api/parts/{id}/alternates/{otherId}": {
@@ -2267,6 +2318,60 @@ export interface components {
         };
         /** @enum {string} */
         MeasurementKind: "s11" | "efficiency" | "peak-gain" | "average-gain";
+        /** @enum {string} */
+        MissingItem: "datasheet" | "spec-bands" | "s11" | "efficiency" | "peak-gain";
+        /** @enum {string} */
+        EfficiencyBasis: "radiation" | "total";
+        /** @enum {string} */
+        FigureStatistic: "minimum" | "average";
+        /** @enum {string} */
+        GainBasis: "peak" | "realized";
+        /** @enum {string} */
+        DirectivityVerdict: "below-dipole" | "above-form-factor" | "plausible";
+        DirectivityCheckDto: {
+            /**
+             * @description Where the gain and the efficiency came from
+             * @enum {string}
+             */
+            source: "measured" | "datasheet" | "mixed";
+            /** @description Highest implied directivity over the band, D = G / η on one basis (dBi) */
+            maxDbi: number;
+            /** @description Lowest implied directivity over the band (dBi) */
+            minDbi: number;
+            verdict: components["schemas"]["DirectivityVerdict"];
+        };
+        BandCheckDto: {
+            fromMhz: number;
+            toMhz: number;
+            claimedMaxVswr: number | null;
+            measuredWorstVswr: number | null;
+            measuredWorstVswrAtMhz: number | null;
+            /** @description Null when there is nothing to compare */
+            vswrAgrees: boolean | null;
+            claimedEfficiencyPct: number | null;
+            claimedEfficiencyBasis: components["schemas"]["EfficiencyBasis"];
+            claimedEfficiencyStatistic: components["schemas"]["FigureStatistic"];
+            /** @description By the claim statistic (lowest or average over the band) */
+            measuredEfficiencyPct: number | null;
+            measuredEfficiencyBasis: components["schemas"]["EfficiencyBasis"] | null;
+            /** @description Compared only on the same basis */
+            efficiencyAgrees: boolean | null;
+            claimedPeakGainDbi: number | null;
+            claimedGainBasis: components["schemas"]["GainBasis"];
+            measuredPeakGainDbi: number | null;
+            measuredGainBasis: components["schemas"]["GainBasis"] | null;
+            peakGainAgrees: boolean | null;
+            directivity: components["schemas"]["DirectivityCheckDto"] | null;
+        };
+        PartConsistencyDto: {
+            missing: components["schemas"]["MissingItem"][];
+            /** @description The highest directivity believable for the form factor (dBi, common practice) */
+            plausibleMaxDirectivityDbi: number;
+            /** @description One per datasheet band */
+            bands: components["schemas"]["BandCheckDto"][];
+            /** @description Bands where a figure disagrees with a measurement or the implied directivity is not credible */
+            disagreements: number;
+        };
         ReviewQueueItemDto: {
             id: number;
             manufacturer: string;
@@ -2277,6 +2382,8 @@ export interface components {
             submittedAt: string | null;
             measuredKinds: components["schemas"]["MeasurementKind"][];
             documentCount: number;
+            /** @description Datasheet claims against measurements, what is missing, implied directivity */
+            check: components["schemas"]["PartConsistencyDto"];
         };
         ReviewActionDto: {
             /** @description The version you reviewed (optimistic locking) */
@@ -2292,21 +2399,6 @@ export interface components {
         Lifecycle: "active" | "nrnd" | "eol";
         /** @enum {string} */
         ReviewState: "draft" | "in-review" | "approved" | "restricted" | "retired";
-        /**
-         * @description radiation: mismatch left out; total: mismatch included
-         * @enum {string}
-         */
-        EfficiencyBasis: "radiation" | "total";
-        /**
-         * @description efficiencyPct is the band's minimum or its average
-         * @enum {string}
-         */
-        FigureStatistic: "minimum" | "average";
-        /**
-         * @description peak: the antenna's gain, mismatch left out; realized: mismatch included
-         * @enum {string}
-         */
-        GainBasis: "peak" | "realized";
         SpecBandDto: {
             id: number;
             fromMhz: number;
@@ -2405,6 +2497,8 @@ export interface components {
             currency: string;
             priceBreaks: components["schemas"]["PriceBreakDto"][];
             moq: number | null;
+            /** @description Pieces in stock when last checked */
+            stock: number | null;
             leadTimeDays: number | null;
             /** @example 2025-11-20 */
             lastCheckedOn: string | null;
@@ -2635,6 +2729,8 @@ export interface components {
             sku?: string | null;
             moq?: number | null;
             leadTimeDays?: number | null;
+            /** @description Pieces in stock when last checked */
+            stock?: number | null;
             /**
              * Format: date
              * @example 2025-11-20
@@ -2650,6 +2746,8 @@ export interface components {
             sku?: string | null;
             moq?: number | null;
             leadTimeDays?: number | null;
+            /** @description Pieces in stock when last checked */
+            stock?: number | null;
             /**
              * Format: date
              * @example 2025-11-20
@@ -2661,6 +2759,13 @@ export interface components {
             /** @example EUR */
             currency?: string;
             priceBreaks?: components["schemas"]["PriceBreakInputDto"][];
+        };
+        OfferRemovalDto: {
+            offerId: number;
+            supplier: string;
+            removedAt: string;
+            /** @description Until when the removal can be undone (ISO 8601) */
+            undoUntil: string;
         };
         /** @enum {string} */
         AlternateKind: "alternate" | "second-source";
@@ -5009,6 +5114,41 @@ export interface operations {
             };
         };
     };
+    ReviewController_consistency: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PartConsistencyDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, engineer, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     ReviewController_submit: {
         parameters: {
             query?: never;
@@ -5882,6 +6022,77 @@ export interface operations {
                 "application/json": components["schemas"]["UpdateOfferDto"];
             };
         };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OfferDto"];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SourcingController_removals: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OfferRemovalDto"][];
+                };
+            };
+            /** @description No valid bearer token */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Only for: procurement, admin */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SourcingController_restoreOffer: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+                offerId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
         responses: {
             200: {
                 headers: {

@@ -90,6 +90,7 @@ describe('catalogue in the browser', () => {
     await page.getByTestId('review-queue').getByRole('link', { name: mpn }).click();
     await page.getByRole('heading', { name: `Browserbench Antennas ${mpn}` }).waitFor();
     await page.getByRole('button', { name: 'Approve' }).click();
+    await page.getByRole('dialog').getByRole('button', { name: 'Approve', exact: true }).click();
     await page.getByTestId('review-state').getByText('approved').waitFor();
     const mail = await waitForMail('engineer@bandwright.test', new RegExp(`approved: .*${mpn}`));
     expect(mail.text).toContain(`/catalogue/parts/`);

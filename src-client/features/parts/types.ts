@@ -1,4 +1,5 @@
 import type { components, operations } from '../../lib/api-types';
+import type { AsTyped } from '../../lib/form-input';
 
 type Schemas = components['schemas'];
 export const FORM_FACTORS = [
@@ -85,3 +86,16 @@ export type ReviewQueueItem = Schemas['ReviewQueueItemDto'];
 
 /** A band of the band library, as GET /api/bands returns it. */
 export type LibraryBand = Schemas['BandDto'];
+
+export type PartConsistency = Schemas['PartConsistencyDto'];
+
+export type BandCheck = Schemas['BandCheckDto'];
+
+export type MissingItem = Schemas['MissingItem'];
+
+/** Offer bodies as the form sends them: numbers possibly as typed, so the server names a bad field. */
+export type OfferUpdate = AsTyped<Schemas['UpdateOfferDto']>;
+
+export type OfferFormInput = AsTyped<Schemas['CreateOfferDto']>;
+
+export type OfferRemoval = Schemas['OfferRemovalDto'];

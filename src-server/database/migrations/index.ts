@@ -13,6 +13,7 @@ import { FigureBasis1765510000000 } from './1765510000000-figure-basis';
 import { LimitsByServiceAndMarkets1765520000000 } from './1765520000000-limits-by-service-and-markets';
 import { SimultaneousTransmit1765550000000 } from './1765550000000-simultaneous-transmit';
 import { InProductMeasurements1765540000000 } from './1765540000000-in-product-measurements';
+import { OfferStockAndUndo1765570000000 } from './1765570000000-offer-stock-and-undo';
 
 /** Every migration in order; never edit one that has landed, add a new one. */
 export const MIGRATIONS = [
@@ -31,4 +32,5 @@ export const MIGRATIONS = [
   LimitsByServiceAndMarkets1765520000000,
   InProductMeasurements1765540000000,
   SimultaneousTransmit1765550000000,
+  OfferStockAndUndo1765570000000,
 ];

@@ -84,6 +84,7 @@ export const offerDto = (o: PartOffer): OfferDto => ({
   currency: o.currency,
   priceBreaks: o.priceBreaks,
   moq: o.moq,
+  stock: o.stock,
   leadTimeDays: o.leadTimeDays,
   lastCheckedOn: o.lastCheckedOn,
   version: o.version,

@@ -1,4 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { PartConsistencyDto } from './consistency.dto';
 import {
   CONNECTORS,
   type Connector,
@@ -161,9 +162,17 @@ export class OfferDto {
   @ApiProperty() currency: string;
   @ApiProperty({ type: [PriceBreakDto] }) priceBreaks: PriceBreakDto[];
   @ApiProperty({ type: Number, nullable: true }) moq: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'Pieces in stock when last checked' }) stock: number | null;
   @ApiProperty({ type: Number, nullable: true }) leadTimeDays: number | null;
   @ApiProperty({ type: String, nullable: true, example: '2025-11-20' }) lastCheckedOn: string | null;
   @ApiProperty() version: number;
+}
+
+export class OfferRemovalDto {
+  @ApiProperty() offerId: number;
+  @ApiProperty() supplier: string;
+  @ApiProperty() removedAt: string;
+  @ApiProperty({ description: 'Until when the removal can be undone (ISO 8601)' }) undoUntil: string;
 }
 
 export class AlternateDto {
@@ -233,4 +242,6 @@ export class ReviewQueueItemDto {
   @ApiProperty({ type: String, nullable: true }) submittedAt: string | null;
   @ApiProperty({ enum: MEASUREMENT_KINDS, enumName: 'MeasurementKind', isArray: true }) measuredKinds: MeasurementKind[];
   @ApiProperty() documentCount: number;
+  @ApiProperty({ type: PartConsistencyDto, description: 'Datasheet claims against measurements, what is missing, implied directivity' })
+  check: PartConsistencyDto;
 }

@@ -16,6 +16,7 @@ class OfferFieldsDto {
   @StringField({ optional: true, nullable: true, maxLength: 80 }) sku?: string | null;
   @IntField({ optional: true, nullable: true, min: 1, max: 100_000_000 }) moq?: number | null;
   @IntField({ optional: true, nullable: true, min: 0, max: 3650 }) leadTimeDays?: number | null;
+  @IntField({ optional: true, nullable: true, min: 0, max: 2_000_000_000, description: 'Pieces in stock when last checked' }) stock?: number | null;
 
   @DateField({ optional: true, nullable: true })
   lastCheckedOn?: string | null;

@@ -2,9 +2,11 @@ import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ParseIdPipe } from '../../common/parse-id.pipe';
+import { ALL_ROLES } from '../../common/roles';
 import { ReviewService } from './review.service';
 import { ReviewActionDto } from '../dto/part-input.dto';
 import { PartDetailDto, ReviewQueueItemDto } from '../dto/part-response.dto';
+import { PartConsistencyDto } from '../dto/consistency.dto';
 
 @ApiTags('part review')
 @Controller('parts')
@@ -17,6 +19,14 @@ export class ReviewController {
   @ApiOkResponse({ type: [ReviewQueueItemDto] })
   queue(): Promise<ReviewQueueItemDto[]> {
     return this.review.queue();
+  }
+
+  @Get(':id/consistency')
+  @Roles(...ALL_ROLES)
+  @ApiOperation({ summary: "A part's datasheet claims against its measurements, what is missing, and the directivity its gain and efficiency imply" })
+  @ApiOkResponse({ type: PartConsistencyDto })
+  consistency(@Param('id', ParseIdPipe) id: number): Promise<PartConsistencyDto> {
+    return this.review.consistency(id);
   }
 
   @Post(':id/submission')

@@ -14,6 +14,10 @@ import { iso, userRef } from '../part-mapping';
 import type { ReviewState } from '../part.types';
 import { partErrors } from '../parts.exception';
 import { PartsService } from '../catalogue/parts.service';
+import { PartDataService } from '../part-data.service';
+import { checkPartConsistency } from './part-consistency';
+import { NotFoundError } from '../../common/domain-error';
+import type { PartConsistencyDto } from '../dto/consistency.dto';
 import type { ReviewActionDto } from '../dto/part-input.dto';
 import type { PartDetailDto, ReviewQueueItemDto } from '../dto/part-response.dto';
 
@@ -46,6 +50,7 @@ export class ReviewService {
     private readonly parts: PartsService,
     private readonly audit: AuditService,
     private readonly mail: MailService,
+    private readonly partData: PartDataService,
   ) {}
 
   async transition(id: number, action: ReviewAction, input: ReviewActionDto, actor: AuthUser): Promise<PartDetailDto> {
@@ -104,7 +109,41 @@ export class ReviewService {
     return this.parts.getDetail(id, actor);
   }
 
-  /** Parts waiting for an admin, oldest submission first. */
+  /** Datasheet counts of the given parts (documents of kind "datasheet"). */
+  private async datasheetCounts(ids: number[]): Promise<Map<number, number>> {
+    const rows: { part_id: number; n: number | string }[] = await this.dataSource.query(
+      "SELECT part_id, COUNT(*) AS n FROM part_documents WHERE part_id IN (?) AND kind = 'datasheet' GROUP BY part_id",
+      [ids],
+    );
+    return new Map(rows.map((r) => [r.part_id, Number(r.n)]));
+  }
+
+  /** The review aid of each part: its claims against its measurements, what is missing, the implied directivity. */
+  private async consistencyOf(ids: number[]): Promise<Map<number, PartConsistencyDto>> {
+    const [data, datasheets] = await Promise.all([this.partData.getPartData(ids), this.datasheetCounts(ids)]);
+    return new Map(
+      data.map((p) => [
+        p.id,
+        checkPartConsistency({
+          formFactor: p.formFactor,
+          datasheetCount: datasheets.get(p.id) ?? 0,
+          specBands: p.specBands,
+          s11: p.s11?.curve ?? null,
+          efficiency: p.efficiency,
+          peakGain: p.peakGain,
+        }),
+      ]),
+    );
+  }
+
+  /** One part's review aid (every role: the part page shows the implied directivity). */
+  async consistency(id: number): Promise<PartConsistencyDto> {
+    const check = (await this.consistencyOf([id])).get(id);
+    if (!check) throw new NotFoundError('part', id);
+    return check;
+  }
+
+  /** Parts waiting for an admin, oldest submission first, each with its review aid. */
   async queue(): Promise<ReviewQueueItemDto[]> {
     const parts = await this.dataSource.getRepository(Part).find({
       where: { reviewState: 'in-review' },
@@ -121,6 +160,7 @@ export class ReviewService {
       'SELECT part_id, COUNT(*) AS n FROM part_documents WHERE part_id IN (?) GROUP BY part_id',
       [ids],
     );
+    const checks = await this.consistencyOf(ids);
     return parts.map((p) => ({
       id: p.id,
       manufacturer: p.manufacturer.name,
@@ -131,6 +171,7 @@ export class ReviewService {
       submittedAt: iso(p.submittedAt),
       measuredKinds: kinds.filter((k) => k.part_id === p.id).map((k) => k.kind) as ReviewQueueItemDto['measuredKinds'],
       documentCount: Number(docs.find((d) => d.part_id === p.id)?.n ?? 0),
+      check: checks.get(p.id)!,
     }));
   }
 }

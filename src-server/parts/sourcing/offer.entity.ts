@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
+import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryColumn, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { Part } from '../part.entity';
 
 export interface PriceBreak {
@@ -27,6 +27,8 @@ export class PartOffer {
   /** The lowest unit price of the breaks, kept for the price-ceiling filter. */
   @Column({ name: 'min_unit_price', type: 'decimal', precision: 14, scale: 4, nullable: true }) minUnitPrice: string | null;
   @Column({ type: 'int', unsigned: true, nullable: true }) moq: number | null;
+  /** Pieces the supplier reported in stock when last checked. */
+  @Column({ type: 'int', unsigned: true, nullable: true }) stock: number | null;
   @Column({ name: 'lead_time_days', type: 'int', unsigned: true, nullable: true }) leadTimeDays: number | null;
   @Column({ name: 'last_checked_on', type: 'date', nullable: true }) lastCheckedOn: string | null;
   @Column({ type: 'int', unsigned: true, default: 1 }) version: number;
@@ -36,4 +38,16 @@ export class PartOffer {
 
   @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
   updatedAt: Date;
+}
+
+/** A removed offer, kept whole for a short undo (OFFER_UNDO_SECONDS); an undo puts it back under its id. */
+@Entity({ name: 'part_offer_removals' })
+export class PartOfferRemoval {
+  @PrimaryColumn({ name: 'offer_id', type: 'int', unsigned: true })
+  offerId: number;
+
+  @Column({ name: 'part_id', type: 'int', unsigned: true }) partId: number;
+  @Column({ type: 'json' }) offer: Record<string, unknown>;
+  @Column({ name: 'removed_by_id', type: 'int', unsigned: true, nullable: true }) removedById: number | null;
+  @Column({ name: 'removed_at', type: 'datetime', precision: 3 }) removedAt: Date;
 }

@@ -1,10 +1,10 @@
-import { Body, Controller, Delete, HttpCode, Param, Patch, Post, Put } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Put } from '@nestjs/common';
 import { ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ParseIdPipe } from '../../common/parse-id.pipe';
-import { SourcingService } from './sourcing.service';
+import { OFFER_UNDO_SECONDS, SourcingService } from './sourcing.service';
 import { AlternateInputDto, CreateOfferDto, UpdateOfferDto } from '../dto/sourcing.dto';
-import { OfferDto } from '../dto/part-response.dto';
+import { OfferDto, OfferRemovalDto } from '../dto/part-response.dto';
 
 @ApiTags('part sourcing')
 @Controller('parts/:id')
@@ -35,9 +35,26 @@ export class SourcingController {
   @Delete('offers/:offerId')
   @Roles('procurement', 'admin')
   @HttpCode(204)
-  @ApiOperation({ summary: 'Remove an offer (procurement, admin)' })
+  @ApiOperation({ summary: `Remove an offer; it can be put back for ${OFFER_UNDO_SECONDS} s (procurement, admin)` })
   removeOffer(@Param('id', ParseIdPipe) id: number, @Param('offerId', ParseIdPipe) offerId: number, @CurrentUser() user: AuthUser): Promise<void> {
     return this.sourcing.removeOffer(id, offerId, user);
+  }
+
+  @Get('offer-removals')
+  @Roles('procurement', 'admin')
+  @ApiOperation({ summary: `Offers removed in the last ${OFFER_UNDO_SECONDS} s, which can still be put back (procurement, admin)` })
+  @ApiOkResponse({ type: [OfferRemovalDto] })
+  removals(@Param('id', ParseIdPipe) id: number): Promise<OfferRemovalDto[]> {
+    return this.sourcing.recentRemovals(id);
+  }
+
+  @Post('offers/:offerId/restoration')
+  @Roles('procurement', 'admin')
+  @HttpCode(200)
+  @ApiOperation({ summary: 'Undo the removal of an offer, under its id; 410 OFFER_UNDO_EXPIRED after the window (procurement, admin)' })
+  @ApiOkResponse({ type: OfferDto })
+  restoreOffer(@Param('id', ParseIdPipe) id: number, @Param('offerId', ParseIdPipe) offerId: number, @CurrentUser() user: AuthUser): Promise<OfferDto> {
+    return this.sourcing.restoreOffer(id, offerId, user);
   }
 
   @Put('alternates/:otherId')

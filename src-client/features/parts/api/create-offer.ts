@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { invalidatePart } from '../../../api/invalidation';
 import { apiRequest } from '../../../lib/api-client';
-import type { Offer, OfferInput } from '../types';
+import type { Offer, OfferFormInput } from '../types';
 
-export const createOffer = ({ id, ...offer }: OfferInput & { id: number }) => apiRequest<Offer>(`/parts/${id}/offers`, { method: 'POST', body: offer });
+export const createOffer = ({ id, ...offer }: OfferFormInput & { id: number }) => apiRequest<Offer>(`/parts/${id}/offers`, { method: 'POST', body: offer });
 
 export const useCreateOffer = () => {
   const queryClient = useQueryClient();

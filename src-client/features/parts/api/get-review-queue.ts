@@ -1,10 +1,6 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { partKeys } from '../../../api/query-keys';
-import { apiRequest } from '../../../lib/api-client';
-import type { ReviewQueueItem } from '../types';
+import { useQuery } from '@tanstack/react-query';
+import { getReviewQueue, getReviewQueueQueryOptions } from '../../../api/review-queue';
 
-export const getReviewQueue = () => apiRequest<ReviewQueueItem[]>('/parts/review-queue');
-
-export const getReviewQueueQueryOptions = () => queryOptions({ queryKey: partKeys.reviewQueue(), queryFn: getReviewQueue });
+export { getReviewQueue, getReviewQueueQueryOptions };
 
 export const useReviewQueue = () => useQuery(getReviewQueueQueryOptions());

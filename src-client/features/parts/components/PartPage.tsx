@@ -1,39 +1,20 @@
 import { useMemo, useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
-import {
-  Button,
-  Callout,
-  Dialog,
-  DialogBody,
-  DialogFooter,
-  FileInput,
-  FormGroup,
-  HTMLSelect,
-  HTMLTable,
-  InputGroup,
-  Intent,
-  OverlayToaster,
-  Position,
-  ProgressBar,
-  Tab,
-  Tabs,
-  Tag,
-} from '@blueprintjs/core';
+import { useParams } from 'react-router-dom';
+import { Button, Callout, FileInput, FormGroup, HTMLSelect, HTMLTable, Intent, OverlayToaster, Position, ProgressBar, Tab, Tabs, Tag } from '@blueprintjs/core';
 import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
 import type { ShadedRange } from '../../../components/FrequencyChart';
-import { paths } from '../../../app/routes/paths';
-import { useCreateOffer } from '../api/create-offer';
-import { useDeleteOffer } from '../api/delete-offer';
 import { downloadPartFile } from '../api/download-part-file';
 import { usePart } from '../api/get-part';
-import { usePartHistory } from '../api/get-part-history';
 import { useUploadDocument } from '../api/upload-document';
 import { DOCUMENT_KINDS, type DocumentKind, type LibraryBand, type PartDetail } from '../types';
 import { BandPicker } from './BandPicker';
 import { MeasurementUploadDialog } from './MeasurementUploadDialog';
 import { PartCurves } from './PartCurves';
 import { PartEditorDialog } from './PartEditorDialog';
+import { PartHistory } from './PartHistory';
+import { PartReviewAid } from './PartReviewAid';
+import { PartSourcing } from './PartSourcing';
 import { ReviewActions } from './ReviewActions';
 import { LIFECYCLE_INTENT, LIFECYCLE_LABEL, REVIEW_STATE_INTENT, bandSpan, fmt, rangesParam } from './part-labels';
 
@@ -229,155 +210,6 @@ function Documents({ part }: { part: PartDetail }) {
   );
 }
 
-function Sourcing({ part }: { part: PartDetail }) {
-  const create = useCreateOffer();
-  const remove = useDeleteOffer();
-  const [adding, setAdding] = useState(false);
-  const [offer, setOffer] = useState({ supplier: '', sku: '', currency: 'USD', quantity: '1', unitPrice: '', leadTimeDays: '', moq: '' });
-  const save = () =>
-    create.mutate(
-      {
-        id: part.id,
-        supplier: offer.supplier,
-        sku: offer.sku || null,
-        currency: offer.currency,
-        priceBreaks: [{ quantity: Number(offer.quantity), unitPrice: offer.unitPrice }],
-        leadTimeDays: offer.leadTimeDays ? Number(offer.leadTimeDays) : null,
-        moq: offer.moq ? Number(offer.moq) : null,
-        lastCheckedOn: new Date().toISOString().slice(0, 10),
-      },
-      { onSuccess: () => setAdding(false), onError: fail },
-    );
-  return (
-    <section className="bw-panel">
-      <HTMLTable compact striped data-testid="offers">
-        <thead>
-          <tr>
-            <th>Supplier</th>
-            <th>SKU</th>
-            <th>Price breaks</th>
-            <th>MOQ</th>
-            <th>Lead time</th>
-            <th>Checked</th>
-            {part.permissions.editSourcing && <th />}
-          </tr>
-        </thead>
-        <tbody>
-          {part.offers.map((o) => (
-            <tr key={o.id}>
-              <td>{o.supplier}</td>
-              <td>{o.sku ?? '—'}</td>
-              <td>{o.priceBreaks.map((b) => `${b.quantity}+: ${b.unitPrice} ${o.currency}`).join(' · ')}</td>
-              <td>{o.moq ?? '—'}</td>
-              <td>{o.leadTimeDays === null ? '—' : `${o.leadTimeDays} days`}</td>
-              <td>{o.lastCheckedOn ?? '—'}</td>
-              {part.permissions.editSourcing && (
-                <td>
-                  <Button
-                    size="small"
-                    variant="minimal"
-                    icon="trash"
-                    aria-label={`Remove offer from ${o.supplier}`}
-                    onClick={() => remove.mutate({ id: part.id, offerId: o.id }, { onError: fail })}
-                  />
-                </td>
-              )}
-            </tr>
-          ))}
-        </tbody>
-      </HTMLTable>
-      {part.permissions.editSourcing && <Button className="bw-gap" icon="add" text="Add offer" onClick={() => setAdding(true)} />}
-      <h3>Alternates and second sources</h3>
-      {part.alternates.length === 0 ? (
-        <p className="bw-muted">None linked.</p>
-      ) : (
-        <ul>
-          {part.alternates.map((a) => (
-            <li key={a.partId}>
-              <Link to={paths.part(a.partId)}>
-                {a.manufacturer} {a.mpn}
-              </Link>{' '}
-              <Tag minimal>{a.kind}</Tag>{' '}
-              <Tag minimal intent={REVIEW_STATE_INTENT[a.reviewState]}>
-                {a.reviewState}
-              </Tag>{' '}
-              {a.note}
-            </li>
-          ))}
-        </ul>
-      )}
-      <Dialog isOpen={adding} onClose={() => setAdding(false)} title="Add supplier offer">
-        <DialogBody>
-          {(['supplier', 'sku', 'currency', 'quantity', 'unitPrice', 'moq', 'leadTimeDays'] as const).map((k) => (
-            <FormGroup
-              key={k}
-              label={
-                {
-                  supplier: 'Supplier',
-                  sku: 'SKU',
-                  currency: 'Currency',
-                  quantity: 'Break quantity',
-                  unitPrice: 'Unit price',
-                  moq: 'MOQ',
-                  leadTimeDays: 'Lead time (days)',
-                }[k]
-              }
-              labelFor={`offer-${k}`}
-            >
-              <InputGroup
-                id={`offer-${k}`}
-                value={offer[k]}
-                onChange={(e) => {
-                  const value = e.currentTarget.value;
-                  setOffer((o) => ({ ...o, [k]: value }));
-                }}
-              />
-            </FormGroup>
-          ))}
-        </DialogBody>
-        <DialogFooter
-          actions={
-            <>
-              <Button text="Cancel" onClick={() => setAdding(false)} />
-              <Button intent={Intent.PRIMARY} text="Add" loading={create.isPending} onClick={save} />
-            </>
-          }
-        />
-      </Dialog>
-    </section>
-  );
-}
-
-function History({ partId }: { partId: number }) {
-  const history = usePartHistory(partId);
-  return (
-    <QueryState isPending={history.isPending} error={history.error}>
-      <section className="bw-panel">
-        <HTMLTable compact striped data-testid="history">
-          <thead>
-            <tr>
-              <th>When</th>
-              <th>Who</th>
-              <th>What</th>
-              <th>Changes</th>
-            </tr>
-          </thead>
-          <tbody>
-            {(history.data?.items ?? []).map((e) => (
-              <tr key={e.id}>
-                <td>{new Date(e.at).toLocaleString()}</td>
-                <td>{e.user?.name ?? 'system'}</td>
-                <td>{e.action}</td>
-                <td className="bw-history-changes">{Object.keys(e.changes).join(', ')}</td>
-              </tr>
-            ))}
-          </tbody>
-        </HTMLTable>
-      </section>
-    </QueryState>
-  );
-}
-
 /** One part: overview, curves with band overlays and per-range figures, documents, sourcing, history. */
 export function PartPage() {
   const id = Number(useParams().id);
@@ -429,7 +261,16 @@ export function PartPage() {
             </Callout>
           )}
           <Tabs id="part-tabs" selectedTabId={tab} onChange={(t) => setTab(String(t))} renderActiveTabPanelOnly>
-            <Tab id="overview" title="Overview" panel={<Overview part={p} />} />
+            <Tab
+              id="overview"
+              title="Overview"
+              panel={
+                <>
+                  <Overview part={p} />
+                  <PartReviewAid partId={p.id} />
+                </>
+              }
+            />
             <Tab
               id="curves"
               title="Curves and figures"
@@ -443,8 +284,8 @@ export function PartPage() {
               }
             />
             <Tab id="documents" title={`Documents (${p.documents.length})`} panel={<Documents part={p} />} />
-            <Tab id="sourcing" title={`Sourcing (${p.offers.length})`} panel={<Sourcing part={p} />} />
-            <Tab id="history" title="History" panel={<History partId={p.id} />} />
+            <Tab id="sourcing" title={`Sourcing (${p.offers.length})`} panel={<PartSourcing part={p} />} />
+            <Tab id="history" title="History" panel={<PartHistory partId={p.id} />} />
           </Tabs>
           <PartEditorDialog isOpen={editing} part={p} onClose={() => setEditing(false)} onSaved={() => setEditing(false)} />
           <MeasurementUploadDialog

@@ -8,7 +8,13 @@ export interface ReviewActionsProps {
 }
 
 const toaster = OverlayToaster.createAsync({ position: Position.TOP });
-const NEEDS_COMMENT: ReviewAction[] = ['rejection', 'restriction'];
+
+/** Decisions that ask for a comment first (sent in the e-mail and kept in the history); `required` ones refuse an empty one. */
+const ASKS_COMMENT: Partial<Record<ReviewAction, { title: string; confirm: string; intent: Intent; required: boolean }>> = {
+  approval: { title: 'Approve', confirm: 'Approve', intent: Intent.SUCCESS, required: false },
+  rejection: { title: 'Reject', confirm: 'Reject', intent: Intent.DANGER, required: true },
+  restriction: { title: 'Restrict', confirm: 'Restrict', intent: Intent.WARNING, required: true },
+};
 
 /** The lifecycle buttons the caller may press for this part's state. */
 export function ReviewActions({ part }: ReviewActionsProps) {
@@ -17,7 +23,7 @@ export function ReviewActions({ part }: ReviewActionsProps) {
   const [comment, setComment] = useState('');
   const run = (action: ReviewAction, text?: string) =>
     review.mutate(
-      { id: part.id, action, version: part.version, comment: text },
+      { id: part.id, action, version: part.version, comment: text || undefined },
       {
         onSuccess: (p) => {
           setAsking(null);
@@ -33,24 +39,30 @@ export function ReviewActions({ part }: ReviewActionsProps) {
       text={text}
       intent={intent}
       loading={review.isPending && review.variables?.action === action}
-      onClick={() => (NEEDS_COMMENT.includes(action) ? setAsking(action) : run(action))}
+      aria-label={`${text.replace('…', '')} ${part.mpn}`}
+      onClick={() => (ASKS_COMMENT[action] ? setAsking(action) : run(action))}
     />
   );
   const buttons = [];
   if (part.permissions.submit && part.reviewState === 'draft') buttons.push(button('submission', 'Submit for review', Intent.PRIMARY));
   if (part.permissions.review) {
-    if (part.reviewState === 'in-review') buttons.push(button('approval', 'Approve', Intent.SUCCESS), button('rejection', 'Reject…', Intent.DANGER));
+    if (part.reviewState === 'in-review') buttons.push(button('approval', 'Approve…', Intent.SUCCESS), button('rejection', 'Reject…', Intent.DANGER));
     if (part.reviewState === 'approved') buttons.push(button('restriction', 'Restrict…', Intent.WARNING), button('retirement', 'Retire', Intent.DANGER));
     if (part.reviewState === 'restricted')
       buttons.push(button('reinstatement', 'Lift restriction', Intent.SUCCESS), button('retirement', 'Retire', Intent.DANGER));
   }
+  const asked = asking ? ASKS_COMMENT[asking] : undefined;
   return (
     <>
       {buttons}
-      <Dialog isOpen={asking !== null} onClose={() => setAsking(null)} title={asking === 'rejection' ? `Reject ${part.mpn}` : `Restrict ${part.mpn}`}>
+      <Dialog isOpen={asked !== undefined} onClose={() => setAsking(null)} title={asked ? `${asked.title} ${part.mpn}` : ''}>
         <DialogBody>
-          <FormGroup label="Comment (sent to the submitter)" labelFor="review-comment">
-            <TextArea id="review-comment" fill rows={4} value={comment} onChange={(e) => setComment(e.currentTarget.value)} />
+          <FormGroup
+            label={asked?.required ? 'Comment (required)' : 'Comment (optional)'}
+            labelFor="review-comment"
+            helperText="Sent to the submitter by e-mail and kept in the part's history."
+          >
+            <TextArea id="review-comment" fill rows={4} autoFocus value={comment} onChange={(e) => setComment(e.currentTarget.value)} />
           </FormGroup>
         </DialogBody>
         <DialogFooter
@@ -58,9 +70,9 @@ export function ReviewActions({ part }: ReviewActionsProps) {
             <>
               <Button text="Cancel" onClick={() => setAsking(null)} />
               <Button
-                intent={Intent.DANGER}
-                text={asking === 'rejection' ? 'Reject' : 'Restrict'}
-                disabled={!comment.trim()}
+                intent={asked?.intent}
+                text={asked?.confirm}
+                disabled={asked?.required && !comment.trim()}
                 loading={review.isPending}
                 onClick={() => asking && run(asking, comment.trim())}
               />

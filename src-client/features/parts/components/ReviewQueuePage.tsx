@@ -1,64 +1,54 @@
-import { useCallback, useMemo } from 'react';
 import { Link } from 'react-router-dom';
 import { NonIdealState, Tag } from '@blueprintjs/core';
-import { Cell, Column, Table } from '@blueprintjs/table';
 import { PageHeader } from '../../../components/PageHeader';
 import { QueryState } from '../../../components/QueryState';
 import { paths } from '../../../app/routes/paths';
 import { useReviewQueue } from '../api/get-review-queue';
 import type { ReviewQueueItem } from '../types';
 import { ReviewActions } from './ReviewActions';
+import { ReviewAid } from './ReviewAid';
+import { summaryOf } from './review-aid';
+import './review-offers.css';
 
-const TEXT: ((q: ReviewQueueItem) => string)[] = [
-  (q) => q.mpn,
-  (q) => q.manufacturer,
-  (q) => q.title,
-  (q) => q.submittedBy?.name ?? '—',
-  (q) => (q.submittedAt ? new Date(q.submittedAt).toLocaleString() : '—'),
-  (q) => q.measuredKinds.join(', ') || 'spec only',
-  (q) => String(q.documentCount),
-  () => '',
-];
+const MEASURED_LABEL: Record<ReviewQueueItem['measuredKinds'][number], string> = {
+  s11: 'S11',
+  efficiency: 'efficiency',
+  'peak-gain': 'peak gain',
+  'average-gain': 'average gain',
+};
 
-/** Parts waiting for an admin, oldest first, with approve and reject in the row. */
+function QueueCard({ item }: { item: ReviewQueueItem }) {
+  const summary = summaryOf(item.check);
+  return (
+    <section className="bw-panel bw-review-card" aria-label={`${item.manufacturer} ${item.mpn}`} data-testid="review-item">
+      <div>
+        <h2 className="bw-review-card__title">
+          <Link to={paths.part(item.id)}>{item.mpn}</Link> <span className="bw-muted">{item.manufacturer}</span>{' '}
+          <Tag minimal intent={summary.intent} data-testid="review-summary">
+            {summary.text}
+          </Tag>
+        </h2>
+        <p className="bw-review-card__meta bw-muted">
+          {item.title} · submitted by {item.submittedBy?.name ?? '—'}
+          {item.submittedAt ? `, ${new Date(item.submittedAt).toLocaleString()}` : ''} · measured:{' '}
+          {item.measuredKinds.length ? item.measuredKinds.map((k) => MEASURED_LABEL[k]).join(', ') : 'nothing (datasheet only)'} · {item.documentCount} document
+          {item.documentCount === 1 ? '' : 's'}
+        </p>
+      </div>
+      <div className="bw-review-card__actions">
+        <ReviewActions part={{ ...item, reviewState: 'in-review', permissions: { submit: false, review: true } }} />
+      </div>
+      <div className="bw-review-card__aid">
+        <ReviewAid check={item.check} />
+      </div>
+    </section>
+  );
+}
+
+/** Parts waiting for an admin, oldest first: each with its claims against its measurements, and approve and reject at hand. */
 export function ReviewQueuePage() {
   const queue = useReviewQueue();
-  const rows = useMemo(() => queue.data ?? [], [queue.data]);
-  const getCellData = useCallback((row: number, column: number) => (rows[row] ? TEXT[column](rows[row]) : ''), [rows]);
-  const text = useCallback((column: number) => (row: number) => <Cell>{getCellData(row, column)}</Cell>, [getCellData]);
-  const mpnCell = useCallback(
-    (row: number) => (
-      <Cell interactive>
-        <Link to={paths.part(rows[row].id)}>{rows[row].mpn}</Link>
-      </Cell>
-    ),
-    [rows],
-  );
-  const dataCell = useCallback(
-    (row: number) => (
-      <Cell>
-        {rows[row].measuredKinds.length
-          ? rows[row].measuredKinds.map((k) => (
-              <Tag key={k} minimal className="bw-tag-gap">
-                {k}
-              </Tag>
-            ))
-          : 'spec only'}
-      </Cell>
-    ),
-    [rows],
-  );
-  const actionCell = useCallback(
-    (row: number) => {
-      const q = rows[row];
-      return (
-        <Cell interactive className="bw-action-cell">
-          <ReviewActions part={{ ...q, reviewState: 'in-review', permissions: { submit: false, review: true } }} />
-        </Cell>
-      );
-    },
-    [rows],
-  );
+  const rows = queue.data ?? [];
   return (
     <>
       <PageHeader
@@ -69,23 +59,10 @@ export function ReviewQueuePage() {
         {rows.length === 0 ? (
           <NonIdealState icon="tick-circle" title="Nothing waiting for review" />
         ) : (
-          <div className="bw-table-wrap" data-testid="review-queue">
-            <Table
-              numRows={rows.length}
-              defaultRowHeight={40}
-              columnWidths={[160, 150, 300, 130, 170, 190, 60, 230]}
-              getCellClipboardData={getCellData}
-              enableRowHeader={false}
-            >
-              <Column id="mpn" name="MPN" cellRenderer={mpnCell} />
-              <Column id="manufacturer" name="Manufacturer" cellRenderer={text(1)} />
-              <Column id="title" name="Title" cellRenderer={text(2)} />
-              <Column id="submitter" name="Submitted by" cellRenderer={text(3)} />
-              <Column id="submitted" name="Submitted" cellRenderer={text(4)} />
-              <Column id="data" name="Measured" cellRenderer={dataCell} />
-              <Column id="docs" name="Docs" cellRenderer={text(6)} />
-              <Column id="actions" name="" cellRenderer={actionCell} />
-            </Table>
+          <div data-testid="review-queue">
+            {rows.map((item) => (
+              <QueueCard key={item.id} item={item} />
+            ))}
           </div>
         )}
       </QueryState>
